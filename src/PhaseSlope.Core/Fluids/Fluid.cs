@@ -1,0 +1,51 @@
+namespace PhaseSlope.Core.Fluids;
+
+/// <summary>An immutable pure fluid: identity, critical point, acentric factor, molar mass and
+/// the reference temperatures, each constant with its source.</summary>
+/// <remarks>All values are SI: temperatures in K, pressures in Pa, molar mass in kg/mol,
+/// critical density in mol/m³.</remarks>
+public sealed record Fluid
+{
+    /// <summary>Canonical name, lower case (for example "propane").</summary>
+    public required string Name { get; init; }
+
+    /// <summary>Other names the fluid is found by (for example "R-290").</summary>
+    public IReadOnlyList<string> Synonyms { get; init; } = [];
+
+    /// <summary>Chemical formula, or null.</summary>
+    public string? Formula { get; init; }
+
+    /// <summary>CAS registry number, or null.</summary>
+    public string? CasNumber { get; init; }
+
+    /// <summary>Family (for example "alkane", "refrigerant", "inorganic"), or null.</summary>
+    public string? Family { get; init; }
+
+    /// <summary>Molar mass in kg/mol.</summary>
+    public required SourcedValue MolarMass { get; init; }
+
+    /// <summary>Critical temperature in K.</summary>
+    public required SourcedValue CriticalTemperature { get; init; }
+
+    /// <summary>Critical pressure in Pa.</summary>
+    public required SourcedValue CriticalPressure { get; init; }
+
+    /// <summary>Acentric factor (dimensionless).</summary>
+    public required SourcedValue AcentricFactor { get; init; }
+
+    /// <summary>Critical molar density in mol/m³, or null when not given.</summary>
+    public SourcedValue? CriticalDensity { get; init; }
+
+    /// <summary>Normal boiling point (saturation at 101325 Pa) in K, or null (for example carbon
+    /// dioxide, whose triple-point pressure is above one atmosphere).</summary>
+    public SourcedValue? NormalBoilingPoint { get; init; }
+
+    /// <summary>Triple-point temperature in K, or null when not known.</summary>
+    public SourcedValue? TriplePointTemperature { get; init; }
+
+    /// <summary>Free-text remarks from the fluid file, or null.</summary>
+    public string? Remarks { get; init; }
+
+    /// <summary>Where the record was read from: a catalog resource name or a file path.</summary>
+    public string Origin { get; init; } = "";
+}
