@@ -1,0 +1,583 @@
+using System.Globalization;
+using System.Text;
+using PhaseSlope.Core.Errors;
+
+namespace PhaseSlope.Core.Fluids;
+
+/// <summary>Reads the line-based <c>.fluid</c> text format (described in docs/fluid-files.md)
+/// into a validated <see cref="Fluid"/> with every value in SI units.</summary>
+/// <remarks>The core never opens files itself: the caller opens the file or resource and hands
+/// over the reader or stream together with a name for it (the origin) that error messages use.
+/// Every failure is a <see cref="FluidDataException"/> naming the origin, the line and the field.</remarks>
+public static class FluidFile
+{
+    /// <summary>The word that opens every fluid file, on its <c>format</c> line.</summary>
+    public const string FormatTag = "phaseslope-fluid";
+
+    /// <summary>The only format version this library reads.</summary>
+    public const int FormatVersion = 1;
+
+    /// <summary>File name extension of fluid files, with the dot.</summary>
+    public const string Extension = ".fluid";
+
+    /// <summary>Reads a fluid file from a stream of UTF-8 text (a byte-order mark is allowed).</summary>
+    /// <param name="stream">The open stream; it is read to the end and left open.</param>
+    /// <param name="origin">File path or resource name, used in error messages and stored in
+    /// <see cref="Fluid.Origin"/>.</param>
+    /// <returns>The validated fluid.</returns>
+    /// <exception cref="FluidDataException">The text is not a valid fluid file.</exception>
+    public static Fluid Read(Stream stream, string origin)
+    {
+        ArgumentNullException.ThrowIfNull(stream);
+        ArgumentNullException.ThrowIfNull(origin);
+        var encoding = new UTF8Encoding(encoderShouldEmitUTF8Identifier: false, throwOnInvalidBytes: true);
+        using var reader = new StreamReader(stream, encoding, detectEncodingFromByteOrderMarks: true,
+            bufferSize: 4096, leaveOpen: true);
+        return Parse(reader, origin);
+    }
+
+    /// <summary>Reads a fluid file from text.</summary>
+    /// <param name="reader">The text; it is read to the end and not disposed.</param>
+    /// <param name="origin">File path or resource name, used in error messages and stored in
+    /// <see cref="Fluid.Origin"/>.</param>
+    /// <returns>The validated fluid.</returns>
+    /// <exception cref="FluidDataException">The text is not a valid fluid file.</exception>
+    public static Fluid Parse(TextReader reader, string origin)
+    {
+        ArgumentNullException.ThrowIfNull(reader);
+        ArgumentNullException.ThrowIfNull(origin);
+        return new FluidFileParser(origin).Run(reader);
+    }
+
+    /// <summary>The keys a fluid file may use, in the order the documentation lists them.</summary>
+    public static IReadOnlyList<string> Keys { get; } = FluidFileParser.AllKeys;
+}
+
+/// <summary>One pass over one fluid file.</summary>
+internal sealed class FluidFileParser
+{
+    private const string KeyFormat = "format";
+    private const string KeyName = "name";
+    private const string KeySynonyms = "synonyms";
+    private const string KeyFormula = "formula";
+    private const string KeyCas = "cas";
+    private const string KeyFamily = "family";
+    private const string KeyMolarMass = "molar_mass";
+    private const string KeyCriticalTemperature = "critical_temperature";
+    private const string KeyCriticalPressure = "critical_pressure";
+    private const string KeyAcentricFactor = "acentric_factor";
+    private const string KeyCriticalDensity = "critical_density";
+    private const string KeyCriticalMolarVolume = "critical_molar_volume";
+    private const string KeyNormalBoilingPoint = "normal_boiling_point";
+    private const string KeyTriplePointTemperature = "triple_point_temperature";
+    private const string KeyRemarks = "remarks";
+
+    internal static readonly string[] AllKeys =
+    [
+        KeyFormat, KeyName, KeySynonyms, KeyFormula, KeyCas, KeyFamily,
+        KeyMolarMass, KeyCriticalTemperature, KeyCriticalPressure, KeyAcentricFactor,
+        KeyCriticalDensity, KeyCriticalMolarVolume, KeyNormalBoilingPoint,
+        KeyTriplePointTemperature, KeyRemarks,
+    ];
+
+    private static readonly string[] RequiredKeys =
+    [
+        KeyFormat, KeyName, KeyMolarMass, KeyCriticalTemperature, KeyCriticalPressure, KeyAcentricFactor,
+    ];
+
+    private static readonly Dictionary<string, Quantity> QuantityOfKey = new(StringComparer.Ordinal)
+    {
+        [KeyMolarMass] = Quantity.MolarMass,
+        [KeyCriticalTemperature] = Quantity.Temperature,
+        [KeyCriticalPressure] = Quantity.Pressure,
+        [KeyAcentricFactor] = Quantity.Dimensionless,
+        [KeyCriticalDensity] = Quantity.MolarDensity,
+        [KeyCriticalMolarVolume] = Quantity.MolarVolume,
+        [KeyNormalBoilingPoint] = Quantity.Temperature,
+        [KeyTriplePointTemperature] = Quantity.Temperature,
+    };
+
+    private const double AcentricFactorLowest = -0.5;
+    private const double AcentricFactorHighest = 2.0;
+
+    private readonly string _origin;
+    private readonly Dictionary<string, int> _lineOfKey = new(StringComparer.Ordinal);
+    private readonly Dictionary<string, string> _text = new(StringComparer.Ordinal);
+    private readonly Dictionary<string, RawQuantity> _quantities = new(StringComparer.Ordinal);
+    private List<string> _synonyms = [];
+
+    internal FluidFileParser(string origin) => _origin = origin;
+
+    private enum Quantity
+    {
+        Temperature,
+        Pressure,
+        MolarMass,
+        MolarDensity,
+        MolarVolume,
+        Dimensionless,
+    }
+
+    /// <summary>A numeric entry as written: number and uncertainty in the file's unit.</summary>
+    private sealed record RawQuantity(int Line, double Number, string? Unit, double? Uncertainty, string Source);
+
+    internal Fluid Run(TextReader reader)
+    {
+        int lineNumber = 0;
+        bool sawFormat = false;
+        while (true)
+        {
+            string? line;
+            try
+            {
+                line = reader.ReadLine();
+            }
+            catch (DecoderFallbackException)
+            {
+                throw Fail(lineNumber + 1, null, "the text is not valid UTF-8");
+            }
+
+            if (line is null)
+            {
+                break;
+            }
+
+            lineNumber++;
+            if (lineNumber == 1 && line.Length > 0 && line[0] == '\uFEFF')
+            {
+                line = line[1..];
+            }
+
+            string trimmed = line.Trim();
+            if (trimmed.Length == 0 || trimmed[0] == '#')
+            {
+                continue;
+            }
+
+            SplitKey(trimmed, out string key, out string rest);
+            if (!sawFormat && key != KeyFormat)
+            {
+                throw Fail(lineNumber, KeyFormat,
+                    $"the first entry must be '{KeyFormat} {FluidFile.FormatTag} {FluidFile.FormatVersion}', found '{key}'");
+            }
+
+            ReadEntry(lineNumber, key, rest);
+            sawFormat = true;
+        }
+
+        int endLine = Math.Max(lineNumber, 1);
+        if (!sawFormat)
+        {
+            throw Fail(endLine, KeyFormat,
+                $"no entries; a fluid file starts with '{KeyFormat} {FluidFile.FormatTag} {FluidFile.FormatVersion}'");
+        }
+
+        foreach (string required in RequiredKeys)
+        {
+            if (!_lineOfKey.ContainsKey(required))
+            {
+                throw Fail(endLine, required, "required field is missing (end of file reached without it)");
+            }
+        }
+
+        return Build();
+    }
+
+    private static void SplitKey(string trimmed, out string key, out string rest)
+    {
+        int gap = 0;
+        while (gap < trimmed.Length && !char.IsWhiteSpace(trimmed[gap]))
+        {
+            gap++;
+        }
+
+        key = trimmed[..gap];
+        rest = trimmed[gap..].Trim();
+    }
+
+    private void ReadEntry(int line, string key, string rest)
+    {
+        if (Array.IndexOf(AllKeys, key) < 0)
+        {
+            string hint = ClosestKey(key) is { } near ? $"; did you mean '{near}'?" : "";
+            throw Fail(line, key, $"unknown key{hint}");
+        }
+
+        if (_lineOfKey.TryGetValue(key, out int earlier))
+        {
+            throw Fail(line, key, $"duplicate key; it was already given on line {earlier}");
+        }
+
+        _lineOfKey[key] = line;
+        if (rest.Length == 0)
+        {
+            throw Fail(line, key, "no value given");
+        }
+
+        if (QuantityOfKey.TryGetValue(key, out Quantity quantity))
+        {
+            _quantities[key] = ReadQuantity(line, key, quantity, rest);
+            return;
+        }
+
+        switch (key)
+        {
+            case KeyFormat:
+                ReadFormat(line, rest);
+                break;
+            case KeyName:
+                if (rest != rest.ToLowerInvariant())
+                {
+                    throw Fail(line, key, $"the canonical name must be lower case ('{rest.ToLowerInvariant()}')");
+                }
+
+                RequireNameLike(line, key, rest);
+                _text[key] = rest;
+                break;
+            case KeySynonyms:
+                _synonyms = ReadSynonyms(line, rest);
+                break;
+            case KeyCas:
+                CheckCasNumber(line, rest);
+                _text[key] = rest;
+                break;
+            default:
+                _text[key] = rest;
+                break;
+        }
+    }
+
+    private void ReadFormat(int line, string rest)
+    {
+        string[] parts = rest.Split((char[]?)null, StringSplitOptions.RemoveEmptyEntries);
+        if (parts.Length != 2 || parts[0] != FluidFile.FormatTag)
+        {
+            throw Fail(line, KeyFormat,
+                $"expected '{FluidFile.FormatTag} {FluidFile.FormatVersion}', found '{rest}'");
+        }
+
+        if (!int.TryParse(parts[1], NumberStyles.None, CultureInfo.InvariantCulture, out int version))
+        {
+            throw Fail(line, KeyFormat, $"format version '{parts[1]}' is not a whole number");
+        }
+
+        if (version != FluidFile.FormatVersion)
+        {
+            throw Fail(line, KeyFormat,
+                $"unsupported format version {version}; this library reads version {FluidFile.FormatVersion}");
+        }
+    }
+
+    private void RequireNameLike(int line, string key, string value)
+    {
+        if (FluidNames.Normalise(value).Length == 0)
+        {
+            throw Fail(line, key, $"'{value}' has no letters or digits");
+        }
+
+        if (value.Contains(';') || value.Contains('|'))
+        {
+            throw Fail(line, key, $"'{value}' must not contain ';' or '|'");
+        }
+    }
+
+    private List<string> ReadSynonyms(int line, string rest)
+    {
+        var list = new List<string>();
+        var seen = new Dictionary<string, string>(StringComparer.Ordinal);
+        foreach (string piece in rest.Split(';'))
+        {
+            string synonym = piece.Trim();
+            if (synonym.Length == 0)
+            {
+                throw Fail(line, KeySynonyms, "empty synonym (two ';' in a row, or a ';' at an end)");
+            }
+
+            RequireNameLike(line, KeySynonyms, synonym);
+            string normal = FluidNames.Normalise(synonym);
+            if (seen.TryGetValue(normal, out string? other))
+            {
+                throw Fail(line, KeySynonyms, $"'{synonym}' and '{other}' are the same name once normalised");
+            }
+
+            seen[normal] = synonym;
+            list.Add(synonym);
+        }
+
+        return list;
+    }
+
+    /// <summary>A CAS registry number is 2–7 digits, 2 digits and a check digit; the check
+    /// digit is the sum of the other digits, weighted 1, 2, 3, … from the right, modulo 10.</summary>
+    private void CheckCasNumber(int line, string value)
+    {
+        string[] parts = value.Split('-');
+        bool shapeOk = parts.Length == 3
+            && parts[0].Length is >= 2 and <= 7 && parts[1].Length == 2 && parts[2].Length == 1
+            && parts.All(p => p.All(char.IsAsciiDigit));
+        if (!shapeOk)
+        {
+            throw Fail(line, KeyCas, $"'{value}' is not of the form NNNNNNN-NN-N");
+        }
+
+        string digits = parts[0] + parts[1];
+        int sum = 0;
+        for (int i = 0; i < digits.Length; i++)
+        {
+            sum += (digits[digits.Length - 1 - i] - '0') * (i + 1);
+        }
+
+        int expected = sum % 10;
+        if (parts[2][0] - '0' != expected)
+        {
+            throw Fail(line, KeyCas, $"'{value}' fails the check digit (expected {expected})");
+        }
+    }
+
+    private RawQuantity ReadQuantity(int line, string key, Quantity quantity, string rest)
+    {
+        int bar = rest.IndexOf('|');
+        if (bar < 0)
+        {
+            throw Fail(line, key, "missing source: write '| <published source>' after the value");
+        }
+
+        string source = rest[(bar + 1)..].Trim();
+        if (source.Length == 0)
+        {
+            throw Fail(line, key, "missing source: the text after '|' is empty");
+        }
+
+        string valuePart = rest[..bar].Replace("±", " ± ", StringComparison.Ordinal)
+            .Replace("+/-", " ± ", StringComparison.Ordinal);
+        string[] tokens = valuePart.Split((char[]?)null, StringSplitOptions.RemoveEmptyEntries);
+        if (tokens.Length == 0)
+        {
+            throw Fail(line, key, "no value before '|'");
+        }
+
+        double number = ParseNumber(line, key, tokens[0], "value");
+        int next = 1;
+        string? unit = null;
+        if (next < tokens.Length && tokens[next] != "±")
+        {
+            unit = tokens[next];
+            next++;
+        }
+
+        double? uncertainty = null;
+        if (next < tokens.Length && tokens[next] == "±")
+        {
+            if (next + 1 >= tokens.Length)
+            {
+                throw Fail(line, key, "'±' is not followed by an uncertainty");
+            }
+
+            uncertainty = ParseNumber(line, key, tokens[next + 1], "uncertainty");
+            next += 2;
+        }
+
+        if (next < tokens.Length)
+        {
+            throw Fail(line, key,
+                $"unexpected '{tokens[next]}'; expected 'value unit [± uncertainty] | source'");
+        }
+
+        CheckUnit(line, key, quantity, unit);
+        if (uncertainty < 0)
+        {
+            throw Fail(line, key, $"negative uncertainty {Show(uncertainty.Value)}");
+        }
+
+        CheckRange(line, key, quantity, number);
+        return new RawQuantity(line, number, unit, uncertainty, source);
+    }
+
+    private double ParseNumber(int line, string key, string token, string what)
+    {
+        if (!double.TryParse(token, NumberStyles.Float, CultureInfo.InvariantCulture, out double number)
+            || !double.IsFinite(number))
+        {
+            throw Fail(line, key,
+                $"malformed {what} '{token}'; write a number with a '.' decimal point, such as 369.89 or 4.2512e6");
+        }
+
+        return number;
+    }
+
+    private void CheckUnit(int line, string key, Quantity quantity, string? unit)
+    {
+        string[] allowed = FluidUnits.Allowed(quantity switch
+        {
+            Quantity.Temperature => FluidUnits.Dimension.Temperature,
+            Quantity.Pressure => FluidUnits.Dimension.Pressure,
+            Quantity.MolarMass => FluidUnits.Dimension.MolarMass,
+            Quantity.MolarDensity => FluidUnits.Dimension.MolarDensity,
+            Quantity.MolarVolume => FluidUnits.Dimension.MolarVolume,
+            _ => FluidUnits.Dimension.None,
+        });
+
+        if (allowed.Length == 0)
+        {
+            if (unit is not null)
+            {
+                throw Fail(line, key, $"takes no unit, found '{unit}'");
+            }
+
+            return;
+        }
+
+        if (unit is null)
+        {
+            throw Fail(line, key, $"missing unit; allowed: {string.Join(", ", allowed)}");
+        }
+
+        if (Array.IndexOf(allowed, unit) < 0)
+        {
+            throw Fail(line, key, $"wrong unit '{unit}'; allowed: {string.Join(", ", allowed)}");
+        }
+    }
+
+    /// <summary>Checks that need no other field. Unit factors are all positive, so signs can be
+    /// checked before conversion.</summary>
+    private void CheckRange(int line, string key, Quantity quantity, double number)
+    {
+        if (quantity == Quantity.Dimensionless)
+        {
+            if (number < AcentricFactorLowest || number > AcentricFactorHighest)
+            {
+                throw Fail(line, key,
+                    $"unphysical value {Show(number)}; expected between {Show(AcentricFactorLowest)} and {Show(AcentricFactorHighest)}");
+            }
+
+            return;
+        }
+
+        if (number <= 0)
+        {
+            throw Fail(line, key, $"unphysical value {Show(number)}; must be greater than zero");
+        }
+    }
+
+    private Fluid Build()
+    {
+        if (_quantities.ContainsKey(KeyCriticalDensity) && _quantities.ContainsKey(KeyCriticalMolarVolume))
+        {
+            throw Fail(_lineOfKey[KeyCriticalMolarVolume], KeyCriticalMolarVolume,
+                $"give either '{KeyCriticalDensity}' (line {_lineOfKey[KeyCriticalDensity]}) or '{KeyCriticalMolarVolume}', not both");
+        }
+
+        SourcedValue molarMass = ToSi(KeyMolarMass, molarMass: null)!;
+        SourcedValue criticalTemperature = ToSi(KeyCriticalTemperature, molarMass.Value)!;
+        SourcedValue criticalPressure = ToSi(KeyCriticalPressure, molarMass.Value)!;
+        SourcedValue acentricFactor = ToSi(KeyAcentricFactor, molarMass.Value)!;
+        SourcedValue? criticalDensity = ToSi(KeyCriticalDensity, molarMass.Value)
+            ?? ToSi(KeyCriticalMolarVolume, molarMass.Value);
+        SourcedValue? normalBoilingPoint = ToSi(KeyNormalBoilingPoint, molarMass.Value);
+        SourcedValue? triplePoint = ToSi(KeyTriplePointTemperature, molarMass.Value);
+
+        if (normalBoilingPoint is not null && criticalTemperature.Value <= normalBoilingPoint.Value)
+        {
+            throw Fail(_lineOfKey[KeyNormalBoilingPoint], KeyNormalBoilingPoint,
+                $"{Show(normalBoilingPoint.Value)} K is not below the critical temperature {Show(criticalTemperature.Value)} K (line {_lineOfKey[KeyCriticalTemperature]})");
+        }
+
+        if (triplePoint is not null && triplePoint.Value >= criticalTemperature.Value)
+        {
+            throw Fail(_lineOfKey[KeyTriplePointTemperature], KeyTriplePointTemperature,
+                $"{Show(triplePoint.Value)} K is not below the critical temperature {Show(criticalTemperature.Value)} K (line {_lineOfKey[KeyCriticalTemperature]})");
+        }
+
+        if (triplePoint is not null && normalBoilingPoint is not null && triplePoint.Value > normalBoilingPoint.Value)
+        {
+            throw Fail(_lineOfKey[KeyTriplePointTemperature], KeyTriplePointTemperature,
+                $"{Show(triplePoint.Value)} K is above the normal boiling point {Show(normalBoilingPoint.Value)} K (line {_lineOfKey[KeyNormalBoilingPoint]})");
+        }
+
+        string name = _text[KeyName];
+        if (_synonyms.Any(s => FluidNames.Normalise(s) == FluidNames.Normalise(name)))
+        {
+            throw Fail(_lineOfKey[KeySynonyms], KeySynonyms,
+                $"a synonym is the same as the name '{name}' once normalised");
+        }
+
+        return new Fluid
+        {
+            Name = name,
+            Synonyms = _synonyms.AsReadOnly(),
+            Formula = _text.GetValueOrDefault(KeyFormula),
+            CasNumber = _text.GetValueOrDefault(KeyCas),
+            Family = _text.GetValueOrDefault(KeyFamily),
+            MolarMass = molarMass,
+            CriticalTemperature = criticalTemperature,
+            CriticalPressure = criticalPressure,
+            AcentricFactor = acentricFactor,
+            CriticalDensity = criticalDensity,
+            NormalBoilingPoint = normalBoilingPoint,
+            TriplePointTemperature = triplePoint,
+            Remarks = _text.GetValueOrDefault(KeyRemarks),
+            Origin = _origin,
+        };
+    }
+
+    /// <summary>Converts an entry to SI; null when the entry is absent.</summary>
+    private SourcedValue? ToSi(string key, double? molarMass)
+    {
+        if (!_quantities.TryGetValue(key, out RawQuantity? raw))
+        {
+            return null;
+        }
+
+        if (raw.Unit is null)
+        {
+            return new SourcedValue(raw.Number, raw.Source, raw.Uncertainty);
+        }
+
+        FluidUnits.Conversion conversion = FluidUnits.Get(raw.Unit);
+        double value;
+        double? uncertainty;
+        switch (conversion.Kind)
+        {
+            case FluidUnits.ConversionKind.Scale:
+                value = raw.Number * conversion.Factor;
+                uncertainty = raw.Uncertainty * conversion.Factor;
+                break;
+            case FluidUnits.ConversionKind.MassDensity:
+                // ρ[mol/m³] = ρ[kg/m³] / M[kg/mol]; the molar mass's own uncertainty is not propagated.
+                double m = molarMass ?? throw Fail(raw.Line, key, $"unit '{raw.Unit}' needs the molar mass");
+                value = raw.Number * conversion.Factor / m;
+                uncertainty = raw.Uncertainty * conversion.Factor / m;
+                break;
+            default:
+                // Molar volume V → ρ = 1/V; first-order propagation u(ρ) = u(V)/V².
+                double volume = raw.Number * conversion.Factor;
+                value = 1.0 / volume;
+                uncertainty = raw.Uncertainty * conversion.Factor / (volume * volume);
+                break;
+        }
+
+        return new SourcedValue(value, raw.Source, uncertainty);
+    }
+
+    private static string? ClosestKey(string key)
+    {
+        string? best = null;
+        int bestDistance = int.MaxValue;
+        foreach (string candidate in AllKeys)
+        {
+            int distance = FluidNames.EditDistance(key.ToLowerInvariant(), candidate);
+            if (distance < bestDistance)
+            {
+                bestDistance = distance;
+                best = candidate;
+            }
+        }
+
+        return bestDistance <= Math.Max(2, key.Length / 3) ? best : null;
+    }
+
+    private static string Show(double value) => value.ToString("R", CultureInfo.InvariantCulture);
+
+    private FluidDataException Fail(int line, string? field, string problem) =>
+        new(_origin, line, field, problem);
+}
