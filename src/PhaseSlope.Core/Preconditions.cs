@@ -24,5 +24,5 @@ internal static class Preconditions
     }
 
     /// <summary>Formats a number the same way in every message (round-trip, invariant culture).</summary>
-    public static string Format(double value) => value.ToString("G6", System.Globalization.CultureInfo.InvariantCulture);
+    public static string Format(double value) => value.ToString("G7", System.Globalization.CultureInfo.InvariantCulture);
 }

@@ -1,0 +1,35 @@
+using System.CommandLine;
+using PhaseSlope.Cli.Commands;
+
+namespace PhaseSlope.Cli;
+
+/// <summary>Builds the command tree and runs one command line.</summary>
+internal static class CliApp
+{
+    /// <summary>Runs <paramref name="args"/>, writing results to <paramref name="output"/> and
+    /// messages to <paramref name="error"/>; returns the exit code (see <see cref="ExitCodes"/>).</summary>
+    public static int Run(string[] args, TextWriter output, TextWriter error)
+    {
+        var io = new CliIo(output, error);
+        var root = new RootCommand("phaseslope: liquid-vapour coexistence of pure fluids from cubic equations of state");
+        root.Subcommands.Add(CoexistCommand.Create(io));
+        root.Subcommands.Add(CurveCommand.Create(io));
+        root.Subcommands.Add(FluidsCommand.Create(io));
+
+        if (args.Length == 0)
+        {
+            return io.Fail("no command given; 'phaseslope --help' lists the commands", ExitCodes.Usage);
+        }
+
+        var parse = root.Parse(args);
+        if (parse.Errors.Count > 0)
+        {
+            // An unknown word is more telling than the "required command" error it also causes.
+            var first = parse.Errors.FirstOrDefault(e => e.Message.StartsWith("Unrecognized", StringComparison.Ordinal)) ?? parse.Errors[0];
+            return io.Fail(first.Message, ExitCodes.Usage);
+        }
+
+        var config = new InvocationConfiguration { Output = output, Error = error, EnableDefaultExceptionHandler = false };
+        return parse.Invoke(config);
+    }
+}

@@ -1,0 +1,57 @@
+using PhaseSlope.Cli.Units;
+using PhaseSlope.Core.Errors;
+
+namespace PhaseSlope.Cli;
+
+/// <summary>The tool's output streams and the one place where exceptions become exit codes.</summary>
+internal sealed class CliIo(TextWriter output, TextWriter error)
+{
+    /// <summary>Standard output: results only.</summary>
+    public TextWriter Out { get; } = output;
+
+    /// <summary>Standard error: one-line messages.</summary>
+    public TextWriter Error { get; } = error;
+
+    /// <summary>Runs a command body and maps failures to one stderr line and an exit code.</summary>
+    /// <remarks>The body writes its result to <see cref="Out"/> only after all computation is
+    /// done, so a failure leaves standard output empty.</remarks>
+    public int Guard(Action body)
+    {
+        try
+        {
+            body();
+            return ExitCodes.Success;
+        }
+        catch (UsageException ex)
+        {
+            return Fail(ex.Message, ExitCodes.Usage);
+        }
+        catch (Exception ex) when (ex is UnknownFluidException or FluidDataException)
+        {
+            return Fail(ex.Message, ExitCodes.Fluid);
+        }
+        catch (InvalidInputException ex)
+        {
+            return Fail(ex.Message, ExitCodes.OutOfRange);
+        }
+        catch (ConvergenceException ex)
+        {
+            return Fail(ex.Message, ExitCodes.NotConverged);
+        }
+        catch (OutputFileException ex)
+        {
+            return Fail(ex.Message, ExitCodes.OutputFile);
+        }
+        catch (Exception ex)
+        {
+            return Fail($"internal error ({ex.GetType().Name}): {ex.Message}", ExitCodes.InternalError);
+        }
+    }
+
+    /// <summary>Writes "phaseslope: message" on one line of standard error and returns the code.</summary>
+    public int Fail(string message, int code)
+    {
+        Error.WriteLine($"phaseslope: {message.ReplaceLineEndings(" ")}");
+        return code;
+    }
+}

@@ -1,0 +1,45 @@
+using System.CommandLine;
+using PhaseSlope.Cli.Output;
+using PhaseSlope.Cli.Units;
+using PhaseSlope.Core.Equilibrium;
+using PhaseSlope.Core.Models;
+
+namespace PhaseSlope.Cli.Commands;
+
+/// <summary><c>phaseslope coexist FLUID --temperature V | --pressure V</c>: one coexistence state.</summary>
+internal static class CoexistCommand
+{
+    /// <summary>Builds the command; its action writes to <paramref name="io"/>.</summary>
+    public static Command Create(CliIo io)
+    {
+        var fluid = new Argument<string>("FLUID") { Description = "Catalog name or synonym, or the path of a .fluid file" };
+        var temperature = new Option<string>("--temperature", "-T") { Description = "Saturation temperature, e.g. 300 K, 26.85 degC, 80 degF (bare number: K)" };
+        var pressure = new Option<string>("--pressure", "-P") { Description = "Saturation pressure, e.g. 101.325 kPa, 1.2 bar, 14.7 psi, 1 atm (bare number: Pa)" };
+        var common = new CommonOptions();
+        var command = new Command("coexist", "One liquid-vapour coexistence state at a given temperature or pressure");
+        command.Arguments.Add(fluid);
+        command.Options.Add(temperature);
+        command.Options.Add(pressure);
+        common.AddTo(command, withEos: true);
+        command.SetAction(parse => io.Guard(() =>
+        {
+            string? tText = parse.GetValue(temperature);
+            string? pText = parse.GetValue(pressure);
+            if ((tText is null) == (pText is null))
+            {
+                throw new UsageException("coexist: give exactly one of --temperature and --pressure");
+            }
+
+            var kind = common.ModelKind(parse);
+            var format = common.OutputFormat(parse);
+            var units = common.UnitSystem(parse);
+            double? t = tText is null ? null : QuantityParser.ParseTemperature(tText, "--temperature");
+            double? p = pText is null ? null : QuantityParser.ParsePressure(pText, "--pressure");
+            var data = FluidResolver.Resolve(parse.GetValue(fluid)!);
+            var solver = CoexistenceSolver.For(data, kind);
+            var point = t is double tv ? solver.AtTemperature(tv) : solver.AtPressure(p!.Value);
+            io.Out.Write(CoexistenceWriter.Render([point], single: true, format, data, solver.Model, units));
+        }));
+        return command;
+    }
+}

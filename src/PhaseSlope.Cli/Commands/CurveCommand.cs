@@ -1,0 +1,96 @@
+using System.CommandLine;
+using PhaseSlope.Cli.Output;
+using PhaseSlope.Cli.Units;
+using PhaseSlope.Core.Equilibrium;
+
+namespace PhaseSlope.Cli.Commands;
+
+/// <summary><c>phaseslope curve FLUID [--from V] [--to V] [--points N] [--out FILE]</c>: a saturation table.</summary>
+internal static class CurveCommand
+{
+    /// <summary>Largest accepted --points.</summary>
+    public const int MaxPoints = 100_000;
+
+    /// <summary>Builds the command; its action writes to <paramref name="io"/>.</summary>
+    public static Command Create(CliIo io)
+    {
+        var fluid = new Argument<string>("FLUID") { Description = "Catalog name or synonym, or the path of a .fluid file" };
+        var from = new Option<string>("--from") { Description = "First temperature (default: the lowest valid temperature, 0.3 Tc or the triple point)" };
+        var to = new Option<string>("--to") { Description = "Last temperature (default: the critical temperature; the last state is then the critical point)" };
+        var points = new Option<int>("--points", "-n")
+        {
+            Description = $"Number of states, 2 to {MaxPoints}; spaced evenly in sqrt(Tc - T) so the near-critical region is resolved",
+            DefaultValueFactory = _ => CoexistenceCurve.DefaultPoints,
+        };
+        var output = new Option<string>("--out", "-o") { Description = "Write to this file instead of the terminal (format from --format, else from the extension .csv/.json, else table)" };
+        var common = new CommonOptions();
+        var command = new Command("curve", "The saturation curve as a table of coexistence states");
+        command.Arguments.Add(fluid);
+        command.Options.Add(from);
+        command.Options.Add(to);
+        command.Options.Add(points);
+        command.Options.Add(output);
+        common.AddTo(command, withEos: true);
+        command.SetAction(parse => io.Guard(() =>
+        {
+            var kind = common.ModelKind(parse);
+            var units = common.UnitSystem(parse);
+            string? outPath = parse.GetValue(output);
+            var format = common.FormatGiven(parse) || outPath is null ? common.OutputFormat(parse) : FormatFromExtension(outPath);
+            int n = parse.GetValue(points);
+            if (n < 2 || n > MaxPoints)
+            {
+                throw new UsageException($"--points: must be between 2 and {MaxPoints}, got {n}");
+            }
+
+            double? tFrom = parse.GetValue(from) is string f ? QuantityParser.ParseTemperature(f, "--from") : null;
+            double? tTo = parse.GetValue(to) is string tt ? QuantityParser.ParseTemperature(tt, "--to") : null;
+            if (outPath is not null && string.IsNullOrWhiteSpace(outPath))
+            {
+                throw new UsageException("--out: the file name is empty");
+            }
+
+            var data = FluidResolver.Resolve(parse.GetValue(fluid)!);
+            var solver = CoexistenceSolver.For(data, kind);
+            double tc = solver.Model.CriticalTemperature;
+            double start = tFrom ?? solver.MinimumTemperature;
+            double end = tTo ?? tc;
+            if (start < solver.MinimumTemperature)
+            {
+                throw new Core.Errors.InvalidInputException("from temperature", start,
+                    $"--from: {NumberText.Table(start)} K is below the lowest valid temperature {NumberText.Table(solver.MinimumTemperature)} K of {data.Name}");
+            }
+
+            if (end > tc)
+            {
+                throw new Core.Errors.InvalidInputException("to temperature", end,
+                    $"--to: {NumberText.Table(end)} K is above the critical temperature {NumberText.Table(tc)} K of {data.Name}");
+            }
+
+            if (!(start < end))
+            {
+                throw new UsageException($"--from ({NumberText.Table(start)} K) must be below --to ({NumberText.Table(end)} K)");
+            }
+
+            var curve = CoexistenceCurve.Trace(solver, start, end, n);
+            string text = CoexistenceWriter.Render(curve, single: false, format, data, solver.Model, units);
+            if (outPath is null)
+            {
+                io.Out.Write(text);
+            }
+            else
+            {
+                AtomicFile.WriteAllText(outPath, text);
+                io.Error.WriteLine($"phaseslope: wrote {curve.Count} coexistence states to {outPath}");
+            }
+        }));
+        return command;
+    }
+
+    private static OutputFormat FormatFromExtension(string path) => Path.GetExtension(path).ToLowerInvariant() switch
+    {
+        ".csv" => OutputFormat.Csv,
+        ".json" => OutputFormat.Json,
+        _ => OutputFormat.Table,
+    };
+}

@@ -1,0 +1,28 @@
+namespace PhaseSlope.Cli;
+
+/// <summary>Exit codes of the phaseslope tool; the README documents the same table.</summary>
+internal static class ExitCodes
+{
+    /// <summary>The command did what was asked.</summary>
+    public const int Success = 0;
+
+    /// <summary>An unexpected internal error (a bug: please report it).</summary>
+    public const int InternalError = 1;
+
+    /// <summary>Bad command line: unknown command or option, malformed number, unknown unit,
+    /// missing or conflicting options, non-positive absolute value.</summary>
+    public const int Usage = 2;
+
+    /// <summary>Unknown fluid name, or a fluid file that cannot be read or fails validation.</summary>
+    public const int Fluid = 3;
+
+    /// <summary>A state outside the model's range: T at or above Tc, P at or above Pc, or below
+    /// the lowest valid temperature.</summary>
+    public const int OutOfRange = 4;
+
+    /// <summary>A solver did not converge.</summary>
+    public const int NotConverged = 5;
+
+    /// <summary>The output file could not be written (nothing was written or replaced).</summary>
+    public const int OutputFile = 6;
+}

@@ -1,0 +1,175 @@
+using System.Globalization;
+using System.Text;
+using System.Text.Json;
+using PhaseSlope.Cli.Units;
+using PhaseSlope.Core.Equilibrium;
+using PhaseSlope.Core.Fluids;
+using PhaseSlope.Core.Models;
+using PhaseSlope.Core.Properties;
+
+namespace PhaseSlope.Cli.Output;
+
+/// <summary>Renders coexistence points as JSON, CSV or a table.</summary>
+internal static class CoexistenceWriter
+{
+    /// <summary>The caution printed under every people-facing table of model results.</summary>
+    public const string Caution =
+        "Model estimates. Before use for pressure equipment, relief sizing or flammable or toxic service, verify against measured data and follow local codes and licensed engineering practice.";
+
+    /// <summary>Renders points in a format; <paramref name="single"/> prints one object instead of an array.</summary>
+    public static string Render(IReadOnlyList<CoexistencePoint> points, bool single, OutputFormat format, Fluid fluid, CubicModel model, UnitSystem units)
+        => format switch
+        {
+            OutputFormat.Json => Json(points, single, fluid, model),
+            OutputFormat.Csv => Csv(points),
+            _ => single ? SingleTable(points[0], fluid, model, units) : CurveTable(points, fluid, model, units),
+        };
+
+    private static string Json(IReadOnlyList<CoexistencePoint> points, bool single, Fluid fluid, CubicModel model)
+    {
+        using var stream = new MemoryStream();
+        using (var json = new Utf8JsonWriter(stream, new JsonWriterOptions { Indented = true }))
+        {
+            if (single)
+            {
+                WriteObject(json, points[0], fluid, model);
+            }
+            else
+            {
+                json.WriteStartArray();
+                foreach (var point in points)
+                {
+                    WriteObject(json, point, fluid, model);
+                }
+
+                json.WriteEndArray();
+            }
+        }
+
+        return Encoding.UTF8.GetString(stream.ToArray()) + Environment.NewLine;
+    }
+
+    private static void WriteObject(Utf8JsonWriter json, CoexistencePoint point, Fluid fluid, CubicModel model)
+    {
+        json.WriteStartObject();
+        json.WriteString("fluid", fluid.Name);
+        json.WriteString("eos", model.Kind.Id());
+        json.WriteNumber("molar_mass_kg_mol", fluid.MolarMass.Value);
+        json.WriteBoolean("critical", point.IsCritical);
+        foreach (var column in CoexistenceColumns.Flat)
+        {
+            if (column.Key.StartsWith("liquid_", StringComparison.Ordinal) || column.Key.StartsWith("vapour_", StringComparison.Ordinal))
+            {
+                continue;
+            }
+
+            json.WriteNumber(column.Key, Finite(column.Value(point), column.Key));
+        }
+
+        json.WriteNumber("inverse_slope_K_Pa", Finite(point.InverseSlope, "inverse_slope_K_Pa"));
+        json.WriteNumber("compressibility_factor_change", point.CompressibilityChange);
+        WritePhase(json, "liquid", point.Liquid, fluid.MolarMass.Value);
+        WritePhase(json, "vapour", point.Vapour, fluid.MolarMass.Value);
+        json.WriteStartObject("solver");
+        json.WriteString("method", Kebab(point.Report.Method.ToString()));
+        json.WriteNumber("iterations", point.Report.Iterations);
+        json.WriteNumber("fugacity_residual", point.Report.FugacityResidual);
+        json.WriteString("stop_reason", Kebab(point.Report.StopReason.ToString()));
+        json.WriteEndObject();
+        json.WriteEndObject();
+    }
+
+    private static void WritePhase(Utf8JsonWriter json, string name, PhaseState phase, double molarMass)
+    {
+        json.WriteStartObject(name);
+        json.WriteNumber("density_mol_m3", phase.Density);
+        json.WriteNumber("density_kg_m3", phase.Density * molarMass);
+        json.WriteNumber("molar_volume_m3_mol", phase.MolarVolume);
+        json.WriteNumber("compressibility_factor", phase.CompressibilityFactor);
+        json.WriteNumber("ln_fugacity_coefficient", phase.LnFugacityCoefficient);
+        json.WriteNumber("residual_enthalpy_J_mol", phase.ResidualEnthalpy);
+        json.WriteNumber("residual_entropy_J_molK", phase.ResidualEntropy);
+        json.WriteNumber("residual_internal_energy_J_mol", phase.ResidualInternalEnergy);
+        json.WriteEndObject();
+    }
+
+    private static string Csv(IReadOnlyList<CoexistencePoint> points)
+        => CsvText.Write(
+            CoexistenceColumns.Flat.Select(c => c.Key).ToArray(),
+            points.Select(p => CoexistenceColumns.Flat.Select(c => NumberText.RoundTrip(c.Value(p))).ToArray()));
+
+    private static string CurveTable(IReadOnlyList<CoexistencePoint> points, Fluid fluid, CubicModel model, UnitSystem units)
+    {
+        var columns = CoexistenceColumns.Flat.Where(c => c.InCurveTable).ToArray();
+        var table = new TextTable(columns.Select(c => CoexistenceColumns.Header(c, units)).ToArray(), columns.Select(_ => true).ToArray());
+        double m = fluid.MolarMass.Value;
+        foreach (var point in points)
+        {
+            table.Add(columns.Select(c => NumberText.Table(CoexistenceColumns.Display(c, point, units, m))).ToArray());
+        }
+
+        var text = new StringBuilder();
+        text.AppendLine($"Saturation curve of {fluid.Name}, {model.Kind.Title()}; {points.Count} states{(points[^1].IsCritical ? ", the last one the critical point" : "")}");
+        text.AppendLine();
+        text.Append(table.Render());
+        text.AppendLine();
+        text.AppendLine(Caution);
+        return text.ToString();
+    }
+
+    private static string SingleTable(CoexistencePoint point, Fluid fluid, CubicModel model, UnitSystem units)
+    {
+        double m = fluid.MolarMass.Value;
+        string Show(DisplayQuantity q, double si) => NumberText.Table(UnitFormatter.Convert(q, si, units, m));
+        string Label(DisplayQuantity q) => UnitFormatter.Label(q, units);
+
+        var phases = new TextTable(["phase property", "liquid", "vapour", "unit"], [false, true, true, false]);
+        phases.Add("density", Show(DisplayQuantity.Density, point.Liquid.Density), Show(DisplayQuantity.Density, point.Vapour.Density), Label(DisplayQuantity.Density));
+        phases.Add("molar volume", Show(DisplayQuantity.MolarVolume, point.Liquid.MolarVolume), Show(DisplayQuantity.MolarVolume, point.Vapour.MolarVolume), Label(DisplayQuantity.MolarVolume));
+        phases.Add("compressibility factor", NumberText.Table(point.Liquid.CompressibilityFactor), NumberText.Table(point.Vapour.CompressibilityFactor), "-");
+        phases.Add("ln fugacity coefficient", NumberText.Table(point.Liquid.LnFugacityCoefficient), NumberText.Table(point.Vapour.LnFugacityCoefficient), "-");
+        phases.Add("residual enthalpy", Show(DisplayQuantity.MolarEnergy, point.Liquid.ResidualEnthalpy), Show(DisplayQuantity.MolarEnergy, point.Vapour.ResidualEnthalpy), Label(DisplayQuantity.MolarEnergy));
+
+        var jumps = new TextTable(["across coexistence", "value", "unit"], [false, true, false]);
+        jumps.Add("enthalpy of vaporization", Show(DisplayQuantity.MolarEnergy, point.EnthalpyOfVaporization), Label(DisplayQuantity.MolarEnergy));
+        jumps.Add("entropy of vaporization", Show(DisplayQuantity.MolarEntropy, point.EntropyOfVaporization), Label(DisplayQuantity.MolarEntropy));
+        jumps.Add("internal energy change", Show(DisplayQuantity.MolarEnergy, point.InternalEnergyChange), Label(DisplayQuantity.MolarEnergy));
+        jumps.Add("volume change", Show(DisplayQuantity.MolarVolume, point.VolumeChange), Label(DisplayQuantity.MolarVolume));
+        jumps.Add("compressibility change", NumberText.Table(point.CompressibilityChange), "-");
+        jumps.Add("slope dPsat/dT (Clapeyron)", Show(DisplayQuantity.Slope, point.Slope), Label(DisplayQuantity.Slope));
+        jumps.Add("inverse slope dTsat/dP", NumberText.Table(1 / UnitFormatter.Convert(DisplayQuantity.Slope, point.Slope, units, m)), $"K per {Label(DisplayQuantity.Pressure)}");
+
+        var text = new StringBuilder();
+        text.AppendLine($"{fluid.Name}, {model.Kind.Title()}{(point.IsCritical ? ": critical point" : "")}");
+        text.AppendLine($"saturation temperature  {Show(DisplayQuantity.Temperature, point.Temperature)} {Label(DisplayQuantity.Temperature)}");
+        text.AppendLine($"saturation pressure     {Show(DisplayQuantity.Pressure, point.Pressure)} {Label(DisplayQuantity.Pressure)}");
+        text.AppendLine();
+        text.Append(phases.Render());
+        text.AppendLine();
+        text.Append(jumps.Render());
+        text.AppendLine();
+        text.AppendLine($"solver: {Kebab(point.Report.Method.ToString())}, {point.Report.Iterations} iterations, |ln phi_L - ln phi_V| = {point.Report.FugacityResidual.ToString("G3", CultureInfo.InvariantCulture)}, {Kebab(point.Report.StopReason.ToString())}");
+        text.AppendLine(Caution);
+        return text.ToString();
+    }
+
+    /// <summary>"PressureIteration" → "pressure-iteration".</summary>
+    public static string Kebab(string pascal)
+    {
+        var text = new StringBuilder();
+        foreach (char c in pascal)
+        {
+            if (char.IsUpper(c) && text.Length > 0)
+            {
+                text.Append('-');
+            }
+
+            text.Append(char.ToLowerInvariant(c));
+        }
+
+        return text.ToString();
+    }
+
+    private static double Finite(double value, string key)
+        => double.IsFinite(value) ? value : throw new InvalidOperationException($"internal error: {key} is not finite");
+}

@@ -1,0 +1,216 @@
+using System.Globalization;
+using System.Text;
+using System.Text.Json;
+using PhaseSlope.Cli.Units;
+using PhaseSlope.Core.Equilibrium;
+using PhaseSlope.Core.Fluids;
+
+namespace PhaseSlope.Cli.Output;
+
+/// <summary>Renders fluid records for <c>fluids list</c> and <c>fluids show</c>.</summary>
+internal static class FluidWriter
+{
+    /// <summary>A sourced constant of a fluid: SI key, title, display quantity, and accessor.</summary>
+    private sealed record Field(string Key, string Title, DisplayQuantity? Quantity, Func<Fluid, SourcedValue?> Get);
+
+    private static readonly Field[] Fields =
+    [
+        new("molar_mass_kg_mol", "molar mass", null, f => f.MolarMass),
+        new("critical_temperature_K", "critical temperature", DisplayQuantity.Temperature, f => f.CriticalTemperature),
+        new("critical_pressure_Pa", "critical pressure", DisplayQuantity.Pressure, f => f.CriticalPressure),
+        new("acentric_factor", "acentric factor", null, f => f.AcentricFactor),
+        new("critical_density_mol_m3", "critical density", DisplayQuantity.Density, f => f.CriticalDensity),
+        new("normal_boiling_point_K", "normal boiling point", DisplayQuantity.Temperature, f => f.NormalBoilingPoint),
+        new("triple_point_temperature_K", "triple point temperature", DisplayQuantity.Temperature, f => f.TriplePointTemperature),
+    ];
+
+    /// <summary>Renders one fluid (<paramref name="single"/>) or a list.</summary>
+    public static string Render(IReadOnlyList<Fluid> fluids, bool single, OutputFormat format, UnitSystem units)
+        => format switch
+        {
+            OutputFormat.Json => Json(fluids, single),
+            OutputFormat.Csv => Csv(fluids),
+            _ => single ? ShowTable(fluids[0], units) : ListTable(fluids, units),
+        };
+
+    private static string Json(IReadOnlyList<Fluid> fluids, bool single)
+    {
+        using var stream = new MemoryStream();
+        using (var json = new Utf8JsonWriter(stream, new JsonWriterOptions { Indented = true }))
+        {
+            if (!single)
+            {
+                json.WriteStartArray();
+            }
+
+            foreach (var fluid in fluids)
+            {
+                WriteObject(json, fluid);
+            }
+
+            if (!single)
+            {
+                json.WriteEndArray();
+            }
+        }
+
+        return Encoding.UTF8.GetString(stream.ToArray()) + Environment.NewLine;
+    }
+
+    private static void WriteObject(Utf8JsonWriter json, Fluid fluid)
+    {
+        json.WriteStartObject();
+        json.WriteString("name", fluid.Name);
+        json.WriteStartArray("synonyms");
+        foreach (var synonym in fluid.Synonyms)
+        {
+            json.WriteStringValue(synonym);
+        }
+
+        json.WriteEndArray();
+        WriteOptional(json, "formula", fluid.Formula);
+        WriteOptional(json, "cas", fluid.CasNumber);
+        WriteOptional(json, "family", fluid.Family);
+        foreach (var field in Fields)
+        {
+            if (field.Get(fluid) is SourcedValue value)
+            {
+                json.WriteNumber(field.Key, value.Value);
+            }
+            else
+            {
+                json.WriteNull(field.Key);
+            }
+        }
+
+        json.WriteNumber("lowest_valid_temperature_K", CoexistenceSolver.LowestValidTemperature(fluid));
+        json.WriteStartObject("standard_uncertainties");
+        foreach (var field in Fields)
+        {
+            if (field.Get(fluid)?.StandardUncertainty is double u)
+            {
+                json.WriteNumber(field.Key, u);
+            }
+        }
+
+        json.WriteEndObject();
+        json.WriteStartObject("sources");
+        foreach (var field in Fields)
+        {
+            if (field.Get(fluid) is SourcedValue value)
+            {
+                json.WriteString(field.Key, value.Source);
+            }
+        }
+
+        json.WriteEndObject();
+        WriteOptional(json, "remarks", fluid.Remarks);
+        json.WriteString("origin", fluid.Origin);
+        json.WriteEndObject();
+    }
+
+    private static void WriteOptional(Utf8JsonWriter json, string key, string? value)
+    {
+        if (value is null)
+        {
+            json.WriteNull(key);
+        }
+        else
+        {
+            json.WriteString(key, value);
+        }
+    }
+
+    private static string Csv(IReadOnlyList<Fluid> fluids)
+        => CsvText.Write(
+            ["name", "formula", "cas", "family", .. Fields.Select(f => f.Key)],
+            fluids.Select(fluid => (IReadOnlyList<string>)[
+                fluid.Name, fluid.Formula ?? "", fluid.CasNumber ?? "", fluid.Family ?? "",
+                .. Fields.Select(f => f.Get(fluid) is SourcedValue v ? NumberText.RoundTrip(v.Value) : "")]));
+
+    private static string Display(Field field, double si, UnitSystem units, double molarMass)
+        => field.Quantity is DisplayQuantity q ? NumberText.Table(UnitFormatter.Convert(q, si, units, molarMass)) : NumberText.Table(field.Key == "molar_mass_kg_mol" ? si * 1e3 : si);
+
+    private static string Unit(Field field, UnitSystem units)
+        => field.Quantity is DisplayQuantity q ? UnitFormatter.Label(q, units) : field.Key == "molar_mass_kg_mol" ? "g/mol" : "-";
+
+    private static string ListTable(IReadOnlyList<Fluid> fluids, UnitSystem units)
+    {
+        var shown = Fields.Take(4).ToArray();
+        var headers = new List<string> { "name", "formula", "family" };
+        headers.AddRange(shown.Select(f => $"{Abbreviation(f)} [{Unit(f, units)}]"));
+        var table = new TextTable(headers, [false, false, false, .. shown.Select(_ => true)]);
+        foreach (var fluid in fluids)
+        {
+            table.Add([fluid.Name, fluid.Formula ?? "", fluid.Family ?? "", .. shown.Select(f => Display(f, f.Get(fluid)!.Value, units, fluid.MolarMass.Value))]);
+        }
+
+        return $"{fluids.Count} fluids{Environment.NewLine}{Environment.NewLine}{table.Render()}";
+    }
+
+    private static string Abbreviation(Field field) => field.Key switch
+    {
+        "molar_mass_kg_mol" => "M",
+        "critical_temperature_K" => "Tc",
+        "critical_pressure_Pa" => "Pc",
+        _ => "omega",
+    };
+
+    private static string ShowTable(Fluid fluid, UnitSystem units)
+    {
+        var text = new StringBuilder();
+        text.AppendLine($"{fluid.Name}{(fluid.Formula is null ? "" : $" ({fluid.Formula})")}");
+        if (fluid.Synonyms.Count > 0)
+        {
+            text.AppendLine($"also known as: {string.Join(", ", fluid.Synonyms)}");
+        }
+
+        if (fluid.CasNumber is not null)
+        {
+            text.AppendLine($"CAS number: {fluid.CasNumber}");
+        }
+
+        if (fluid.Family is not null)
+        {
+            text.AppendLine($"family: {fluid.Family}");
+        }
+
+        text.AppendLine($"origin: {fluid.Origin}");
+        text.AppendLine();
+        var table = new TextTable(["constant", "value", "std. uncertainty", "unit", "source"], [false, true, true, false, false]);
+        foreach (var field in Fields)
+        {
+            if (field.Get(fluid) is SourcedValue value)
+            {
+                string u = value.StandardUncertainty is double s ? DisplayUncertainty(field, s, units, fluid.MolarMass.Value) : "";
+                table.Add(field.Title, Display(field, value.Value, units, fluid.MolarMass.Value), u, Unit(field, units), value.Source);
+            }
+            else
+            {
+                table.Add(field.Title, "not given", "", "", "");
+            }
+        }
+
+        text.Append(table.Render());
+        text.AppendLine();
+        double tMin = CoexistenceSolver.LowestValidTemperature(fluid);
+        text.AppendLine($"lowest valid temperature: {NumberText.Table(UnitFormatter.Convert(DisplayQuantity.Temperature, tMin, units))} {UnitFormatter.Label(DisplayQuantity.Temperature, units)} (0.3 Tc or the triple point, whichever is higher)");
+        if (fluid.Remarks is not null)
+        {
+            text.AppendLine($"remarks: {fluid.Remarks}");
+        }
+
+        return text.ToString();
+    }
+
+    private static string DisplayUncertainty(Field field, double si, UnitSystem units, double molarMass)
+    {
+        // An uncertainty is a difference: temperature offsets (degC) must not shift it.
+        if (field.Quantity == DisplayQuantity.Temperature)
+        {
+            return NumberText.Table(si);
+        }
+
+        return Display(field, si, units, molarMass);
+    }
+}
