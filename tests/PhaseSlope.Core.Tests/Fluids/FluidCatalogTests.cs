@@ -2,6 +2,7 @@ using System.Reflection;
 using System.Text.RegularExpressions;
 using PhaseSlope.Core.Errors;
 using PhaseSlope.Core.Fluids;
+using PhaseSlope.Core.Tests.TestSupport;
 
 namespace PhaseSlope.Core.Tests.Fluids;
 
@@ -137,8 +138,7 @@ public class FluidCatalogTests
                 sum += atomicWeight[m.Groups[1].Value] * count;
             }
 
-            double relative = Math.Abs(fluid.MolarMass.Value - sum / 1000.0) / (sum / 1000.0);
-            Assert.True(relative < 1e-5, $"{fluid.Name}: {fluid.MolarMass.Value} kg/mol vs formula {sum / 1000.0}");
+            AssertClose.Relative(sum / 1000.0, fluid.MolarMass.Value, 1e-5, $"{fluid.Name} molar mass (kg/mol) vs formula");
         }
     }
 
