@@ -12,7 +12,7 @@ internal static class CoexistCommand
     /// <summary>Builds the command; its action writes to <paramref name="io"/>.</summary>
     public static Command Create(CliIo io)
     {
-        var fluid = new Argument<string>("FLUID") { Description = "Catalog name or synonym, or the path of a .fluid file" };
+        var fluid = CommonOptions.FluidArgument();
         var temperature = new Option<string>("--temperature", "-T") { Description = "Saturation temperature, e.g. 300 K, 26.85 degC, 80 degF (bare number: K)" };
         var pressure = new Option<string>("--pressure", "-P") { Description = "Saturation pressure, e.g. 101.325 kPa, 1.2 bar, 14.7 psi, 1 atm (bare number: Pa)" };
         var common = new CommonOptions();

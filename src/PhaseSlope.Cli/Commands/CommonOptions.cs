@@ -29,6 +29,10 @@ internal sealed class CommonOptions
         DefaultValueFactory = _ => "si",
     };
 
+    /// <summary>The FLUID argument every fluid command takes.</summary>
+    public static Argument<string> FluidArgument()
+        => new("FLUID") { Description = "Catalog name or synonym, or the path of a .fluid file" };
+
     /// <summary>Adds the options to a command; <paramref name="withEos"/> adds --eos too.</summary>
     public void AddTo(Command command, bool withEos)
     {

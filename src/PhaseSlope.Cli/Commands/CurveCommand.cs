@@ -14,7 +14,7 @@ internal static class CurveCommand
     /// <summary>Builds the command; its action writes to <paramref name="io"/>.</summary>
     public static Command Create(CliIo io)
     {
-        var fluid = new Argument<string>("FLUID") { Description = "Catalog name or synonym, or the path of a .fluid file" };
+        var fluid = CommonOptions.FluidArgument();
         var from = new Option<string>("--from") { Description = "First temperature (default: the lowest valid temperature, 0.3 Tc or the triple point)" };
         var to = new Option<string>("--to") { Description = "Last temperature (default: the critical temperature; the last state is then the critical point)" };
         var points = new Option<int>("--points", "-n")

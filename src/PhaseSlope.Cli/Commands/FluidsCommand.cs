@@ -23,7 +23,7 @@ internal static class FluidsCommand
         }));
 
         var showCommon = new CommonOptions();
-        var fluid = new Argument<string>("FLUID") { Description = "Catalog name or synonym, or the path of a .fluid file" };
+        var fluid = CommonOptions.FluidArgument();
         var show = new Command("show", "Show every constant of one fluid with its source and uncertainty");
         show.Arguments.Add(fluid);
         showCommon.AddTo(show, withEos: false);

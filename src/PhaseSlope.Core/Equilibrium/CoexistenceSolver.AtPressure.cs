@@ -79,16 +79,5 @@ public sealed partial class CoexistenceSolver
 
     /// <summary>Like <see cref="AtPressure"/>, returning false instead of throwing.</summary>
     public bool TryAtPressure(double pressure, out CoexistencePoint? point)
-    {
-        try
-        {
-            point = AtPressure(pressure);
-            return true;
-        }
-        catch (PhaseSlopeException)
-        {
-            point = null;
-            return false;
-        }
-    }
+        => TrySolve(() => AtPressure(pressure), out point);
 }

@@ -45,18 +45,7 @@ public sealed partial class CoexistenceSolver
 
     /// <summary>Like <see cref="AtTemperature"/>, returning false instead of throwing.</summary>
     public bool TryAtTemperature(double temperature, out CoexistencePoint? point)
-    {
-        try
-        {
-            point = AtTemperature(temperature);
-            return true;
-        }
-        catch (PhaseSlopeException)
-        {
-            point = null;
-            return false;
-        }
-    }
+        => TrySolve(() => AtTemperature(temperature), out point);
 
     private void CheckTemperature(double temperature)
     {

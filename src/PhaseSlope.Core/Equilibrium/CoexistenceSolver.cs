@@ -99,6 +99,20 @@ public sealed partial class CoexistenceSolver
         };
     }
 
+    private static bool TrySolve(Func<CoexistencePoint> solve, out CoexistencePoint? point)
+    {
+        try
+        {
+            point = solve();
+            return true;
+        }
+        catch (PhaseSlopeException)
+        {
+            point = null;
+            return false;
+        }
+    }
+
     private bool Acceptable(CoexistencePoint point)
         => point.Report.FugacityResidual <= Options.FugacityTolerance
            && point.Liquid.Density > point.Vapour.Density
