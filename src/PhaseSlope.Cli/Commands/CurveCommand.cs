@@ -61,10 +61,22 @@ internal static class CurveCommand
                     $"--from: {NumberText.Table(start)} K is below the lowest valid temperature {NumberText.Table(solver.MinimumTemperature)} K of {data.Name}");
             }
 
+            if (start >= tc)
+            {
+                throw new Core.Errors.InvalidInputException("from temperature", start,
+                    $"--from: {NumberText.Table(start)} K is at or above the critical temperature {NumberText.Table(tc)} K of {data.Name}");
+            }
+
             if (end > tc)
             {
                 throw new Core.Errors.InvalidInputException("to temperature", end,
                     $"--to: {NumberText.Table(end)} K is above the critical temperature {NumberText.Table(tc)} K of {data.Name}");
+            }
+
+            if (end < solver.MinimumTemperature)
+            {
+                throw new Core.Errors.InvalidInputException("to temperature", end,
+                    $"--to: {NumberText.Table(end)} K is below the lowest valid temperature {NumberText.Table(solver.MinimumTemperature)} K of {data.Name}");
             }
 
             if (!(start < end))

@@ -1,0 +1,261 @@
+using System.Globalization;
+using System.Text.Json;
+using CsvHelper;
+using PhaseSlope.Cli.Output;
+using PhaseSlope.Core.Equilibrium;
+using PhaseSlope.Core.Fluids;
+using PhaseSlope.Core.Models;
+using static PhaseSlope.Cli.Tests.CliHarness;
+
+namespace PhaseSlope.Cli.Tests.Commands;
+
+public class CurveCommandTests
+{
+    private static readonly string[] CsvHeader =
+    [
+        "temperature_K", "pressure_Pa", "liquid_density_mol_m3", "vapour_density_mol_m3",
+        "liquid_molar_volume_m3_mol", "vapour_molar_volume_m3_mol", "liquid_compressibility_factor",
+        "vapour_compressibility_factor", "enthalpy_of_vaporization_J_mol", "entropy_of_vaporization_J_molK",
+        "internal_energy_change_J_mol", "volume_change_m3_mol", "slope_Pa_K",
+    ];
+
+    /// <summary>Parses CSV text with CsvHelper (RFC 4180) into rows of fields.</summary>
+    internal static List<string[]> ParseCsv(string text)
+    {
+        using var input = new StringReader(text);
+        using var csv = CsvReader.Create(input, new CsvReaderOptions { HasHeader = false, FormatProvider = CultureInfo.InvariantCulture }, false);
+        var rows = new List<string[]>();
+        while (csv.Read())
+        {
+            rows.Add([.. Enumerable.Range(0, csv.FieldCount).Select(csv.GetString)]);
+        }
+
+        return rows;
+    }
+
+    private static IReadOnlyList<CoexistencePoint> CoreCurve(string fluid, int points)
+        => CoexistenceCurve.Trace(CoexistenceSolver.For(FluidCatalog.Embedded.Find(fluid), CubicModelKind.PengRobinson), points);
+
+    [Fact]
+    public void Json_WholeCurve_ArrayOfCoreObjectsEndingAtTheCriticalPoint()
+    {
+        var json = RunJson("curve", "propane", "--points", "9", "--format", "json");
+        var core = CoreCurve("propane", 9);
+
+        Assert.Equal(JsonValueKind.Array, json.ValueKind);
+        Assert.Equal(9, json.GetArrayLength());
+        for (int i = 0; i < 9; i++)
+        {
+            CoexistCommandTests.AssertMatchesPoint(json[i], core[i], "propane", "pr");
+            Assert.Equal(i == 8, json[i].GetProperty("critical").GetBoolean());
+        }
+
+        var last = json[8];
+        AssertSameDouble(FluidCatalog.Embedded.Find("propane").CriticalTemperature.Value, last.GetProperty("temperature_K").GetDouble(), "last temperature_K");
+        AssertSameDouble(last.GetProperty("liquid").GetProperty("density_mol_m3").GetDouble(),
+            last.GetProperty("vapour").GetProperty("density_mol_m3").GetDouble(), "critical densities");
+        Assert.Equal(0.0, last.GetProperty("enthalpy_of_vaporization_J_mol").GetDouble());
+        AssertSameDouble(CoexistenceSolver.LowestValidTemperature(FluidCatalog.Embedded.Find("propane")),
+            json[0].GetProperty("temperature_K").GetDouble(), "first temperature_K");
+    }
+
+    [Fact]
+    public void Json_DefaultPoints_FortyStatesRisingInTemperature()
+    {
+        var json = RunJson("curve", "water", "--format", "json");
+
+        Assert.Equal(CoexistenceCurve.DefaultPoints, json.GetArrayLength());
+        Assert.Equal(40, json.GetArrayLength());
+        double previousT = 0, previousP = 0;
+        foreach (var item in json.EnumerateArray())
+        {
+            double t = item.GetProperty("temperature_K").GetDouble();
+            double p = item.GetProperty("pressure_Pa").GetDouble();
+            Assert.True(t > previousT && p > previousP, $"T and P must rise along the curve: {t} K, {p} Pa");
+            (previousT, previousP) = (t, p);
+        }
+
+        AssertSameDouble(647.096, previousT, "last temperature_K (water Tc in the catalog)");
+    }
+
+    [Fact]
+    public void Json_ToBelowTc_LastStateIsNotCritical()
+    {
+        var json = RunJson("curve", "propane", "--from", "200 K", "--to", "300 K", "--points", "4", "--format", "json");
+
+        Assert.Equal(4, json.GetArrayLength());
+        AssertSameDouble(200, json[0].GetProperty("temperature_K").GetDouble(), "first");
+        AssertSameDouble(300, json[3].GetProperty("temperature_K").GetDouble(), "last");
+        Assert.All(json.EnumerateArray(), item => Assert.False(item.GetProperty("critical").GetBoolean()));
+    }
+
+    [Fact]
+    public void Table_Propane_AlignedEndsAtCriticalPointWithUnitsAndCaution()
+    {
+        string text = RunText("curve", "propane");
+
+        Assert.StartsWith("Saturation curve of propane, Peng-Robinson (1976); 40 states, the last one the critical point\n", text, StringComparison.Ordinal);
+        var table = Assert.Single(TableLayout.Find(text));
+        TableLayout.AssertAligned(table);
+        Assert.Equal(["T [K]", "P [kPa]", "rho_L [mol/m3]", "rho_V [mol/m3]", "Z_L", "Z_V", "dH_vap [J/mol]", "dS_vap [J/(mol·K)]", "dPsat/dT [kPa/K]"], table.HeaderCells);
+        Assert.Equal(40, table.Rows.Count);
+        var last = table.Cells(table.Rows[^1]);
+        Assert.Equal("369.89", last[0]);
+        Assert.Equal("4251.2", last[1]);
+        Assert.Equal(last[2], last[3]);
+        Assert.Equal("0", last[6]);
+        Assert.EndsWith(CoexistenceWriter.Caution + "\n", text, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Table_Engineering_HeadersInDegCBarKgM3KjKg()
+    {
+        string text = RunText("curve", "propane", "--points", "5", "--units", "engineering");
+        var fluid = FluidCatalog.Embedded.Find("propane");
+        var core = CoreCurve("propane", 5);
+
+        var table = Assert.Single(TableLayout.Find(text));
+        TableLayout.AssertAligned(table);
+        Assert.Equal(["T [degC]", "P [bar]", "rho_L [kg/m3]", "rho_V [kg/m3]", "Z_L", "Z_V", "dH_vap [kJ/kg]", "dS_vap [kJ/(kg·K)]", "dPsat/dT [bar/K]"], table.HeaderCells);
+        for (int i = 0; i < 5; i++)
+        {
+            var cells = table.Cells(table.Rows[i]).Select(c => double.Parse(c, CultureInfo.InvariantCulture)).ToArray();
+            Assert.Equal(core[i].Temperature - 273.15, cells[0], 1e-4);
+            AssertRelative(core[i].Pressure / 1e5, cells[1], 1e-6, "bar");
+            AssertRelative(core[i].Liquid.Density * fluid.MolarMass.Value, cells[2], 1e-6, "kg/m3");
+            if (i < 4)
+            {
+                AssertRelative(core[i].EnthalpyOfVaporization / fluid.MolarMass.Value / 1e3, cells[6], 1e-6, "kJ/kg");
+            }
+        }
+
+        Assert.Equal("96.74", table.Cells(table.Rows[^1])[0]);
+        Assert.Contains(CoexistenceWriter.Caution, text, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Csv_Stdout_HeaderAndOneRowPerPointWithRoundTripNumbers()
+    {
+        string text = RunText("curve", "r-134a", "--points", "6", "--format", "csv");
+        var core = CoexistenceCurve.Trace(CoexistenceSolver.For(FluidCatalog.Embedded.Find("r-134a"), CubicModelKind.PengRobinson), 6);
+
+        var rows = ParseCsv(text);
+        Assert.Equal(7, rows.Count);
+        Assert.Equal(CsvHeader, rows[0]);
+        for (int i = 0; i < 6; i++)
+        {
+            Assert.Equal(CsvHeader.Length, rows[i + 1].Length);
+            AssertSameDouble(core[i].Temperature, double.Parse(rows[i + 1][0], CultureInfo.InvariantCulture), "T");
+            AssertSameDouble(core[i].Pressure, double.Parse(rows[i + 1][1], CultureInfo.InvariantCulture), "P");
+            AssertSameDouble(core[i].Vapour.Density, double.Parse(rows[i + 1][3], CultureInfo.InvariantCulture), "rho_V");
+            AssertSameDouble(core[i].Slope, double.Parse(rows[i + 1][12], CultureInfo.InvariantCulture), "slope");
+        }
+    }
+
+    [Fact]
+    public void Out_CsvExtension_FileHasHeaderAndNRowsAndStdoutIsEmpty()
+    {
+        using var folder = new TempFolder();
+        string path = folder.File("propane.csv");
+
+        var result = Run("curve", "propane", "--points", "12", "--out", path);
+
+        Assert.True(result.ExitCode == 0, result.ToString());
+        Assert.Equal("", result.Stdout);
+        Assert.Equal($"phaseslope: wrote 12 coexistence states to {path}\n", result.Stderr);
+        string text = File.ReadAllText(path);
+        Assert.Equal(RunText("curve", "propane", "--points", "12", "--format", "csv"), text);
+        var rows = ParseCsv(text);
+        Assert.Equal(13, rows.Count);
+        Assert.Equal(CsvHeader, rows[0]);
+        Assert.All(rows.Skip(1), row => Assert.All(row, cell => double.Parse(cell, NumberStyles.Float, CultureInfo.InvariantCulture)));
+        Assert.Equal("369.89", rows[^1][0]);
+        Assert.EndsWith("\n", text, StringComparison.Ordinal);
+        Assert.Equal(["propane.csv"], folder.Entries());
+    }
+
+    [Fact]
+    public void Out_JsonExtension_FileIsJsonArray()
+    {
+        using var folder = new TempFolder();
+        string path = folder.File("curve.JSON");
+
+        Assert.Equal(0, Run("curve", "ethane", "--points", "5", "--out", path).ExitCode);
+
+        using var document = JsonDocument.Parse(File.ReadAllText(path));
+        Assert.Equal(5, document.RootElement.GetArrayLength());
+        Assert.True(document.RootElement[4].GetProperty("critical").GetBoolean());
+    }
+
+    [Fact]
+    public void Out_OtherExtension_FileIsTable()
+    {
+        using var folder = new TempFolder();
+        string path = folder.File("curve.txt");
+
+        Assert.Equal(0, Run("curve", "ethane", "--points", "5", "--out", path).ExitCode);
+
+        Assert.Equal(RunText("curve", "ethane", "--points", "5"), File.ReadAllText(path));
+    }
+
+    [Fact]
+    public void Out_FormatGiven_OverridesExtension()
+    {
+        using var folder = new TempFolder();
+        string path = folder.File("curve.json");
+
+        Assert.Equal(0, Run("curve", "ethane", "--points", "5", "--format", "csv", "--out", path).ExitCode);
+
+        Assert.Equal(CsvHeader, ParseCsv(File.ReadAllText(path))[0]);
+    }
+
+    [Fact]
+    public void Out_ExistingFileAndSuccess_ReplacedWhole()
+    {
+        using var folder = new TempFolder();
+        string path = folder.File("curve.csv");
+        File.WriteAllText(path, new string('x', 100_000));
+
+        Assert.Equal(0, Run("curve", "propane", "--points", "3", "--out", path).ExitCode);
+
+        Assert.Equal(RunText("curve", "propane", "--points", "3", "--format", "csv"), File.ReadAllText(path));
+        Assert.Equal(["curve.csv"], folder.Entries());
+    }
+
+    [Theory]
+    [InlineData("--to", "500", ExitCodes.OutOfRange)]
+    [InlineData("--to", "30 furlong", ExitCodes.Usage)]
+    [InlineData("--points", "1", ExitCodes.Usage)]
+    [InlineData("--eos", "nope", ExitCodes.Usage)]
+    [InlineData("--to", "369.889999999999", ExitCodes.NotConverged)] // fails after most states were computed
+    public void Out_CommandFails_ExistingFileUntouchedAndNoTempFileLeft(string option, string value, int expectedCode)
+    {
+        using var folder = new TempFolder();
+        string path = folder.File("curve.csv");
+        const string sentinel = "sentinel: must survive a failed run\n";
+        File.WriteAllText(path, sentinel);
+
+        var result = Run("curve", "propane", option, value, "--out", path);
+
+        AssertFailure(result, expectedCode);
+        Assert.Equal(sentinel, File.ReadAllText(path));
+        Assert.Equal(["curve.csv"], folder.Entries());
+    }
+
+    [Fact]
+    public void Out_MissingFolder_ExitOutputFileAndNothingCreated()
+    {
+        using var folder = new TempFolder();
+        string path = Path.Combine(folder.Path, "missing", "curve.csv");
+
+        AssertFailure(Run("curve", "propane", "--points", "3", "--out", path), ExitCodes.OutputFile, "folder does not exist");
+
+        Assert.Empty(folder.Entries());
+    }
+
+    [Fact]
+    public void Out_EmptyName_UsageError()
+    {
+        AssertFailure(Run("curve", "propane", "--points", "3", "--out", " "), ExitCodes.Usage, "--out");
+    }
+}

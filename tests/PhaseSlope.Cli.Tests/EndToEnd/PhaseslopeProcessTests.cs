@@ -1,0 +1,105 @@
+using System.Diagnostics;
+using System.Text.Json;
+
+namespace PhaseSlope.Cli.Tests.EndToEnd;
+
+/// <summary>The built tool run as a real process: <c>dotnet phaseslope.dll ...</c>. The runs are
+/// few, since each starts a runtime.</summary>
+public class PhaseslopeProcessTests
+{
+    /// <summary>Safety stop for a hung process; not a performance check.</summary>
+    private static readonly TimeSpan Timeout = TimeSpan.FromSeconds(60);
+
+    private static CliResult RunProcess(params string[] args)
+    {
+        string dll = Path.Combine(AppContext.BaseDirectory, "phaseslope.dll");
+        Assert.True(File.Exists(dll), $"the built tool is missing: {dll}");
+        string host = Environment.GetEnvironmentVariable("DOTNET_HOST_PATH") is { Length: > 0 } h && File.Exists(h) ? h : "dotnet";
+
+        var start = new ProcessStartInfo(host)
+        {
+            RedirectStandardOutput = true,
+            RedirectStandardError = true,
+            RedirectStandardInput = true,
+            UseShellExecute = false,
+            WorkingDirectory = Path.GetTempPath(),
+        };
+        start.ArgumentList.Add(dll);
+        foreach (string arg in args)
+        {
+            start.ArgumentList.Add(arg);
+        }
+
+        using var process = Process.Start(start) ?? throw new InvalidOperationException("dotnet did not start");
+        process.StandardInput.Close();
+        var stdout = process.StandardOutput.ReadToEndAsync();
+        var stderr = process.StandardError.ReadToEndAsync();
+        if (!process.WaitForExit(Timeout))
+        {
+            process.Kill(entireProcessTree: true);
+            Assert.Fail($"phaseslope {string.Join(' ', args)} did not exit within {Timeout.TotalSeconds} s");
+        }
+
+        process.WaitForExit();
+        return new CliResult(process.ExitCode, stdout.Result, stderr.Result);
+    }
+
+    [Fact]
+    public void CurvePropane_ExitZeroAndTableEndsWithTheCriticalPoint()
+    {
+        var result = RunProcess("curve", "propane");
+
+        Assert.True(result.ExitCode == 0, result.ToString());
+        Assert.Equal("", result.Stderr);
+        Assert.StartsWith("Saturation curve of propane", result.Stdout, StringComparison.Ordinal);
+        var table = Assert.Single(TableLayout.Find(result.Stdout));
+        TableLayout.AssertAligned(table);
+        Assert.Equal(40, table.Rows.Count);
+        var last = table.Cells(table.Rows[^1]);
+        Assert.Equal("369.89", last[0]);
+        Assert.Equal(last[2], last[3]);
+        Assert.Contains("the last one the critical point", result.Stdout, StringComparison.Ordinal);
+        Assert.Contains("Model estimates.", result.Stdout, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Help_ExitZeroListsCommands()
+    {
+        var result = RunProcess("--help");
+
+        Assert.True(result.ExitCode == 0, result.ToString());
+        Assert.Equal("", result.Stderr);
+        Assert.Contains("coexist", result.Stdout, StringComparison.Ordinal);
+        Assert.Contains("curve", result.Stdout, StringComparison.Ordinal);
+        Assert.Contains("fluids", result.Stdout, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void CoexistJson_ExitZeroAndSameAsInProcess()
+    {
+        string[] args = ["coexist", "water", "--pressure", "1 atm", "--format", "json"];
+        var result = RunProcess(args);
+
+        Assert.True(result.ExitCode == 0, result.ToString());
+        Assert.Equal("", result.Stderr);
+        using var document = JsonDocument.Parse(result.Stdout);
+        Assert.Equal("water", document.RootElement.GetProperty("fluid").GetString());
+        Assert.Equal(CliHarness.RunText(args), result.Stdout);
+    }
+
+    public static TheoryData<int, string[]> OneErrorPerExitCode => new()
+    {
+        { ExitCodes.Usage, ["coexist", "propane", "--temperature", "3..0"] },
+        { ExitCodes.Fluid, ["coexist", "propanne", "--temperature", "300"] },
+        { ExitCodes.OutOfRange, ["coexist", "propane", "--temperature", "400"] },
+        { ExitCodes.NotConverged, ["coexist", "propane", "--temperature", "369.889999999999"] },
+        { ExitCodes.OutputFile, ["curve", "propane", "--points", "3", "--out", Path.Combine(Path.GetTempPath(), "phaseslope-no-such-folder-3f1c", "curve.csv")] },
+    };
+
+    [Theory]
+    [MemberData(nameof(OneErrorPerExitCode))]
+    public void Error_EachExitCode_OneStderrLineAndEmptyStdout(int expectedCode, string[] args)
+    {
+        CliHarness.AssertFailure(RunProcess(args), expectedCode);
+    }
+}
