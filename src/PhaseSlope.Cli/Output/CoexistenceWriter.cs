@@ -28,7 +28,7 @@ internal static class CoexistenceWriter
     private static string Json(IReadOnlyList<CoexistencePoint> points, bool single, Fluid fluid, CubicModel model)
     {
         using var stream = new MemoryStream();
-        using (var json = new Utf8JsonWriter(stream, new JsonWriterOptions { Indented = true }))
+        using (var json = new Utf8JsonWriter(stream, JsonText.Options))
         {
             if (single)
             {

@@ -36,7 +36,7 @@ internal static class FluidWriter
     private static string Json(IReadOnlyList<Fluid> fluids, bool single)
     {
         using var stream = new MemoryStream();
-        using (var json = new Utf8JsonWriter(stream, new JsonWriterOptions { Indented = true }))
+        using (var json = new Utf8JsonWriter(stream, JsonText.Options))
         {
             if (!single)
             {

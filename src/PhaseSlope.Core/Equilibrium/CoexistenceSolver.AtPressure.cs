@@ -27,7 +27,7 @@ public sealed partial class CoexistenceSolver
 
         double tc = Model.CriticalTemperature;
         var bottom = AtTemperature(MinimumTemperature);
-        if (pressure < bottom.Pressure)
+        if (pressure < bottom.Pressure * (1 - BoundaryRoundingTolerance))
         {
             throw new InvalidInputException("pressure", pressure,
                 $"pressure {Preconditions.Format(pressure)} Pa is below the saturation pressure {Preconditions.Format(bottom.Pressure)} Pa at the lowest valid temperature {Preconditions.Format(MinimumTemperature)} K");
@@ -65,7 +65,8 @@ public sealed partial class CoexistenceSolver
             return point.Slope * tc / point.Pressure;
         }
 
-        double lo = MinimumTemperature / tc;
+        // The slack admits a root a rounding error below the limit (see BoundaryRoundingTolerance).
+        double lo = MinimumTemperature * (1 - 0.5 * BoundaryRoundingTolerance) / tc;
         double hi = 1 - PressureSearchTopGap;
         if (!RobustNewtonRaphson.TryFindRoot(F, DF, lo, hi, 1e-13, Options.MaxIterations, 20, out double root))
         {

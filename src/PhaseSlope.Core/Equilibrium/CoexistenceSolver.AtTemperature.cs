@@ -56,12 +56,19 @@ public sealed partial class CoexistenceSolver
                 $"temperature {Preconditions.Format(temperature)} K is at or above the critical temperature {Preconditions.Format(Model.CriticalTemperature)} K: no liquid-vapour coexistence");
         }
 
-        if (temperature < MinimumTemperature)
+        // A temperature that lands a few ulps below the limit through unit conversion
+        // (0.01 degC + 273.15 is 273.15999999999997, below a 273.16 K triple point) is accepted
+        // and solved where it is: the limit is physical, not a numerical edge.
+        if (temperature < MinimumTemperature * (1 - BoundaryRoundingTolerance))
         {
             throw new InvalidInputException("temperature", temperature,
                 $"temperature {Preconditions.Format(temperature)} K is below the lowest valid temperature {Preconditions.Format(MinimumTemperature)} K");
         }
     }
+
+    /// <summary>Relative slack at the lowest valid temperature (and the matching pressure), for
+    /// values that differ from the limit only by rounding.</summary>
+    private const double BoundaryRoundingTolerance = 1e-12;
 
     private CoexistencePoint? SolveByPressure(double temperature, SpinodalWindow window, ref string? failure)
     {

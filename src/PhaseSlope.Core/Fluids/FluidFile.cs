@@ -539,20 +539,20 @@ internal sealed class FluidFileParser
         switch (conversion.Kind)
         {
             case FluidUnits.ConversionKind.Scale:
-                value = raw.Number * conversion.Factor;
-                uncertainty = raw.Uncertainty * conversion.Factor;
+                value = conversion.Apply(raw.Number);
+                uncertainty = raw.Uncertainty is double us ? conversion.Apply(us) : null;
                 break;
             case FluidUnits.ConversionKind.MassDensity:
                 // ρ[mol/m³] = ρ[kg/m³] / M[kg/mol]; the molar mass's own uncertainty is not propagated.
                 double m = molarMass ?? throw Fail(raw.Line, key, $"unit '{raw.Unit}' needs the molar mass");
-                value = raw.Number * conversion.Factor / m;
-                uncertainty = raw.Uncertainty * conversion.Factor / m;
+                value = conversion.Apply(raw.Number) / m;
+                uncertainty = raw.Uncertainty is double um ? conversion.Apply(um) / m : null;
                 break;
             default:
                 // Molar volume V → ρ = 1/V; first-order propagation u(ρ) = u(V)/V².
-                double volume = raw.Number * conversion.Factor;
+                double volume = conversion.Apply(raw.Number);
                 value = 1.0 / volume;
-                uncertainty = raw.Uncertainty * conversion.Factor / (volume * volume);
+                uncertainty = raw.Uncertainty is double uv ? conversion.Apply(uv) / (volume * volume) : null;
                 break;
         }
 

@@ -26,7 +26,17 @@ internal static class FluidUnits
         Reciprocal,
     }
 
-    internal readonly record struct Conversion(Dimension Dimension, ConversionKind Kind, double Factor);
+    internal readonly record struct Conversion(Dimension Dimension, ConversionKind Kind, double Factor)
+    {
+        /// <summary>number × factor. The factors are powers of ten, so the product is formed in
+        /// decimal arithmetic and rounded once: "44.09562 g/mol" becomes the double nearest to
+        /// 0.04409562 rather than 0.044095619999999995 (binary 1e-3 is inexact). Numbers outside
+        /// decimal's comfortable range take the plain double product.</summary>
+        public double Apply(double number)
+            => Math.Abs(number) is > 1e-12 and < 1e15
+                ? (double)((decimal)number * (decimal)Factor)
+                : number * Factor;
+    }
 
     private static readonly (string Symbol, Conversion Conversion)[] Table =
     [

@@ -226,4 +226,22 @@ public class CoexistCommandTests
         AssertSameDouble(point.Liquid.Density, record["liquid_density_mol_m3"], "liquid_density_mol_m3");
         AssertSameDouble(point.Slope, record["slope_Pa_K"], "slope_Pa_K");
     }
+
+    [Fact]
+    public void Temperature_TriplePointInCelsius_AcceptedDespiteRounding()
+    {
+        // 0.01 degC converts to 273.15999999999997 K, one ulp under water's 273.16 K triple point
+        // (IAPWS-95, Wagner & Pruss 2002; from memory): the limit is physical, not an edge to trip on.
+        var json = RunJson("coexist", "water", "--temperature", "0.01 degC", "--format", "json");
+        var atLimit = RunJson("coexist", "water", "--temperature", "273.16", "--format", "json");
+
+        double p = json.GetProperty("pressure_Pa").GetDouble();
+        double pLimit = atLimit.GetProperty("pressure_Pa").GetDouble();
+        // Psat changes by d ln P/dT · ΔT ≈ 0.08/K × 6e-14 K: far below 1e-12.
+        Assert.True(Math.Abs(p / pLimit - 1) < 1e-12, $"{p} vs {pLimit}");
+
+        // The printed saturation pressure at the limit solves back to the limit.
+        var back = RunJson("coexist", "water", "--pressure", pLimit.ToString("R", System.Globalization.CultureInfo.InvariantCulture), "--format", "json");
+        Assert.True(Math.Abs(back.GetProperty("temperature_K").GetDouble() / 273.16 - 1) < 1e-12, back.ToString());
+    }
 }

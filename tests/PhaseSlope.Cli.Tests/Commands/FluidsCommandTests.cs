@@ -116,4 +116,15 @@ public class FluidsCommandTests
         Assert.Equal("369.89", record["critical_temperature_K"]);
         Assert.Equal("4251200", record["critical_pressure_Pa"]);
     }
+
+    [Fact]
+    public void ShowJson_Propane_DecimalValuesPrintAsWritten()
+    {
+        // The file says 44.09562 g/mol: the printed kg/mol value is that decimal, not the
+        // binary artefact 0.044095619999999995 of multiplying by an inexact 1e-3.
+        string text = RunText("fluids", "show", "propane", "--format", "json");
+
+        Assert.Contains("\"molar_mass_kg_mol\": 0.04409562,", text, StringComparison.Ordinal);
+        Assert.Contains("McLinden & Wagner", text, StringComparison.Ordinal);
+    }
 }
