@@ -43,6 +43,14 @@ public sealed record Fluid
     /// <summary>Triple-point temperature in K, or null when not known.</summary>
     public SourcedValue? TriplePointTemperature { get; init; }
 
+    /// <summary>Ideal-gas isobaric heat capacity cp°(T), or null when the file gives none (then
+    /// only residual and coexistence properties are available, not absolute caloric ones).</summary>
+    public IdealGasHeatCapacity? IdealGasHeatCapacity { get; init; }
+
+    /// <summary>Fluid-specific alpha-function parameters from the literature (for example
+    /// Twu or Mathias–Copeman constants fitted for one cubic model); empty when none are given.</summary>
+    public IReadOnlyList<AlphaParameterSet> AlphaParameters { get; init; } = [];
+
     /// <summary>Free-text remarks from the fluid file, or null.</summary>
     public string? Remarks { get; init; }
 
