@@ -1,0 +1,196 @@
+using PhaseSlope.Core.Equilibrium;
+using PhaseSlope.Core.Errors;
+using PhaseSlope.Core.Fluids;
+using PhaseSlope.Core.Models;
+
+namespace PhaseSlope.Core.Properties;
+
+/// <summary>The complete property engine of one fluid: a cubic model for the residual part, the
+/// fluid's ideal-gas heat capacity for the ideal part, and a reference convention.</summary>
+/// <remarks>
+/// Ideal part on the base convention (h = s = 0 for the ideal gas at T0 = 298.15 K, P0 = 1 bar):
+/// h_ig(T) = ∫_{T0}^{T} cp° dT, s_ig(T, ρ) = ∫_{T0}^{T} cp°/T dT − R·ln(ρRT/P0). The chosen
+/// <see cref="ReferenceState"/> adds constant offsets to h and s. Then u = h_ig − RT + u_r,
+/// h = u + P/ρ, s = s_ig − A_r,T, a = u − Ts, g = h − Ts and cv = cp° − R − T·A_r,TT, with the
+/// residual terms from <see cref="CubicModel.Residual"/>.
+/// </remarks>
+public sealed class PropertyModel
+{
+    private const double R = Constants.GasConstant;
+    private readonly IdealGasHeatCapacity _heatCapacity;
+    private readonly double _enthalpyOffset;
+    private readonly double _entropyOffset;
+
+    /// <summary>Builds the engine for a fluid, a cubic model and a reference convention.</summary>
+    /// <exception cref="FluidDataException">The fluid has no ideal-gas heat capacity.</exception>
+    /// <exception cref="InvalidInputException">The reference convention's anchor state does not exist for this fluid (for example 0 °C above
+    /// its critical temperature).</exception>
+    public PropertyModel(Fluid fluid, CubicModel model, ReferenceState? reference = null, CoexistenceOptions? options = null)
+    {
+        ArgumentNullException.ThrowIfNull(fluid);
+        ArgumentNullException.ThrowIfNull(model);
+        Fluid = fluid;
+        Model = model;
+        Reference = reference ?? ReferenceState.IdealGas;
+        _heatCapacity = fluid.IdealGasHeatCapacity ?? throw new FluidDataException(fluid.Origin, 0, "ideal_gas_cp",
+            $"fluid '{fluid.Name}' has no ideal-gas heat capacity, which absolute caloric properties need (coexistence and residual properties work without it)");
+        Solver = new CoexistenceSolver(model, CoexistenceSolver.LowestValidTemperature(fluid), options);
+        (_enthalpyOffset, _entropyOffset) = Offsets(Reference);
+    }
+
+    /// <summary>The engine for a fluid with one of the published models.</summary>
+    public static PropertyModel For(Fluid fluid, CubicModelKind kind, ReferenceState? reference = null)
+        => new(fluid, CubicModel.For(kind, fluid), reference);
+
+    /// <summary>The fluid.</summary>
+    public Fluid Fluid { get; }
+
+    /// <summary>The cubic model of the residual part.</summary>
+    public CubicModel Model { get; }
+
+    /// <summary>The reference convention.</summary>
+    public ReferenceState Reference { get; }
+
+    /// <summary>The coexistence solver of the same model.</summary>
+    public CoexistenceSolver Solver { get; }
+
+    /// <summary>Molar mass, kg/mol.</summary>
+    public double MolarMass => Fluid.MolarMass.Value;
+
+    /// <summary>The state at temperature (K) and molar density (mol/m³).</summary>
+    /// <exception cref="InvalidInputException">T or ρ not positive, or ρ at or above the model's 1/b.</exception>
+    public ThermodynamicState AtDensity(double temperature, double density)
+    {
+        Preconditions.Positive(temperature, "temperature");
+        Preconditions.Positive(density, "density");
+        if (density >= Model.MaximumDensity)
+        {
+            throw new InvalidInputException("density", density,
+                $"density {Preconditions.Format(density)} mol/m3 is at or above the model's limit 1/b = {Preconditions.Format(Model.MaximumDensity)} mol/m3");
+        }
+
+        double pressure = Model.Pressure(temperature, density);
+        if (!(pressure > 0))
+        {
+            throw new InvalidInputException("density", density,
+                $"the model gives a non-positive pressure ({Preconditions.Format(pressure)} Pa) at {Preconditions.Format(temperature)} K and {Preconditions.Format(density)} mol/m3 (inside the spinodal loop)");
+        }
+
+        PhaseLabel label = temperature >= Model.CriticalTemperature ? PhaseLabel.Supercritical
+            : density >= Model.CriticalDensity ? PhaseLabel.Liquid : PhaseLabel.Vapour;
+        return Build(temperature, density, pressure, label, metastable: false);
+    }
+
+    /// <summary>The state at temperature (K) and pressure (Pa): the stable root, or the chosen
+    /// one (which may be metastable).</summary>
+    /// <exception cref="InvalidInputException">T or P not positive; the chosen phase has no
+    /// root there (beyond its spinodal); a phase was chosen at or above Tc.</exception>
+    public ThermodynamicState AtPressure(double temperature, double pressure, PhaseChoice phase = PhaseChoice.Stable)
+    {
+        Preconditions.Positive(temperature, "temperature");
+        Preconditions.Positive(pressure, "pressure");
+        var roots = DensityRoots.Find(Model, temperature, pressure);
+        if (roots.Count == 1 && roots[0].Phase == PhaseLabel.Supercritical && phase != PhaseChoice.Stable)
+        {
+            throw new InvalidInputException("phase", double.NaN,
+                $"at {Preconditions.Format(temperature)} K, at or above the critical temperature {Preconditions.Format(Model.CriticalTemperature)} K, there is one fluid phase: do not choose liquid or vapour");
+        }
+
+        var states = roots.Select(r => Build(temperature, r.Density, pressure, r.Phase, metastable: false)).ToList();
+        var stable = states.MinBy(s => s.LnFugacityCoefficient)!;
+        if (phase == PhaseChoice.Stable)
+        {
+            return stable;
+        }
+
+        var wanted = phase == PhaseChoice.Liquid ? PhaseLabel.Liquid : PhaseLabel.Vapour;
+        var chosen = states.FirstOrDefault(s => s.Phase == wanted) ?? throw new InvalidInputException("phase", double.NaN,
+            $"no {wanted.ToString().ToLowerInvariant()} root at {Preconditions.Format(temperature)} K and {Preconditions.Format(pressure)} Pa: that phase is beyond its spinodal (mechanically unstable) there");
+        return chosen with { Metastable = !ReferenceEquals(chosen, stable) && chosen.LnFugacityCoefficient > stable.LnFugacityCoefficient };
+    }
+
+    /// <summary>Both saturated phases of a coexistence point with their full properties and their
+    /// derivatives along the coexistence line.</summary>
+    public CoexistenceProperties Coexistence(CoexistencePoint point)
+    {
+        ArgumentNullException.ThrowIfNull(point);
+        var liquid = Build(point.Temperature, point.Liquid.Density, point.Pressure, PhaseLabel.Liquid, false);
+        var vapour = Build(point.Temperature, point.Vapour.Density, point.Pressure, PhaseLabel.Vapour, false);
+        return new CoexistenceProperties(point, SaturatedPhase.Along(liquid, point), SaturatedPhase.Along(vapour, point));
+    }
+
+    private ThermodynamicState Build(double temperature, double density, double pressure, PhaseLabel label, bool metastable)
+    {
+        var d = Model.Residual(temperature, density);
+        double t = temperature;
+        double rt = R * t;
+        double z = pressure / (density * rt);
+        double cp0 = _heatCapacity.HeatCapacity(t);
+        double hig = _enthalpyOffset + _heatCapacity.EnthalpyIntegral(ReferenceState.IdealGasTemperature, t);
+        double sig = _entropyOffset + _heatCapacity.EntropyIntegral(ReferenceState.IdealGasTemperature, t)
+            - R * Math.Log(density * rt / ReferenceState.IdealGasPressure);
+        double ur = d.Value - t * d.DT;
+        double u = hig - rt + ur;
+        return new ThermodynamicState
+        {
+            Temperature = t,
+            Density = density,
+            Pressure = pressure,
+            MolarMass = MolarMass,
+            Phase = label,
+            Metastable = metastable,
+            IdealGasExtrapolated = !_heatCapacity.InRange(t),
+            CompressibilityFactor = z,
+            InternalEnergy = u,
+            Enthalpy = u + pressure / density,
+            Entropy = sig - d.DT,
+            ResidualEnthalpy = ur + rt * (z - 1),
+            ResidualEntropy = -d.DT + R * Math.Log(z),
+            LnFugacityCoefficient = d.Value / rt + z - 1 - Math.Log(z),
+            IsochoricHeatCapacity = cp0 - R - t * d.DTT,
+            IdealGasHeatCapacity = cp0,
+            PressureTemperatureDerivative = d.PressureDT,
+            PressureDensityDerivative = d.PressureDRho,
+        };
+    }
+
+    private (double Enthalpy, double Entropy) Offsets(ReferenceState reference)
+    {
+        double m = MolarMass;
+        double hTarget = reference.PerMass ? reference.Enthalpy * m : reference.Enthalpy;
+        double sTarget = reference.PerMass ? reference.Entropy * m : reference.Entropy;
+        ThermodynamicState anchor;
+        switch (reference.Anchor)
+        {
+            case ReferenceAnchor.IdealGas:
+                // The base convention itself, shifted by the targets at its own anchor.
+                double t0 = reference.Temperature!.Value;
+                double hBase = _heatCapacity.EnthalpyIntegral(ReferenceState.IdealGasTemperature, t0);
+                double sBase = _heatCapacity.EntropyIntegral(ReferenceState.IdealGasTemperature, t0)
+                    - R * Math.Log(reference.Pressure!.Value / ReferenceState.IdealGasPressure);
+                return (hTarget - hBase, sTarget - sBase);
+            case ReferenceAnchor.SaturatedLiquid:
+                var point = AnchorPoint(reference);
+                anchor = Build(point.Temperature, point.Liquid.Density, point.Pressure, PhaseLabel.Liquid, false);
+                break;
+            default:
+                anchor = AtPressure(reference.Temperature!.Value, reference.Pressure!.Value);
+                break;
+        }
+
+        return (hTarget - anchor.Enthalpy, sTarget - anchor.Entropy);
+    }
+
+    private CoexistencePoint AnchorPoint(ReferenceState reference)
+    {
+        try
+        {
+            return reference.Temperature is double t ? Solver.AtTemperature(t) : Solver.AtPressure(reference.Pressure!.Value);
+        }
+        catch (InvalidInputException ex)
+        {
+            throw new InvalidInputException("reference", ex.Value,
+                $"reference state '{reference.Id}' ({reference.Description}) does not exist for {Fluid.Name} with this model: {ex.Message}");
+        }
+    }
+}

@@ -1,0 +1,141 @@
+namespace PhaseSlope.Core.Properties;
+
+/// <summary>A complete single-phase state of a fluid model: the primary variables, absolute
+/// caloric properties on the model's reference convention, heat capacities, sound speed,
+/// expansivity, compressibilities and the Joule–Thomson coefficient.</summary>
+/// <remarks>
+/// Molar SI units throughout: K, mol/m³, Pa, m³/mol, J/mol, J/(mol·K), m/s, 1/K, 1/Pa, K/Pa.
+/// With P_T = (∂P/∂T)_V, P_ρ = (∂P/∂ρ)_T and cv = cv° − T·A_r,TT:
+/// cp = cv + T·P_T²/(ρ²·P_ρ); w² = (P_ρ + T·P_T²/(ρ²·cv))/M; α = P_T/(ρ·P_ρ);
+/// κT = 1/(ρ·P_ρ); κS = κT·cv/cp; μJT = (T·α − 1)/(ρ·cp); (∂U/∂V)_T = T·P_T − P.
+/// Quantities that diverge where P_ρ → 0 (critical point, spinodal) are null there and for
+/// mechanically unstable states (P_ρ ≤ 0); the others are always finite.
+/// </remarks>
+public sealed record ThermodynamicState
+{
+    /// <summary>Temperature, K.</summary>
+    public required double Temperature { get; init; }
+
+    /// <summary>Molar density, mol/m³.</summary>
+    public required double Density { get; init; }
+
+    /// <summary>Pressure, Pa.</summary>
+    public required double Pressure { get; init; }
+
+    /// <summary>Molar volume, m³/mol.</summary>
+    public double MolarVolume => 1 / Density;
+
+    /// <summary>Molar mass, kg/mol.</summary>
+    public required double MolarMass { get; init; }
+
+    /// <summary>Which kind of root this is.</summary>
+    public required PhaseLabel Phase { get; init; }
+
+    /// <summary>True when another root at the same (T, P) has a lower Gibbs energy.</summary>
+    public bool Metastable { get; init; }
+
+    /// <summary>True when T lies outside the stated range of the ideal-gas heat-capacity correlation.</summary>
+    public bool IdealGasExtrapolated { get; init; }
+
+    /// <summary>Compressibility factor P/(ρRT).</summary>
+    public required double CompressibilityFactor { get; init; }
+
+    /// <summary>Molar internal energy, J/mol.</summary>
+    public required double InternalEnergy { get; init; }
+
+    /// <summary>Molar enthalpy, J/mol.</summary>
+    public required double Enthalpy { get; init; }
+
+    /// <summary>Molar entropy, J/(mol·K).</summary>
+    public required double Entropy { get; init; }
+
+    /// <summary>Molar Helmholtz energy u − Ts, J/mol.</summary>
+    public double HelmholtzEnergy => InternalEnergy - Temperature * Entropy;
+
+    /// <summary>Molar Gibbs energy h − Ts, J/mol.</summary>
+    public double GibbsEnergy => Enthalpy - Temperature * Entropy;
+
+    /// <summary>Residual enthalpy h − h_ig(T), J/mol.</summary>
+    public required double ResidualEnthalpy { get; init; }
+
+    /// <summary>Residual entropy s − s_ig(T, P), J/(mol·K).</summary>
+    public required double ResidualEntropy { get; init; }
+
+    /// <summary>Natural logarithm of the fugacity coefficient.</summary>
+    public required double LnFugacityCoefficient { get; init; }
+
+    /// <summary>Isochoric molar heat capacity, J/(mol·K).</summary>
+    public required double IsochoricHeatCapacity { get; init; }
+
+    /// <summary>Ideal-gas isobaric heat capacity cp°(T), J/(mol·K).</summary>
+    public required double IdealGasHeatCapacity { get; init; }
+
+    /// <summary>(∂P/∂T)_V, Pa/K.</summary>
+    public required double PressureTemperatureDerivative { get; init; }
+
+    /// <summary>(∂P/∂ρ)_T, Pa·m³/mol.</summary>
+    public required double PressureDensityDerivative { get; init; }
+
+    /// <summary>(∂P/∂V)_T = −ρ²·(∂P/∂ρ)_T, Pa·mol/m³.</summary>
+    public double PressureVolumeDerivative => -Density * Density * PressureDensityDerivative;
+
+    /// <summary>Internal pressure (∂U/∂V)_T = T·(∂P/∂T)_V − P, Pa.</summary>
+    public double InternalPressure => Temperature * PressureTemperatureDerivative - Pressure;
+
+    /// <summary>True when (∂P/∂ρ)_T &gt; 0.</summary>
+    public bool MechanicallyStable => PressureDensityDerivative > 0;
+
+    /// <summary>Isobaric molar heat capacity, J/(mol·K); null where (∂P/∂ρ)_T ≤ 0.</summary>
+    public double? IsobaricHeatCapacity => MechanicallyStable
+        ? IsochoricHeatCapacity + Temperature * PressureTemperatureDerivative * PressureTemperatureDerivative / (Density * Density * PressureDensityDerivative)
+        : null;
+
+    /// <summary>Speed of sound, m/s; null where w² ≤ 0.</summary>
+    public double? SpeedOfSound
+    {
+        get
+        {
+            double pt = PressureTemperatureDerivative;
+            double w2 = (PressureDensityDerivative + Temperature * pt * pt / (Density * Density * IsochoricHeatCapacity)) / MolarMass;
+            return w2 > 0 ? Math.Sqrt(w2) : null;
+        }
+    }
+
+    /// <summary>Isobaric expansivity α = (1/V)(∂V/∂T)_P, 1/K; null where (∂P/∂ρ)_T ≤ 0.</summary>
+    public double? IsobaricExpansivity => MechanicallyStable ? PressureTemperatureDerivative / (Density * PressureDensityDerivative) : null;
+
+    /// <summary>Isothermal compressibility κT = −(1/V)(∂V/∂P)_T, 1/Pa; null where (∂P/∂ρ)_T ≤ 0.</summary>
+    public double? IsothermalCompressibility => MechanicallyStable ? 1 / (Density * PressureDensityDerivative) : null;
+
+    /// <summary>Isentropic compressibility κS = κT·cv/cp, 1/Pa; null where (∂P/∂ρ)_T ≤ 0.</summary>
+    public double? IsentropicCompressibility => IsothermalCompressibility * IsochoricHeatCapacity / IsobaricHeatCapacity;
+
+    /// <summary>Joule–Thomson coefficient (∂T/∂P)_H = (T·α − 1)/(ρ·cp), K/Pa; null where (∂P/∂ρ)_T ≤ 0.</summary>
+    public double? JouleThomsonCoefficient => (Temperature * IsobaricExpansivity - 1) / (Density * IsobaricHeatCapacity);
+
+    /// <summary>The partial derivatives (∂X/∂T)_V and (∂X/∂V)_T of a state function, the
+    /// building blocks of every other derivative (see <see cref="PartialDerivatives"/>).</summary>
+    /// <remarks>S_T = cv/T and S_V = P_T (Maxwell, from dA = −S dT − P dV); U_T = cv,
+    /// U_V = T·P_T − P; H = U + PV; A_T = −S, A_V = −P; G = A + PV.</remarks>
+    public (double DT, double DV) Partials(StateVariable variable)
+    {
+        double t = Temperature;
+        double v = MolarVolume;
+        double p = Pressure;
+        double pt = PressureTemperatureDerivative;
+        double pv = PressureVolumeDerivative;
+        double cv = IsochoricHeatCapacity;
+        return variable switch
+        {
+            StateVariable.T => (1, 0),
+            StateVariable.V => (0, 1),
+            StateVariable.P => (pt, pv),
+            StateVariable.S => (cv / t, pt),
+            StateVariable.U => (cv, t * pt - p),
+            StateVariable.H => (cv + v * pt, t * pt + v * pv),
+            StateVariable.A => (-Entropy, -p),
+            StateVariable.G => (-Entropy + v * pt, v * pv),
+            _ => throw new ArgumentOutOfRangeException(nameof(variable), variable, "unknown state variable"),
+        };
+    }
+}
