@@ -14,6 +14,8 @@ internal static class CliApp
         var root = new RootCommand("phaseslope: liquid-vapour coexistence of pure fluids from cubic equations of state");
         root.Subcommands.Add(CoexistCommand.Create(io));
         root.Subcommands.Add(CurveCommand.Create(io));
+        root.Subcommands.Add(StateCommand.Create(io));
+        root.Subcommands.Add(DeriveCommand.Create(io));
         root.Subcommands.Add(FluidsCommand.Create(io));
 
         if (args.Length == 0)

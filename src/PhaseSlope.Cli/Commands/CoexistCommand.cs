@@ -15,11 +15,13 @@ internal static class CoexistCommand
         var fluid = CommonOptions.FluidArgument();
         var temperature = new Option<string>("--temperature", "-T") { Description = "Saturation temperature, e.g. 300 K, 26.85 degC, 80 degF (bare number: K)" };
         var pressure = new Option<string>("--pressure", "-P") { Description = "Saturation pressure, e.g. 101.325 kPa, 1.2 bar, 14.7 psi, 1 atm (bare number: Pa)" };
+        var reference = ReferenceOption.Create();
         var common = new CommonOptions();
         var command = new Command("coexist", "One liquid-vapour coexistence state at a given temperature or pressure");
         command.Arguments.Add(fluid);
         command.Options.Add(temperature);
         command.Options.Add(pressure);
+        command.Options.Add(reference);
         common.AddTo(command, withEos: true);
         command.SetAction(parse => io.Guard(() =>
         {
@@ -35,10 +37,11 @@ internal static class CoexistCommand
             var units = common.UnitSystem(parse);
             double? t = tText is null ? null : QuantityParser.ParseTemperature(tText, "--temperature");
             double? p = pText is null ? null : QuantityParser.ParsePressure(pText, "--pressure");
+            var zero = ReferenceOption.Parse(parse.GetValue(reference)!);
             var data = FluidResolver.Resolve(parse.GetValue(fluid)!);
-            var solver = CoexistenceSolver.For(data, kind);
-            var point = t is double tv ? solver.AtTemperature(tv) : solver.AtPressure(p!.Value);
-            io.Out.Write(CoexistenceWriter.Render([point], single: true, format, data, solver.Model, units));
+            var context = CoexistenceContext.Create(data, kind, zero);
+            var point = t is double tv ? context.Solver.AtTemperature(tv) : context.Solver.AtPressure(p!.Value);
+            io.Out.Write(CoexistenceWriter.Render([context.Row(point)], single: true, format, data, context.Solver.Model, zero, units));
         }));
         return command;
     }

@@ -23,6 +23,7 @@ internal static class CurveCommand
             DefaultValueFactory = _ => CoexistenceCurve.DefaultPoints,
         };
         var output = new Option<string>("--out", "-o") { Description = "Write to this file instead of the terminal (format from --format, else from the extension .csv/.json, else table)" };
+        var reference = ReferenceOption.Create();
         var common = new CommonOptions();
         var command = new Command("curve", "The saturation curve as a table of coexistence states");
         command.Arguments.Add(fluid);
@@ -30,6 +31,7 @@ internal static class CurveCommand
         command.Options.Add(to);
         command.Options.Add(points);
         command.Options.Add(output);
+        command.Options.Add(reference);
         common.AddTo(command, withEos: true);
         command.SetAction(parse => io.Guard(() =>
         {
@@ -50,8 +52,10 @@ internal static class CurveCommand
                 throw new UsageException("--out: the file name is empty");
             }
 
+            var zero = ReferenceOption.Parse(parse.GetValue(reference)!);
             var data = FluidResolver.Resolve(parse.GetValue(fluid)!);
-            var solver = CoexistenceSolver.For(data, kind);
+            var context = CoexistenceContext.Create(data, kind, zero);
+            var solver = context.Solver;
             double tc = solver.Model.CriticalTemperature;
             double start = tFrom ?? solver.MinimumTemperature;
             double end = tTo ?? tc;
@@ -85,7 +89,7 @@ internal static class CurveCommand
             }
 
             var curve = CoexistenceCurve.Trace(solver, start, end, n);
-            string text = CoexistenceWriter.Render(curve, single: false, format, data, solver.Model, units);
+            string text = CoexistenceWriter.Render(curve.Select(context.Row).ToArray(), single: false, format, data, solver.Model, zero, units);
             if (outPath is null)
             {
                 io.Out.Write(text);

@@ -16,30 +16,30 @@ internal static class CoexistenceWriter
     public const string Caution =
         "Model estimates. Before use for pressure equipment, relief sizing or flammable or toxic service, verify against measured data and follow local codes and licensed engineering practice.";
 
-    /// <summary>Renders points in a format; <paramref name="single"/> prints one object instead of an array.</summary>
-    public static string Render(IReadOnlyList<CoexistencePoint> points, bool single, OutputFormat format, Fluid fluid, CubicModel model, UnitSystem units)
+    /// <summary>Renders rows in a format; <paramref name="single"/> prints one object instead of an array.</summary>
+    public static string Render(IReadOnlyList<CoexistenceRow> rows, bool single, OutputFormat format, Fluid fluid, CubicModel model, ReferenceState? reference, UnitSystem units)
         => format switch
         {
-            OutputFormat.Json => Json(points, single, fluid, model),
-            OutputFormat.Csv => Csv(points),
-            _ => single ? SingleTable(points[0], fluid, model, units) : CurveTable(points, fluid, model, units),
+            OutputFormat.Json => Json(rows, single, fluid, model, reference),
+            OutputFormat.Csv => Csv(rows),
+            _ => single ? SingleTable(rows[0], fluid, model, reference, units) : CurveTable(rows, fluid, model, reference, units),
         };
 
-    private static string Json(IReadOnlyList<CoexistencePoint> points, bool single, Fluid fluid, CubicModel model)
+    private static string Json(IReadOnlyList<CoexistenceRow> rows, bool single, Fluid fluid, CubicModel model, ReferenceState? reference)
     {
         using var stream = new MemoryStream();
         using (var json = new Utf8JsonWriter(stream, JsonText.Options))
         {
             if (single)
             {
-                WriteObject(json, points[0], fluid, model);
+                WriteObject(json, rows[0], fluid, model, reference);
             }
             else
             {
                 json.WriteStartArray();
-                foreach (var point in points)
+                foreach (var row in rows)
                 {
-                    WriteObject(json, point, fluid, model);
+                    WriteObject(json, row, fluid, model, reference);
                 }
 
                 json.WriteEndArray();
@@ -49,11 +49,17 @@ internal static class CoexistenceWriter
         return Encoding.UTF8.GetString(stream.ToArray()) + Environment.NewLine;
     }
 
-    private static void WriteObject(Utf8JsonWriter json, CoexistencePoint point, Fluid fluid, CubicModel model)
+    private static void WriteObject(Utf8JsonWriter json, CoexistenceRow row, Fluid fluid, CubicModel model, ReferenceState? reference)
     {
+        var point = row.Point;
         json.WriteStartObject();
         json.WriteString("fluid", fluid.Name);
         json.WriteString("eos", model.Kind.Id());
+        if (reference is not null && row.Full is not null)
+        {
+            json.WriteString("reference", reference.Id);
+        }
+
         json.WriteNumber("molar_mass_kg_mol", fluid.MolarMass.Value);
         json.WriteBoolean("critical", point.IsCritical);
         foreach (var column in CoexistenceColumns.Flat)
@@ -63,13 +69,13 @@ internal static class CoexistenceWriter
                 continue;
             }
 
-            json.WriteNumber(column.Key, Finite(column.Value(point), column.Key));
+            json.WriteNumber(column.Key, Finite(column.Value(row), column.Key));
         }
 
         json.WriteNumber("inverse_slope_K_Pa", Finite(point.InverseSlope, "inverse_slope_K_Pa"));
         json.WriteNumber("compressibility_factor_change", point.CompressibilityChange);
-        WritePhase(json, "liquid", point.Liquid, fluid.MolarMass.Value);
-        WritePhase(json, "vapour", point.Vapour, fluid.MolarMass.Value);
+        WritePhase(json, "liquid", point.Liquid, row.Full?.Liquid, fluid.MolarMass.Value);
+        WritePhase(json, "vapour", point.Vapour, row.Full?.Vapour, fluid.MolarMass.Value);
         json.WriteStartObject("solver");
         json.WriteString("method", Kebab(point.Report.Method.ToString()));
         json.WriteNumber("iterations", point.Report.Iterations);
@@ -79,37 +85,68 @@ internal static class CoexistenceWriter
         json.WriteEndObject();
     }
 
-    private static void WritePhase(Utf8JsonWriter json, string name, PhaseState phase, double molarMass)
+    private static readonly HashSet<string> PointKeys = ["temperature_K", "pressure_Pa"];
+
+    private static void WritePhase(Utf8JsonWriter json, string name, PhaseState phase, SaturatedPhase? full, double molarMass)
     {
         json.WriteStartObject(name);
-        json.WriteNumber("density_mol_m3", phase.Density);
-        json.WriteNumber("density_kg_m3", phase.Density * molarMass);
-        json.WriteNumber("molar_volume_m3_mol", phase.MolarVolume);
-        json.WriteNumber("compressibility_factor", phase.CompressibilityFactor);
-        json.WriteNumber("ln_fugacity_coefficient", phase.LnFugacityCoefficient);
-        json.WriteNumber("residual_enthalpy_J_mol", phase.ResidualEnthalpy);
-        json.WriteNumber("residual_entropy_J_molK", phase.ResidualEntropy);
+        if (full is null)
+        {
+            json.WriteNumber("density_mol_m3", phase.Density);
+            json.WriteNumber("density_kg_m3", phase.Density * molarMass);
+            json.WriteNumber("molar_volume_m3_mol", phase.MolarVolume);
+            json.WriteNumber("compressibility_factor", phase.CompressibilityFactor);
+            json.WriteNumber("ln_fugacity_coefficient", phase.LnFugacityCoefficient);
+            json.WriteNumber("residual_enthalpy_J_mol", phase.ResidualEnthalpy);
+            json.WriteNumber("residual_entropy_J_molK", phase.ResidualEntropy);
+        }
+        else
+        {
+            StateColumns.WriteMembers(json, full.State, PointKeys);
+            WriteOptionalNumber(json, "density_slope_mol_m3K", full.DensitySlope);
+            WriteOptionalNumber(json, "enthalpy_slope_J_molK", full.EnthalpySlope);
+            WriteOptionalNumber(json, "entropy_slope_J_molK2", full.EntropySlope);
+            WriteOptionalNumber(json, "internal_energy_slope_J_molK", full.InternalEnergySlope);
+            WriteOptionalNumber(json, "saturation_heat_capacity_J_molK", full.SaturationHeatCapacity);
+        }
+
         json.WriteNumber("residual_internal_energy_J_mol", phase.ResidualInternalEnergy);
         json.WriteEndObject();
     }
 
-    private static string Csv(IReadOnlyList<CoexistencePoint> points)
-        => CsvText.Write(
-            CoexistenceColumns.Flat.Select(c => c.Key).ToArray(),
-            points.Select(p => CoexistenceColumns.Flat.Select(c => NumberText.RoundTrip(c.Value(p))).ToArray()));
-
-    private static string CurveTable(IReadOnlyList<CoexistencePoint> points, Fluid fluid, CubicModel model, UnitSystem units)
+    private static void WriteOptionalNumber(Utf8JsonWriter json, string key, double? value)
     {
-        var columns = CoexistenceColumns.Flat.Where(c => c.InCurveTable).ToArray();
+        if (value is double v && double.IsFinite(v))
+        {
+            json.WriteNumber(key, v);
+        }
+        else
+        {
+            json.WriteNull(key);
+        }
+    }
+
+    private static string Csv(IReadOnlyList<CoexistenceRow> rows)
+    {
+        var columns = CoexistenceColumns.For(rows);
+        return CsvText.Write(
+            columns.Select(c => c.Key).ToArray(),
+            rows.Select(r => columns.Select(c => NumberText.RoundTrip(Finite(c.Value(r), c.Key))).ToArray()));
+    }
+
+    private static string CurveTable(IReadOnlyList<CoexistenceRow> rows, Fluid fluid, CubicModel model, ReferenceState? reference, UnitSystem units)
+    {
+        var columns = CoexistenceColumns.For(rows).Where(c => c.InCurveTable).ToArray();
         var table = new TextTable(columns.Select(c => CoexistenceColumns.Header(c, units)).ToArray(), columns.Select(_ => true).ToArray());
         double m = fluid.MolarMass.Value;
-        foreach (var point in points)
+        foreach (var row in rows)
         {
-            table.Add(columns.Select(c => NumberText.Table(CoexistenceColumns.Display(c, point, units, m))).ToArray());
+            table.Add(columns.Select(c => NumberText.Table(CoexistenceColumns.Display(c, row, units, m))).ToArray());
         }
 
         var text = new StringBuilder();
-        text.AppendLine($"Saturation curve of {fluid.Name}, {model.Kind.Title()}; {points.Count} states{(points[^1].IsCritical ? ", the last one the critical point" : "")}");
+        text.AppendLine($"Saturation curve of {fluid.Name}, {model.Kind.Title()}; {rows.Count} states{(rows[^1].Point.IsCritical ? ", the last one the critical point" : "")}");
+        text.AppendLine(ReferenceLine(rows, reference));
         text.AppendLine();
         text.Append(table.Render());
         text.AppendLine();
@@ -117,18 +154,40 @@ internal static class CoexistenceWriter
         return text.ToString();
     }
 
-    private static string SingleTable(CoexistencePoint point, Fluid fluid, CubicModel model, UnitSystem units)
+    private static string ReferenceLine(IReadOnlyList<CoexistenceRow> rows, ReferenceState? reference)
+        => rows.All(r => r.Full is not null) && reference is not null
+            ? $"h and s reference: {reference.Description}"
+            : "h and s not shown: the fluid file has no ideal-gas heat capacity";
+
+    private static string SingleTable(CoexistenceRow row, Fluid fluid, CubicModel model, ReferenceState? reference, UnitSystem units)
     {
+        var point = row.Point;
         double m = fluid.MolarMass.Value;
         string Show(DisplayQuantity q, double si) => NumberText.Table(UnitFormatter.Convert(q, si, units, m));
         string Label(DisplayQuantity q) => UnitFormatter.Label(q, units);
 
         var phases = new TextTable(["phase property", "liquid", "vapour", "unit"], [false, true, true, false]);
-        phases.Add("density", Show(DisplayQuantity.Density, point.Liquid.Density), Show(DisplayQuantity.Density, point.Vapour.Density), Label(DisplayQuantity.Density));
-        phases.Add("molar volume", Show(DisplayQuantity.MolarVolume, point.Liquid.MolarVolume), Show(DisplayQuantity.MolarVolume, point.Vapour.MolarVolume), Label(DisplayQuantity.MolarVolume));
-        phases.Add("compressibility factor", NumberText.Table(point.Liquid.CompressibilityFactor), NumberText.Table(point.Vapour.CompressibilityFactor), "-");
-        phases.Add("ln fugacity coefficient", NumberText.Table(point.Liquid.LnFugacityCoefficient), NumberText.Table(point.Vapour.LnFugacityCoefficient), "-");
-        phases.Add("residual enthalpy", Show(DisplayQuantity.MolarEnergy, point.Liquid.ResidualEnthalpy), Show(DisplayQuantity.MolarEnergy, point.Vapour.ResidualEnthalpy), Label(DisplayQuantity.MolarEnergy));
+        if (row.Full is { } full)
+        {
+            foreach (var column in StateColumns.All.Where(c => !PointKeys.Contains(c.Key)))
+            {
+                phases.Add(column.Title, StateColumns.Display(column, full.Liquid.State, units), StateColumns.Display(column, full.Vapour.State, units), StateColumns.Unit(column, units));
+            }
+
+            string Slope(double? value, DisplayQuantity q) => value is double v ? NumberText.Table(UnitFormatter.Convert(q, v, units, m)) : "undefined";
+            phases.Add("ds/dT along the line", Slope(full.Liquid.EntropySlope, DisplayQuantity.MolarEntropy), Slope(full.Vapour.EntropySlope, DisplayQuantity.MolarEntropy), $"{Label(DisplayQuantity.MolarEntropy)} per K");
+            phases.Add("dh/dT along the line", Slope(full.Liquid.EnthalpySlope, DisplayQuantity.MolarEntropy), Slope(full.Vapour.EnthalpySlope, DisplayQuantity.MolarEntropy), Label(DisplayQuantity.MolarEntropy));
+            phases.Add("drho/dT along the line", Slope(full.Liquid.DensitySlope, DisplayQuantity.Density), Slope(full.Vapour.DensitySlope, DisplayQuantity.Density), $"{Label(DisplayQuantity.Density)} per K");
+            phases.Add("saturation heat capacity T ds/dT", Slope(full.Liquid.SaturationHeatCapacity, DisplayQuantity.MolarEntropy), Slope(full.Vapour.SaturationHeatCapacity, DisplayQuantity.MolarEntropy), Label(DisplayQuantity.MolarEntropy));
+        }
+        else
+        {
+            phases.Add("density", Show(DisplayQuantity.Density, point.Liquid.Density), Show(DisplayQuantity.Density, point.Vapour.Density), Label(DisplayQuantity.Density));
+            phases.Add("molar volume", Show(DisplayQuantity.MolarVolume, point.Liquid.MolarVolume), Show(DisplayQuantity.MolarVolume, point.Vapour.MolarVolume), Label(DisplayQuantity.MolarVolume));
+            phases.Add("compressibility factor", NumberText.Table(point.Liquid.CompressibilityFactor), NumberText.Table(point.Vapour.CompressibilityFactor), "-");
+            phases.Add("ln fugacity coefficient", NumberText.Table(point.Liquid.LnFugacityCoefficient), NumberText.Table(point.Vapour.LnFugacityCoefficient), "-");
+            phases.Add("residual enthalpy", Show(DisplayQuantity.MolarEnergy, point.Liquid.ResidualEnthalpy), Show(DisplayQuantity.MolarEnergy, point.Vapour.ResidualEnthalpy), Label(DisplayQuantity.MolarEnergy));
+        }
 
         var jumps = new TextTable(["across coexistence", "value", "unit"], [false, true, false]);
         jumps.Add("enthalpy of vaporization", Show(DisplayQuantity.MolarEnergy, point.EnthalpyOfVaporization), Label(DisplayQuantity.MolarEnergy));
@@ -143,6 +202,7 @@ internal static class CoexistenceWriter
         text.AppendLine($"{fluid.Name}, {model.Kind.Title()}{(point.IsCritical ? ": critical point" : "")}");
         text.AppendLine($"saturation temperature  {Show(DisplayQuantity.Temperature, point.Temperature)} {Label(DisplayQuantity.Temperature)}");
         text.AppendLine($"saturation pressure     {Show(DisplayQuantity.Pressure, point.Pressure)} {Label(DisplayQuantity.Pressure)}");
+        text.AppendLine(ReferenceLine([row], reference));
         text.AppendLine();
         text.Append(phases.Render());
         text.AppendLine();
@@ -170,6 +230,6 @@ internal static class CoexistenceWriter
         return text.ToString();
     }
 
-    private static double Finite(double value, string key)
-        => double.IsFinite(value) ? value : throw new InvalidOperationException($"internal error: {key} is not finite");
+    private static double Finite(double? value, string key)
+        => value is double v && double.IsFinite(v) ? v : throw new InvalidOperationException($"internal error: {key} is not finite");
 }

@@ -182,6 +182,62 @@ internal static partial class QuantityParser
         return pascal;
     }
 
+    private static readonly Dictionary<string, double> MolarDensityUnits =
+        new(StringComparer.OrdinalIgnoreCase)
+        {
+            ["mol/m3"] = 1.0,
+            ["mol/L"] = 1.0e3,
+            ["mol/dm3"] = 1.0e3,
+            ["kmol/m3"] = 1.0e3,
+        };
+
+    /// <summary>Parses a density and returns it as a molar density in mol/m3.</summary>
+    /// <param name="text">The user's text: a bare number (mol/m3), <c>mol/m3</c>, <c>mol/L</c>,
+    /// <c>mol/dm3</c>, <c>kmol/m3</c>, or a mass density in <c>kg/m3</c> or <c>g/cm3</c>
+    /// (divided by <paramref name="molarMass"/>).</param>
+    /// <param name="optionName">The option the text came from; it starts every error message.</param>
+    /// <param name="molarMass">Molar mass of the fluid in kg/mol, for mass densities.</param>
+    /// <exception cref="UsageException">Empty, malformed, unknown unit, or not above zero.</exception>
+    public static double ParseDensity(string text, string optionName, double molarMass)
+    {
+        ArgumentException.ThrowIfNullOrWhiteSpace(optionName);
+        (double number, string unit) = Split(text, optionName, "density");
+        double molar;
+        if (unit.Length == 0)
+        {
+            molar = number;
+        }
+        else if (MolarDensityUnits.TryGetValue(unit, out double factor))
+        {
+            molar = number * factor;
+        }
+        else if (string.Equals(unit, "kg/m3", StringComparison.OrdinalIgnoreCase))
+        {
+            molar = number / molarMass;
+        }
+        else if (string.Equals(unit, "g/cm3", StringComparison.OrdinalIgnoreCase))
+        {
+            molar = number * 1.0e3 / molarMass;
+        }
+        else
+        {
+            throw Fail(optionName, text,
+                $"unknown density unit '{Clean(unit)}'", "(use mol/m3, mol/L, mol/dm3, kmol/m3, kg/m3 or g/cm3)");
+        }
+
+        if (!double.IsFinite(molar))
+        {
+            throw Fail(optionName, text, "density is too large", null);
+        }
+
+        if (molar <= 0.0)
+        {
+            throw Fail(optionName, text, "density is not above zero", "(a density must be > 0)");
+        }
+
+        return molar;
+    }
+
     /// <summary>Splits the text into its invariant-culture number and its (trimmed) unit.</summary>
     private static (double Number, string Unit) Split(string? text, string optionName, string quantity)
     {

@@ -23,6 +23,18 @@ internal enum DisplayQuantity
 
     /// <summary>Slope of the coexistence curve dp/dT; SI value in Pa/K.</summary>
     Slope,
+
+    /// <summary>Speed of sound; SI value in m/s.</summary>
+    Speed,
+
+    /// <summary>Isobaric expansivity; SI value in 1/K.</summary>
+    Expansivity,
+
+    /// <summary>Isothermal or isentropic compressibility; SI value in 1/Pa.</summary>
+    Compressibility,
+
+    /// <summary>Joule-Thomson coefficient; SI value in K/Pa.</summary>
+    JouleThomson,
 }
 
 /// <summary>Converts SI values (K, Pa, mol/m3, m3/mol, J/mol, J/(mol·K), Pa/K) to the display
@@ -68,6 +80,20 @@ internal static class UnitFormatter
         [(DisplayQuantity.Slope, UnitSystem.Si)] = new("kPa/K", false, (d, _) => d / 1.0e3),
         [(DisplayQuantity.Slope, UnitSystem.Engineering)] =
             new("bar/K", false, (d, _) => d / QuantityParser.BarPa),
+
+        [(DisplayQuantity.Speed, UnitSystem.Si)] = new("m/s", false, (w, _) => w),
+        [(DisplayQuantity.Speed, UnitSystem.Engineering)] = new("m/s", false, (w, _) => w),
+
+        [(DisplayQuantity.Expansivity, UnitSystem.Si)] = new("1/K", false, (a, _) => a),
+        [(DisplayQuantity.Expansivity, UnitSystem.Engineering)] = new("1/K", false, (a, _) => a),
+
+        [(DisplayQuantity.Compressibility, UnitSystem.Si)] = new("1/Pa", false, (k, _) => k),
+        [(DisplayQuantity.Compressibility, UnitSystem.Engineering)] =
+            new("1/bar", false, (k, _) => k * QuantityParser.BarPa),
+
+        [(DisplayQuantity.JouleThomson, UnitSystem.Si)] = new("K/Pa", false, (mu, _) => mu),
+        [(DisplayQuantity.JouleThomson, UnitSystem.Engineering)] =
+            new("K/bar", false, (mu, _) => mu * QuantityParser.BarPa),
     };
 
     /// <summary>Converts an SI value of a quantity to the display unit of a unit system.</summary>

@@ -1,0 +1,43 @@
+using PhaseSlope.Cli.Output;
+using PhaseSlope.Core.Equilibrium;
+using PhaseSlope.Core.Fluids;
+using PhaseSlope.Core.Models;
+using PhaseSlope.Core.Properties;
+
+namespace PhaseSlope.Cli.Commands;
+
+/// <summary>The solver and, when the fluid has an ideal-gas heat capacity, the property engine
+/// behind <c>coexist</c> and <c>curve</c>.</summary>
+internal sealed class CoexistenceContext
+{
+    private CoexistenceContext(CoexistenceSolver solver, PropertyModel? engine, ReferenceState reference)
+    {
+        Solver = solver;
+        Engine = engine;
+        Reference = reference;
+    }
+
+    /// <summary>The coexistence solver.</summary>
+    public CoexistenceSolver Solver { get; }
+
+    /// <summary>The property engine, or null when the fluid has no ideal-gas heat capacity.</summary>
+    public PropertyModel? Engine { get; }
+
+    /// <summary>The reference convention of absolute h and s.</summary>
+    public ReferenceState Reference { get; }
+
+    /// <summary>Builds the context for a fluid, model and reference.</summary>
+    public static CoexistenceContext Create(Fluid fluid, CubicModelKind kind, ReferenceState reference)
+    {
+        if (fluid.IdealGasHeatCapacity is null)
+        {
+            return new CoexistenceContext(CoexistenceSolver.For(fluid, kind), null, reference);
+        }
+
+        var engine = PropertyModel.For(fluid, kind, reference);
+        return new CoexistenceContext(engine.Solver, engine, reference);
+    }
+
+    /// <summary>A row for a point, with full phase properties when available.</summary>
+    public CoexistenceRow Row(CoexistencePoint point) => new(point, Engine?.Coexistence(point));
+}

@@ -1,0 +1,24 @@
+using System.CommandLine;
+using PhaseSlope.Cli.Output;
+
+namespace PhaseSlope.Cli.Commands;
+
+/// <summary><c>phaseslope state FLUID --temperature V --pressure V | --density V</c>: one single-phase state.</summary>
+internal static class StateCommand
+{
+    /// <summary>Builds the command; its action writes to <paramref name="io"/>.</summary>
+    public static Command Create(CliIo io)
+    {
+        var options = new StateOptions();
+        var command = new Command("state", "Every single-phase property at a temperature and a pressure (or density)");
+        options.AddTo(command);
+        command.SetAction(parse => io.Guard(() =>
+        {
+            var format = options.Common.OutputFormat(parse);
+            var units = options.Common.UnitSystem(parse);
+            var (engine, state) = options.Resolve(parse);
+            io.Out.Write(StateWriter.State(engine, state, format, units));
+        }));
+        return command;
+    }
+}

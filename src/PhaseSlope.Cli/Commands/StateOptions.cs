@@ -1,0 +1,83 @@
+using System.CommandLine;
+using PhaseSlope.Cli.Units;
+using PhaseSlope.Core.Fluids;
+using PhaseSlope.Core.Properties;
+
+namespace PhaseSlope.Cli.Commands;
+
+/// <summary>The options that pick one single-phase state: FLUID, --temperature with --pressure
+/// or --density, --phase, --reference, and the common ones.</summary>
+internal sealed class StateOptions
+{
+    /// <summary>FLUID.</summary>
+    public Argument<string> Fluid { get; } = CommonOptions.FluidArgument();
+
+    /// <summary>--temperature.</summary>
+    public Option<string> Temperature { get; } = new("--temperature", "-T") { Description = "Temperature, e.g. 300 K, 26.85 degC (bare number: K)", Required = true };
+
+    /// <summary>--pressure.</summary>
+    public Option<string> Pressure { get; } = new("--pressure", "-P") { Description = "Absolute pressure, e.g. 2 MPa, 1.2 bar (bare number: Pa)" };
+
+    /// <summary>--density.</summary>
+    public Option<string> Density { get; } = new("--density", "-D") { Description = "Density instead of pressure, e.g. 11000 mol/m3, 500 kg/m3 (bare number: mol/m3)" };
+
+    /// <summary>--phase.</summary>
+    public Option<string> Phase { get; } = new("--phase")
+    {
+        Description = "With --pressure below Tc: stable (default, the root of lower Gibbs energy), liquid or vapour (may be metastable)",
+        DefaultValueFactory = _ => "stable",
+    };
+
+    /// <summary>--reference.</summary>
+    public Option<string> Reference { get; } = ReferenceOption.Create();
+
+    /// <summary>--eos, --format, --units.</summary>
+    public CommonOptions Common { get; } = new();
+
+    /// <summary>Adds every option to a command.</summary>
+    public void AddTo(Command command)
+    {
+        command.Arguments.Add(Fluid);
+        command.Options.Add(Temperature);
+        command.Options.Add(Pressure);
+        command.Options.Add(Density);
+        command.Options.Add(Phase);
+        command.Options.Add(Reference);
+        Common.AddTo(command, withEos: true);
+    }
+
+    /// <summary>Parses the options, builds the engine and evaluates the state.</summary>
+    public (PropertyModel Engine, ThermodynamicState State) Resolve(ParseResult parse)
+    {
+        string? pText = parse.GetValue(Pressure);
+        string? dText = parse.GetValue(Density);
+        if ((pText is null) == (dText is null))
+        {
+            throw new UsageException("give exactly one of --pressure and --density with --temperature");
+        }
+
+        var kind = Common.ModelKind(parse);
+        var phase = ParsePhase(parse.GetValue(Phase) ?? "stable");
+        if (dText is not null && phase != PhaseChoice.Stable)
+        {
+            throw new UsageException("--phase: a state given by --density has one root; --phase applies to --pressure only");
+        }
+
+        var reference = ReferenceOption.Parse(parse.GetValue(Reference) ?? ReferenceState.IdealGas.Id);
+        double t = QuantityParser.ParseTemperature(parse.GetValue(Temperature)!, "--temperature");
+        double? p = pText is null ? null : QuantityParser.ParsePressure(pText, "--pressure");
+        Fluid fluid = FluidResolver.Resolve(parse.GetValue(Fluid)!);
+        double? rho = dText is null ? null : QuantityParser.ParseDensity(dText, "--density", fluid.MolarMass.Value);
+        var engine = PropertyModel.For(fluid, kind, reference);
+        var state = p is double pv ? engine.AtPressure(t, pv, phase) : engine.AtDensity(t, rho!.Value);
+        return (engine, state);
+    }
+
+    private static PhaseChoice ParsePhase(string text) => text.ToLowerInvariant() switch
+    {
+        "stable" => PhaseChoice.Stable,
+        "liquid" => PhaseChoice.Liquid,
+        "vapour" or "vapor" => PhaseChoice.Vapour,
+        _ => throw new UsageException($"--phase: unknown phase '{text}' (use stable, liquid or vapour)"),
+    };
+}

@@ -1,0 +1,81 @@
+using System.Text.Json;
+using PhaseSlope.Cli.Units;
+using PhaseSlope.Core.Properties;
+
+namespace PhaseSlope.Cli.Output;
+
+/// <summary>The one list of single-phase properties that the state JSON, the state table and
+/// the per-phase objects of coexistence JSON share.</summary>
+internal static class StateColumns
+{
+    /// <summary>A property of a state: SI key, title, display quantity (null: dimensionless), SI value
+    /// (null where undefined, e.g. cp at the critical point).</summary>
+    public sealed record Column(string Key, string Title, DisplayQuantity? Quantity, Func<ThermodynamicState, double?> Value);
+
+    /// <summary>All properties in output order.</summary>
+    public static IReadOnlyList<Column> All { get; } =
+    [
+        new("temperature_K", "temperature", DisplayQuantity.Temperature, s => s.Temperature),
+        new("pressure_Pa", "pressure", DisplayQuantity.Pressure, s => s.Pressure),
+        new("density_mol_m3", "density", DisplayQuantity.Density, s => s.Density),
+        new("molar_volume_m3_mol", "molar volume", DisplayQuantity.MolarVolume, s => s.MolarVolume),
+        new("compressibility_factor", "compressibility factor", null, s => s.CompressibilityFactor),
+        new("internal_energy_J_mol", "internal energy u", DisplayQuantity.MolarEnergy, s => s.InternalEnergy),
+        new("enthalpy_J_mol", "enthalpy h", DisplayQuantity.MolarEnergy, s => s.Enthalpy),
+        new("entropy_J_molK", "entropy s", DisplayQuantity.MolarEntropy, s => s.Entropy),
+        new("helmholtz_energy_J_mol", "Helmholtz energy a", DisplayQuantity.MolarEnergy, s => s.HelmholtzEnergy),
+        new("gibbs_energy_J_mol", "Gibbs energy g", DisplayQuantity.MolarEnergy, s => s.GibbsEnergy),
+        new("isobaric_heat_capacity_J_molK", "isobaric heat capacity cp", DisplayQuantity.MolarEntropy, s => s.IsobaricHeatCapacity),
+        new("isochoric_heat_capacity_J_molK", "isochoric heat capacity cv", DisplayQuantity.MolarEntropy, s => s.IsochoricHeatCapacity),
+        new("ideal_gas_heat_capacity_J_molK", "ideal-gas heat capacity cp0", DisplayQuantity.MolarEntropy, s => s.IdealGasHeatCapacity),
+        new("speed_of_sound_m_s", "speed of sound", DisplayQuantity.Speed, s => s.SpeedOfSound),
+        new("isobaric_expansivity_1_K", "isobaric expansivity", DisplayQuantity.Expansivity, s => s.IsobaricExpansivity),
+        new("isothermal_compressibility_1_Pa", "isothermal compressibility", DisplayQuantity.Compressibility, s => s.IsothermalCompressibility),
+        new("isentropic_compressibility_1_Pa", "isentropic compressibility", DisplayQuantity.Compressibility, s => s.IsentropicCompressibility),
+        new("joule_thomson_coefficient_K_Pa", "Joule-Thomson coefficient", DisplayQuantity.JouleThomson, s => s.JouleThomsonCoefficient),
+        new("internal_pressure_Pa", "internal pressure (dU/dV)_T", DisplayQuantity.Pressure, s => s.InternalPressure),
+        new("ln_fugacity_coefficient", "ln fugacity coefficient", null, s => s.LnFugacityCoefficient),
+        new("residual_enthalpy_J_mol", "residual enthalpy", DisplayQuantity.MolarEnergy, s => s.ResidualEnthalpy),
+        new("residual_entropy_J_molK", "residual entropy", DisplayQuantity.MolarEntropy, s => s.ResidualEntropy),
+    ];
+
+    /// <summary>Writes every property as a JSON member (null where undefined), skipping the keys in
+    /// <paramref name="skip"/>.</summary>
+    public static void WriteMembers(Utf8JsonWriter json, ThermodynamicState state, IReadOnlySet<string>? skip = null)
+    {
+        foreach (var column in All)
+        {
+            if (skip?.Contains(column.Key) == true)
+            {
+                continue;
+            }
+
+            if (column.Value(state) is double value && double.IsFinite(value))
+            {
+                json.WriteNumber(column.Key, value);
+            }
+            else
+            {
+                json.WriteNull(column.Key);
+            }
+        }
+
+        json.WriteNumber("density_kg_m3", state.Density * state.MolarMass);
+        json.WriteBoolean("ideal_gas_extrapolated", state.IdealGasExtrapolated);
+    }
+
+    /// <summary>Unit label of a column in a unit system ("-" when dimensionless).</summary>
+    public static string Unit(Column column, UnitSystem units)
+        => column.Quantity is DisplayQuantity q ? UnitFormatter.Label(q, units) : "-";
+
+    /// <summary>Display text of a column ("undefined" where the property is).</summary>
+    public static string Display(Column column, ThermodynamicState state, UnitSystem units)
+    {
+        if (column.Value(state) is not double value || !double.IsFinite(value))
+        {
+            return "undefined";
+        }
+
+        return NumberText.Table(column.Quantity is DisplayQuantity q ? UnitFormatter.Convert(q, value, units, state.MolarMass) : value);
+    }
+}

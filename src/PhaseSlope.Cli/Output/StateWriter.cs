@@ -1,0 +1,108 @@
+using System.Globalization;
+using System.Text;
+using System.Text.Json;
+using PhaseSlope.Cli.Units;
+using PhaseSlope.Core.Models;
+using PhaseSlope.Core.Properties;
+
+namespace PhaseSlope.Cli.Output;
+
+/// <summary>Renders single-phase states (<c>state</c>) and partial derivatives (<c>derive</c>).</summary>
+internal static class StateWriter
+{
+    /// <summary>Renders a state.</summary>
+    public static string State(PropertyModel engine, ThermodynamicState state, OutputFormat format, UnitSystem units)
+        => format switch
+        {
+            OutputFormat.Json => Json(json =>
+            {
+                json.WriteStartObject();
+                WriteHeader(json, engine, state);
+                StateColumns.WriteMembers(json, state);
+                json.WriteEndObject();
+            }),
+            OutputFormat.Csv => CsvText.Write(
+                [.. StateColumns.All.Select(c => c.Key)],
+                [StateColumns.All.Select(c => c.Value(state) is double v && double.IsFinite(v) ? NumberText.RoundTrip(v) : "").ToArray()]),
+            _ => StateTable(engine, state, units),
+        };
+
+    /// <summary>Renders a derivative value.</summary>
+    public static string Derivative(PropertyModel engine, ThermodynamicState state, StateVariable of, StateVariable by, StateVariable hold, double value, OutputFormat format)
+    {
+        string unit = PartialDerivatives.Unit(of, by);
+        string symbol = $"(d{of}/d{by})_{hold}";
+        return format switch
+        {
+            OutputFormat.Json => Json(json =>
+            {
+                json.WriteStartObject();
+                WriteHeader(json, engine, state);
+                json.WriteString("of", of.ToString());
+                json.WriteString("by", by.ToString());
+                json.WriteString("hold", hold.ToString());
+                json.WriteNumber("value", value);
+                json.WriteString("unit", unit);
+                json.WriteNumber("temperature_K", state.Temperature);
+                json.WriteNumber("pressure_Pa", state.Pressure);
+                json.WriteNumber("density_mol_m3", state.Density);
+                json.WriteEndObject();
+            }),
+            OutputFormat.Csv => CsvText.Write(
+                ["of", "by", "hold", "value", "unit", "temperature_K", "pressure_Pa", "density_mol_m3"],
+                [[of.ToString(), by.ToString(), hold.ToString(), NumberText.RoundTrip(value), unit,
+                  NumberText.RoundTrip(state.Temperature), NumberText.RoundTrip(state.Pressure), NumberText.RoundTrip(state.Density)]]),
+            _ => $"{Title(engine, state)}{Environment.NewLine}{symbol} = {NumberText.Table(value)} {unit}{Environment.NewLine}"
+                 + $"(molar basis; SI units; reference: {engine.Reference.Id}){Environment.NewLine}",
+        };
+    }
+
+    private static void WriteHeader(Utf8JsonWriter json, PropertyModel engine, ThermodynamicState state)
+    {
+        json.WriteString("fluid", engine.Fluid.Name);
+        json.WriteString("eos", engine.Model.Kind.Id());
+        json.WriteString("reference", engine.Reference.Id);
+        json.WriteString("phase", state.Phase.ToString().ToLowerInvariant());
+        json.WriteBoolean("metastable", state.Metastable);
+        json.WriteNumber("molar_mass_kg_mol", engine.MolarMass);
+    }
+
+    private static string Title(PropertyModel engine, ThermodynamicState state)
+        => $"{engine.Fluid.Name}, {engine.Model.Kind.Title()}: {state.Phase.ToString().ToLowerInvariant()}{(state.Metastable ? " (metastable)" : "")} at "
+           + $"{NumberText.Table(state.Temperature)} K, {NumberText.Table(state.Pressure)} Pa";
+
+    private static string StateTable(PropertyModel engine, ThermodynamicState state, UnitSystem units)
+    {
+        var table = new TextTable(["property", "value", "unit"], [false, true, false]);
+        foreach (var column in StateColumns.All)
+        {
+            table.Add(column.Title, StateColumns.Display(column, state, units), StateColumns.Unit(column, units));
+        }
+
+        var text = new StringBuilder();
+        text.AppendLine(Title(engine, state));
+        text.AppendLine($"reference: {engine.Reference.Description}");
+        text.AppendLine();
+        text.Append(table.Render());
+        if (state.IdealGasExtrapolated)
+        {
+            var cp = engine.Fluid.IdealGasHeatCapacity!;
+            text.AppendLine(string.Create(CultureInfo.InvariantCulture,
+                $"note: {state.Temperature:G7} K is outside the ideal-gas heat-capacity range {cp.MinimumTemperature:G6}-{cp.MaximumTemperature:G6} K; caloric values are extrapolated"));
+        }
+
+        text.AppendLine(CoexistenceWriter.Caution);
+        return text.ToString();
+    }
+
+    private static string Json(Action<Utf8JsonWriter> write)
+    {
+        using var stream = new MemoryStream();
+        using (var json = new Utf8JsonWriter(stream, JsonText.Options))
+        {
+            write(json);
+        }
+
+        return Encoding.UTF8.GetString(stream.ToArray()) + Environment.NewLine;
+    }
+}
