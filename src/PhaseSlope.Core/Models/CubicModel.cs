@@ -1,21 +1,29 @@
+using PhaseSlope.Core.Errors;
 using PhaseSlope.Core.Fluids;
 
 namespace PhaseSlope.Core.Models;
 
-/// <summary>A two-parameter cubic equation of state for one fluid,
-/// P = RT/(v − b) − a·α(T)/((v + δ1·b)(v + δ2·b)), expressed through its one residual
-/// Helmholtz function A_r(T, ρ).</summary>
+/// <summary>A two-parameter cubic equation of state for one fluid, optionally volume-translated
+/// (Péneloux, Rauzy &amp; Fréze, Fluid Phase Equilib. 8, 7 (1982)), expressed through its one
+/// residual Helmholtz function A_r(T, ρ).</summary>
 /// <remarks>
-/// Integrating the pressure gives, with η = bρ,
-/// A_r = −RT·ln(1 − η) − (a·α/b)·F(η), where F = ln[(1 + δ1η)/(1 + δ2η)]/(δ1 − δ2), or
-/// F = η/(1 + δη) when δ1 = δ2 = δ (van der Waals: F = η). Then dF/dρ = b/D with
-/// D = (1 + δ1η)(1 + δ2η). Every pressure, fugacity and caloric residual comes from
-/// <see cref="Residual"/>; none is written a second time.
-/// The model is valid for T &gt; 0 and 0 &lt; ρ &lt; 1/b.
+/// Untranslated, P = RT/(v − b) − a·α(T)/((v + δ1·b)(v + δ2·b)). A constant shift c with
+/// v = v_cubic − c gives P = RT/(v − b′) − a·α/((v + e1)(v + e2)) with the repulsive co-volume
+/// b′ = b − c and e_i = c + δ_i·b. Integrating the pressure gives, with η = bρ and the shifted
+/// δ′_i = δ_i + c/b (so e_i = δ′_i·b),
+/// A_r = −RT·ln(1 − b′ρ) − (a·α/b)·F(η), where F = ln[(1 + δ′1η)/(1 + δ′2η)]/(δ′1 − δ′2), or
+/// F = η/(1 + δ′η) when δ′1 = δ′2 = δ′ (van der Waals: F = η/(1 + cρ)). Then dF/dρ = b/D with
+/// D = (1 + δ′1η)(1 + δ′2η). With c = 0, δ′_i = δ_i and b′ = b exactly, so the untranslated
+/// model is computed by the same operations as before translation was added. Every pressure,
+/// fugacity and caloric residual comes from <see cref="Residual"/>; none is written a second time.
+/// The model is valid for T &gt; 0 and 0 &lt; ρ &lt; 1/b′; both attractive factors 1 + e_iρ
+/// stay positive there because b′ + e_i = (1 + δ_i)·b &gt; 0 for every form used here.
 /// </remarks>
 public sealed class CubicModel
 {
     private const double R = Constants.GasConstant;
+    private readonly double _delta1;
+    private readonly double _delta2;
     private readonly double _u;
     private readonly double _w;
 
@@ -25,10 +33,15 @@ public sealed class CubicModel
     /// <param name="alpha">α(T).</param>
     /// <param name="criticalTemperature">Tc in K.</param>
     /// <param name="criticalPressure">Pc in Pa.</param>
-    public CubicModel(CubicModelKind kind, CubicForm form, IAlphaFunction alpha, double criticalTemperature, double criticalPressure)
+    /// <param name="volumeShift">Péneloux volume translation c in m³/mol (v = v_cubic − c),
+    /// finite and below the co-volume b; 0 for the untranslated model.</param>
+    public CubicModel(CubicModelKind kind, CubicForm form, IAlphaFunction alpha, double criticalTemperature, double criticalPressure, double volumeShift = 0)
     {
+        ArgumentNullException.ThrowIfNull(form);
+        ArgumentNullException.ThrowIfNull(alpha);
         Preconditions.Positive(criticalTemperature, "critical temperature");
         Preconditions.Positive(criticalPressure, "critical pressure");
+        Preconditions.Finite(volumeShift, "volume shift");
         Kind = kind;
         Form = form;
         Alpha = alpha;
@@ -36,39 +49,132 @@ public sealed class CubicModel
         CriticalPressure = criticalPressure;
         CovolumeB = form.OmegaB * R * criticalTemperature / criticalPressure;
         AttractionA = form.OmegaA * R * R * criticalTemperature * criticalTemperature / criticalPressure;
-        CriticalDensity = criticalPressure / (form.CriticalCompressibility * R * criticalTemperature);
-        _u = form.Delta1 + form.Delta2;
-        _w = form.Delta1 * form.Delta2;
+        if (!(volumeShift < CovolumeB))
+        {
+            throw new InvalidInputException("volume shift", volumeShift,
+                $"volume shift {Preconditions.Format(volumeShift)} m3/mol must be below the co-volume b = {Preconditions.Format(CovolumeB)} m3/mol");
+        }
+
+        VolumeShift = volumeShift;
+        // ρc = 1/(vc − c) with vc = Zc·R·Tc/Pc, written so that c = 0 gives Pc/(Zc·R·Tc) exactly.
+        CriticalDensity = criticalPressure / (form.CriticalCompressibility * R * criticalTemperature - volumeShift * criticalPressure);
+        TranslatedCovolume = CovolumeB - volumeShift;
+        double shift = volumeShift / CovolumeB;
+        _delta1 = form.Delta1 + shift;
+        _delta2 = form.Delta2 + shift;
+        _u = _delta1 + _delta2;
+        _w = _delta1 * _delta2;
     }
 
-    /// <summary>Builds the chosen published model for a fluid from its Tc, Pc and ω.</summary>
-    public static CubicModel For(CubicModelKind kind, Fluid fluid)
+    /// <summary>Builds a model for a fluid from its Tc, Pc and ω, with a chosen alpha function
+    /// (by default the published model's own) and volume shift (by default none).</summary>
+    /// <param name="kind">The cubic model.</param>
+    /// <param name="fluid">The fluid (Tc, Pc, ω and <see cref="Fluid.AlphaParameters"/>).</param>
+    /// <param name="alpha"><see cref="AlphaForm.Default"/>: the model's own alpha function.
+    /// <see cref="AlphaForm.Twu"/>: the fluid's Twu (1991) L, M, N for this model when
+    /// present, else for Peng–Robinson the generalised Twu, Coon &amp; Cunningham (1995) function of
+    /// ω. <see cref="AlphaForm.MathiasCopeman"/>: the fluid's c1, c2, c3 for this model. Twu and
+    /// Mathias–Copeman apply to the Peng–Robinson and Soave–Redlich–Kwong forms only; parameters
+    /// given for <see cref="CubicModelKind.PengRobinson"/> also serve
+    /// <see cref="CubicModelKind.PengRobinson1978"/>, which differs only in its default κ(ω).</param>
+    /// <param name="volumeShift">Volume translation c in m³/mol (see <see cref="Models.VolumeShift"/>).</param>
+    /// <exception cref="InvalidInputException">The alpha form does not apply to the model, or
+    /// the fluid has no parameters for it.</exception>
+    public static CubicModel For(CubicModelKind kind, Fluid fluid, AlphaForm alpha = AlphaForm.Default, double volumeShift = 0)
     {
         ArgumentNullException.ThrowIfNull(fluid);
-        return For(kind, fluid.CriticalTemperature.Value, fluid.CriticalPressure.Value, fluid.AcentricFactor.Value);
+        double tc = fluid.CriticalTemperature.Value;
+        double pc = fluid.CriticalPressure.Value;
+        double omega = fluid.AcentricFactor.Value;
+        if (alpha == AlphaForm.Default)
+        {
+            return For(kind, tc, pc, omega, volumeShift);
+        }
+
+        Preconditions.Positive(tc, "critical temperature");
+        Preconditions.Finite(omega, "acentric factor");
+        CubicForm form = kind switch
+        {
+            CubicModelKind.PengRobinson or CubicModelKind.PengRobinson1978 => CubicForm.PengRobinson,
+            CubicModelKind.SoaveRedlichKwong => CubicForm.RedlichKwong,
+            _ => throw new InvalidInputException("alpha form", double.NaN,
+                $"the {AlphaName(alpha)} alpha function applies to the Peng-Robinson and Soave-Redlich-Kwong models only, not {kind.Title()}"),
+        };
+        AlphaParameterSet? set = FindParameters(fluid, kind, alpha);
+        IAlphaFunction function = alpha switch
+        {
+            AlphaForm.Twu when set is not null => new TwuAlpha(
+                Parameter(set, fluid, 0), Parameter(set, fluid, 1), Parameter(set, fluid, 2), tc, set.Source),
+            AlphaForm.Twu when form == CubicForm.PengRobinson => new GeneralisedTwuAlpha(omega, tc),
+            AlphaForm.Twu => throw new InvalidInputException("alpha form", double.NaN,
+                $"no Twu parameters for {fluid.Name} with {kind.Title()}, and the generalised Twu (1995) alpha function is implemented for Peng-Robinson only"),
+            AlphaForm.MathiasCopeman when set is not null => new MathiasCopemanAlpha(
+                Parameter(set, fluid, 0), Parameter(set, fluid, 1), Parameter(set, fluid, 2), tc, set.Source),
+            AlphaForm.MathiasCopeman => throw new InvalidInputException("alpha form", double.NaN,
+                $"no Mathias-Copeman parameters for {fluid.Name} with {kind.Title()}"),
+            _ => throw new ArgumentOutOfRangeException(nameof(alpha), alpha, "unknown alpha form"),
+        };
+        return new CubicModel(kind, form, function, tc, pc, volumeShift);
     }
 
-    /// <summary>Builds the chosen published model from Tc (K), Pc (Pa) and the acentric factor.</summary>
-    public static CubicModel For(CubicModelKind kind, double criticalTemperature, double criticalPressure, double acentricFactor)
+    /// <summary>Builds the chosen published model from Tc (K), Pc (Pa) and the acentric factor,
+    /// with its default alpha function.</summary>
+    /// <param name="kind">The cubic model.</param>
+    /// <param name="criticalTemperature">Tc in K.</param>
+    /// <param name="criticalPressure">Pc in Pa.</param>
+    /// <param name="acentricFactor">ω.</param>
+    /// <param name="volumeShift">Volume translation c in m³/mol; 0 for none.</param>
+    public static CubicModel For(CubicModelKind kind, double criticalTemperature, double criticalPressure, double acentricFactor, double volumeShift = 0)
     {
         Preconditions.Finite(acentricFactor, "acentric factor");
         return kind switch
         {
             CubicModelKind.PengRobinson => new CubicModel(kind, CubicForm.PengRobinson,
                 new SoaveAlpha(SoaveAlpha.PengRobinson1976Slope(acentricFactor), criticalTemperature, "Peng & Robinson 1976"),
-                criticalTemperature, criticalPressure),
+                criticalTemperature, criticalPressure, volumeShift),
             CubicModelKind.PengRobinson1978 => new CubicModel(kind, CubicForm.PengRobinson,
                 new SoaveAlpha(SoaveAlpha.PengRobinson1978Slope(acentricFactor), criticalTemperature, "Robinson & Peng 1978"),
-                criticalTemperature, criticalPressure),
+                criticalTemperature, criticalPressure, volumeShift),
             CubicModelKind.SoaveRedlichKwong => new CubicModel(kind, CubicForm.RedlichKwong,
                 new SoaveAlpha(SoaveAlpha.SoaveSlope(acentricFactor), criticalTemperature, "Soave 1972"),
-                criticalTemperature, criticalPressure),
+                criticalTemperature, criticalPressure, volumeShift),
             CubicModelKind.RedlichKwong => new CubicModel(kind, CubicForm.RedlichKwong,
-                new InverseRootAlpha(criticalTemperature), criticalTemperature, criticalPressure),
+                new InverseRootAlpha(criticalTemperature), criticalTemperature, criticalPressure, volumeShift),
             CubicModelKind.VanDerWaals => new CubicModel(kind, CubicForm.VanDerWaals,
-                new ConstantAlpha(), criticalTemperature, criticalPressure),
+                new ConstantAlpha(), criticalTemperature, criticalPressure, volumeShift),
             _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, "unknown cubic model"),
         };
+    }
+
+    /// <summary>The same model with volume shift <paramref name="volumeShift"/> (m³/mol) in
+    /// place of the present one: form, alpha and critical constants are kept.</summary>
+    public CubicModel WithVolumeShift(double volumeShift)
+        => new(Kind, Form, Alpha, CriticalTemperature, CriticalPressure, volumeShift);
+
+    private static string AlphaName(AlphaForm alpha) => alpha == AlphaForm.Twu ? "Twu" : "Mathias-Copeman";
+
+    /// <summary>The fluid's parameter set of the form for this model; for Peng–Robinson 1978 a
+    /// set given for Peng–Robinson when there is none of its own.</summary>
+    private static AlphaParameterSet? FindParameters(Fluid fluid, CubicModelKind kind, AlphaForm alpha)
+    {
+        AlphaParameterSet? own = fluid.AlphaParameters.FirstOrDefault(p => p.Form == alpha && p.Model == kind);
+        if (own is null && kind == CubicModelKind.PengRobinson1978)
+        {
+            own = fluid.AlphaParameters.FirstOrDefault(p => p.Form == alpha && p.Model == CubicModelKind.PengRobinson);
+        }
+
+        return own;
+    }
+
+    private static double Parameter(AlphaParameterSet set, Fluid fluid, int index)
+    {
+        if (set.Values.Count != 3)
+        {
+            throw new InvalidInputException("alpha parameters", set.Values.Count,
+                $"{AlphaName(set.Form)} parameters for {fluid.Name} with {set.Model.Title()} must be 3 numbers, got {set.Values.Count}");
+        }
+
+        return set.Values[index];
     }
 
     /// <summary>Which published model this is.</summary>
@@ -86,7 +192,7 @@ public sealed class CubicModel
     /// <summary>Input critical pressure Pc in Pa.</summary>
     public double CriticalPressure { get; }
 
-    /// <summary>The model's own critical molar density Pc/(Zc·R·Tc) in mol/m³.</summary>
+    /// <summary>The model's own critical molar density 1/(vc − c), vc = Zc·R·Tc/Pc, in mol/m³.</summary>
     public double CriticalDensity { get; }
 
     /// <summary>Co-volume b = Ωb·R·Tc/Pc in m³/mol.</summary>
@@ -95,28 +201,37 @@ public sealed class CubicModel
     /// <summary>Attraction parameter at Tc, a = Ωa·R²·Tc²/Pc, in Pa·m⁶/mol².</summary>
     public double AttractionA { get; }
 
-    /// <summary>The highest density the model admits, 1/b, in mol/m³.</summary>
-    public double MaximumDensity => 1 / CovolumeB;
+    /// <summary>The volume translation c in m³/mol: molar volumes are v = v_cubic − c. 0 when
+    /// the model is untranslated.</summary>
+    public double VolumeShift { get; }
+
+    /// <summary>The repulsive co-volume of the translated model, b′ = b − c, in m³/mol.</summary>
+    public double TranslatedCovolume { get; }
+
+    /// <summary>The highest density the model admits, 1/(b − c), in mol/m³.</summary>
+    public double MaximumDensity => 1 / TranslatedCovolume;
 
     /// <summary>The residual Helmholtz energy and its derivatives at (T, ρ).</summary>
     /// <param name="temperature">T in K, positive.</param>
-    /// <param name="density">ρ in mol/m³, in (0, 1/b).</param>
+    /// <param name="density">ρ in mol/m³, in (0, 1/(b − c)).</param>
     public HelmholtzDerivatives Residual(double temperature, double density)
     {
         double b = CovolumeB;
         double eta = b * density;
+        double bRep = TranslatedCovolume;
+        double etaRep = bRep * density;
         AlphaValue alpha = Alpha.Evaluate(temperature);
         double theta = AttractionA * alpha.Value / b;
         double thetaT = AttractionA * alpha.FirstDerivative / b;
         double thetaTT = AttractionA * alpha.SecondDerivative / b;
 
-        double oneMinusEta = 1 - eta;
+        double oneMinusEta = 1 - etaRep;
         double logRepulsive = Math.Log(oneMinusEta);
-        double d1 = 1 + Form.Delta1 * eta;
-        double d2 = 1 + Form.Delta2 * eta;
-        double f = Form.Delta1 == Form.Delta2
+        double d1 = 1 + _delta1 * eta;
+        double d2 = 1 + _delta2 * eta;
+        double f = _delta1 == _delta2
             ? eta / d1
-            : Math.Log(d1 / d2) / (Form.Delta1 - Form.Delta2);
+            : Math.Log(d1 / d2) / (_delta1 - _delta2);
         double d = d1 * d2;
         double dRho = b * (_u + 2 * _w * eta);   // dD/dρ
         double dRhoRho = 2 * _w * b * b;         // d²D/dρ²
@@ -125,11 +240,11 @@ public sealed class CubicModel
         double value = -rt * logRepulsive - theta * f;
         double dT = -R * logRepulsive - thetaT * f;
         double dTT = -thetaTT * f;
-        double aRho = rt * b / oneMinusEta - theta * b / d;
-        double aRhoRho = rt * b * b / (oneMinusEta * oneMinusEta) + theta * b * dRho / (d * d);
-        double aRhoRhoRho = 2 * rt * b * b * b / (oneMinusEta * oneMinusEta * oneMinusEta)
+        double aRho = rt * bRep / oneMinusEta - theta * b / d;
+        double aRhoRho = rt * bRep * bRep / (oneMinusEta * oneMinusEta) + theta * b * dRho / (d * d);
+        double aRhoRhoRho = 2 * rt * bRep * bRep * bRep / (oneMinusEta * oneMinusEta * oneMinusEta)
             + theta * b * (dRhoRho * d - 2 * dRho * dRho) / (d * d * d);
-        double aTRho = R * b / oneMinusEta - thetaT * b / d;
+        double aTRho = R * bRep / oneMinusEta - thetaT * b / d;
         return new HelmholtzDerivatives(temperature, density, value, dT, dTT, aRho, aRhoRho, aRhoRhoRho, aTRho);
     }
 
