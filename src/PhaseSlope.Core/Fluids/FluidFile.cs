@@ -54,7 +54,7 @@ public static class FluidFile
 }
 
 /// <summary>One pass over one fluid file.</summary>
-internal sealed class FluidFileParser
+internal sealed partial class FluidFileParser
 {
     private const string KeyFormat = "format";
     private const string KeyName = "name";
@@ -71,13 +71,20 @@ internal sealed class FluidFileParser
     private const string KeyNormalBoilingPoint = "normal_boiling_point";
     private const string KeyTriplePointTemperature = "triple_point_temperature";
     private const string KeyRemarks = "remarks";
+    private const string KeyIdealGasCp = "ideal_gas_cp";
+    private const string KeyAlphaTwuPr = "alpha_twu_pr";
+    private const string KeyAlphaTwuSrk = "alpha_twu_srk";
+    private const string KeyAlphaMathiasCopemanPr = "alpha_mathias_copeman_pr";
+    private const string KeyAlphaMathiasCopemanSrk = "alpha_mathias_copeman_srk";
 
     internal static readonly string[] AllKeys =
     [
         KeyFormat, KeyName, KeySynonyms, KeyFormula, KeyCas, KeyFamily,
         KeyMolarMass, KeyCriticalTemperature, KeyCriticalPressure, KeyAcentricFactor,
         KeyCriticalDensity, KeyCriticalMolarVolume, KeyNormalBoilingPoint,
-        KeyTriplePointTemperature, KeyRemarks,
+        KeyTriplePointTemperature, KeyIdealGasCp,
+        KeyAlphaTwuPr, KeyAlphaTwuSrk, KeyAlphaMathiasCopemanPr, KeyAlphaMathiasCopemanSrk,
+        KeyRemarks,
     ];
 
     private static readonly string[] RequiredKeys =
@@ -105,6 +112,8 @@ internal sealed class FluidFileParser
     private readonly Dictionary<string, string> _text = new(StringComparer.Ordinal);
     private readonly Dictionary<string, RawQuantity> _quantities = new(StringComparer.Ordinal);
     private List<string> _synonyms = [];
+    private IdealGasHeatCapacity? _idealGasCp;
+    private readonly List<AlphaParameterSet> _alphaParameters = [];
 
     internal FluidFileParser(string origin) => _origin = origin;
 
@@ -240,6 +249,12 @@ internal sealed class FluidFileParser
             case KeyCas:
                 CheckCasNumber(line, rest);
                 _text[key] = rest;
+                break;
+            case KeyIdealGasCp:
+                _idealGasCp = ReadIdealGasCp(line, rest);
+                break;
+            case KeyAlphaTwuPr or KeyAlphaTwuSrk or KeyAlphaMathiasCopemanPr or KeyAlphaMathiasCopemanSrk:
+                _alphaParameters.Add(ReadAlphaParameters(line, key, rest));
                 break;
             default:
                 _text[key] = rest;
@@ -515,6 +530,8 @@ internal sealed class FluidFileParser
             CriticalDensity = criticalDensity,
             NormalBoilingPoint = normalBoilingPoint,
             TriplePointTemperature = triplePoint,
+            IdealGasHeatCapacity = _idealGasCp,
+            AlphaParameters = _alphaParameters.AsReadOnly(),
             Remarks = _text.GetValueOrDefault(KeyRemarks),
             Origin = _origin,
         };

@@ -90,7 +90,7 @@ public sealed class IdealGasHeatCapacity
         foreach (var (v, u) in EinsteinTerms)
         {
             double x = u / temperature;
-            double em1 = double.ExpM1(-x); // e^(−x) − 1, accurate for small x
+            double em1 = ExpM1(-x); // e^(−x) − 1, accurate for small x (see ExpM1)
             // x²eˣ/(eˣ − 1)² = x²e^(−x)/(1 − e^(−x))²
             sum += v * x * x * Math.Exp(-x) / (em1 * em1);
         }
@@ -111,7 +111,7 @@ public sealed class IdealGasHeatCapacity
         {
             // E(x) = x²eˣ/(eˣ−1)², dE/dx = E·[2/x − (eˣ + 1)/(eˣ − 1)], dx/dT = −x/T
             double x = u / temperature;
-            double em1 = double.ExpM1(-x);
+            double em1 = ExpM1(-x);
             double e = x * x * Math.Exp(-x) / (em1 * em1);
             double coth = (1 + Math.Exp(-x)) / -em1;
             sum += v * e * (2 / x - coth) * (-x / temperature);
@@ -141,7 +141,7 @@ public sealed class IdealGasHeatCapacity
         {
             // ∫ E dT = u/(eˣ − 1) = u·e^(−x)/(1 − e^(−x))
             double x = u / temperature;
-            sum += v * u * Math.Exp(-x) / -double.ExpM1(-x);
+            sum += v * u * Math.Exp(-x) / -ExpM1(-x);
         }
 
         return R * sum;
@@ -162,10 +162,38 @@ public sealed class IdealGasHeatCapacity
         {
             // ∫ E/T dT = x/(eˣ − 1) − ln(1 − e^(−x))
             double x = u / temperature;
-            double oneMinus = -double.ExpM1(-x);
+            double oneMinus = -ExpM1(-x);
             sum += v * (x * Math.Exp(-x) / oneMinus - Math.Log(oneMinus));
         }
 
         return R * sum;
+    }
+
+    /// <summary>eˣ − 1 to a few units in the last place for every x, small |x| included.</summary>
+    /// <remarks>.NET's double.ExpM1 is computed as Math.Exp(x) − 1, which loses about
+    /// −log10|x| digits (1e-10 relative at x = 1e-6). Here u = eˣ is rounded and
+    /// (u − 1)·x/ln u is formed: the rounding errors of u − 1 and ln u cancel in the ratio
+    /// (Kahan's method, as given by Higham, Accuracy and Stability of Numerical Algorithms,
+    /// 2nd ed. (2002); from memory).</remarks>
+    private static double ExpM1(double x)
+    {
+        double u = Math.Exp(x);
+        if (u == 1.0)
+        {
+            return x;
+        }
+
+        if (double.IsPositiveInfinity(u))
+        {
+            return u;
+        }
+
+        double um1 = u - 1.0;
+        if (um1 == -1.0)
+        {
+            return -1.0;
+        }
+
+        return um1 * x / Math.Log(u);
     }
 }

@@ -61,6 +61,7 @@ public class FluidCatalogTests
     [InlineData("ethanol")]
     [InlineData("benzene")]
     [InlineData("toluene")]
+    [InlineData("n-pentane")]
     public void Embedded_RequiredFluid_IsPresentUnderItsCanonicalName(string name)
     {
         Assert.Equal(name, FluidCatalog.Embedded.Find(name).Name);
@@ -158,6 +159,19 @@ public class FluidCatalogTests
     }
 
     [Fact]
+    public void Embedded_Pentane_HasReferenceCriticalPoint()
+    {
+        // Span & Wagner, Int. J. Thermophys. 24, 41 (2003); from memory.
+        Fluid pentane = FluidCatalog.Embedded.Find("pentane");
+
+        Assert.Equal(469.70, pentane.CriticalTemperature.Value, 9);
+        Assert.Equal(3367500.0, pentane.CriticalPressure.Value, 3);
+        Assert.Equal(3215.5, pentane.CriticalDensity!.Value, 6);
+        Assert.Equal(309.21, pentane.NormalBoilingPoint!.Value, 9);
+        Assert.Equal(143.47, pentane.TriplePointTemperature!.Value, 9);
+    }
+
+    [Fact]
     public void Embedded_Propane_HasReferenceCriticalPoint()
     {
         // Lemmon, McLinden & Wagner, J. Chem. Eng. Data 54, 3141 (2009); from memory.
@@ -207,6 +221,8 @@ public class FluidCatalogTests
     [InlineData("PROPANE", "propane")]
     [InlineData("methyl alcohol", "methanol")]
     [InlineData("R-744", "carbon dioxide")]
+    [InlineData("pentane", "n-pentane")]
+    [InlineData("R-601", "n-pentane")]
     public void Find_NameOrSynonymInAnySpelling_ReturnsCanonicalFluid(string typed, string expected)
     {
         Assert.Equal(expected, FluidCatalog.Embedded.Find(typed).Name);

@@ -1,0 +1,265 @@
+using System.Globalization;
+using PhaseSlope.Core.Models;
+
+namespace PhaseSlope.Core.Fluids;
+
+/// <summary>The correlation entries of a fluid file: the ideal-gas heat capacity
+/// (<c>ideal_gas_cp</c>) and the published alpha-function parameters (<c>alpha_…</c>).</summary>
+internal sealed partial class FluidFileParser
+{
+    private const string SectionReduce = "reduce";
+    private const string SectionPower = "power";
+    private const string SectionEinstein = "einstein";
+    private const string SectionRange = "range";
+
+    private static readonly string[] Sections = [SectionReduce, SectionPower, SectionEinstein, SectionRange];
+
+    /// <summary>cp°/R of a monatomic ideal gas (translation only): no real gas has less.</summary>
+    internal const double LowestReducedHeatCapacity = 2.5;
+
+    /// <summary>Number of evenly spaced temperatures, both ends included, at which the stated
+    /// range is sampled for the monatomic-minimum check.</summary>
+    internal const int RangeSamples = 1001;
+
+    /// <summary>Reads
+    /// <c>[reduce T_r K] [power c^t …] [einstein v@θ …] range T_min-T_max K | source</c>.
+    /// Power terms are c·(T/T_r)^t; an Einstein term's characteristic temperature is θ·T_r, so
+    /// with the default T_r = 1 K both are plain kelvin.</summary>
+    private IdealGasHeatCapacity ReadIdealGasCp(int line, string rest)
+    {
+        const string key = KeyIdealGasCp;
+        string source = ReadSource(line, key, rest, out string body);
+        string[] tokens = body.Split((char[]?)null, StringSplitOptions.RemoveEmptyEntries);
+        if (tokens.Length == 0)
+        {
+            throw Fail(line, key, "empty correlation: no terms before '|'");
+        }
+
+        var seen = new HashSet<string>(StringComparer.Ordinal);
+        var sectionTokens = new Dictionary<string, List<string>>(StringComparer.Ordinal);
+        List<string>? current = null;
+        foreach (string token in tokens)
+        {
+            if (Array.IndexOf(Sections, token) >= 0)
+            {
+                if (!seen.Add(token))
+                {
+                    throw Fail(line, key, $"'{token}' is given twice");
+                }
+
+                current = [];
+                sectionTokens[token] = current;
+                continue;
+            }
+
+            if (current is null)
+            {
+                throw Fail(line, key,
+                    $"unexpected '{token}'; the correlation is written as sections starting with {string.Join(", ", Sections.Select(s => $"'{s}'"))}");
+            }
+
+            current.Add(token);
+        }
+
+        double reducing = 1.0;
+        if (sectionTokens.TryGetValue(SectionReduce, out List<string>? reduceTokens))
+        {
+            reducing = ReadKelvin(line, key, SectionReduce, reduceTokens, "reduce 304.1282 K");
+        }
+
+        var power = new List<(double Coefficient, double Exponent)>();
+        if (sectionTokens.TryGetValue(SectionPower, out List<string>? powerTokens))
+        {
+            if (powerTokens.Count == 0)
+            {
+                throw Fail(line, key, "'power' has no terms; write coefficient^exponent, such as 4.714^0 -6.986e-3^1");
+            }
+
+            foreach (string term in powerTokens)
+            {
+                (double c, double t) = ReadPair(line, key, term, '^', "power term", "coefficient^exponent, such as 4.714^0 or -6.986e-3^1");
+                power.Add((c, t));
+            }
+        }
+
+        var einstein = new List<(double Coefficient, double Temperature)>();
+        if (sectionTokens.TryGetValue(SectionEinstein, out List<string>? einsteinTokens))
+        {
+            if (einsteinTokens.Count == 0)
+            {
+                throw Fail(line, key, "'einstein' has no terms; write coefficient@temperature, such as 3.043@393");
+            }
+
+            foreach (string term in einsteinTokens)
+            {
+                (double v, double theta) = ReadPair(line, key, term, '@', "Planck-Einstein term", "coefficient@temperature, such as 3.043@393");
+                if (theta <= 0)
+                {
+                    throw Fail(line, key,
+                        $"Planck-Einstein term '{term}': the characteristic temperature must be greater than zero");
+                }
+
+                einstein.Add((v, theta * reducing));
+            }
+        }
+
+        if (power.Count == 0 && einstein.Count == 0)
+        {
+            throw Fail(line, key, "empty correlation: give at least one 'power' or 'einstein' term");
+        }
+
+        if (!sectionTokens.TryGetValue(SectionRange, out List<string>? rangeTokens))
+        {
+            throw Fail(line, key, "missing 'range T_min-T_max K' (the temperatures the source states the correlation for)");
+        }
+
+        (double low, double high) = ReadRange(line, key, rangeTokens);
+        var correlation = new IdealGasHeatCapacity(power, reducing, einstein, low, high, source);
+        CheckMonatomicMinimum(line, correlation);
+        return correlation;
+    }
+
+    /// <summary>cp°/R ≥ 5/2 at every sampled temperature of the stated range (a relative
+    /// allowance of 1e-12 absorbs the rounding of R·(cp°/R)/R).</summary>
+    private void CheckMonatomicMinimum(int line, IdealGasHeatCapacity correlation)
+    {
+        double low = correlation.MinimumTemperature;
+        double high = correlation.MaximumTemperature;
+        for (int i = 0; i < RangeSamples; i++)
+        {
+            double temperature = i == RangeSamples - 1 ? high : low + (high - low) * i / (RangeSamples - 1);
+            double reduced = correlation.HeatCapacity(temperature) / Constants.GasConstant;
+            if (!double.IsFinite(reduced))
+            {
+                throw Fail(line, KeyIdealGasCp, $"cp°/R is not a finite number at {Show(temperature)} K");
+            }
+
+            if (reduced < LowestReducedHeatCapacity * (1 - 1e-12))
+            {
+                throw Fail(line, KeyIdealGasCp,
+                    $"unphysical: cp°/R = {reduced.ToString("G6", CultureInfo.InvariantCulture)} at {Show(temperature)} K is below {Show(LowestReducedHeatCapacity)}, the monatomic minimum");
+            }
+        }
+    }
+
+    private (double First, double Second) ReadPair(int line, string key, string term, char separator, string what, string example)
+    {
+        int at = term.IndexOf(separator, StringComparison.Ordinal);
+        if (at <= 0 || at == term.Length - 1 || term.IndexOf(separator, at + 1) >= 0
+            || !TryNumber(term[..at], out double first) || !TryNumber(term[(at + 1)..], out double second))
+        {
+            throw Fail(line, key, $"malformed {what} '{term}'; write {example}");
+        }
+
+        return (first, second);
+    }
+
+    private double ReadKelvin(int line, string key, string section, List<string> tokens, string example)
+    {
+        if (tokens.Count != 2 || !TryNumber(tokens[0], out double value))
+        {
+            throw Fail(line, key, $"malformed '{section}' ('{section} {string.Join(' ', tokens)}'); write {example}");
+        }
+
+        if (tokens[1] != "K")
+        {
+            throw Fail(line, key, $"'{section}' takes the unit K, found '{tokens[1]}'");
+        }
+
+        if (value <= 0)
+        {
+            throw Fail(line, key, $"'{section}' temperature {Show(value)} K must be greater than zero");
+        }
+
+        return value;
+    }
+
+    /// <summary>Reads <c>T_min-T_max K</c>; the separator is a '-' (or '–') that does not belong
+    /// to an exponent, with or without spaces around it.</summary>
+    private (double Low, double High) ReadRange(int line, string key, List<string> tokens)
+    {
+        const string example = "range 50-1000 K";
+        if (tokens.Count < 2 || tokens[^1] != "K")
+        {
+            string found = tokens.Count == 0 ? "nothing" : $"'{string.Join(' ', tokens)}'";
+            throw Fail(line, key, $"malformed 'range': found {found}; write {example} (temperatures in K)");
+        }
+
+        string text = string.Concat(tokens.Take(tokens.Count - 1)).Replace('–', '-');
+        int dash = -1;
+        for (int i = 1; i < text.Length; i++)
+        {
+            if (text[i] == '-' && text[i - 1] is not ('e' or 'E'))
+            {
+                dash = i;
+                break;
+            }
+        }
+
+        if (dash < 0 || !TryNumber(text[..dash], out double low) || !TryNumber(text[(dash + 1)..], out double high))
+        {
+            throw Fail(line, key, $"malformed 'range' '{string.Join(' ', tokens)}'; write {example}");
+        }
+
+        if (low <= 0)
+        {
+            throw Fail(line, key, $"'range' lower end {Show(low)} K must be greater than zero");
+        }
+
+        if (low >= high)
+        {
+            throw Fail(line, key, $"'range' lower end {Show(low)} K is not below the upper end {Show(high)} K");
+        }
+
+        return (low, high);
+    }
+
+    /// <summary>Reads <c>p1 p2 p3 | source</c> of an alpha-parameter key.</summary>
+    private AlphaParameterSet ReadAlphaParameters(int line, string key, string rest)
+    {
+        (AlphaForm form, CubicModelKind model, string names) = key switch
+        {
+            KeyAlphaTwuPr => (AlphaForm.Twu, CubicModelKind.PengRobinson, "L M N"),
+            KeyAlphaTwuSrk => (AlphaForm.Twu, CubicModelKind.SoaveRedlichKwong, "L M N"),
+            KeyAlphaMathiasCopemanPr => (AlphaForm.MathiasCopeman, CubicModelKind.PengRobinson, "c1 c2 c3"),
+            _ => (AlphaForm.MathiasCopeman, CubicModelKind.SoaveRedlichKwong, "c1 c2 c3"),
+        };
+
+        string source = ReadSource(line, key, rest, out string body);
+        string[] tokens = body.Split((char[]?)null, StringSplitOptions.RemoveEmptyEntries);
+        if (tokens.Length != 3)
+        {
+            throw Fail(line, key, $"expected three numbers '{names} | source', found {tokens.Length}");
+        }
+
+        var values = new double[3];
+        for (int i = 0; i < 3; i++)
+        {
+            values[i] = ParseNumber(line, key, tokens[i], $"parameter {names.Split(' ')[i]}");
+        }
+
+        return new AlphaParameterSet(form, model, values, source);
+    }
+
+    /// <summary>Splits <c>body | source</c>; the source must be present and not empty.</summary>
+    private string ReadSource(int line, string key, string rest, out string body)
+    {
+        int bar = rest.IndexOf('|', StringComparison.Ordinal);
+        if (bar < 0)
+        {
+            throw Fail(line, key, "missing source: write '| <published source>' after the values");
+        }
+
+        string source = rest[(bar + 1)..].Trim();
+        if (source.Length == 0)
+        {
+            throw Fail(line, key, "missing source: the text after '|' is empty");
+        }
+
+        body = rest[..bar];
+        return source;
+    }
+
+    private static bool TryNumber(string token, out double number) =>
+        double.TryParse(token, NumberStyles.Float, CultureInfo.InvariantCulture, out number) && double.IsFinite(number);
+}

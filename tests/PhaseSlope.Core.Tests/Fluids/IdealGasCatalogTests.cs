@@ -1,0 +1,186 @@
+using PhaseSlope.Core.Fluids;
+using PhaseSlope.Core.Tests.TestSupport;
+
+namespace PhaseSlope.Core.Tests.Fluids;
+
+/// <summary>The ideal-gas heat capacities of the shipped catalog against published values.</summary>
+public class IdealGasCatalogTests
+{
+    private const double R = Constants.GasConstant;
+    private const double StandardTemperature = 298.15;
+
+    private const string Janaf = "Chase, NIST-JANAF Thermochemical Tables, 4th ed., J. Phys. Chem. Ref. Data Monograph 9 (1998), ideal gas at 298.15 K; from memory";
+    private const string Crc = "CRC Handbook of Chemistry and Physics, table of standard thermodynamic properties of chemical substances, gas at 298.15 K, rounded to 0.1 J/(mol·K); from memory";
+
+    // Tolerances:
+    // * 0.3 % where the catalog carries the ideal-gas part of a reference equation of state: those
+    //   parts reproduce the statistical-mechanical cp° of the tables to about 0.1 % or better, and
+    //   the rest allows for recalled rather than looked-up reference values.
+    // * 1 % where the catalog carries a handbook polynomial (fits of a few tenths of a percent),
+    //   or where the reference value is itself recalled only to 0.1 J/(mol·K).
+    private const double ReferenceEquationTolerance = 0.003;
+    private const double PolynomialTolerance = 0.01;
+
+    public static TheoryData<string, double, double, string> StandardHeatCapacities => new()
+    {
+        // fluid, cp° at 298.15 K in J/(mol·K), relative tolerance, source of the value
+        { "nitrogen", 29.124, ReferenceEquationTolerance, Janaf },
+        { "carbon dioxide", 37.135, ReferenceEquationTolerance, Janaf },
+        { "methane", 35.639, ReferenceEquationTolerance, Janaf },
+        { "water", 33.590, ReferenceEquationTolerance, Janaf },
+        { "argon", 20.786, 1e-4, Janaf },
+        { "ammonia", 35.630, PolynomialTolerance, Janaf },
+        { "ethane", 52.5, PolynomialTolerance, Crc },
+        { "propane", 73.6, PolynomialTolerance, Crc },
+        { "n-butane", 98.5, PolynomialTolerance, Crc },
+        { "n-pentane", 120.1, PolynomialTolerance, Crc },
+        { "benzene", 82.4, PolynomialTolerance, Crc },
+        { "toluene", 103.7, PolynomialTolerance, Crc },
+        { "methanol", 44.1, PolynomialTolerance, Crc },
+        { "ethanol", 65.6, PolynomialTolerance, Crc },
+    };
+
+    [Theory]
+    [MemberData(nameof(StandardHeatCapacities))]
+    public void HeatCapacity_At298K_MatchesPublishedValue(string name, double expected, double tolerance, string source)
+    {
+        IdealGasHeatCapacity cp = FluidCatalog.Embedded.Find(name).IdealGasHeatCapacity!;
+
+        AssertClose.Relative(expected, cp.HeatCapacity(StandardTemperature), tolerance, $"{name} cp° at 298.15 K vs {source}");
+    }
+
+    [Fact]
+    public void Argon_IsExactlyTheMonatomicValue()
+    {
+        // Kinetic theory: cp° = 5R/2 for translation only, at every temperature of the range.
+        IdealGasHeatCapacity cp = FluidCatalog.Embedded.Find("argon").IdealGasHeatCapacity!;
+
+        foreach (double t in new[] { cp.MinimumTemperature, StandardTemperature, cp.MaximumTemperature })
+        {
+            AssertClose.Relative(2.5 * R, cp.HeatCapacity(t), 1e-15, $"argon cp° at {t} K");
+            Assert.Equal(0.0, cp.HeatCapacityDerivative(t));
+        }
+    }
+
+    [Fact]
+    public void EveryCatalogFluid_HasAnIdealGasHeatCapacityWithAMemorySource()
+    {
+        foreach (Fluid fluid in FluidCatalog.Embedded.All)
+        {
+            Assert.True(fluid.IdealGasHeatCapacity is not null, $"{fluid.Name} has no ideal_gas_cp");
+            Assert.Contains("from memory", fluid.IdealGasHeatCapacity!.Source, StringComparison.Ordinal);
+        }
+    }
+
+    [Fact]
+    public void EveryCatalogFluid_HasAPublishedReferenceValueTestedAbove_ExceptR134a()
+    {
+        // R-134a has no recalled cp° table value to compare with; its correlation is checked by
+        // R134a_PowerCoefficients_FollowFromTheHelmholtzConstants instead.
+        var tested = new HashSet<string>(StandardHeatCapacities.Select(row => (string)row[0]), StringComparer.Ordinal);
+
+        string[] untested = [.. FluidCatalog.Embedded.All.Select(f => f.Name).Where(n => !tested.Contains(n))];
+
+        Assert.Equal(new[] { "r-134a" }, untested);
+    }
+
+    [Fact]
+    public void EveryCatalogFluid_HeatCapacityAtLeastMonatomicOverItsRange()
+    {
+        foreach (Fluid fluid in FluidCatalog.Embedded.All)
+        {
+            IdealGasHeatCapacity cp = fluid.IdealGasHeatCapacity!;
+            for (int i = 0; i <= 2000; i++)
+            {
+                double t = cp.MinimumTemperature + (cp.MaximumTemperature - cp.MinimumTemperature) * i / 2000.0;
+                double reduced = cp.HeatCapacity(t) / R;
+                Assert.True(reduced >= 2.5 * (1 - 1e-12), $"{fluid.Name}: cp°/R = {reduced} at {t} K");
+            }
+        }
+    }
+
+    [Fact]
+    public void EveryCatalogFluid_RangeCoversRoomTemperatureAndTheLiquidRegion()
+    {
+        // The range must reach down to the normal boiling point, or to the triple point where
+        // there is none (carbon dioxide), so caloric properties are available along the
+        // saturation curve, and must include 298.15 K.
+        foreach (Fluid fluid in FluidCatalog.Embedded.All)
+        {
+            IdealGasHeatCapacity cp = fluid.IdealGasHeatCapacity!;
+            double low = (fluid.NormalBoilingPoint ?? fluid.TriplePointTemperature)!.Value;
+
+            Assert.True(cp.InRange(StandardTemperature), $"{fluid.Name}: 298.15 K outside {cp.MinimumTemperature}-{cp.MaximumTemperature} K");
+            Assert.True(cp.InRange(low), $"{fluid.Name}: {low} K outside {cp.MinimumTemperature}-{cp.MaximumTemperature} K");
+        }
+    }
+
+    [Fact]
+    public void ReferenceEquationForms_ReduceByTheCriticalTemperatureOfTheFile()
+    {
+        // Where the file writes a reference equation in reduced form, the reducing temperature
+        // must be that equation's Tc, which is also the file's critical temperature.
+        foreach (string name in new[] { "water", "carbon dioxide", "methane", "ethane", "n-butane", "nitrogen", "r-134a" })
+        {
+            Fluid fluid = FluidCatalog.Embedded.Find(name);
+
+            Assert.Equal(fluid.CriticalTemperature.Value, fluid.IdealGasHeatCapacity!.ReducingTemperature);
+        }
+    }
+
+    [Fact]
+    public void Nitrogen_PowerCoefficients_FollowFromTheHelmholtzConstants()
+    {
+        // Span, Lemmon, Jacobsen, Wagner & Yokozeki, J. Phys. Chem. Ref. Data 29, 1361 (2000),
+        // ideal part a1 ln τ + a4/τ + a5/τ² + a6/τ³ + a7 ln(1 − e^(−a8 τ)); from memory.
+        // cv°/R = −τ² ∂²α°/∂τ², so cp°/R = 1 + a1 − 2a4/τ − 6a5/τ² − 12a6/τ³ + a7 E(a8 τ).
+        const double a1 = 2.5, a4 = -1.934819e-4, a5 = -1.247742e-5, a6 = 6.678326e-8, a7 = 1.012941, a8 = 26.65788;
+        IdealGasHeatCapacity cp = FluidCatalog.Embedded.Find("nitrogen").IdealGasHeatCapacity!;
+        double[] expected = [1 + a1, -2 * a4, -6 * a5, -12 * a6];
+
+        Assert.Equal(new double[] { 0, 1, 2, 3 }, cp.PowerTerms.Select(p => p.Exponent));
+        for (int i = 0; i < expected.Length; i++)
+        {
+            AssertClose.Relative(expected[i], cp.PowerTerms[i].Coefficient, 1e-14, $"nitrogen power coefficient {i}");
+        }
+
+        Assert.Single(cp.EinsteinTerms);
+        AssertClose.Relative(a7, cp.EinsteinTerms[0].Coefficient, 1e-15, "nitrogen Einstein coefficient");
+        AssertClose.Relative(a8 * 126.192, cp.EinsteinTerms[0].Temperature, 1e-15, "nitrogen Einstein temperature");
+    }
+
+    [Fact]
+    public void R134a_PowerCoefficients_FollowFromTheHelmholtzConstants()
+    {
+        // Tillner-Roth & Baehr, J. Phys. Chem. Ref. Data 23, 657 (1994), ideal part
+        // a3 ln τ + a4 τ^(−1/2) + a5 τ^(−3/4); from memory. −τ² ∂²/∂τ² of a τ^k is −k(k−1)·a τ^k,
+        // so cp°/R = 1 + a3 − (3/4) a4 (T/Tc)^(1/2) − (21/16) a5 (T/Tc)^(3/4).
+        const double a3 = -1.629789, a4 = -9.723916, a5 = -3.927170, tc = 374.18;
+        IdealGasHeatCapacity cp = FluidCatalog.Embedded.Find("r-134a").IdealGasHeatCapacity!;
+
+        foreach (double t in new[] { 169.85, 247.076, StandardTemperature, 455.0 })
+        {
+            double reduced = 1 + a3 - 0.75 * a4 * Math.Sqrt(t / tc) - 21.0 / 16.0 * a5 * Math.Pow(t / tc, 0.75);
+            AssertClose.Relative(R * reduced, cp.HeatCapacity(t), 1e-14, $"r-134a cp° at {t} K");
+        }
+
+        Assert.Empty(cp.EinsteinTerms);
+    }
+
+    [Fact]
+    public void EveryCatalogFluid_IntegralsOverOneKelvin_AreMidpointValues()
+    {
+        // Over 298.15 ± 0.5 K the midpoint rule is exact up to h²·f''/24 with h = 1 K; for cp°
+        // and cp°/T, |f''/f| is below about 1e-4 K⁻² here, so 1e-5 relative is safe while any
+        // slip in the antiderivatives (of order one) fails. Ties the catalog data to the
+        // analytic integrals.
+        foreach (Fluid fluid in FluidCatalog.Embedded.All)
+        {
+            IdealGasHeatCapacity cp = fluid.IdealGasHeatCapacity!;
+            AssertClose.Relative(cp.HeatCapacity(StandardTemperature), cp.EnthalpyIntegral(297.65, 298.65), 1e-5,
+                $"{fluid.Name}: ∫cp° dT over 1 K");
+            AssertClose.Relative(cp.HeatCapacity(StandardTemperature) / StandardTemperature, cp.EntropyIntegral(297.65, 298.65), 1e-5,
+                $"{fluid.Name}: ∫cp°/T dT over 1 K");
+        }
+    }
+}
