@@ -57,7 +57,7 @@ public class NumberTextTests
 
         var csv = RunIn("de-DE", ["curve", "propane", "--points", "3", "--format", "csv"]);
         var rows = PhaseSlope.Cli.Tests.Commands.CurveCommandTests.ParseCsv(csv.Stdout);
-        Assert.All(rows, row => Assert.Equal(13, row.Length));
+        Assert.All(rows, row => Assert.Equal(17, row.Length));
         Assert.All(rows.Skip(1).SelectMany(r => r), cell => Assert.Matches(@"^-?[0-9]+(\.[0-9]+)?(E[-+][0-9]+)?$", cell));
 
         var table = RunIn("de-DE", ["coexist", "propane", "--temperature", "300.5"]);
