@@ -32,14 +32,14 @@ internal static class CoexistCommand
                 throw new UsageException("coexist: give exactly one of --temperature and --pressure");
             }
 
-            var kind = common.ModelKind(parse);
+            _ = common.ModelKind(parse); // reject a bad --eos before the fluid is resolved
             var format = common.OutputFormat(parse);
             var units = common.UnitSystem(parse);
             double? t = tText is null ? null : QuantityParser.ParseTemperature(tText, "--temperature");
             double? p = pText is null ? null : QuantityParser.ParsePressure(pText, "--pressure");
             var zero = ReferenceOption.Parse(parse.GetValue(reference)!);
             var data = FluidResolver.Resolve(parse.GetValue(fluid)!);
-            var context = CoexistenceContext.Create(data, kind, zero);
+            var context = CoexistenceContext.Create(data, common.Model(parse, data), zero);
             var point = t is double tv ? context.Solver.AtTemperature(tv) : context.Solver.AtPressure(p!.Value);
             io.Out.Write(CoexistenceWriter.Render([context.Row(point)], single: true, format, data, context.Solver.Model, zero, units));
         }));

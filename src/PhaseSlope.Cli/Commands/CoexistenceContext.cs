@@ -27,14 +27,14 @@ internal sealed class CoexistenceContext
     public ReferenceState Reference { get; }
 
     /// <summary>Builds the context for a fluid, model and reference.</summary>
-    public static CoexistenceContext Create(Fluid fluid, CubicModelKind kind, ReferenceState reference)
+    public static CoexistenceContext Create(Fluid fluid, CubicModel model, ReferenceState reference)
     {
         if (fluid.IdealGasHeatCapacity is null)
         {
-            return new CoexistenceContext(CoexistenceSolver.For(fluid, kind), null, reference);
+            return new CoexistenceContext(new CoexistenceSolver(model, CoexistenceSolver.LowestValidTemperature(fluid)), null, reference);
         }
 
-        var engine = PropertyModel.For(fluid, kind, reference);
+        var engine = new PropertyModel(fluid, model, reference);
         return new CoexistenceContext(engine.Solver, engine, reference);
     }
 

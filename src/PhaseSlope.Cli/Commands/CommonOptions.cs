@@ -1,6 +1,7 @@
 using System.CommandLine;
 using PhaseSlope.Cli.Output;
 using PhaseSlope.Cli.Units;
+using PhaseSlope.Core.Fluids;
 using PhaseSlope.Core.Models;
 
 namespace PhaseSlope.Cli.Commands;
@@ -13,6 +14,22 @@ internal sealed class CommonOptions
     {
         Description = $"Cubic model: {string.Join(", ", CubicModelKinds.Ids)}",
         DefaultValueFactory = _ => "pr",
+    };
+
+    /// <summary>--alpha: the alpha function.</summary>
+    public Option<string> Alpha { get; } = new("--alpha")
+    {
+        Description = "Alpha function: default (the model's own), twu (the fluid's Twu 1991 constants, else the generalised 1995 set for pr), "
+            + "mathias-copeman (the fluid's constants); twu and mathias-copeman apply to pr, pr78 and srk",
+        DefaultValueFactory = _ => "default",
+    };
+
+    /// <summary>--volume-shift: Peneloux volume translation.</summary>
+    public Option<string> VolumeShift { get; } = new("--volume-shift")
+    {
+        Description = "Volume translation c (v = v_eos - c): none (default), peneloux (the published correlation for pr or srk), "
+            + "or a value in m3/mol, cm3/mol or L/mol (bare number: m3/mol); it shifts densities and leaves Psat and latent heats unchanged",
+        DefaultValueFactory = _ => "none",
     };
 
     /// <summary>--format: table, csv or json.</summary>
@@ -39,6 +56,8 @@ internal sealed class CommonOptions
         if (withEos)
         {
             command.Options.Add(Eos);
+            command.Options.Add(Alpha);
+            command.Options.Add(VolumeShift);
         }
 
         command.Options.Add(Format);
@@ -52,6 +71,48 @@ internal sealed class CommonOptions
         return CubicModelKinds.TryParse(id, out var kind)
             ? kind
             : throw new UsageException($"--eos: unknown model '{id}' (use {string.Join(", ", CubicModelKinds.Ids)})");
+    }
+
+    /// <summary>The chosen model with its alpha function and volume shift, for a fluid.</summary>
+    public CubicModel Model(ParseResult parse, Fluid fluid)
+    {
+        var kind = ModelKind(parse);
+        string alphaText = parse.GetValue(Alpha) ?? "default";
+        var alpha = alphaText.ToLowerInvariant() switch
+        {
+            "default" => AlphaForm.Default,
+            "twu" => AlphaForm.Twu,
+            "mathias-copeman" => AlphaForm.MathiasCopeman,
+            _ => throw new UsageException($"--alpha: unknown alpha function '{alphaText}' (use default, twu or mathias-copeman)"),
+        };
+        double shift = ParseShift(parse.GetValue(VolumeShift) ?? "none", kind, fluid);
+        return CubicModel.For(kind, fluid, alpha, shift);
+    }
+
+    private static double ParseShift(string text, CubicModelKind kind, Fluid fluid)
+    {
+        string t = text.Trim();
+        if (string.Equals(t, "none", StringComparison.OrdinalIgnoreCase))
+        {
+            return 0;
+        }
+
+        if (string.Equals(t, "peneloux", StringComparison.OrdinalIgnoreCase))
+        {
+            return Core.Models.VolumeShift.Peneloux(kind, fluid.CriticalTemperature.Value, fluid.CriticalPressure.Value,
+                Core.Models.VolumeShift.RackettCompressibility(fluid.AcentricFactor.Value));
+        }
+
+        (string number, double factor) = t switch
+        {
+            _ when t.EndsWith("cm3/mol", StringComparison.OrdinalIgnoreCase) => (t[..^7], 1e-6),
+            _ when t.EndsWith("L/mol", StringComparison.OrdinalIgnoreCase) => (t[..^5], 1e-3),
+            _ when t.EndsWith("m3/mol", StringComparison.OrdinalIgnoreCase) => (t[..^6], 1.0),
+            _ => (t, 1.0),
+        };
+        return double.TryParse(number.Trim(), System.Globalization.NumberStyles.Float, System.Globalization.CultureInfo.InvariantCulture, out double value) && double.IsFinite(value)
+            ? value * factor
+            : throw new UsageException($"--volume-shift: '{text}' is not none, peneloux or a volume in m3/mol, cm3/mol or L/mol");
     }
 
     /// <summary>The chosen output format.</summary>

@@ -35,7 +35,7 @@ internal static class CurveCommand
         common.AddTo(command, withEos: true);
         command.SetAction(parse => io.Guard(() =>
         {
-            var kind = common.ModelKind(parse);
+            _ = common.ModelKind(parse); // reject a bad --eos before the fluid is resolved
             var units = common.UnitSystem(parse);
             string? outPath = parse.GetValue(output);
             var format = common.FormatGiven(parse) || outPath is null ? common.OutputFormat(parse) : FormatFromExtension(outPath);
@@ -54,7 +54,7 @@ internal static class CurveCommand
 
             var zero = ReferenceOption.Parse(parse.GetValue(reference)!);
             var data = FluidResolver.Resolve(parse.GetValue(fluid)!);
-            var context = CoexistenceContext.Create(data, kind, zero);
+            var context = CoexistenceContext.Create(data, common.Model(parse, data), zero);
             var solver = context.Solver;
             double tc = solver.Model.CriticalTemperature;
             double start = tFrom ?? solver.MinimumTemperature;

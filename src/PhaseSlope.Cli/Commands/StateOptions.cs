@@ -56,7 +56,7 @@ internal sealed class StateOptions
             throw new UsageException("give exactly one of --pressure and --density with --temperature");
         }
 
-        var kind = Common.ModelKind(parse);
+        _ = Common.ModelKind(parse); // reject a bad --eos before the fluid is resolved
         var phase = ParsePhase(parse.GetValue(Phase) ?? "stable");
         if (dText is not null && phase != PhaseChoice.Stable)
         {
@@ -68,7 +68,7 @@ internal sealed class StateOptions
         double? p = pText is null ? null : QuantityParser.ParsePressure(pText, "--pressure");
         Fluid fluid = FluidResolver.Resolve(parse.GetValue(Fluid)!);
         double? rho = dText is null ? null : QuantityParser.ParseDensity(dText, "--density", fluid.MolarMass.Value);
-        var engine = PropertyModel.For(fluid, kind, reference);
+        var engine = new PropertyModel(fluid, Common.Model(parse, fluid), reference);
         var state = p is double pv ? engine.AtPressure(t, pv, phase) : engine.AtDensity(t, rho!.Value);
         return (engine, state);
     }

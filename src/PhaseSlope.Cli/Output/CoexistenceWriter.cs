@@ -145,7 +145,7 @@ internal static class CoexistenceWriter
         }
 
         var text = new StringBuilder();
-        text.AppendLine($"Saturation curve of {fluid.Name}, {model.Kind.Title()}; {rows.Count} states{(rows[^1].Point.IsCritical ? ", the last one the critical point" : "")}");
+        text.AppendLine($"Saturation curve of {fluid.Name}, {ModelText.Describe(model)}; {rows.Count} states{(rows[^1].Point.IsCritical ? ", the last one the critical point" : "")}");
         text.AppendLine(ReferenceLine(rows, reference));
         text.AppendLine();
         text.Append(table.Render());
@@ -199,7 +199,7 @@ internal static class CoexistenceWriter
         jumps.Add("inverse slope dTsat/dP", NumberText.Table(1 / UnitFormatter.Convert(DisplayQuantity.Slope, point.Slope, units, m)), $"K per {Label(DisplayQuantity.Pressure)}");
 
         var text = new StringBuilder();
-        text.AppendLine($"{fluid.Name}, {model.Kind.Title()}{(point.IsCritical ? ": critical point" : "")}");
+        text.AppendLine($"{fluid.Name}, {ModelText.Describe(model)}{(point.IsCritical ? ": critical point" : "")}");
         text.AppendLine($"saturation temperature  {Show(DisplayQuantity.Temperature, point.Temperature)} {Label(DisplayQuantity.Temperature)}");
         text.AppendLine($"saturation pressure     {Show(DisplayQuantity.Pressure, point.Pressure)} {Label(DisplayQuantity.Pressure)}");
         text.AppendLine(ReferenceLine([row], reference));

@@ -4,6 +4,8 @@ using System.Text.Json;
 using PhaseSlope.Cli.Units;
 using PhaseSlope.Core.Equilibrium;
 using PhaseSlope.Core.Fluids;
+using PhaseSlope.Core.Models;
+using PhaseSlope.Core.Properties;
 
 namespace PhaseSlope.Cli.Output;
 
@@ -84,6 +86,25 @@ internal static class FluidWriter
         }
 
         json.WriteNumber("lowest_valid_temperature_K", CoexistenceSolver.LowestValidTemperature(fluid));
+        var line = VapourLineOf(fluid);
+        WriteOptional(json, "vapour_line", line?.Class.ToString().ToLowerInvariant());
+        if (line is null)
+        {
+            json.WriteNull("vapour_line_reduced_slope");
+            json.WriteNull("maximum_vapour_entropy_temperature_K");
+        }
+        else
+        {
+            json.WriteNumber("vapour_line_reduced_slope", line.ReducedSlope);
+            if (line.MaximumEntropyTemperature is double tMax)
+            {
+                json.WriteNumber("maximum_vapour_entropy_temperature_K", tMax);
+            }
+            else
+            {
+                json.WriteNull("maximum_vapour_entropy_temperature_K");
+            }
+        }
         json.WriteStartObject("standard_uncertainties");
         foreach (var field in Fields)
         {
@@ -108,6 +129,11 @@ internal static class FluidWriter
         json.WriteString("origin", fluid.Origin);
         json.WriteEndObject();
     }
+
+    /// <summary>The vapour-line class for the default model, or null when the fluid has no
+    /// ideal-gas heat capacity (the class depends on it).</summary>
+    private static VapourLine? VapourLineOf(Fluid fluid)
+        => fluid.IdealGasHeatCapacity is null ? null : VapourLine.Classify(PropertyModel.For(fluid, CubicModelKind.PengRobinson));
 
     private static void WriteOptional(Utf8JsonWriter json, string key, string? value)
     {
@@ -195,6 +221,18 @@ internal static class FluidWriter
         text.AppendLine();
         double tMin = CoexistenceSolver.LowestValidTemperature(fluid);
         text.AppendLine($"lowest valid temperature: {NumberText.Table(UnitFormatter.Convert(DisplayQuantity.Temperature, tMin, units))} {UnitFormatter.Label(DisplayQuantity.Temperature, units)} (0.3 Tc or the triple point, whichever is higher)");
+        if (VapourLineOf(fluid) is { } line)
+        {
+            string turn = line.MaximumEntropyTemperature is double tMax
+                ? $"; vapour entropy is highest at {NumberText.Table(UnitFormatter.Convert(DisplayQuantity.Temperature, tMax, units))} {UnitFormatter.Label(DisplayQuantity.Temperature, units)}"
+                : "";
+            text.AppendLine($"saturated-vapour line ({CubicModelKind.PengRobinson.Title()}): {line.Class.ToString().ToLowerInvariant()}, (Tc/R) ds/dT = {NumberText.Table(line.ReducedSlope)} at T/Tc = {NumberText.Table(VapourLine.ReadingReducedTemperature)}{turn}");
+        }
+
+        if (fluid.IdealGasHeatCapacity is { } cp)
+        {
+            text.AppendLine($"ideal-gas heat capacity: {NumberText.Table(cp.MinimumTemperature)}-{NumberText.Table(cp.MaximumTemperature)} K; {cp.Source}");
+        }
         if (fluid.Remarks is not null)
         {
             text.AppendLine($"remarks: {fluid.Remarks}");

@@ -68,8 +68,8 @@ internal static class StateWriter
     }
 
     private static string Title(PropertyModel engine, ThermodynamicState state)
-        => $"{engine.Fluid.Name}, {engine.Model.Kind.Title()}: {state.Phase.ToString().ToLowerInvariant()}{(state.Metastable ? " (metastable)" : "")} at "
-           + $"{NumberText.Table(state.Temperature)} K, {NumberText.Table(state.Pressure)} Pa";
+        => $"{engine.Fluid.Name}, {ModelText.Describe(engine.Model)}: {state.Phase.ToString().ToLowerInvariant()}{(state.Metastable ? " (metastable)" : "")} at "
+           + $"{NumberText.Table(state.Temperature)} K, {NumberText.Table(state.Pressure / 1e3)} kPa";
 
     private static string StateTable(PropertyModel engine, ThermodynamicState state, UnitSystem units)
     {

@@ -44,28 +44,63 @@ public static class PartialDerivatives
         return numerator / denominator;
     }
 
-    /// <summary>The SI unit of (∂X/∂Y)_Z on a molar basis, e.g. "Pa/K" or "(J/mol)/Pa".</summary>
+    /// <summary>The SI unit of (∂X/∂Y)_Z on a molar basis, simplified: "Pa/K", "Pa" for
+    /// (∂U/∂V)_T, "J/(mol K)" for (∂H/∂T)_P, "1" for a ratio of like quantities.</summary>
     public static string Unit(StateVariable of, StateVariable by)
     {
-        string top = UnitOf(of);
-        string bottom = UnitOf(by);
-        if (top == bottom)
-        {
-            return "1";
-        }
-
-        return $"{Wrap(top)}/{Wrap(bottom)}";
-
-        static string Wrap(string unit) => unit.Contains('/', StringComparison.Ordinal) ? $"({unit})" : unit;
+        var x = Dimension(of);
+        var y = Dimension(by);
+        return Format(x.Pa - y.Pa, x.M3 - y.M3, x.Mol - y.Mol, x.K - y.K);
     }
 
     /// <summary>The SI unit of a state variable on a molar basis.</summary>
-    public static string UnitOf(StateVariable variable) => variable switch
+    public static string UnitOf(StateVariable variable)
     {
-        StateVariable.T => "K",
-        StateVariable.P => "Pa",
-        StateVariable.V => "m3/mol",
-        StateVariable.S => "J/(mol K)",
-        _ => "J/mol",
+        var d = Dimension(variable);
+        return Format(d.Pa, d.M3, d.Mol, d.K);
+    }
+
+    /// <summary>Exponents of Pa, m³, mol and K (J = Pa·m³).</summary>
+    private static (int Pa, int M3, int Mol, int K) Dimension(StateVariable variable) => variable switch
+    {
+        StateVariable.T => (0, 0, 0, 1),
+        StateVariable.P => (1, 0, 0, 0),
+        StateVariable.V => (0, 1, -1, 0),
+        StateVariable.S => (1, 1, -1, -1),
+        _ => (1, 1, -1, 0),
     };
+
+    private static string Format(int pa, int m3, int mol, int k)
+    {
+        // Pa·m³ pairs print as J.
+        int joule = pa > 0 && m3 > 0 ? Math.Min(pa, m3) : pa < 0 && m3 < 0 ? -Math.Min(-pa, -m3) : 0;
+        pa -= joule;
+        m3 -= joule;
+        var top = new List<string>();
+        var bottom = new List<string>();
+        void Add(string symbol, int power)
+        {
+            if (power == 0)
+            {
+                return;
+            }
+
+            var side = power > 0 ? top : bottom;
+            int p = Math.Abs(power);
+            side.Add(p == 1 ? symbol : $"{symbol}^{p}");
+        }
+
+        Add("J", joule);
+        Add("Pa", pa);
+        Add("m3", m3);
+        Add("mol", mol);
+        Add("K", k);
+        string numerator = top.Count == 0 ? "1" : string.Join(" ", top);
+        return bottom.Count switch
+        {
+            0 => numerator,
+            1 => $"{numerator}/{bottom[0]}",
+            _ => $"{numerator}/({string.Join(" ", bottom)})",
+        };
+    }
 }
