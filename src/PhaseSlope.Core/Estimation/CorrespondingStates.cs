@@ -1,0 +1,101 @@
+using PhaseSlope.Core.Errors;
+
+namespace PhaseSlope.Core.Estimation;
+
+/// <summary>Corresponding-states vapour-pressure relations in reduced form, ln(Psat/Pc) as a
+/// function of Tr = T/Tc and ω, and the acentric factor recovered from one vapour pressure.</summary>
+/// <remarks>Coefficients as printed in Poling, Prausnitz &amp; O'Connell, The Properties of Gases
+/// and Liquids, 5th ed. (2001), section 7-4 (from memory). Both relations are meant for
+/// 0.3 ≲ Tr ≤ 1 and normal (non-associating) fluids; they reproduce vapour pressures of such
+/// fluids to a few percent.</remarks>
+public static class CorrespondingStates
+{
+    /// <summary>Lee–Kesler: f0 = 5.92714 − 6.09648/Tr − 1.28862 ln Tr + 0.169347 Tr⁶,
+    /// f1 = 15.2518 − 15.6875/Tr − 13.4721 ln Tr + 0.43577 Tr⁶; ln Pr = f0 + ω f1.</summary>
+    public static (double F0, double F1) LeeKeslerTerms(double reducedTemperature)
+    {
+        double tr = reducedTemperature;
+        double tr6 = Math.Pow(tr, 6);
+        double lnTr = Math.Log(tr);
+        return (5.92714 - 6.09648 / tr - 1.28862 * lnTr + 0.169347 * tr6,
+                15.2518 - 15.6875 / tr - 13.4721 * lnTr + 0.43577 * tr6);
+    }
+
+    /// <summary>Ambrose–Walton with τ = 1 − Tr:
+    /// f0 = (−5.97616τ + 1.29874τ^1.5 − 0.60394τ^2.5 − 1.06841τ⁵)/Tr,
+    /// f1 = (−5.03365τ + 1.11505τ^1.5 − 5.41217τ^2.5 − 7.46628τ⁵)/Tr,
+    /// f2 = (−0.64771τ + 2.41539τ^1.5 − 4.26979τ^2.5 + 3.25259τ⁵)/Tr; ln Pr = f0 + ω f1 + ω² f2.</summary>
+    public static (double F0, double F1, double F2) AmbroseWaltonTerms(double reducedTemperature)
+    {
+        double tr = reducedTemperature;
+        double t = 1 - tr;
+        double t15 = Math.Pow(t, 1.5);
+        double t25 = Math.Pow(t, 2.5);
+        double t5 = Math.Pow(t, 5);
+        return ((-5.97616 * t + 1.29874 * t15 - 0.60394 * t25 - 1.06841 * t5) / tr,
+                (-5.03365 * t + 1.11505 * t15 - 5.41217 * t25 - 7.46628 * t5) / tr,
+                (-0.64771 * t + 2.41539 * t15 - 4.26979 * t25 + 3.25259 * t5) / tr);
+    }
+
+    /// <summary>The acentric factor from Tc (K), Pc (Pa) and one vapour pressure (T in K, P in Pa).</summary>
+    /// <exception cref="InvalidInputException">A non-positive or non-finite input, T not below Tc,
+    /// P not below Pc, or (for <see cref="AcentricFactorMethod.Definition"/>) T/Tc not 0.7.</exception>
+    public static double AcentricFactor(AcentricFactorMethod method, double criticalTemperature, double criticalPressure, double temperature, double pressure)
+    {
+        Preconditions.Positive(criticalTemperature, "critical temperature");
+        Preconditions.Positive(criticalPressure, "critical pressure");
+        Preconditions.Positive(temperature, "vapour-pressure temperature");
+        Preconditions.Positive(pressure, "vapour pressure");
+        double tr = temperature / criticalTemperature;
+        double pr = pressure / criticalPressure;
+        if (!(tr < 1))
+        {
+            throw new InvalidInputException("vapour-pressure temperature", temperature,
+                $"the vapour-pressure point at {Preconditions.Format(temperature)} K is not below the critical temperature {Preconditions.Format(criticalTemperature)} K");
+        }
+
+        if (!(pr < 1))
+        {
+            throw new InvalidInputException("vapour pressure", pressure,
+                $"the vapour pressure {Preconditions.Format(pressure)} Pa is not below the critical pressure {Preconditions.Format(criticalPressure)} Pa");
+        }
+
+        switch (method)
+        {
+            case AcentricFactorMethod.Definition:
+                // The definition needs the point at Tr = 0.7; allow the rounding of a typed value.
+                if (Math.Abs(tr - 0.7) > 5e-4)
+                {
+                    throw new InvalidInputException("vapour-pressure temperature", temperature,
+                        $"the definition of the acentric factor needs the vapour pressure at T/Tc = 0.7 ({Preconditions.Format(0.7 * criticalTemperature)} K), got T/Tc = {Preconditions.Format(tr)}; use edmister, lee-kesler or ambrose-walton for another temperature");
+                }
+
+                return -1 - Math.Log10(pr);
+            case AcentricFactorMethod.Edmister:
+                return 3.0 / 7.0 * tr / (1 - tr) * Math.Log10(1 / pr) - 1;
+            case AcentricFactorMethod.LeeKesler:
+            {
+                var (f0, f1) = LeeKeslerTerms(tr);
+                return (Math.Log(pr) - f0) / f1;
+            }
+
+            default:
+            {
+                // ω² f2 + ω f1 + (f0 − ln Pr) = 0; the physical root is the one continuous with
+                // the linear (Lee–Kesler-like) solution for small f2.
+                var (f0, f1, f2) = AmbroseWaltonTerms(tr);
+                double c = f0 - Math.Log(pr);
+                double disc = f1 * f1 - 4 * f2 * c;
+                if (!(disc >= 0))
+                {
+                    throw new InvalidInputException("vapour pressure", pressure,
+                        $"the Ambrose-Walton relation has no real acentric factor for P/Pc = {Preconditions.Format(pr)} at T/Tc = {Preconditions.Format(tr)}");
+                }
+
+                // Numerically stable root of the pair: ω = 2c/(−f1 − sign(f1)·√disc).
+                double q = -0.5 * (f1 + Math.Sign(f1) * Math.Sqrt(disc));
+                return c / q;
+            }
+        }
+    }
+}
