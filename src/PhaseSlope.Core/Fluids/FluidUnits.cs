@@ -1,3 +1,5 @@
+using System.Globalization;
+
 namespace PhaseSlope.Core.Fluids;
 
 /// <summary>The units a fluid file may use and their conversion to SI.</summary>
@@ -29,13 +31,21 @@ internal static class FluidUnits
     internal readonly record struct Conversion(Dimension Dimension, ConversionKind Kind, double Factor)
     {
         /// <summary>number × factor. The factors are powers of ten, so the product is formed in
-        /// decimal arithmetic and rounded once: "44.09562 g/mol" becomes the double nearest to
-        /// 0.04409562 rather than 0.044095619999999995 (binary 1e-3 is inexact). Numbers outside
-        /// decimal's comfortable range take the plain double product.</summary>
+        /// decimal arithmetic from the number's shortest round-trip text and rounded once:
+        /// "44.09562 g/mol" becomes the double nearest to 0.04409562 rather than
+        /// 0.044095619999999995 (binary 1e-3 is inexact). A factor of 1 leaves the number as it is;
+        /// numbers outside decimal's range take the plain double product.</summary>
         public double Apply(double number)
-            => Math.Abs(number) is > 1e-12 and < 1e15
-                ? (double)((decimal)number * (decimal)Factor)
+        {
+            if (Factor == 1)
+            {
+                return number;
+            }
+
+            return Math.Abs(number) is > 1e-20 and < 1e20
+                ? (double)(decimal.Parse(number.ToString("R", CultureInfo.InvariantCulture), NumberStyles.Float, CultureInfo.InvariantCulture) * (decimal)Factor)
                 : number * Factor;
+        }
     }
 
     private static readonly (string Symbol, Conversion Conversion)[] Table =

@@ -1,0 +1,62 @@
+using PhaseSlope.Core.Equilibrium;
+using PhaseSlope.Core.Errors;
+using PhaseSlope.Core.Models;
+
+namespace PhaseSlope.Core.Fluids;
+
+/// <summary>Consistency checks of a fluid's data against a model, beyond the validation done
+/// when the file is read.</summary>
+/// <param name="Fluid">The fluid checked.</param>
+/// <param name="Model">The model used.</param>
+/// <param name="PredictedBoilingPoint">The model's saturation temperature at 101325 Pa, K, or null
+/// when it has none in the valid range (e.g. carbon dioxide).</param>
+/// <param name="BoilingPointDeviation">(predicted − tabulated)/tabulated, or null.</param>
+/// <param name="SolvesToCriticalPoint">Whether coexistence converges at the lowest valid
+/// temperature, at 0.7·Tc and at Tc·(1 − 1e-8).</param>
+/// <param name="Failure">Why it does not solve, or null.</param>
+public sealed record FluidCheck(Fluid Fluid, CubicModelKind Model, double? PredictedBoilingPoint, double? BoilingPointDeviation, bool SolvesToCriticalPoint, string? Failure)
+{
+    /// <summary>Largest |ΔTb/Tb| counted as consistent: Peng–Robinson and Soave–Redlich–Kwong with
+    /// a correct ω reproduce the normal boiling point of normal fluids to a few tenths of a percent
+    /// (the acentric factor is defined from the vapour pressure at T/Tc = 0.7), and of polar,
+    /// associating fluids such as water to about 0.5 %; a larger miss points to a data error
+    /// (see docs/validation.md for the measured deviations).</summary>
+    public const double BoilingPointTolerance = 0.01;
+
+    /// <summary>True when the tabulated boiling point, if any, agrees within the tolerance.</summary>
+    public bool BoilingPointConsistent => BoilingPointDeviation is not double d || Math.Abs(d) <= BoilingPointTolerance;
+
+    /// <summary>Runs the checks.</summary>
+    public static FluidCheck Run(Fluid fluid, CubicModelKind kind = CubicModelKind.PengRobinson)
+    {
+        ArgumentNullException.ThrowIfNull(fluid);
+        var solver = CoexistenceSolver.For(fluid, kind);
+        double tc = solver.Model.CriticalTemperature;
+        string? failure = null;
+        foreach (double t in new[] { solver.MinimumTemperature, Math.Max(0.7 * tc, solver.MinimumTemperature), tc * (1 - 1e-8) })
+        {
+            if (!solver.TryAtTemperature(t, out _))
+            {
+                failure = $"coexistence does not converge at {Preconditions.Format(t)} K";
+                break;
+            }
+        }
+
+        double? predicted = null;
+        double? deviation = null;
+        if (fluid.NormalBoilingPoint is { } tb)
+        {
+            try
+            {
+                predicted = solver.AtPressure(Constants.StandardAtmosphere).Temperature;
+                deviation = (predicted - tb.Value) / tb.Value;
+            }
+            catch (InvalidInputException)
+            {
+                // 1 atm lies outside the model's coexistence range for this fluid: nothing to compare.
+            }
+        }
+
+        return new FluidCheck(fluid, kind, predicted, deviation, failure is null, failure);
+    }
+}

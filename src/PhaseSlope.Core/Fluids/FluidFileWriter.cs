@@ -1,0 +1,102 @@
+using System.Globalization;
+using System.Text;
+
+namespace PhaseSlope.Core.Fluids;
+
+/// <summary>Writes a <see cref="Fluid"/> as the text of a <c>.fluid</c> file (the inverse of
+/// <see cref="FluidFile.Parse"/>; no file I/O here, the caller stores the text).</summary>
+public static class FluidFileWriter
+{
+    /// <summary>The file text, SI units, round-trip numbers, every value with its source.</summary>
+    public static string Format(Fluid fluid, string? comment = null)
+    {
+        ArgumentNullException.ThrowIfNull(fluid);
+        var text = new StringBuilder();
+        text.Append("# PhaseSlope fluid file; the format is described in docs/fluid-files.md.\n");
+        if (comment is not null)
+        {
+            foreach (string line in comment.Split('\n'))
+            {
+                text.Append("# ").Append(line.TrimEnd()).Append('\n');
+            }
+        }
+
+        Line(text, "format", $"{FluidFile.FormatTag} {FluidFile.FormatVersion}");
+        Line(text, "name", fluid.Name);
+        if (fluid.Synonyms.Count > 0)
+        {
+            Line(text, "synonyms", string.Join("; ", fluid.Synonyms));
+        }
+
+        Optional(text, "formula", fluid.Formula);
+        Optional(text, "cas", fluid.CasNumber);
+        Optional(text, "family", fluid.Family);
+        text.Append('\n');
+        Quantity(text, "molar_mass", fluid.MolarMass, "kg/mol");
+        Quantity(text, "critical_temperature", fluid.CriticalTemperature, "K");
+        Quantity(text, "critical_pressure", fluid.CriticalPressure, "Pa");
+        Quantity(text, "acentric_factor", fluid.AcentricFactor, null);
+        if (fluid.CriticalDensity is { } rho)
+        {
+            Quantity(text, "critical_density", rho, "mol/m3");
+        }
+
+        if (fluid.NormalBoilingPoint is { } tb)
+        {
+            Quantity(text, "normal_boiling_point", tb, "K");
+        }
+
+        if (fluid.TriplePointTemperature is { } tt)
+        {
+            Quantity(text, "triple_point_temperature", tt, "K");
+        }
+
+        if (fluid.IdealGasHeatCapacity is { } cp)
+        {
+            var value = new StringBuilder();
+            if (cp.PowerTerms.Count > 0)
+            {
+                value.Append("power");
+                foreach (var (c, t) in cp.PowerTerms)
+                {
+                    value.Append(' ').Append(Number(c)).Append('^').Append(Number(t));
+                }
+            }
+
+            if (cp.EinsteinTerms.Count > 0)
+            {
+                value.Append(value.Length > 0 ? "  " : "").Append("einstein");
+                foreach (var (v, u) in cp.EinsteinTerms)
+                {
+                    value.Append(' ').Append(Number(v)).Append('@').Append(Number(u / cp.ReducingTemperature));
+                }
+            }
+
+            string reduce = cp.ReducingTemperature == 1 ? "" : $"reduce {Number(cp.ReducingTemperature)} K  ";
+            Line(text, "ideal_gas_cp", $"{reduce}{value}  range {Number(cp.MinimumTemperature)}-{Number(cp.MaximumTemperature)} K | {cp.Source}");
+        }
+
+        Optional(text, "remarks", fluid.Remarks);
+        return text.ToString();
+    }
+
+    private static void Quantity(StringBuilder text, string key, SourcedValue value, string? unit)
+    {
+        string u = unit is null ? "" : $" {unit}";
+        string sigma = value.StandardUncertainty is double s ? $" ± {Number(s)}" : "";
+        Line(text, key, $"{Number(value.Value)}{u}{sigma} | {value.Source}");
+    }
+
+    private static void Optional(StringBuilder text, string key, string? value)
+    {
+        if (!string.IsNullOrWhiteSpace(value))
+        {
+            Line(text, key, value);
+        }
+    }
+
+    private static void Line(StringBuilder text, string key, string value)
+        => text.Append(key.PadRight(26)).Append(value).Append('\n');
+
+    private static string Number(double value) => value.ToString("R", CultureInfo.InvariantCulture);
+}
