@@ -35,7 +35,8 @@ internal static class FluidResolver
         return FluidCatalog.Embedded.Find(argument);
     }
 
-    private static Fluid ReadFile(string path)
+    /// <summary>Reads a fluid file; errors name the file (and line and field for content errors).</summary>
+    public static Fluid ReadFile(string path)
     {
         try
         {

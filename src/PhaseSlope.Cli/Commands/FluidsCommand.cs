@@ -1,5 +1,6 @@
 using System.CommandLine;
 using PhaseSlope.Cli.Output;
+using PhaseSlope.Cli.Units;
 using PhaseSlope.Core.Fluids;
 
 namespace PhaseSlope.Cli.Commands;
@@ -10,16 +11,32 @@ internal static class FluidsCommand
     /// <summary>Builds the command group; actions write to <paramref name="io"/>.</summary>
     public static Command Create(CliIo io)
     {
-        var group = new Command("fluids", "The fluid catalog: list it, or show one fluid with every source");
+        var group = new Command("fluids", "The fluid catalog: list, show, check a fluid file, or estimate a new fluid");
 
         var listCommon = new CommonOptions();
+        var family = new Option<string>("--family") { Description = "Only fluids of this family (e.g. alkane, alcohol, hydrofluorocarbon)" };
+        var fragment = new Option<string>("--name") { Description = "Only fluids whose name or a synonym contains this text (case-insensitive)" };
         var list = new Command("list", "List the catalog fluids with their critical constants");
+        list.Options.Add(family);
+        list.Options.Add(fragment);
         listCommon.AddTo(list, withEos: false);
         list.SetAction(parse => io.Guard(() =>
         {
             var format = listCommon.OutputFormat(parse);
             var units = listCommon.UnitSystem(parse);
-            io.Out.Write(FluidWriter.Render(FluidCatalog.Embedded.All, single: false, format, units));
+            string? familyText = parse.GetValue(family);
+            string? nameText = parse.GetValue(fragment);
+            var fluids = FluidCatalog.Embedded.All
+                .Where(f => familyText is null || string.Equals(f.Family, familyText.Trim(), StringComparison.OrdinalIgnoreCase))
+                .Where(f => nameText is null || f.Synonyms.Prepend(f.Name).Any(n => FluidNames.Normalise(n).Contains(FluidNames.Normalise(nameText), StringComparison.Ordinal)))
+                .ToArray();
+            if (fluids.Length == 0)
+            {
+                string families = string.Join(", ", FluidCatalog.Embedded.All.Select(f => f.Family).OfType<string>().Distinct(StringComparer.OrdinalIgnoreCase).Order(StringComparer.Ordinal));
+                throw new UsageException($"fluids list: no catalog fluid matches{(familyText is null ? "" : $" family '{familyText}'")}{(nameText is null ? "" : $" name '{nameText}'")} (families: {families})");
+            }
+
+            io.Out.Write(FluidWriter.Render(fluids, single: false, format, units));
         }));
 
         var showCommon = new CommonOptions();
@@ -37,6 +54,8 @@ internal static class FluidsCommand
 
         group.Subcommands.Add(list);
         group.Subcommands.Add(show);
+        group.Subcommands.Add(FluidsCheckCommand.Create(io));
+        group.Subcommands.Add(FluidsEstimateCommand.Create(io));
         return group;
     }
 }

@@ -171,7 +171,7 @@ internal static class FluidWriter
             table.Add([fluid.Name, fluid.Formula ?? "", fluid.Family ?? "", .. shown.Select(f => Display(f, f.Get(fluid)!.Value, units, fluid.MolarMass.Value))]);
         }
 
-        return $"{fluids.Count} fluids{Environment.NewLine}{Environment.NewLine}{table.Render()}";
+        return $"{fluids.Count} {(fluids.Count == 1 ? "fluid" : "fluids")}{Environment.NewLine}{Environment.NewLine}{table.Render()}";
     }
 
     private static string Abbreviation(Field field) => field.Key switch

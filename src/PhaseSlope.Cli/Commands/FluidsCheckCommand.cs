@@ -1,0 +1,109 @@
+using System.CommandLine;
+using System.Text;
+using System.Text.Json;
+using PhaseSlope.Cli.Output;
+using PhaseSlope.Core.Fluids;
+using PhaseSlope.Core.Models;
+
+namespace PhaseSlope.Cli.Commands;
+
+/// <summary><c>phaseslope fluids check FILE</c>: validate a fluid file and check its data against a
+/// model, without using it for anything else.</summary>
+internal static class FluidsCheckCommand
+{
+    /// <summary>Builds the command; its action writes to <paramref name="io"/>.</summary>
+    public static Command Create(CliIo io)
+    {
+        var file = new Argument<string>("FILE") { Description = "Path of the .fluid file to check" };
+        var common = new CommonOptions();
+        var command = new Command("check", "Validate a fluid file (line, field and value checks) and test its data against a model");
+        command.Arguments.Add(file);
+        common.AddTo(command, withEos: true);
+        command.SetAction(parse => io.Guard(() =>
+        {
+            var format = common.OutputFormat(parse);
+            var kind = common.ModelKind(parse);
+            string path = parse.GetValue(file)!;
+            var fluid = FluidResolver.ReadFile(path);
+            var check = FluidCheck.Run(fluid, kind);
+            io.Out.Write(format == OutputFormat.Json ? Json(path, check) : Table(path, check));
+        }));
+        return command;
+    }
+
+    private static string Table(string path, FluidCheck check)
+    {
+        var fluid = check.Fluid;
+        var table = new TextTable(["check", "result"], [false, false]);
+        table.Add("file", $"valid: {fluid.Name}, schema {FluidFile.FormatTag} {FluidFile.FormatVersion}");
+        table.Add("normal boiling point", BoilingPointText(check));
+        table.Add("coexistence", check.SolvesToCriticalPoint
+            ? $"converges from the lowest valid temperature to Tc (1 - 1e-8) with {check.Model.Id()}"
+            : $"FAILS: {check.Failure}");
+        table.Add("ideal-gas heat capacity", fluid.IdealGasHeatCapacity is { } cp
+            ? $"present, {NumberText.Table(cp.MinimumTemperature)}-{NumberText.Table(cp.MaximumTemperature)} K; cp0(298.15 K) = {NumberText.Table(cp.HeatCapacity(298.15))} J/(mol K)"
+            : "absent: state and derive need it; coexist and curve work without it");
+        var text = new StringBuilder();
+        text.AppendLine(path);
+        text.AppendLine();
+        text.Append(table.Render());
+        return text.ToString();
+    }
+
+    private static string BoilingPointText(FluidCheck check)
+    {
+        if (check.Fluid.NormalBoilingPoint is not { } tb)
+        {
+            return "not given";
+        }
+
+        if (check.PredictedBoilingPoint is not double predicted)
+        {
+            return $"file {NumberText.Table(tb.Value)} K; the model has no saturation state at 101325 Pa in the valid range";
+        }
+
+        string verdict = check.BoilingPointConsistent
+            ? "consistent"
+            : $"WARNING: more than {NumberText.Table(FluidCheck.BoilingPointTolerance * 100)} % apart; check Tc, Pc, omega and Tb";
+        return $"file {NumberText.Table(tb.Value)} K, model {NumberText.Table(predicted)} K ({NumberText.Table(check.BoilingPointDeviation!.Value * 100)} %): {verdict}";
+    }
+
+    private static string Json(string path, FluidCheck check)
+    {
+        using var stream = new MemoryStream();
+        using (var json = new Utf8JsonWriter(stream, JsonText.Options))
+        {
+            json.WriteStartObject();
+            json.WriteString("file", path);
+            json.WriteString("name", check.Fluid.Name);
+            json.WriteBoolean("valid", true);
+            json.WriteString("eos", check.Model.Id());
+            if (check.Fluid.NormalBoilingPoint is { } tb)
+            {
+                json.WriteNumber("normal_boiling_point_K", tb.Value);
+            }
+            else
+            {
+                json.WriteNull("normal_boiling_point_K");
+            }
+
+            if (check.PredictedBoilingPoint is double p)
+            {
+                json.WriteNumber("predicted_normal_boiling_point_K", p);
+                json.WriteNumber("boiling_point_deviation", check.BoilingPointDeviation!.Value);
+            }
+            else
+            {
+                json.WriteNull("predicted_normal_boiling_point_K");
+                json.WriteNull("boiling_point_deviation");
+            }
+
+            json.WriteBoolean("boiling_point_consistent", check.BoilingPointConsistent);
+            json.WriteBoolean("solves_to_critical_point", check.SolvesToCriticalPoint);
+            json.WriteBoolean("has_ideal_gas_heat_capacity", check.Fluid.IdealGasHeatCapacity is not null);
+            json.WriteEndObject();
+        }
+
+        return Encoding.UTF8.GetString(stream.ToArray()) + Environment.NewLine;
+    }
+}
