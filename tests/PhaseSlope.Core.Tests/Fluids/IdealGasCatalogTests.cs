@@ -18,8 +18,12 @@ public class IdealGasCatalogTests
     //   the rest allows for recalled rather than looked-up reference values.
     // * 1 % where the catalog carries a handbook polynomial (fits of a few tenths of a percent),
     //   or where the reference value is itself recalled only to 0.1 J/(mol·K).
+    // * 5 % where the catalog carries a Joback group-contribution estimate: errors of a few
+    //   percent are typical for the method (common practice; Poling et al. 5th ed. ch. 3 quote
+    //   errors of this size; from memory), and the three xylenes share one estimate.
     private const double ReferenceEquationTolerance = 0.003;
     private const double PolynomialTolerance = 0.01;
+    private const double GroupContributionTolerance = 0.05;
 
     public static TheoryData<string, double, double, string> StandardHeatCapacities => new()
     {
@@ -38,7 +42,30 @@ public class IdealGasCatalogTests
         { "toluene", 103.7, PolynomialTolerance, Crc },
         { "methanol", 44.1, PolynomialTolerance, Crc },
         { "ethanol", 65.6, PolynomialTolerance, Crc },
+        { "isobutane", 96.65, PolynomialTolerance, Crc },
+        { "isopentane", 118.9, PolynomialTolerance, Crc },
+        { "ethylene", 42.886, PolynomialTolerance, Janaf },
+        { "cyclohexane", 106.3, PolynomialTolerance, Crc },
+        { "n-hexane", 143.1, PolynomialTolerance, Crc },
+        { "n-heptane", 165.2, PolynomialTolerance, Crc },
+        { "n-octane", 188.9, PolynomialTolerance, Crc },
+        { "propylene", 64.3, PolynomialTolerance, Crc },
+        { "neopentane", 121.6, GroupContributionTolerance, Crc },
+        { "n-nonane", 211.7, GroupContributionTolerance, Crc },
+        { "n-decane", 233.1, GroupContributionTolerance, Crc },
+        { "isohexane", 144.2, GroupContributionTolerance, Crc },
+        { "cyclopentane", 82.9, GroupContributionTolerance, Crc },
+        { "1-butene", 85.6, GroupContributionTolerance, Crc },
+        { "isobutene", 89.1, GroupContributionTolerance, Crc },
+        { "o-xylene", 133.3, GroupContributionTolerance, Crc },
+        { "m-xylene", 127.6, GroupContributionTolerance, Crc },
+        { "p-xylene", 126.9, GroupContributionTolerance, Crc },
+        { "ethylbenzene", 128.4, GroupContributionTolerance, Crc },
     };
+
+    /// <summary>Fluids for which no cp° table value is recalled; each is checked in another way
+    /// (R-134a: its power coefficients follow from the published Helmholtz constants).</summary>
+    private static readonly string[] WithoutRecalledReference = ["r-134a"];
 
     [Theory]
     [MemberData(nameof(StandardHeatCapacities))]
@@ -81,7 +108,7 @@ public class IdealGasCatalogTests
 
         string[] untested = [.. FluidCatalog.Embedded.All.Select(f => f.Name).Where(n => !tested.Contains(n))];
 
-        Assert.Equal(new[] { "r-134a" }, untested);
+        Assert.Equal(WithoutRecalledReference, untested);
     }
 
     [Fact]
