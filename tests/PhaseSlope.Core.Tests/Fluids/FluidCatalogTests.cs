@@ -251,7 +251,7 @@ public class FluidCatalogTests
     [Fact]
     public void Find_MisspeltSynonym_SuggestsCanonicalName()
     {
-        var ex = Assert.Throws<UnknownFluidException>(() => FluidCatalog.Embedded.Find("R-143a"));
+        var ex = Assert.Throws<UnknownFluidException>(() => FluidCatalog.Embedded.Find("R-134b"));
 
         Assert.Contains("r-134a", ex.NearMatches);
     }
