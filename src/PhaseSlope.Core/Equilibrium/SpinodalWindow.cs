@@ -64,9 +64,52 @@ internal readonly record struct SpinodalWindow(
             return false;
         }
 
+        // MathNet's Brent also stops once |f| falls below its accuracy argument, which near Tc
+        // (where (∂P/∂ρ)_T is tiny everywhere in the window) can leave the spinodals far from the
+        // zero relative to the window's width. Newton steps with the exact (∂²P/∂ρ²)_T finish them
+        // to rounding, staying inside their brackets; the inflection gets secant steps.
+        vapour = PolishZero(model, temperature, vapour, rhoMax * 1e-12, inflection);
+        liquid = PolishZero(model, temperature, liquid, inflection, upper);
+        inflection = PolishInflection(model, temperature, inflection, vapour, liquid);
         window = new SpinodalWindow(inflection, vapour, liquid,
             model.Pressure(temperature, vapour), model.Pressure(temperature, liquid));
         return vapour < inflection && inflection < liquid;
+    }
+
+    private static double PolishZero(CubicModel model, double temperature, double rho, double lo, double hi)
+    {
+        for (int i = 0; i < 4; i++)
+        {
+            var d = model.Residual(temperature, rho);
+            double next = rho - d.PressureDRho / d.PressureDRhoRho;
+            if (!(next > lo && next < hi) || next == rho)
+            {
+                break;
+            }
+
+            rho = next;
+        }
+
+        return rho;
+    }
+
+    private static double PolishInflection(CubicModel model, double temperature, double rho, double lo, double hi)
+    {
+        double h = 1e-7 * rho;
+        for (int i = 0; i < 4; i++)
+        {
+            double f = model.Residual(temperature, rho).PressureDRhoRho;
+            double df = (model.Residual(temperature, rho + h).PressureDRhoRho - model.Residual(temperature, rho - h).PressureDRhoRho) / (2 * h);
+            double next = rho - f / df;
+            if (!(next > lo && next < hi) || !double.IsFinite(next) || next == rho)
+            {
+                break;
+            }
+
+            rho = next;
+        }
+
+        return rho;
     }
 
     /// <summary>The vapour root of P(T, ρ) = <paramref name="pressure"/>, for a pressure at or

@@ -68,6 +68,16 @@ public class IdealGasCatalogTests
         { "r-32", 42.9, PolynomialTolerance, Janaf },
         { "r-23", 51.0, GroupContributionTolerance, Janaf },
         { "r-22", 55.9, GroupContributionTolerance, Janaf },
+        { "oxygen", 29.376, PolynomialTolerance, Janaf },
+        { "carbon monoxide", 29.142, PolynomialTolerance, Janaf },
+        { "chlorine", 33.949, PolynomialTolerance, Janaf },
+        { "hydrogen", 28.836, ReferenceEquationTolerance, Janaf },
+        { "neon", 20.786, 1e-4, Janaf },
+        { "krypton", 20.786, 1e-4, Janaf },
+        { "xenon", 20.786, 1e-4, Janaf },
+        { "helium", 20.786, 1e-4, Janaf },
+        { "sulfur dioxide", 39.9, PolynomialTolerance, Crc },
+        { "hydrogen sulfide", 34.2, PolynomialTolerance, Crc },
     };
 
     /// <summary>Fitted correlations for which no trustworthy cp° table value is recalled (R-134a is
