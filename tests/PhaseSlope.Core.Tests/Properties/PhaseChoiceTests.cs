@@ -123,4 +123,19 @@ public class PhaseChoiceTests
         Assert.Throws<InvalidInputException>(() => engine.AtDensity(300, 1 / model.TranslatedCovolume));
         Assert.True(engine.AtDensity(300, 0.99 / model.TranslatedCovolume).Pressure > 0);
     }
+
+    [Theory]
+    [InlineData(11000.0, "a liquid under tension")]
+    [InlineData(7000.0, "inside the spinodal loop")]
+    public void AtDensity_NonPositivePressure_ThrowsSayingWhy(double density, string reason)
+    {
+        // Propane PR at 300 K: at 11000 mol/m³ the liquid is stretched to P ≈ −2.5 MPa but its
+        // isotherm still rises ((∂P/∂ρ)_T > 0); at 7000 mol/m³ the isotherm falls (inside the loop).
+        var engine = TestSupport.Engines.For("propane", CubicModelKind.PengRobinson);
+
+        var ex = Assert.Throws<InvalidInputException>(() => engine.AtDensity(300, density));
+
+        Assert.Contains("non-positive pressure", ex.Message, StringComparison.Ordinal);
+        Assert.Contains(reason, ex.Message, StringComparison.Ordinal);
+    }
 }
