@@ -34,7 +34,13 @@ public static class PartialDerivatives
         var z = state.Partials(hold);
         double numerator = x.DT * z.DV - x.DV * z.DT;
         double denominator = y.DT * z.DV - y.DV * z.DT;
-        double scale = Math.Abs(y.DT * z.DV) + Math.Abs(y.DV * z.DT);
+        // The rounding error of a partial is set by the size of the terms it is computed from, not
+        // by its value: at the critical point P_V is a cancellation of terms of order RT/V² and
+        // comes out as rounding noise, which the products of the partials alone cannot reveal.
+        // Each partial is therefore padded by its natural magnitude before forming the scale.
+        var ry = NaturalMagnitude(state, by);
+        var rz = NaturalMagnitude(state, hold);
+        double scale = (Math.Abs(y.DT) + ry.DT) * (Math.Abs(z.DV) + rz.DV) + (Math.Abs(y.DV) + ry.DV) * (Math.Abs(z.DT) + rz.DT);
         if (!(Math.Abs(denominator) > SingularJacobian * scale))
         {
             throw new InvalidInputException("by", double.NaN,
@@ -42,6 +48,22 @@ public static class PartialDerivatives
         }
 
         return numerator / denominator;
+    }
+
+    /// <summary>Natural magnitudes of (∂X/∂T)_V and (∂X/∂V)_T, the sizes of the terms each partial
+    /// is computed from: P ~ RT/V, energies ~ RT, S ~ R; 0 for T and V, whose partials are exact.</summary>
+    private static (double DT, double DV) NaturalMagnitude(ThermodynamicState state, StateVariable variable)
+    {
+        const double r = Constants.GasConstant;
+        double t = state.Temperature;
+        double v = state.MolarVolume;
+        return variable switch
+        {
+            StateVariable.T or StateVariable.V => (0, 0),
+            StateVariable.P => (r / v, r * t / (v * v)),
+            StateVariable.S => (r / t, r / v),
+            _ => (r, r * t / v),
+        };
     }
 
     /// <summary>The SI unit of (∂X/∂Y)_Z on a molar basis, simplified: "Pa/K", "Pa" for

@@ -69,11 +69,15 @@ public sealed class PropertyModel
                 $"density {Preconditions.Format(density)} mol/m3 is at or above the model's limit 1/b = {Preconditions.Format(Model.MaximumDensity)} mol/m3");
         }
 
-        double pressure = Model.Pressure(temperature, density);
+        var residual = Model.Residual(temperature, density);
+        double pressure = residual.Pressure;
         if (!(pressure > 0))
         {
+            // A liquid under tension can be mechanically stable ((∂P/∂ρ)_T > 0); only where the
+            // isotherm falls is the state inside the spinodal loop.
+            string where = residual.PressureDRho > 0 ? "a liquid under tension, where ln Z is undefined" : "inside the spinodal loop";
             throw new InvalidInputException("density", density,
-                $"the model gives a non-positive pressure ({Preconditions.Format(pressure)} Pa) at {Preconditions.Format(temperature)} K and {Preconditions.Format(density)} mol/m3 (inside the spinodal loop)");
+                $"the model gives a non-positive pressure ({Preconditions.Format(pressure)} Pa) at {Preconditions.Format(temperature)} K and {Preconditions.Format(density)} mol/m3 ({where})");
         }
 
         PhaseLabel label = temperature >= Model.CriticalTemperature ? PhaseLabel.Supercritical

@@ -9,7 +9,7 @@ namespace PhaseSlope.Core.Properties;
 /// cp = cv + T·P_T²/(ρ²·P_ρ); w² = (P_ρ + T·P_T²/(ρ²·cv))/M; α = P_T/(ρ·P_ρ);
 /// κT = 1/(ρ·P_ρ); κS = κT·cv/cp; μJT = (T·α − 1)/(ρ·cp); (∂U/∂V)_T = T·P_T − P.
 /// Quantities that diverge where P_ρ → 0 (critical point, spinodal) are null there and for
-/// mechanically unstable states (P_ρ ≤ 0); the others are always finite.
+/// mechanically unstable states (P_ρ ≤ 0, or zero to rounding: see <see cref="MechanicallyStable"/>); the others are always finite.
 /// </remarks>
 public sealed record ThermodynamicState
 {
@@ -82,10 +82,12 @@ public sealed record ThermodynamicState
     /// <summary>Internal pressure (∂U/∂V)_T = T·(∂P/∂T)_V − P, Pa.</summary>
     public double InternalPressure => Temperature * PressureTemperatureDerivative - Pressure;
 
-    /// <summary>True when (∂P/∂ρ)_T &gt; 0.</summary>
-    public bool MechanicallyStable => PressureDensityDerivative > 0;
+    /// <summary>True when (∂P/∂ρ)_T &gt; 0 by more than rounding: (∂P/∂ρ)_T is a difference of
+    /// terms of order RT, so a value below 1e-13·RT (as at the model's critical point, where it
+    /// comes out as ±1e-12 J/mol of noise) counts as zero.</summary>
+    public bool MechanicallyStable => PressureDensityDerivative > 1e-13 * Constants.GasConstant * Temperature;
 
-    /// <summary>Isobaric molar heat capacity, J/(mol·K); null where (∂P/∂ρ)_T ≤ 0.</summary>
+    /// <summary>Isobaric molar heat capacity, J/(mol·K); null where the state is not <see cref="MechanicallyStable"/>.</summary>
     public double? IsobaricHeatCapacity => MechanicallyStable
         ? IsochoricHeatCapacity + Temperature * PressureTemperatureDerivative * PressureTemperatureDerivative / (Density * Density * PressureDensityDerivative)
         : null;
@@ -101,16 +103,16 @@ public sealed record ThermodynamicState
         }
     }
 
-    /// <summary>Isobaric expansivity α = (1/V)(∂V/∂T)_P, 1/K; null where (∂P/∂ρ)_T ≤ 0.</summary>
+    /// <summary>Isobaric expansivity α = (1/V)(∂V/∂T)_P, 1/K; null where the state is not <see cref="MechanicallyStable"/>.</summary>
     public double? IsobaricExpansivity => MechanicallyStable ? PressureTemperatureDerivative / (Density * PressureDensityDerivative) : null;
 
-    /// <summary>Isothermal compressibility κT = −(1/V)(∂V/∂P)_T, 1/Pa; null where (∂P/∂ρ)_T ≤ 0.</summary>
+    /// <summary>Isothermal compressibility κT = −(1/V)(∂V/∂P)_T, 1/Pa; null where the state is not <see cref="MechanicallyStable"/>.</summary>
     public double? IsothermalCompressibility => MechanicallyStable ? 1 / (Density * PressureDensityDerivative) : null;
 
-    /// <summary>Isentropic compressibility κS = κT·cv/cp, 1/Pa; null where (∂P/∂ρ)_T ≤ 0.</summary>
+    /// <summary>Isentropic compressibility κS = κT·cv/cp, 1/Pa; null where the state is not <see cref="MechanicallyStable"/>.</summary>
     public double? IsentropicCompressibility => IsothermalCompressibility * IsochoricHeatCapacity / IsobaricHeatCapacity;
 
-    /// <summary>Joule–Thomson coefficient (∂T/∂P)_H = (T·α − 1)/(ρ·cp), K/Pa; null where (∂P/∂ρ)_T ≤ 0.</summary>
+    /// <summary>Joule–Thomson coefficient (∂T/∂P)_H = (T·α − 1)/(ρ·cp), K/Pa; null where the state is not <see cref="MechanicallyStable"/>.</summary>
     public double? JouleThomsonCoefficient => (Temperature * IsobaricExpansivity - 1) / (Density * IsobaricHeatCapacity);
 
     /// <summary>The partial derivatives (∂X/∂T)_V and (∂X/∂V)_T of a state function, the

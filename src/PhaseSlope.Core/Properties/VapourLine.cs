@@ -49,7 +49,11 @@ public sealed record VapourLine(VapourLineClass Class, double ReducedSlope, doub
             double b = grid[i + 1].Temperature;
             if (Slope(a) > 0 && Slope(b) <= 0)
             {
-                turn = Brent.FindRoot(Slope, a, b, 1e-9 * tc, 100);
+                // MathNet's Brent stops when either the bracket or |f| is below the accuracy, so
+                // the root is sought for the dimensionless ξ(τ), τ = T/Tc, where one accuracy
+                // serves both (in T and ds/dT it stopped at |ds/dT| ~ 1e-9·Tc J/(mol·K²), some
+                // 1e-5 K from the root).
+                turn = tc * Brent.FindRoot(tau => tc / Constants.GasConstant * Slope(tau * tc), a / tc, b / tc, 1e-10, 100);
                 break;
             }
         }

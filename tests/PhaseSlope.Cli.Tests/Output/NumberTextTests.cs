@@ -22,6 +22,14 @@ public class NumberTextTests
         { ["fluids", "list", "--format", "csv"] },
         { ["fluids", "show", "r-134a"] },
         { ["fluids", "show", "r-134a", "--format", "json"] },
+        { ["state", "propane", "-T", "300.5", "-P", "1.5 MPa", "--format", "json"] },
+        { ["state", "propane", "-T", "300.5", "-P", "1.5 MPa", "--format", "csv"] },
+        { ["state", "propane", "-T", "300.5", "-P", "1.5 MPa"] },
+        { ["state", "water", "-T", "26.85 degC", "-P", "1 atm", "--units", "engineering", "--reference", "nbp"] },
+        { ["state", "propane", "-T", "300.5", "--density", "515.5 kg/m3", "--format", "json", "--reference", "refrigeration"] },
+        { ["derive", "propane", "--of", "T", "--by", "P", "--hold", "H", "-T", "300.5", "-P", "0.5 bar", "--format", "json"] },
+        { ["derive", "propane", "--of", "T", "--by", "P", "--hold", "H", "-T", "300.5", "-P", "0.5 bar", "--format", "csv"] },
+        { ["derive", "propane", "--of", "T", "--by", "P", "--hold", "H", "-T", "300.5", "-P", "0.5 bar"] },
     };
 
     private static CliResult RunIn(string culture, string[] args)

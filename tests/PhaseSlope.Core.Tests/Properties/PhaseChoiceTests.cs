@@ -1,0 +1,141 @@
+using PhaseSlope.Core.Equilibrium;
+using PhaseSlope.Core.Errors;
+using PhaseSlope.Core.Models;
+using PhaseSlope.Core.Properties;
+
+namespace PhaseSlope.Core.Tests.Properties;
+
+/// <summary><see cref="PropertyModel.AtPressure"/> with a <see cref="PhaseChoice"/>, and the
+/// range checks of <see cref="PropertyModel.AtDensity"/>.</summary>
+public class PhaseChoiceTests
+{
+    public static TheoryData<string, CubicModelKind, double> Cases => new()
+    {
+        { "propane", CubicModelKind.PengRobinson, 0.9 },
+        { "water", CubicModelKind.SoaveRedlichKwong, 0.8 },
+        { "nitrogen", CubicModelKind.VanDerWaals, 0.95 },
+    };
+
+    private static (PropertyModel Engine, double T, CoexistencePoint Point, SpinodalWindow Window) Setup(string fluid, CubicModelKind kind, double reduced)
+    {
+        var engine = TestSupport.Engines.For(fluid, kind);
+        double t = reduced * engine.Model.CriticalTemperature;
+        Assert.True(SpinodalWindow.TryFind(engine.Model, t, out var window));
+        return (engine, t, engine.Solver.AtTemperature(t), window);
+    }
+
+    [Theory]
+    [MemberData(nameof(Cases))]
+    public void AtPressure_BetweenSpinodals_StableIsLowerGibbsRootAndOtherIsMetastable(string fluid, CubicModelKind kind, double reduced)
+    {
+        var (engine, t, point, window) = Setup(fluid, kind, reduced);
+        double psat = point.Pressure;
+        // Above Psat (up to the vapour spinodal) the liquid is stable, below it (down to the liquid
+        // spinodal, or to zero) the vapour: Gibbs energies cross at Psat, (∂g/∂P)_T = v.
+        double above = psat + 0.5 * (window.VapourPressure - psat);
+        double below = psat - 0.5 * (psat - Math.Max(window.LiquidPressure, 0));
+        foreach (var (p, stablePhase) in new[] { (above, PhaseLabel.Liquid), (below, PhaseLabel.Vapour) })
+        {
+            var stable = engine.AtPressure(t, p);
+            var liquid = engine.AtPressure(t, p, PhaseChoice.Liquid);
+            var vapour = engine.AtPressure(t, p, PhaseChoice.Vapour);
+            string at = $"{fluid} at {t:F2} K, {p:F0} Pa";
+
+            Assert.Equal(PhaseLabel.Liquid, liquid.Phase);
+            Assert.Equal(PhaseLabel.Vapour, vapour.Phase);
+            Assert.True(liquid.Density > vapour.Density, at);
+            Assert.Equal(stablePhase, stable.Phase);
+            Assert.False(stable.Metastable, at);
+            Assert.Equal(Math.Min(liquid.GibbsEnergy, vapour.GibbsEnergy), stable.GibbsEnergy);
+            var other = stablePhase == PhaseLabel.Liquid ? vapour : liquid;
+            var chosen = stablePhase == PhaseLabel.Liquid ? liquid : vapour;
+            Assert.True(other.Metastable, $"the {other.Phase} root at {at} is metastable");
+            Assert.False(chosen.Metastable, at);
+            Assert.True(other.GibbsEnergy > stable.GibbsEnergy, at);
+            Assert.True(other.MechanicallyStable, "a metastable root is still mechanically stable");
+        }
+    }
+
+    [Theory]
+    [MemberData(nameof(Cases))]
+    public void AtPressure_PhaseBeyondItsSpinodal_ThrowsInvalidInputException(string fluid, CubicModelKind kind, double reduced)
+    {
+        var (engine, t, _, window) = Setup(fluid, kind, reduced);
+
+        var ex = Assert.Throws<InvalidInputException>(() => engine.AtPressure(t, 1.05 * window.VapourPressure, PhaseChoice.Vapour));
+        Assert.Contains("beyond its spinodal", ex.Message, StringComparison.Ordinal);
+        Assert.Equal(PhaseLabel.Liquid, engine.AtPressure(t, 1.05 * window.VapourPressure).Phase);
+        if (window.LiquidPressure > 0)
+        {
+            Assert.Throws<InvalidInputException>(() => engine.AtPressure(t, 0.95 * window.LiquidPressure, PhaseChoice.Liquid));
+            Assert.Equal(PhaseLabel.Vapour, engine.AtPressure(t, 0.95 * window.LiquidPressure).Phase);
+        }
+    }
+
+    [Fact]
+    public void AtPressure_LiquidSpinodalAbovePressure_LiquidThrows()
+    {
+        // At 0.95 Tc the liquid spinodal pressure of a cubic is positive (its loop no longer dips
+        // below zero), so a positive pressure below it has no liquid root. Guard that the case
+        // is really exercised.
+        var (engine, t, _, window) = Setup("propane", CubicModelKind.PengRobinson, 0.95);
+        Assert.True(window.LiquidPressure > 0, $"liquid spinodal pressure {window.LiquidPressure} Pa");
+
+        Assert.Throws<InvalidInputException>(() => engine.AtPressure(t, 0.9 * window.LiquidPressure, PhaseChoice.Liquid));
+    }
+
+    [Theory]
+    [InlineData(PhaseChoice.Liquid)]
+    [InlineData(PhaseChoice.Vapour)]
+    public void AtPressure_AboveCriticalTemperatureWithPhaseChosen_Throws(PhaseChoice choice)
+    {
+        var engine = TestSupport.Engines.For("propane", CubicModelKind.PengRobinson);
+        double t = 1.1 * engine.Model.CriticalTemperature;
+
+        var ex = Assert.Throws<InvalidInputException>(() => engine.AtPressure(t, 5e6, choice));
+
+        Assert.Contains("one fluid phase", ex.Message, StringComparison.Ordinal);
+        Assert.Equal(PhaseLabel.Supercritical, engine.AtPressure(t, 5e6).Phase);
+    }
+
+    [Theory]
+    [InlineData(1.0)]
+    [InlineData(1.5)]
+    public void AtDensity_AtOrAboveInverseCovolume_Throws(double factor)
+    {
+        var engine = TestSupport.Engines.For("propane", CubicModelKind.PengRobinson);
+        double limit = engine.Model.MaximumDensity;
+
+        var ex = Assert.Throws<InvalidInputException>(() => engine.AtDensity(300, factor * limit));
+
+        Assert.Contains("1/b", ex.Message, StringComparison.Ordinal);
+        Assert.True(engine.AtDensity(300, 0.9 * limit).Pressure > 0, "just below 1/b the state exists (at very high pressure)");
+    }
+
+    [Fact]
+    public void AtDensity_VolumeShiftedModel_LimitIsOneOverTranslatedCovolume()
+    {
+        // With the Péneloux shift c the limit moves to 1/(b − c).
+        var engine = TestSupport.Engines.For("propane", CubicModelKind.PengRobinson, peneloux: true);
+        var model = engine.Model;
+        Assert.NotEqual(0, model.VolumeShift);
+
+        Assert.Throws<InvalidInputException>(() => engine.AtDensity(300, 1 / model.TranslatedCovolume));
+        Assert.True(engine.AtDensity(300, 0.99 / model.TranslatedCovolume).Pressure > 0);
+    }
+
+    [Theory]
+    [InlineData(11000.0, "a liquid under tension")]
+    [InlineData(7000.0, "inside the spinodal loop")]
+    public void AtDensity_NonPositivePressure_ThrowsSayingWhy(double density, string reason)
+    {
+        // Propane PR at 300 K: at 11000 mol/m³ the liquid is stretched to P ≈ −2.5 MPa but its
+        // isotherm still rises ((∂P/∂ρ)_T > 0); at 7000 mol/m³ the isotherm falls (inside the loop).
+        var engine = TestSupport.Engines.For("propane", CubicModelKind.PengRobinson);
+
+        var ex = Assert.Throws<InvalidInputException>(() => engine.AtDensity(300, density));
+
+        Assert.Contains("non-positive pressure", ex.Message, StringComparison.Ordinal);
+        Assert.Contains(reason, ex.Message, StringComparison.Ordinal);
+    }
+}
