@@ -7,16 +7,7 @@ namespace PhaseSlope.Core.Tests.Models;
 
 public class HelmholtzDerivativesTests
 {
-    /// <summary>Relative step of the central differences: near the optimum ε^(1/3) ≈ 6e-6 for a
-    /// first derivative by a two-point central difference.</summary>
-    private const double Step = 1e-5;
-
-    /// <summary>Error bound of the central difference, relative to |f|/x + |f'|. Truncation is
-    /// Step²·x²·|f'''|/6 relative to |f'|: x²f'''/f' is at most a few hundred at the dense
-    /// liquid states (terms in 1/(1 − bρ)^n with bρ ≈ 0.8), i.e. ≤ 1e-8; rounding is
-    /// ε/Step ≈ 2e-11. 1e-7 keeps a factor ~10 of margin and still catches any wrong term,
-    /// whose error would be O(1).</summary>
-    private const double Tolerance = 1e-7;
+    // Step, tolerance and the difference check: TestSupport.HelmholtzStates.
 
     public static TheoryData<CubicModelKind, string, string> States()
     {
@@ -38,29 +29,16 @@ public class HelmholtzDerivativesTests
         return data;
     }
 
-    /// <summary>Saturated liquid or vapour at T = 0.7·Tc (taken from the solver only to pick
-    /// realistic densities), or the critical density at 1.5·Tc.</summary>
     private static (CubicModel Model, double T, double Rho) State(CubicModelKind kind, string fluidName, string state)
     {
         Fluid fluid = FluidCatalog.Embedded.Find(fluidName);
-        var solver = CoexistenceSolver.For(fluid, kind);
-        var model = solver.Model;
-        double tc = model.CriticalTemperature;
-        return state switch
-        {
-            "liquid" => (model, 0.7 * tc, solver.AtTemperature(0.7 * tc).Liquid.Density),
-            "vapour" => (model, 0.7 * tc, solver.AtTemperature(0.7 * tc).Vapour.Density),
-            _ => (model, 1.5 * tc, model.CriticalDensity),
-        };
+        var model = CubicModel.For(kind, fluid);
+        var (t, rho) = HelmholtzStates.Pick(model, CoexistenceSolver.LowestValidTemperature(fluid), state);
+        return (model, t, rho);
     }
 
     private static void CheckCentralDifference(Func<double, double> f, double x, double analytic, string what)
-    {
-        double h = Step * x;
-        double fd = (f(x + h) - f(x - h)) / (2 * h);
-        double scale = Math.Abs(f(x)) / x + Math.Abs(analytic);
-        AssertClose.Absolute(analytic, fd, Tolerance * scale, what);
-    }
+        => HelmholtzStates.CheckCentralDifference(f, x, analytic, what);
 
     [Theory]
     [MemberData(nameof(States))]

@@ -10,13 +10,6 @@ public class VolumeTranslationTests
 {
     private const double R = Constants.GasConstant;
 
-    /// <summary>Relative step and tolerance of the central differences, as argued in
-    /// <see cref="HelmholtzDerivativesTests"/>: truncation ≤ 1e-8 at dense liquid states,
-    /// rounding ~2e-11, and a wrong term would be off by O(1).</summary>
-    private const double Step = 1e-5;
-
-    private const double Tolerance = 1e-7;
-
     /// <summary>Models with a shift: Péneloux c for SRK (positive) and PR (negative), a shift of
     /// a fifth of b for van der Waals (δ1 = δ2, the other branch of G), each for propane.</summary>
     public static TheoryData<CubicModelKind, string> Cases()
@@ -48,23 +41,12 @@ public class VolumeTranslationTests
     private static (CubicModel Model, double T, double Rho) State(CubicModelKind kind, string state)
     {
         var model = Shifted(kind);
-        double tc = model.CriticalTemperature;
-        var solver = new CoexistenceSolver(model, CoexistenceSolver.LowestValidTemperature(Propane));
-        return state switch
-        {
-            "liquid" => (model, 0.7 * tc, solver.AtTemperature(0.7 * tc).Liquid.Density),
-            "vapour" => (model, 0.7 * tc, solver.AtTemperature(0.7 * tc).Vapour.Density),
-            _ => (model, 1.5 * tc, model.CriticalDensity),
-        };
+        var (t, rho) = HelmholtzStates.Pick(model, CoexistenceSolver.LowestValidTemperature(Propane), state);
+        return (model, t, rho);
     }
 
     private static void CheckCentralDifference(Func<double, double> f, double x, double analytic, string what)
-    {
-        double h = Step * x;
-        double fd = (f(x + h) - f(x - h)) / (2 * h);
-        double scale = Math.Abs(f(x)) / x + Math.Abs(analytic);
-        AssertClose.Absolute(analytic, fd, Tolerance * scale, what);
-    }
+        => HelmholtzStates.CheckCentralDifference(f, x, analytic, what);
 
     [Theory]
     [MemberData(nameof(Cases))]
