@@ -1,0 +1,190 @@
+using MathNet.Numerics.LinearAlgebra;
+using MathNet.Numerics.Optimization;
+using PhaseSlope.Core.Errors;
+
+namespace PhaseSlope.Core.Correlations;
+
+/// <summary>Weighted nonlinear least squares of vapour-pressure forms in ln P (Levenberg–Marquardt
+/// from MathNet.Numerics), started from each form's linearised fit, and selection among forms by
+/// the corrected Akaike information criterion.</summary>
+public static class VapourPressureFitter
+{
+    /// <summary>Fits a form to data.</summary>
+    /// <exception cref="InvalidInputException">Too few points for the form (it needs at least one
+    /// more point than parameters), a duplicate temperature, or a point at or above the form's
+    /// upper limit (Tc for the Wagner and corresponding-states forms).</exception>
+    public static VapourPressureFit Fit(VapourPressureForm form, IReadOnlyList<VapourPressurePoint> data)
+    {
+        ArgumentNullException.ThrowIfNull(form);
+        ArgumentNullException.ThrowIfNull(data);
+        var points = data.OrderBy(d => d.Temperature).ToArray();
+        int n = points.Length;
+        int p = form.ParameterCount;
+        if (n < Math.Max(p + 1, 1))
+        {
+            throw new InvalidInputException("data", n,
+                $"the {form.Id} form has {p} parameters and needs at least {p + 1} points, got {n}");
+        }
+
+        foreach (var point in points)
+        {
+            Preconditions.Positive(point.Temperature, "temperature");
+            Preconditions.Positive(point.Pressure, "pressure");
+            if (!(point.Temperature < form.UpperLimit))
+            {
+                throw new InvalidInputException("temperature", point.Temperature,
+                    $"the point at {Preconditions.Format(point.Temperature)} K is at or above the {form.Id} form's limit {Preconditions.Format(form.UpperLimit)} K (the critical temperature)");
+            }
+        }
+
+        for (int i = 1; i < n; i++)
+        {
+            if (points[i].Temperature == points[i - 1].Temperature)
+            {
+                throw new InvalidInputException("temperature", points[i].Temperature,
+                    $"two points share the temperature {Preconditions.Format(points[i].Temperature)} K");
+            }
+        }
+
+        bool absolute = points.All(d => d.StandardUncertainty is not null);
+        double[] t = [.. points.Select(d => d.Temperature)];
+        double[] lnP = [.. points.Select(d => Math.Log(d.Pressure))];
+        // u(ln P) = u(P)/P to first order.
+        double[] w = [.. points.Select(d => absolute
+            ? 1 / Math.Pow(d.StandardUncertainty!.Value / d.Pressure, 2)
+            : d.Weight ?? 1)];
+
+        double[] parameters;
+        int iterations = 0;
+        string stop = "no parameters to fit";
+        if (p > 0)
+        {
+            double[] start = form.StartingValues(t, lnP, w);
+            Vector<double> Model(Vector<double> theta, Vector<double> x)
+                => Vector<double>.Build.Dense(x.Count, i => form.LnPressure(x[i], [.. theta]));
+            Matrix<double> Jacobian(Vector<double> theta, Vector<double> x)
+            {
+                var jac = Matrix<double>.Build.Dense(x.Count, theta.Count);
+                var g = new double[theta.Count];
+                double[] th = [.. theta];
+                for (int i = 0; i < x.Count; i++)
+                {
+                    form.LnPressureGradient(x[i], th, g);
+                    for (int j = 0; j < g.Length; j++)
+                    {
+                        jac[i, j] = g[j];
+                    }
+                }
+
+                return jac;
+            }
+
+            var objective = ObjectiveFunction.NonlinearModel(Model, Jacobian,
+                Vector<double>.Build.DenseOfArray(t), Vector<double>.Build.DenseOfArray(lnP), Vector<double>.Build.DenseOfArray(w));
+            // Parameter scales from the start: the forms mix parameters of very different size
+            // (Riedel's D ~ 1e-18 beside A ~ 10), and LM works in scaled steps.
+            double[] scales = [.. start.Select(v => Math.Abs(v) > 0 ? Math.Abs(v) : 1)];
+            var minimizer = new LevenbergMarquardtMinimizer(1e-3, 1e-15, 1e-15, 1e-15, 1000);
+            var result = minimizer.FindMinimum(objective, start, null, null, scales, null);
+            parameters = [.. result.MinimizingPoint];
+            iterations = Math.Max(result.Iterations, 0);
+            stop = result.ReasonForExit.ToString();
+            // Keep the start if LM made it worse (it cannot for the linear forms; guards Antoine).
+            if (ChiSquare(form, start, t, lnP, w) < ChiSquare(form, parameters, t, lnP, w))
+            {
+                parameters = start;
+                stop += " (linearised start kept)";
+            }
+        }
+        else
+        {
+            parameters = [];
+        }
+
+        double chi2 = ChiSquare(form, parameters, t, lnP, w);
+        var covariance = Covariance(form, parameters, t, w, absolute ? 1 : (n > p ? chi2 / (n - p) : 0));
+        int k = p + 1;
+        double? aicc = n > k + 1 && chi2 > 0 ? n * Math.Log(chi2 / n) + 2 * k + 2.0 * k * (k + 1) / (n - k - 1) : null;
+        return new VapourPressureFit
+        {
+            Form = form,
+            Parameters = parameters,
+            Covariance = covariance,
+            Data = points,
+            Weights = w,
+            AbsoluteUncertainties = absolute,
+            ChiSquare = chi2,
+            Aicc = aicc,
+            Iterations = iterations,
+            StopReason = stop,
+        };
+    }
+
+    /// <summary>Fits every candidate form the data support (at least K + 2 points, K = p + 1, so
+    /// that AICc is defined) and returns them best first by AICc.</summary>
+    /// <exception cref="InvalidInputException">No candidate form has enough points.</exception>
+    public static IReadOnlyList<VapourPressureFit> FitAll(IEnumerable<VapourPressureForm> candidates, IReadOnlyList<VapourPressurePoint> data)
+    {
+        ArgumentNullException.ThrowIfNull(candidates);
+        ArgumentNullException.ThrowIfNull(data);
+        var fits = candidates
+            .Where(f => f.ParameterCount > 0 && data.Count >= f.ParameterCount + 3)
+            .Select(f => Fit(f, data))
+            .Where(f => f.Aicc is not null)
+            .OrderBy(f => f.Aicc!.Value)
+            .ToArray();
+        return fits.Length > 0
+            ? fits
+            : throw new InvalidInputException("data", data.Count, $"{data.Count} points are too few to choose a form by AICc (the two-parameter form needs at least 5)");
+    }
+
+    private static double ChiSquare(VapourPressureForm form, IReadOnlyList<double> parameters, double[] t, double[] lnP, double[] w)
+    {
+        double sum = 0;
+        for (int i = 0; i < t.Length; i++)
+        {
+            double r = lnP[i] - form.LnPressure(t[i], parameters);
+            sum += w[i] * r * r;
+        }
+
+        return sum;
+    }
+
+    private static double[,] Covariance(VapourPressureForm form, IReadOnlyList<double> parameters, double[] t, double[] w, double scale)
+    {
+        int p = parameters.Count;
+        var cov = new double[p, p];
+        if (p == 0)
+        {
+            return cov;
+        }
+
+        var jtwj = Matrix<double>.Build.Dense(p, p);
+        var g = new double[p];
+        for (int i = 0; i < t.Length; i++)
+        {
+            form.LnPressureGradient(t[i], parameters, g);
+            for (int a = 0; a < p; a++)
+            {
+                for (int b = 0; b < p; b++)
+                {
+                    jtwj[a, b] += w[i] * g[a] * g[b];
+                }
+            }
+        }
+
+        // Equilibrate before inverting (the parameters differ by many orders of magnitude).
+        var d = Vector<double>.Build.Dense(p, j => 1 / Math.Sqrt(jtwj[j, j]));
+        var scaled = Matrix<double>.Build.Dense(p, p, (a, b) => jtwj[a, b] * d[a] * d[b]);
+        var inverse = scaled.Inverse();
+        for (int a = 0; a < p; a++)
+        {
+            for (int b = 0; b < p; b++)
+            {
+                cov[a, b] = inverse[a, b] * d[a] * d[b] * scale;
+            }
+        }
+
+        return cov;
+    }
+}
