@@ -16,6 +16,8 @@ internal static class CliApp
         root.Subcommands.Add(CurveCommand.Create(io));
         root.Subcommands.Add(StateCommand.Create(io));
         root.Subcommands.Add(DeriveCommand.Create(io));
+        root.Subcommands.Add(FitCommand.Create(io));
+        root.Subcommands.Add(LatentCommand.Create(io));
         root.Subcommands.Add(FluidsCommand.Create(io));
 
         if (args.Length == 0)

@@ -42,6 +42,10 @@ internal sealed class CliIo(TextWriter output, TextWriter error)
         {
             return Fail(ex.Message, ExitCodes.OutputFile);
         }
+        catch (Input.DataFileException ex)
+        {
+            return Fail(ex.Message, ExitCodes.DataFile);
+        }
         catch (Exception ex)
         {
             return Fail($"internal error ({ex.GetType().Name}): {ex.Message}", ExitCodes.InternalError);

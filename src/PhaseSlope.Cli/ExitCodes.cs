@@ -25,4 +25,7 @@ internal static class ExitCodes
 
     /// <summary>The output file could not be written (nothing was written or replaced).</summary>
     public const int OutputFile = 6;
+
+    /// <summary>A data file (measured vapour pressures) cannot be read or fails validation.</summary>
+    public const int DataFile = 7;
 }

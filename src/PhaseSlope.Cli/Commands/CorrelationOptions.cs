@@ -1,0 +1,146 @@
+using System.CommandLine;
+using PhaseSlope.Cli.Input;
+using PhaseSlope.Cli.Units;
+using PhaseSlope.Core.Correlations;
+using PhaseSlope.Core.Fluids;
+
+namespace PhaseSlope.Cli.Commands;
+
+/// <summary>Options shared by <c>fit</c> and <c>latent</c>: the data file, its units, the
+/// correlation form and the fluid or critical point the Tc-based forms need.</summary>
+internal sealed class CorrelationOptions
+{
+    /// <summary>The forms that need a critical point.</summary>
+    private static readonly string[] CriticalForms = ["wagner-3-6", "wagner-2.5-5", "wagner-6", "lee-kesler", "ambrose-walton"];
+
+    /// <summary>Every form identifier.</summary>
+    public static readonly string[] FormIds = ["clausius-clapeyron", "antoine", "kirchhoff", "riedel", .. CriticalForms];
+
+    /// <summary>DATA.csv.</summary>
+    public Argument<string> Data { get; } = new("DATA") { Description = "CSV file of measured vapour pressures (see docs/data-files.md)" };
+
+    /// <summary>--form.</summary>
+    public Option<string> Form { get; }
+
+    /// <summary>--fluid.</summary>
+    public Option<string> Fluid { get; } = new("--fluid") { Description = "Catalog fluid or fluid file: gives Tc, Pc and omega for the Wagner and predictive forms, and the model for the eos volume change" };
+
+    /// <summary>--tc.</summary>
+    public Option<string> CriticalTemperature { get; } = new("--tc") { Description = "Critical temperature for the Wagner forms when no --fluid is given" };
+
+    /// <summary>--pc.</summary>
+    public Option<string> CriticalPressure { get; } = new("--pc") { Description = "Critical pressure for the Wagner forms when no --fluid is given" };
+
+    /// <summary>--temperature-unit.</summary>
+    public Option<string> TemperatureUnit { get; } = new("--temperature-unit") { Description = "Unit of a temperature column whose header gives none (K, degC, degF, degR)" };
+
+    /// <summary>--pressure-unit.</summary>
+    public Option<string> PressureUnit { get; } = new("--pressure-unit") { Description = "Unit of a pressure column whose header gives none (Pa, kPa, MPa, bar, psi, atm, mmHg, ...)" };
+
+    /// <summary>Creates the options with the default form.</summary>
+    public CorrelationOptions(string defaultForm)
+    {
+        Form = new Option<string>("--form")
+        {
+            Description = $"Correlation form: {string.Join(", ", FormIds)}, or auto (every form the data support, chosen by AICc)",
+            DefaultValueFactory = _ => defaultForm,
+        };
+    }
+
+    /// <summary>Adds the options to a command.</summary>
+    public void AddTo(Command command)
+    {
+        command.Arguments.Add(Data);
+        command.Options.Add(Form);
+        command.Options.Add(Fluid);
+        command.Options.Add(CriticalTemperature);
+        command.Options.Add(CriticalPressure);
+        command.Options.Add(TemperatureUnit);
+        command.Options.Add(PressureUnit);
+    }
+
+    /// <summary>Reads and converts the data file.</summary>
+    public IReadOnlyList<VapourPressurePoint> ReadData(ParseResult parse)
+    {
+        string path = parse.GetValue(Data)!;
+        var options = new VapourPressureCsvOptions(parse.GetValue(TemperatureUnit), parse.GetValue(PressureUnit));
+        IReadOnlyList<VapourPressureRecord> records;
+        try
+        {
+            using var reader = new StreamReader(path);
+            records = VapourPressureCsv.Read(reader, path, options);
+        }
+        catch (Exception ex) when (ex is FileNotFoundException or DirectoryNotFoundException)
+        {
+            throw new DataFileException($"{path}: data file not found");
+        }
+        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException)
+        {
+            throw new DataFileException($"{path}: cannot read data file: {ex.Message}");
+        }
+
+        return [.. records.Select(r => new VapourPressurePoint(r.Temperature, r.Pressure, r.StandardUncertainty, r.Weight))];
+    }
+
+    /// <summary>The fluid, when --fluid is given.</summary>
+    public Fluid? FluidOf(ParseResult parse) => parse.GetValue(Fluid) is string f ? FluidResolver.Resolve(f) : null;
+
+    /// <summary>The candidate forms: the one named, or every form for auto.</summary>
+    public IReadOnlyList<VapourPressureForm> Forms(ParseResult parse, Fluid? fluid, out bool auto)
+    {
+        string id = (parse.GetValue(Form) ?? "auto").Trim().ToLowerInvariant();
+        auto = id == "auto";
+        if (!auto && !FormIds.Contains(id))
+        {
+            throw new UsageException($"--form: unknown form '{id}' (use {string.Join(", ", FormIds)} or auto)");
+        }
+
+        double? tc = fluid?.CriticalTemperature.Value ?? (parse.GetValue(CriticalTemperature) is string t ? QuantityParser.ParseTemperature(t, "--tc") : null);
+        double? pc = fluid?.CriticalPressure.Value ?? (parse.GetValue(CriticalPressure) is string p ? QuantityParser.ParsePressure(p, "--pc") : null);
+        double? omega = fluid?.AcentricFactor.Value;
+        var forms = new List<VapourPressureForm>();
+        foreach (string candidate in auto ? FormIds : [id])
+        {
+            bool critical = CriticalForms.Contains(candidate);
+            bool predictive = candidate is "lee-kesler" or "ambrose-walton";
+            if (auto && predictive)
+            {
+                continue; // nothing to fit: not a candidate for selection
+            }
+
+            if (critical && (tc is null || pc is null || (predictive && omega is null)))
+            {
+                if (auto)
+                {
+                    continue;
+                }
+
+                throw new UsageException(predictive
+                    ? $"--form {candidate}: needs --fluid (for Tc, Pc and omega)"
+                    : $"--form {candidate}: needs Tc and Pc: give --fluid, or --tc and --pc");
+            }
+
+            forms.Add(candidate switch
+            {
+                "clausius-clapeyron" => new ClausiusClapeyronForm(),
+                "antoine" => new AntoineForm(),
+                "kirchhoff" => new KirchhoffForm(),
+                "riedel" => new RiedelForm(),
+                "wagner-3-6" => WagnerForm.ThreeSix(tc!.Value, pc!.Value),
+                "wagner-2.5-5" => WagnerForm.TwoHalfFive(tc!.Value, pc!.Value),
+                "wagner-6" => WagnerForm.SixTerm(tc!.Value, pc!.Value),
+                "lee-kesler" => CorrespondingStatesForm.LeeKesler(tc!.Value, pc!.Value, omega!.Value),
+                _ => CorrespondingStatesForm.AmbroseWalton(tc!.Value, pc!.Value, omega!.Value),
+            });
+        }
+
+        return forms;
+    }
+
+    /// <summary>Fits the named form, or every candidate for auto (best first).</summary>
+    public IReadOnlyList<VapourPressureFit> Fit(ParseResult parse, IReadOnlyList<VapourPressurePoint> data, Fluid? fluid, out bool auto)
+    {
+        var forms = Forms(parse, fluid, out auto);
+        return auto ? VapourPressureFitter.FitAll(forms, data) : [VapourPressureFitter.Fit(forms[0], data)];
+    }
+}

@@ -1,0 +1,104 @@
+using System.CommandLine;
+using PhaseSlope.Cli.Output;
+using PhaseSlope.Cli.Units;
+using PhaseSlope.Core.Correlations;
+using PhaseSlope.Core.Equilibrium;
+
+namespace PhaseSlope.Cli.Commands;
+
+/// <summary><c>phaseslope latent DATA.csv ...</c>: enthalpy of vaporization from P–T data by the
+/// Clapeyron equation, with its uncertainty from the fit.</summary>
+internal static class LatentCommand
+{
+    /// <summary>Default number of temperatures when a range is given.</summary>
+    public const int DefaultPoints = 11;
+
+    /// <summary>Builds the command; its action writes to <paramref name="io"/>.</summary>
+    public static Command Create(CliIo io)
+    {
+        var options = new CorrelationOptions("auto");
+        var common = new CommonOptions();
+        var volume = new Option<string>("--volume-model")
+        {
+            Description = "Volume change: ideal-gas (vapour ideal, liquid neglected), eos (the model's compressibility change for --fluid; the default with --fluid), "
+                + "haggenmacher (corresponding states from Tc and Pc; the default with --tc/--pc only)",
+        };
+        var temperature = new Option<string>("--temperature", "-T") { Description = "One temperature" };
+        var from = new Option<string>("--from") { Description = "First temperature of a range (default: the lowest data temperature)" };
+        var to = new Option<string>("--to") { Description = "Last temperature of a range (default: the highest data temperature)" };
+        var points = new Option<int>("--points", "-n") { Description = $"Temperatures in the range, 2 to 10000 (default {DefaultPoints})", DefaultValueFactory = _ => DefaultPoints };
+        var command = new Command("latent", "Enthalpy of vaporization from P-T data via Clapeyron, dH = T dv dP/dT, with a standard uncertainty");
+        options.AddTo(command);
+        command.Options.Add(volume);
+        command.Options.Add(temperature);
+        command.Options.Add(from);
+        command.Options.Add(to);
+        command.Options.Add(points);
+        common.AddTo(command, withEos: true);
+        command.SetAction(parse => io.Guard(() =>
+        {
+            var format = common.OutputFormat(parse);
+            var fluid = options.FluidOf(parse);
+            int n = parse.GetValue(points);
+            if (n < 2 || n > 10_000)
+            {
+                throw new UsageException($"--points: must be between 2 and 10000, got {n}");
+            }
+
+            if (parse.GetValue(temperature) is not null && (parse.GetValue(from) is not null || parse.GetValue(to) is not null))
+            {
+                throw new UsageException("latent: give --temperature or --from/--to, not both");
+            }
+
+            bool criticalGiven = parse.GetValue(options.CriticalTemperature) is not null && parse.GetValue(options.CriticalPressure) is not null;
+            string volumeText = parse.GetValue(volume) ?? (fluid is not null ? "eos" : criticalGiven ? "haggenmacher" : "ideal-gas");
+            var model = volumeText.ToLowerInvariant() switch
+            {
+                "ideal-gas" => VolumeChangeModel.IdealGas,
+                "eos" => VolumeChangeModel.EquationOfState,
+                "haggenmacher" => VolumeChangeModel.Haggenmacher,
+                _ => throw new UsageException($"--volume-model: unknown model '{volumeText}' (use ideal-gas, eos or haggenmacher)"),
+            };
+            if (model == VolumeChangeModel.EquationOfState && fluid is null)
+            {
+                throw new UsageException("--volume-model eos: needs --fluid (the coexisting volumes come from its model)");
+            }
+
+            if (model == VolumeChangeModel.Haggenmacher && fluid is null && !criticalGiven)
+            {
+                throw new UsageException("--volume-model haggenmacher: needs --fluid, or --tc and --pc");
+            }
+
+            var data = options.ReadData(parse);
+            var fits = options.Fit(parse, data, fluid, out _);
+            var fit = fits[0];
+            var solver = fluid is not null && model == VolumeChangeModel.EquationOfState
+                ? new CoexistenceSolver(common.Model(parse, fluid), CoexistenceSolver.LowestValidTemperature(fluid))
+                : null;
+            double? tc = fluid?.CriticalTemperature.Value ?? (criticalGiven ? QuantityParser.ParseTemperature(parse.GetValue(options.CriticalTemperature)!, "--tc") : null);
+            double? pc = fluid?.CriticalPressure.Value ?? (criticalGiven ? QuantityParser.ParsePressure(parse.GetValue(options.CriticalPressure)!, "--pc") : null);
+            var estimator = new LatentHeatEstimator(fit, model, solver, tc, pc);
+
+            double[] temperatures;
+            if (parse.GetValue(temperature) is string tText)
+            {
+                temperatures = [QuantityParser.ParseTemperature(tText, "--temperature")];
+            }
+            else
+            {
+                double start = parse.GetValue(from) is string f ? QuantityParser.ParseTemperature(f, "--from") : fit.MinimumTemperature;
+                double end = parse.GetValue(to) is string e ? QuantityParser.ParseTemperature(e, "--to") : fit.MaximumTemperature;
+                if (!(start < end))
+                {
+                    throw new UsageException($"--from ({NumberText.Table(start)} K) must be below --to ({NumberText.Table(end)} K)");
+                }
+
+                temperatures = [.. Enumerable.Range(0, n).Select(i => i == n - 1 ? end : start + (end - start) * i / (n - 1))];
+            }
+
+            var results = temperatures.Select(estimator.At).ToArray();
+            io.Out.Write(FitWriter.Latent(fit, model, results, fits, format));
+        }));
+        return command;
+    }
+}

@@ -1,0 +1,250 @@
+using System.Text;
+using System.Text.Json;
+using PhaseSlope.Core.Correlations;
+
+namespace PhaseSlope.Cli.Output;
+
+/// <summary>Renders fitted correlations (<c>fit</c>) and latent heats from data (<c>latent</c>).</summary>
+internal static class FitWriter
+{
+    /// <summary>Renders a fit; <paramref name="candidates"/> are the other forms tried by auto.</summary>
+    public static string Fit(VapourPressureFit fit, IReadOnlyList<VapourPressureFit> candidates, OutputFormat format)
+        => format switch
+        {
+            OutputFormat.Json => Json(json =>
+            {
+                json.WriteStartObject();
+                WriteFit(json, fit);
+                json.WriteStartArray("residuals");
+                foreach (var (point, i) in fit.Data.Select((p, i) => (p, i)))
+                {
+                    json.WriteStartObject();
+                    json.WriteNumber("temperature_K", point.Temperature);
+                    json.WriteNumber("pressure_Pa", point.Pressure);
+                    json.WriteNumber("fitted_pressure_Pa", fit.Pressure(point.Temperature));
+                    json.WriteNumber("deviation_percent", fit.DeviationsPercent[i]);
+                    json.WriteNumber("ln_pressure_residual", fit.Residuals[i]);
+                    json.WriteEndObject();
+                }
+
+                json.WriteEndArray();
+                WriteCandidates(json, candidates);
+                json.WriteEndObject();
+            }),
+            OutputFormat.Csv => CsvText.Write(
+                ["temperature_K", "pressure_Pa", "fitted_pressure_Pa", "deviation_percent", "ln_pressure_residual"],
+                fit.Data.Select((p, i) => new[]
+                {
+                    NumberText.RoundTrip(p.Temperature), NumberText.RoundTrip(p.Pressure), NumberText.RoundTrip(fit.Pressure(p.Temperature)),
+                    NumberText.RoundTrip(fit.DeviationsPercent[i]), NumberText.RoundTrip(fit.Residuals[i]),
+                })),
+            _ => FitTable(fit, candidates),
+        };
+
+    /// <summary>Renders latent heats.</summary>
+    public static string Latent(VapourPressureFit fit, VolumeChangeModel model, IReadOnlyList<LatentHeatPoint> points, IReadOnlyList<VapourPressureFit> candidates, OutputFormat format)
+        => format switch
+        {
+            OutputFormat.Json => Json(json =>
+            {
+                json.WriteStartObject();
+                WriteFit(json, fit);
+                json.WriteString("volume_model", VolumeModelId(model));
+                json.WriteStartArray("points");
+                foreach (var p in points)
+                {
+                    json.WriteStartObject();
+                    json.WriteNumber("temperature_K", p.Temperature);
+                    json.WriteNumber("pressure_Pa", p.Pressure);
+                    json.WriteNumber("enthalpy_of_vaporization_J_mol", p.EnthalpyOfVaporization);
+                    json.WriteNumber("standard_uncertainty_J_mol", p.StandardUncertainty);
+                    json.WriteNumber("compressibility_change", p.CompressibilityChange);
+                    json.WriteBoolean("extrapolated", p.Extrapolated);
+                    json.WriteEndObject();
+                }
+
+                json.WriteEndArray();
+                WriteCandidates(json, candidates);
+                json.WriteEndObject();
+            }),
+            OutputFormat.Csv => CsvText.Write(
+                ["temperature_K", "pressure_Pa", "enthalpy_of_vaporization_J_mol", "standard_uncertainty_J_mol", "compressibility_change", "extrapolated"],
+                points.Select(p => new[]
+                {
+                    NumberText.RoundTrip(p.Temperature), NumberText.RoundTrip(p.Pressure), NumberText.RoundTrip(p.EnthalpyOfVaporization),
+                    NumberText.RoundTrip(p.StandardUncertainty), NumberText.RoundTrip(p.CompressibilityChange), p.Extrapolated ? "true" : "false",
+                })),
+            _ => LatentTable(fit, model, points),
+        };
+
+    /// <summary>The command-line identifier of a volume model.</summary>
+    public static string VolumeModelId(VolumeChangeModel model) => model switch
+    {
+        VolumeChangeModel.IdealGas => "ideal-gas",
+        VolumeChangeModel.EquationOfState => "eos",
+        _ => "haggenmacher",
+    };
+
+    private static void WriteFit(Utf8JsonWriter json, VapourPressureFit fit)
+    {
+        json.WriteString("form", fit.Form.Id);
+        json.WriteString("equation", fit.Form.Description);
+        json.WriteStartObject("parameters");
+        for (int i = 0; i < fit.Parameters.Count; i++)
+        {
+            json.WriteNumber(fit.Form.ParameterNames[i], fit.Parameters[i]);
+        }
+
+        json.WriteEndObject();
+        json.WriteStartObject("standard_errors");
+        for (int i = 0; i < fit.Parameters.Count; i++)
+        {
+            json.WriteNumber(fit.Form.ParameterNames[i], fit.StandardErrors[i]);
+        }
+
+        json.WriteEndObject();
+        json.WriteStartArray("covariance");
+        for (int i = 0; i < fit.Parameters.Count; i++)
+        {
+            json.WriteStartArray();
+            for (int j = 0; j < fit.Parameters.Count; j++)
+            {
+                json.WriteNumberValue(fit.Covariance[i, j]);
+            }
+
+            json.WriteEndArray();
+        }
+
+        json.WriteEndArray();
+        json.WriteNumber("points", fit.Data.Count);
+        json.WriteNumber("degrees_of_freedom", fit.DegreesOfFreedom);
+        json.WriteNumber("chi_square", fit.ChiSquare);
+        if (fit.ReducedChiSquare is double r)
+        {
+            json.WriteNumber("reduced_chi_square", r);
+        }
+        else
+        {
+            json.WriteNull("reduced_chi_square");
+        }
+
+        if (fit.Aicc is double a)
+        {
+            json.WriteNumber("aicc", a);
+        }
+        else
+        {
+            json.WriteNull("aicc");
+        }
+
+        json.WriteNumber("aad_percent", fit.AadPercent);
+        json.WriteNumber("max_deviation_percent", fit.MaximumDeviationPercent);
+        json.WriteStartArray("valid_range_K");
+        json.WriteNumberValue(fit.MinimumTemperature);
+        json.WriteNumberValue(fit.MaximumTemperature);
+        json.WriteEndArray();
+        json.WriteBoolean("absolute_uncertainties", fit.AbsoluteUncertainties);
+        json.WriteNumber("iterations", fit.Iterations);
+        json.WriteString("stop_reason", fit.StopReason);
+    }
+
+    private static void WriteCandidates(Utf8JsonWriter json, IReadOnlyList<VapourPressureFit> candidates)
+    {
+        if (candidates.Count <= 1)
+        {
+            return;
+        }
+
+        json.WriteStartArray("candidates");
+        foreach (var c in candidates)
+        {
+            json.WriteStartObject();
+            json.WriteString("form", c.Form.Id);
+            json.WriteNumber("aicc", c.Aicc!.Value);
+            json.WriteNumber("aad_percent", c.AadPercent);
+            json.WriteEndObject();
+        }
+
+        json.WriteEndArray();
+    }
+
+    private static string FitTable(VapourPressureFit fit, IReadOnlyList<VapourPressureFit> candidates)
+    {
+        var text = new StringBuilder();
+        text.AppendLine($"form: {fit.Form.Id}");
+        text.AppendLine($"equation: {fit.Form.Description}");
+        text.AppendLine($"valid range (the data): {NumberText.Table(fit.MinimumTemperature)} to {NumberText.Table(fit.MaximumTemperature)} K; do not use it outside without checking");
+        text.AppendLine();
+        if (fit.Parameters.Count > 0)
+        {
+            var parameters = new TextTable(["parameter", "value", "standard error"], [false, true, true]);
+            for (int i = 0; i < fit.Parameters.Count; i++)
+            {
+                parameters.Add(fit.Form.ParameterNames[i], NumberText.RoundTrip(fit.Parameters[i]), NumberText.Table(fit.StandardErrors[i]));
+            }
+
+            text.Append(parameters.Render());
+            text.AppendLine();
+        }
+
+        string weighting = fit.AbsoluteUncertainties ? "per-point standard uncertainties (absolute covariance)" : "relative weights (covariance scaled by the reduced chi-square)";
+        text.AppendLine($"points {fit.Data.Count}, degrees of freedom {fit.DegreesOfFreedom}, {weighting}");
+        text.AppendLine($"AAD {NumberText.Table(fit.AadPercent)} %, maximum deviation {NumberText.Table(fit.MaximumDeviationPercent)} %, chi-square {NumberText.Table(fit.ChiSquare)}"
+            + (fit.ReducedChiSquare is double r ? $", reduced {NumberText.Table(r)}" : "")
+            + (fit.Aicc is double a ? $", AICc {NumberText.Table(a)}" : ""));
+        text.AppendLine();
+        var residuals = new TextTable(["T [K]", "P [kPa]", "P fit [kPa]", "deviation [%]"], [true, true, true, true]);
+        for (int i = 0; i < fit.Data.Count; i++)
+        {
+            var p = fit.Data[i];
+            residuals.Add(NumberText.Table(p.Temperature), NumberText.Table(p.Pressure / 1e3), NumberText.Table(fit.Pressure(p.Temperature) / 1e3), NumberText.Table(fit.DeviationsPercent[i]));
+        }
+
+        text.Append(residuals.Render());
+        if (candidates.Count > 1)
+        {
+            text.AppendLine();
+            var table = new TextTable(["form tried", "AICc", "AAD [%]"], [false, true, true]);
+            foreach (var c in candidates)
+            {
+                table.Add(c.Form.Id, NumberText.Table(c.Aicc!.Value), NumberText.Table(c.AadPercent));
+            }
+
+            text.AppendLine("chosen by the corrected Akaike information criterion (lowest AICc):");
+            text.Append(table.Render());
+        }
+
+        return text.ToString();
+    }
+
+    private static string LatentTable(VapourPressureFit fit, VolumeChangeModel model, IReadOnlyList<LatentHeatPoint> points)
+    {
+        var text = new StringBuilder();
+        text.AppendLine($"enthalpy of vaporization by Clapeyron, dH = T dv dP/dT: dP/dT from the {fit.Form.Id} fit, dv from {VolumeModelId(model)}");
+        text.AppendLine($"data range {NumberText.Table(fit.MinimumTemperature)} to {NumberText.Table(fit.MaximumTemperature)} K; rows marked * are extrapolated");
+        text.AppendLine();
+        var table = new TextTable(["T [K]", "P [kPa]", "dZ", "dH_vap [J/mol]", "u(dH) [J/mol]", ""], [true, true, true, true, true, false]);
+        foreach (var p in points)
+        {
+            table.Add(NumberText.Table(p.Temperature), NumberText.Table(p.Pressure / 1e3), NumberText.Table(p.CompressibilityChange),
+                NumberText.Table(p.EnthalpyOfVaporization), NumberText.Table(p.StandardUncertainty), p.Extrapolated ? "*" : "");
+        }
+
+        text.Append(table.Render());
+        text.AppendLine();
+        text.AppendLine("u(dH) is the standard uncertainty from the fit covariance only; the volume model adds its own (see docs/validation.md).");
+        text.AppendLine(CoexistenceWriter.Caution);
+        return text.ToString();
+    }
+
+    private static string Json(Action<Utf8JsonWriter> write)
+    {
+        using var stream = new MemoryStream();
+        using (var json = new Utf8JsonWriter(stream, JsonText.Options))
+        {
+            write(json);
+        }
+
+        return Encoding.UTF8.GetString(stream.ToArray()) + Environment.NewLine;
+    }
+}
