@@ -72,11 +72,11 @@ internal sealed class CorrelationOptions
         }
         catch (Exception ex) when (ex is FileNotFoundException or DirectoryNotFoundException)
         {
-            throw new DataFileException($"{path}: data file not found");
+            throw new DataFileException(path, null, null, "data file not found", ex);
         }
         catch (Exception ex) when (ex is IOException or UnauthorizedAccessException)
         {
-            throw new DataFileException($"{path}: cannot read data file: {ex.Message}");
+            throw new DataFileException(path, null, null, $"cannot read data file: {ex.Message}", ex);
         }
 
         return [.. records.Select(r => new VapourPressurePoint(r.Temperature, r.Pressure, r.StandardUncertainty, r.Weight))];
