@@ -179,9 +179,12 @@ public static class VapourPressureFitter
         var inverse = scaled.Inverse();
         for (int a = 0; a < p; a++)
         {
-            for (int b = 0; b < p; b++)
+            // The LU inverse is symmetric only to round-off (off by 6e-11 relative for the
+            // six-term form): average its two halves and mirror, so the covariance is exactly symmetric.
+            for (int b = a; b < p; b++)
             {
-                cov[a, b] = inverse[a, b] * d[a] * d[b] * scale;
+                cov[a, b] = 0.5 * (inverse[a, b] + inverse[b, a]) * d[a] * d[b] * scale;
+                cov[b, a] = cov[a, b];
             }
         }
 

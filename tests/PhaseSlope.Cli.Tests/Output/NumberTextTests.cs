@@ -30,7 +30,18 @@ public class NumberTextTests
         { ["derive", "propane", "--of", "T", "--by", "P", "--hold", "H", "-T", "300.5", "-P", "0.5 bar", "--format", "json"] },
         { ["derive", "propane", "--of", "T", "--by", "P", "--hold", "H", "-T", "300.5", "-P", "0.5 bar", "--format", "csv"] },
         { ["derive", "propane", "--of", "T", "--by", "P", "--hold", "H", "-T", "300.5", "-P", "0.5 bar"] },
+        { ["fit", ExampleCsv, "--fluid", ExampleFluid, "--format", "json"] },
+        { ["fit", ExampleCsv, "--fluid", ExampleFluid, "--format", "csv"] },
+        { ["fit", ExampleCsv, "--fluid", ExampleFluid] },
+        { ["latent", ExampleCsv, "--fluid", ExampleFluid, "--format", "json"] },
+        { ["latent", ExampleCsv, "--fluid", ExampleFluid, "--format", "csv"] },
+        { ["latent", ExampleCsv, "--fluid", ExampleFluid] },
+        { ["latent", ExampleCsv, "--tc", "540", "--pc", "3.1 MPa", "--form", "wagner-2.5-5", "-T", "26.85 degC"] },
     };
+
+    private static string ExampleCsv => PhaseSlope.Cli.Tests.Commands.FitData.ExampleCsv;
+
+    private static string ExampleFluid => PhaseSlope.Cli.Tests.Commands.FitData.ExampleFluid;
 
     private static CliResult RunIn(string culture, string[] args)
     {
