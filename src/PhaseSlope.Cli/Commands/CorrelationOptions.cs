@@ -138,9 +138,6 @@ internal sealed class CorrelationOptions
     }
 
     /// <summary>Fits the named form, or every candidate for auto (best first).</summary>
-    public IReadOnlyList<VapourPressureFit> Fit(ParseResult parse, IReadOnlyList<VapourPressurePoint> data, Fluid? fluid, out bool auto)
-    {
-        var forms = Forms(parse, fluid, out auto);
-        return auto ? VapourPressureFitter.FitAll(forms, data) : [VapourPressureFitter.Fit(forms[0], data)];
-    }
+    public static IReadOnlyList<VapourPressureFit> Fit(IReadOnlyList<VapourPressureForm> forms, bool auto, IReadOnlyList<VapourPressurePoint> data)
+        => auto ? VapourPressureFitter.FitAll(forms, data) : [VapourPressureFitter.Fit(forms[0], data)];
 }

@@ -18,8 +18,10 @@ internal static class FitCommand
         {
             var format = common.OutputFormat(parse);
             var fluid = options.FluidOf(parse);
+            // Options first, then the data file: a bad --form is a usage error whatever the file holds.
+            var forms = options.Forms(parse, fluid, out bool auto);
             var data = options.ReadData(parse);
-            var fits = options.Fit(parse, data, fluid, out _);
+            var fits = CorrelationOptions.Fit(forms, auto, data);
             io.Out.Write(FitWriter.Fit(fits[0], fits, format));
         }));
         return command;

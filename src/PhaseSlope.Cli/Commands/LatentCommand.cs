@@ -69,8 +69,10 @@ internal static class LatentCommand
                 throw new UsageException("--volume-model haggenmacher: needs --fluid, or --tc and --pc");
             }
 
+            // Options first, then the data file: a bad --form is a usage error whatever the file holds.
+            var forms = options.Forms(parse, fluid, out bool auto);
             var data = options.ReadData(parse);
-            var fits = options.Fit(parse, data, fluid, out _);
+            var fits = CorrelationOptions.Fit(forms, auto, data);
             var fit = fits[0];
             var solver = fluid is not null && model == VolumeChangeModel.EquationOfState
                 ? new CoexistenceSolver(common.Model(parse, fluid), CoexistenceSolver.LowestValidTemperature(fluid))
