@@ -28,4 +28,7 @@ internal static class ExitCodes
 
     /// <summary>A data file (measured vapour pressures) cannot be read or fails validation.</summary>
     public const int DataFile = 7;
+
+    /// <summary>An audit check failed (<c>audit</c>): the correlation, as declared, should not be used.</summary>
+    public const int AuditFailed = 8;
 }

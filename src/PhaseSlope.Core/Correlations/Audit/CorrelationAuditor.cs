@@ -1,0 +1,447 @@
+using System.Globalization;
+using PhaseSlope.Core.Equilibrium;
+using PhaseSlope.Core.Fluids;
+
+namespace PhaseSlope.Core.Correlations.Audit;
+
+/// <summary>What to audit: a published correlation, the parts of its convention that are stated,
+/// and what is known to test it against.</summary>
+public sealed record AuditRequest
+{
+    /// <summary>The correlation as printed.</summary>
+    public required PublishedCorrelation Correlation { get; init; }
+
+    /// <summary>The stated log base, or null to detect it.</summary>
+    public LogBase? LogBase { get; init; }
+
+    /// <summary>The stated pressure unit, or null to detect it.</summary>
+    public PublishedPressureUnit? PressureUnit { get; init; }
+
+    /// <summary>The stated temperature scale, or null to detect it (kelvin only for forms other than Antoine).</summary>
+    public PublishedTemperatureUnit? TemperatureUnit { get; init; }
+
+    /// <summary>The stated range of validity (K), or null for the data's range, else the default range for the fluid.</summary>
+    public (double Minimum, double Maximum)? Range { get; init; }
+
+    /// <summary>Measured vapour pressures, or null.</summary>
+    public IReadOnlyList<VapourPressurePoint>? Data { get; init; }
+
+    /// <summary>The fluid (normal boiling point, Tc), or null.</summary>
+    public Fluid? Fluid { get; init; }
+
+    /// <summary>The fluid's coexistence solver (model vapour pressure and ΔZ), or null.</summary>
+    public CoexistenceSolver? Solver { get; init; }
+
+    /// <summary>A second correlation to compare with, or null.</summary>
+    public PublishedCorrelation? Against { get; init; }
+
+    /// <summary>The second correlation's convention; null parts take the first's.</summary>
+    public LogBase? AgainstLogBase { get; init; }
+
+    /// <summary>The second correlation's pressure unit, or null for the first's.</summary>
+    public PublishedPressureUnit? AgainstPressureUnit { get; init; }
+
+    /// <summary>The second correlation's temperature scale, or null for the first's.</summary>
+    public PublishedTemperatureUnit? AgainstTemperatureUnit { get; init; }
+
+    /// <summary>Relative difference in P above which the two correlations disagree (default 0.01).</summary>
+    public double AgainstThreshold { get; init; } = 0.01;
+}
+
+/// <summary>Audits a published vapour-pressure correlation: detects or confirms its convention,
+/// converts it exactly to SI, and checks it against data, the model, the Clapeyron latent heat,
+/// the Waring criterion, its behaviour at the edges of its range and a second correlation.</summary>
+/// <remarks>
+/// <para><b>Detection.</b> Every convention the request leaves open is a candidate. Each is
+/// scored against the anchors that are known: the normal boiling point (P = 101325 Pa at Tb,
+/// trusted to σ = 0.01 in ln P: a handbook correlation reproduces its fluid's Tb to a fraction of
+/// a percent inside its range and to about 1 % when modestly extrapolated), the model's vapour
+/// pressure over the range (RMS in ln P, σ = 0.25: a generalised cubic equation errs by a few
+/// percent for non-polar fluids and by about 25 % for water near its triple point) and the
+/// data (RMS in ln P, σ = 0.01, a typical measurement and fit scatter). The score is the RMS of
+/// deviation/σ over the anchors. The best candidate is accepted only when the runner-up scores at
+/// least twice as badly and worse than 1 (a runner-up within one σ of every anchor is as
+/// plausible as the best); and only when the best scores below 5 (otherwise no candidate is
+/// consistent with what is known). With no anchor at all there is nothing to decide on.</para>
+/// <para><b>Thresholds</b> are given with each check below.</para>
+/// </remarks>
+public static class CorrelationAuditor
+{
+    /// <summary>Points on the audit grid over the range.</summary>
+    public const int GridPoints = 41;
+
+    /// <summary>ln P spread the normal boiling point is trusted to (see remarks).</summary>
+    public const double BoilingPointSigma = 0.01;
+
+    /// <summary>ln P spread the model is trusted to (see remarks).</summary>
+    public const double ModelSigma = 0.25;
+
+    /// <summary>ln P spread data are trusted to (see remarks).</summary>
+    public const double DataSigma = 0.01;
+
+    /// <summary>Runner-up/best score ratio below which detection refuses to guess.</summary>
+    public const double AmbiguityRatio = 2;
+
+    /// <summary>Best score above which no candidate is consistent.</summary>
+    public const double InconsistentScore = 5;
+
+    private const double R = Constants.GasConstant;
+
+    /// <summary>The default range when none is stated and no data are given: from 0.8·Tb (not
+    /// below the model's lowest valid temperature) to Tb, about where printed Antoine sets are
+    /// fitted; without Tb, 0.5–0.7 Tc.</summary>
+    public static (double Minimum, double Maximum) DefaultRange(Fluid fluid, double lowestValid)
+    {
+        ArgumentNullException.ThrowIfNull(fluid);
+        double tc = fluid.CriticalTemperature.Value;
+        return fluid.NormalBoilingPoint?.Value is double tb
+            ? (Math.Max(0.8 * tb, lowestValid), tb)
+            : (Math.Max(0.5 * tc, lowestValid), 0.7 * tc);
+    }
+
+    /// <summary>Runs the audit.</summary>
+    /// <exception cref="ArgumentException">No range can be set (no range, data or fluid), or a bad range.</exception>
+    public static AuditReport Audit(AuditRequest request)
+    {
+        ArgumentNullException.ThrowIfNull(request);
+        var (tMin, tMax) = ResolveRange(request);
+        double[] grid = [.. Enumerable.Range(0, GridPoints).Select(i => i == GridPoints - 1 ? tMax : tMin + (tMax - tMin) * i / (GridPoints - 1))];
+        var model = ModelPoints(request.Solver, grid);
+        double? tb = request.Fluid?.NormalBoilingPoint?.Value;
+        double? tc = request.Fluid?.CriticalTemperature.Value;
+
+        var findings = new List<AuditFinding>();
+        var candidates = Candidates(request).Select(c => Score(request.Correlation, c, tb, model, request.Data)).OrderBy(c => c.Score).ToList();
+        bool detected = candidates.Count > 1;
+        ConventionCandidate? best = candidates[0];
+        ConventionCandidate? runnerUp = candidates.Count > 1 ? candidates[1] : null;
+        PublishedConvention? convention = best.Convention;
+        if (detected)
+        {
+            if (best.Evidence.Count == 0)
+            {
+                findings.Add(new("convention", AuditSeverity.Fail,
+                    $"the convention is not fully stated and there is nothing to test the {candidates.Count} candidate conventions against (give --fluid or --data, or state --log-base, --pressure-unit and --temperature-unit): "
+                    + "refusing to guess, since a wrong log base or unit changes pressures by orders of magnitude"));
+                convention = null;
+            }
+            else if (best.Score > InconsistentScore)
+            {
+                findings.Add(new("convention", AuditSeverity.Fail,
+                    $"no candidate convention is consistent with what is known: the best, {best.Convention}, deviates by {EvidenceText(best)}; the coefficients or the form may be wrong"));
+                convention = null;
+            }
+            else if (runnerUp!.Score < Math.Max(AmbiguityRatio * best.Score, 1))
+            {
+                findings.Add(new("convention", AuditSeverity.Fail,
+                    $"ambiguous: {best.Convention} (score {Fmt(best.Score)}: {EvidenceText(best)}) and {runnerUp.Convention} (score {Fmt(runnerUp.Score)}: {EvidenceText(runnerUp)}) are about equally plausible "
+                    + $"(the runner-up must score at least {Fmt(AmbiguityRatio)} times worse and above 1); refusing to guess: state the convention from the source"));
+                convention = null;
+            }
+            else
+            {
+                findings.Add(new("convention", AuditSeverity.Warn,
+                    $"inferred, not stated: {best.Convention} (score {Fmt(best.Score)}: {EvidenceText(best)}); runner-up {runnerUp.Convention} (score {Fmt(runnerUp.Score)}: {EvidenceText(runnerUp)}); confirm the convention in the source before using the correlation"));
+            }
+        }
+        else
+        {
+            findings.Add(new("convention", AuditSeverity.Pass, $"stated: {best.Convention}"));
+        }
+
+        if (convention is null)
+        {
+            return new AuditReport { Convention = null, Detected = detected, Best = best, RunnerUp = runnerUp, SiCoefficients = null, MinimumTemperature = tMin, MaximumTemperature = tMax, Findings = findings };
+        }
+
+        var form = request.Correlation.Form();
+        double[] si = request.Correlation.SiCoefficients(convention);
+        if (request.Data is { Count: > 0 } data)
+        {
+            findings.Add(DataCheck(form, si, data));
+        }
+
+        if (tb is double boil)
+        {
+            findings.Add(BoilingPointCheck(form, si, boil, tMin, tMax));
+        }
+
+        if (request.Fluid is not null)
+        {
+            findings.Add(ModelCheck(form, si, model));
+        }
+
+        if (form is AntoineForm)
+        {
+            findings.Add(PoleCheck(si, tMin, tMax));
+        }
+
+        findings.AddRange(LatentHeatChecks(form, si, grid, model, tc));
+        findings.Add(CriticalCheck(form, tMax, tc));
+        if (request.Against is not null)
+        {
+            var second = new PublishedConvention(request.AgainstLogBase ?? convention.LogBase, request.AgainstPressureUnit ?? convention.PressureUnit,
+                request.AgainstTemperatureUnit ?? (request.Against.AllowsCelsius ? convention.TemperatureUnit : PublishedTemperatureUnit.Kelvin));
+            findings.Add(AgainstCheck(form, si, request.Against, second, grid, request.AgainstThreshold));
+        }
+
+        return new AuditReport { Convention = convention, Detected = detected, Best = best, RunnerUp = runnerUp, SiCoefficients = si, MinimumTemperature = tMin, MaximumTemperature = tMax, Findings = findings };
+    }
+
+    private static (double, double) ResolveRange(AuditRequest request)
+    {
+        (double lo, double hi) = request.Range
+            ?? (request.Data is { Count: > 0 } d ? (d.Min(p => p.Temperature), d.Max(p => p.Temperature))
+            : request.Fluid is not null ? DefaultRange(request.Fluid, request.Solver?.MinimumTemperature ?? 0)
+            : throw new ArgumentException("no temperature range: give a range, data or a fluid", nameof(request)));
+        if (!(lo > 0) || !(hi > lo) || !double.IsFinite(hi))
+        {
+            throw new ArgumentException($"the range must be 0 < Tmin < Tmax, got {Fmt(lo)} K to {Fmt(hi)} K", nameof(request));
+        }
+
+        return (lo, hi);
+    }
+
+    private static IEnumerable<PublishedConvention> Candidates(AuditRequest request)
+    {
+        LogBase[] bases = request.LogBase is LogBase b ? [b] : [LogBase.Ten, LogBase.E];
+        PublishedPressureUnit[] units = request.PressureUnit is PublishedPressureUnit u ? [u] : [.. PublishedConvention.PressureUnits];
+        PublishedTemperatureUnit[] scales = request.TemperatureUnit is PublishedTemperatureUnit t ? [t]
+            : request.Correlation.AllowsCelsius ? [PublishedTemperatureUnit.Kelvin, PublishedTemperatureUnit.Celsius] : [PublishedTemperatureUnit.Kelvin];
+        if (request.TemperatureUnit == PublishedTemperatureUnit.Celsius && !request.Correlation.AllowsCelsius)
+        {
+            throw new ArgumentException($"the {request.Correlation.FormId} form takes T in K only", nameof(request));
+        }
+
+        foreach (var lb in bases)
+        {
+            foreach (var pu in units)
+            {
+                foreach (var tu in scales)
+                {
+                    yield return new PublishedConvention(lb, pu, tu);
+                }
+            }
+        }
+    }
+
+    private sealed record ModelPoint(double Temperature, double LnPressure, double CompressibilityChange);
+
+    private static List<ModelPoint> ModelPoints(CoexistenceSolver? solver, double[] grid)
+    {
+        var points = new List<ModelPoint>();
+        if (solver is null)
+        {
+            return points;
+        }
+
+        foreach (double t in grid)
+        {
+            if (t >= solver.MinimumTemperature && t < solver.Model.CriticalTemperature && solver.TryAtTemperature(t, out var p))
+            {
+                points.Add(new ModelPoint(t, Math.Log(p!.Pressure), p.CompressibilityChange));
+            }
+        }
+
+        return points;
+    }
+
+    private static ConventionCandidate Score(PublishedCorrelation correlation, PublishedConvention convention, double? tb, List<ModelPoint> model, IReadOnlyList<VapourPressurePoint>? data)
+    {
+        var form = correlation.Form();
+        double[] si = correlation.SiCoefficients(convention);
+        var evidence = new List<AnchorDeviation>();
+        if (tb is double boil)
+        {
+            evidence.Add(new("normal boiling point", form.LnPressure(boil, si) - Math.Log(Constants.StandardAtmosphere), BoilingPointSigma));
+        }
+
+        if (model.Count > 0)
+        {
+            evidence.Add(new("model", Rms(model.Select(m => form.LnPressure(m.Temperature, si) - m.LnPressure)), ModelSigma));
+        }
+
+        if (data is { Count: > 0 })
+        {
+            evidence.Add(new("data", Rms(data.Select(d => form.LnPressure(d.Temperature, si) - Math.Log(d.Pressure))), DataSigma));
+        }
+
+        double score = evidence.Count == 0 ? 0 : Math.Sqrt(evidence.Average(e => Math.Pow(e.LnDeviation / e.Sigma, 2)));
+        return new ConventionCandidate(convention, double.IsFinite(score) ? score : double.PositiveInfinity, evidence);
+    }
+
+    private static double Rms(IEnumerable<double> values)
+    {
+        var list = values.ToList();
+        double s = Math.Sqrt(list.Average(v => v * v));
+        return list.Any(v => !double.IsFinite(v)) ? double.PositiveInfinity : s;
+    }
+
+    // Data: pass below 1 % (a correlation should match the data it is meant to represent to
+    // about their scatter), warn below 5 %, fail beyond (a factor that size is a wrong
+    // convention or a wrong fluid, not scatter).
+    private static AuditFinding DataCheck(VapourPressureForm form, double[] si, IReadOnlyList<VapourPressurePoint> data)
+    {
+        var worst = data.Select(d => (d.Temperature, Dev: Math.Exp(form.LnPressure(d.Temperature, si) - Math.Log(d.Pressure)) - 1)).MaxBy(x => Math.Abs(x.Dev));
+        double pct = 100 * Math.Abs(worst.Dev);
+        var sev = !double.IsFinite(pct) || pct >= 5 ? AuditSeverity.Fail : pct >= 1 ? AuditSeverity.Warn : AuditSeverity.Pass;
+        return new("data-deviation", sev,
+            $"largest deviation from the {data.Count} data points is {Signed(100 * worst.Dev)} % at {Fmt(worst.Temperature)} K (pass below 1 %, warn below 5 %)"
+            + (sev == AuditSeverity.Fail ? "; pressures this far off would mislead a vessel or relief calculation: check the convention and use measured data" : ""));
+    }
+
+    // Normal boiling point: pass below 1 %, warn below 5 % (a correlation extrapolated well
+    // beyond its range may drift that far), fail beyond.
+    private static AuditFinding BoilingPointCheck(VapourPressureForm form, double[] si, double tb, double tMin, double tMax)
+    {
+        double dev = 100 * (Math.Exp(form.LnPressure(tb, si)) / Constants.StandardAtmosphere - 1);
+        var sev = !double.IsFinite(dev) || Math.Abs(dev) >= 5 ? AuditSeverity.Fail : Math.Abs(dev) >= 1 ? AuditSeverity.Warn : AuditSeverity.Pass;
+        string where = tb >= tMin && tb <= tMax ? "inside the range" : "outside the range (extrapolated)";
+        return new("boiling-point", sev,
+            $"at the normal boiling point {Fmt(tb)} K ({where}) the correlation gives {Fmt(Math.Exp(form.LnPressure(tb, si)))} Pa, {Signed(dev)} % from 101325 Pa (pass below 1 %, warn below 5 %)"
+            + (sev == AuditSeverity.Fail ? "; a deviation this large points to a wrong log base or unit: do not use it for vessel or relief pressures" : ""));
+    }
+
+    // Model: wider than the data thresholds since the cubic model itself errs (a few percent for
+    // non-polar fluids, about 25 % for Peng-Robinson water near 0 °C): pass up to 30 %, warn up to 60 %, fail
+    // beyond (a wrong unit or base is a factor of 1.3 or more, usually orders of magnitude).
+    private static AuditFinding ModelCheck(VapourPressureForm form, double[] si, List<ModelPoint> model)
+    {
+        if (model.Count == 0)
+        {
+            return new("model-deviation", AuditSeverity.Warn, "the range lies outside the model's coexistence range: no comparison with the model");
+        }
+
+        var worst = model.Select(m => (m.Temperature, Dev: Math.Exp(form.LnPressure(m.Temperature, si) - m.LnPressure) - 1)).MaxBy(x => Math.Abs(x.Dev));
+        double pct = 100 * Math.Abs(worst.Dev);
+        var sev = !double.IsFinite(pct) || pct > 60 ? AuditSeverity.Fail : pct > 30 ? AuditSeverity.Warn : AuditSeverity.Pass;
+        return new("model-deviation", sev,
+            $"largest deviation from the model's vapour pressure over the range is {Signed(100 * worst.Dev)} % at {Fmt(worst.Temperature)} K (pass up to 30 %, warn up to 60 %: the model itself errs by a few percent for non-polar fluids and by about 25 % for water near 0 degC)"
+            + (sev == AuditSeverity.Fail ? "; the correlation as declared gives pressures far from any plausible value: check the convention and defer to measured data" : ""));
+    }
+
+    // Antoine pole at T = −C: fail inside the range or within 10 % below its lower limit (the
+    // curve bends sharply there), warn within 30 %, pass otherwise.
+    private static AuditFinding PoleCheck(double[] si, double tMin, double tMax)
+    {
+        double pole = -si[2];
+        if (pole <= 0)
+        {
+            return new("pole", AuditSeverity.Pass, $"the Antoine pole T = -C lies at {Fmt(pole)} K, not a physical temperature");
+        }
+
+        var sev = pole >= 0.9 * tMin ? AuditSeverity.Fail : pole >= 0.7 * tMin ? AuditSeverity.Warn : AuditSeverity.Pass;
+        string place = pole >= tMin && pole <= tMax ? "inside the range" : pole > tMax ? "above the range" : $"{Fmt(100 * (1 - pole / tMin))} % below the lower limit";
+        return new("pole", sev,
+            $"the Antoine pole T = -C lies at {Fmt(pole)} K, {place} (fail above 0.9 Tmin, warn above 0.7 Tmin)"
+            + (sev == AuditSeverity.Pass ? "" : "; near the pole ln P runs away, and extrapolating toward it gives meaningless pressures"));
+    }
+
+    private static IEnumerable<AuditFinding> LatentHeatChecks(VapourPressureForm form, double[] si, double[] grid, List<ModelPoint> model, double? tc)
+    {
+        var dz = model.ToDictionary(m => m.Temperature, m => m.CompressibilityChange);
+        string dzText = model.Count > 0 ? "with the model's compressibility change" : "with an ideal-gas vapour (dZ = 1)";
+        var rows = grid.Select(t => (T: t, Reduced: R * t * t * form.Slope(t, si), Dz: dz.TryGetValue(t, out double z) ? z : 1.0))
+            .Select(r => (r.T, r.Reduced, H: r.Reduced * r.Dz)).ToList();
+
+        var negative = rows.Where(r => !(r.H > 0)).ToList();
+        if (negative.Count > 0)
+        {
+            yield return new("latent-heat-positive", AuditSeverity.Fail,
+                $"the Clapeyron latent heat {dzText} is zero or negative from {Fmt(negative[0].T)} K to {Fmt(negative[^1].T)} K ({Fmt(negative[0].H)} J/mol at {Fmt(negative[0].T)} K): "
+                + "vapour pressure must rise with temperature, so this correlation is wrong there and must not be used");
+        }
+        else
+        {
+            yield return new("latent-heat-positive", AuditSeverity.Pass,
+                $"the Clapeyron latent heat {dzText} is positive over the range, {Fmt(rows[^1].H / 1000)} to {Fmt(rows[0].H / 1000)} kJ/mol");
+
+            // Decreasing and smooth: a rise, or a step of more than 20 % between neighbouring grid
+            // points (a 2.5 % step of the range), is not how a latent heat behaves below Tc.
+            var rise = rows.Zip(rows.Skip(1)).FirstOrDefault(p => p.Second.H > p.First.H);
+            var jump = rows.Zip(rows.Skip(1)).FirstOrDefault(p => Math.Abs(p.Second.H / p.First.H - 1) > 0.2);
+            if (rise != default)
+            {
+                yield return new("latent-heat-trend", AuditSeverity.Warn, $"the latent heat rises with temperature from {Fmt(rise.First.T)} K ({Fmt(rise.First.H)} to {Fmt(rise.Second.H)} J/mol); a real latent heat falls toward zero at Tc");
+            }
+            else if (jump != default)
+            {
+                yield return new("latent-heat-trend", AuditSeverity.Warn, $"the latent heat changes by more than 20 % between {Fmt(jump.First.T)} and {Fmt(jump.Second.T)} K: not smooth");
+            }
+            else
+            {
+                yield return new("latent-heat-trend", AuditSeverity.Pass, "the latent heat decreases smoothly with temperature over the range");
+            }
+        }
+
+        // Waring (Ind. Eng. Chem. 46, 762 (1954)): dH/dZ = R T² d ln P/dT decreases with T below
+        // about Tr = 0.8.
+        var below = tc is double c ? rows.Where(r => r.T < 0.8 * c).ToList() : rows;
+        if (below.Count < 2)
+        {
+            yield return new("waring", AuditSeverity.Pass, "the range lies above Tr = 0.8, where the Waring criterion does not apply");
+            yield break;
+        }
+
+        var up = below.Zip(below.Skip(1)).FirstOrDefault(p => p.Second.Reduced > p.First.Reduced);
+        if (up == default)
+        {
+            yield return new("waring", AuditSeverity.Pass, $"dH/dZ = R T^2 dlnP/dT decreases with T {(tc is null ? "over the range" : "below Tr = 0.8")} (Waring 1954)");
+        }
+        else
+        {
+            yield return new("waring", tc is null ? AuditSeverity.Warn : AuditSeverity.Fail,
+                $"dH/dZ = R T^2 dlnP/dT rises with T from {Fmt(up.First.T)} K, against the Waring criterion (it must fall below Tr = 0.8)"
+                + (tc is null ? "; without a fluid Tc is unknown and the range may extend above Tr = 0.8, so this is a warning" : "; the correlation's slope, and any latent heat or relief rate derived from it, is unreliable there"));
+        }
+    }
+
+    // Toward Tc: fail at or above Tc, warn above 0.85 Tc (printed correlations are fitted
+    // well below Tc and the Antoine and Clausius–Clapeyron forms cannot bend toward it).
+    private static AuditFinding CriticalCheck(VapourPressureForm form, double tMax, double? tc)
+    {
+        bool rigid = form is AntoineForm or ClausiusClapeyronForm;
+        string rigidText = rigid ? $"; the {form.Id} form's latent heat cannot fall to zero at Tc, so it overestimates the slope there" : "";
+        if (tc is not double c)
+        {
+            return new("near-critical", AuditSeverity.Warn, "no fluid given: the range could not be compared with the critical temperature" + rigidText);
+        }
+
+        double tr = tMax / c;
+        if (tr >= 1)
+        {
+            return new("near-critical", AuditSeverity.Fail, $"the range reaches {Fmt(tMax)} K, at or above Tc = {Fmt(c)} K, where there is no vapour pressure");
+        }
+
+        return tr > 0.85
+            ? new("near-critical", AuditSeverity.Warn, $"the range reaches Tr = {Fmt(tr)}, above 0.85, where printed correlations lose accuracy{rigidText}; defer to measured data there")
+            : new("near-critical", AuditSeverity.Pass, $"the range ends at Tr = {Fmt(tr)}, below 0.85");
+    }
+
+    // Second correlation: warn where they differ by more than the threshold, fail where they
+    // differ by more than five times it (5 % by default: then at least one is misapplied).
+    private static AuditFinding AgainstCheck(VapourPressureForm form, double[] si, PublishedCorrelation other, PublishedConvention convention, double[] grid, double threshold)
+    {
+        var otherForm = other.Form();
+        double[] otherSi = other.SiCoefficients(convention);
+        var devs = grid.Select(t => (T: t, Dev: Math.Exp(form.LnPressure(t, si) - otherForm.LnPressure(t, otherSi)) - 1)).ToList();
+        var outside = devs.Where(d => !(Math.Abs(d.Dev) <= threshold)).ToList();
+        var worst = devs.MaxBy(d => Math.Abs(d.Dev));
+        if (outside.Count == 0)
+        {
+            return new("against", AuditSeverity.Pass, $"agrees with the second correlation ({other.FormId}, {convention}) within {Fmt(100 * threshold)} % over the range (largest difference {Signed(100 * worst.Dev)} % at {Fmt(worst.T)} K)");
+        }
+
+        var sev = !(Math.Abs(worst.Dev) <= 5 * threshold) ? AuditSeverity.Fail : AuditSeverity.Warn;
+        return new("against", sev,
+            $"differs from the second correlation ({other.FormId}, {convention}) by more than {Fmt(100 * threshold)} % from {Fmt(outside[0].T)} K to {Fmt(outside[^1].T)} K (largest {Signed(100 * worst.Dev)} % at {Fmt(worst.T)} K; fail beyond {Fmt(500 * threshold)} %); "
+            + "at most one of them is right there: use measured data");
+    }
+
+    private static string EvidenceText(ConventionCandidate c)
+        => string.Join(", ", c.Evidence.Select(e => $"{e.Anchor} {Signed(e.Percent)} %"));
+
+    private static string Fmt(double v) => v.ToString("G4", CultureInfo.InvariantCulture);
+
+    private static string Signed(double v) => (v >= 0 ? "+" : "") + Fmt(v);
+}

@@ -1,0 +1,85 @@
+using System.Text.Json;
+
+namespace PhaseSlope.Cli.Tests.Commands;
+
+public class AuditCommandTests
+{
+    // Water, log10(P/mmHg) = 8.07131 − 1730.63/(233.426 + t/°C), 1–100 °C, Lange's Handbook of
+    // Chemistry (from memory); and log10(P/bar) = 5.40221 − 1838.675/(T/K − 31.737), 304–333 K,
+    // Bridgeman & Aldrich, J. Heat Transfer 86, 279 (1964) (from memory).
+    private const string LangeWater = "8.07131,1730.63,233.426";
+    private const string BridgemanWater = "5.40221,1838.675,-31.737";
+
+    [Fact]
+    public void Withheld_convention_of_the_Lange_water_set_is_detected_in_json()
+    {
+        var json = CliHarness.RunJson("audit", "--form", "antoine", "--coefficients", LangeWater, "--range", "1 degC,100 degC", "--fluid", "water", "--format", "json");
+        var detected = json.GetProperty("detected");
+        Assert.Equal("10", detected.GetProperty("log_base").GetString());
+        Assert.Equal("mmHg", detected.GetProperty("pressure_unit").GetString());
+        Assert.Equal("degC", detected.GetProperty("temperature_unit").GetString());
+        Assert.True(json.GetProperty("findings").GetArrayLength() > 3);
+        Assert.Equal(JsonValueKind.Object, json.GetProperty("runner_up").ValueKind);
+    }
+
+    [Fact]
+    public void Mis_declared_unit_exits_8()
+    {
+        var result = CliHarness.Run("audit", "--form", "antoine", "--coefficients", LangeWater, "--log-base", "10", "--pressure-unit", "kPa", "--temperature-unit", "degC", "--range", "1,100", "--fluid", "water");
+        Assert.Equal(8, result.ExitCode);
+        Assert.Contains("+649", result.Stdout, StringComparison.Ordinal);
+        Assert.Equal("", result.Stderr);
+    }
+
+    [Fact]
+    public void Negative_B_Antoine_set_fails_the_latent_heat_check()
+    {
+        var result = CliHarness.Run("audit", "--form", "antoine", "--coefficients", "10,-1000,0", "--log-base", "e", "--pressure-unit", "Pa", "--temperature-unit", "K", "--range", "300,350");
+        Assert.Equal(8, result.ExitCode);
+        Assert.Contains("latent-heat-positive  fail", result.Stdout, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Two_water_sets_are_compared_and_the_band_reported()
+    {
+        var json = CliHarness.Run("audit", "--form", "antoine", "--coefficients", LangeWater, "--log-base", "10", "--pressure-unit", "mmHg", "--temperature-unit", "degC",
+            "--range", "1,100", "--fluid", "water", "--against", "antoine", "--coefficients2", BridgemanWater, "--log-base2", "10", "--pressure-unit2", "bar", "--temperature-unit2", "K", "--format", "json");
+        Assert.Equal(0, json.ExitCode);
+        using var doc = JsonDocument.Parse(json.Stdout);
+        var against = doc.RootElement.GetProperty("findings").EnumerateArray().Single(f => f.GetProperty("check").GetString() == "against");
+        // The Bridgeman–Aldrich set is fitted over 304–333 K; extrapolated to 100 °C it drifts
+        // 2.5 % from the Lange set, so the band of > 1 % disagreement lies at the hot end.
+        Assert.Equal("warn", against.GetProperty("severity").GetString());
+        Assert.Contains("to 373.1 K", against.GetProperty("message").GetString(), StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Ambiguous_detection_exits_8()
+    {
+        var result = CliHarness.Run("audit", "--form", "antoine", "--coefficients", BridgemanWater, "--range", "304,333", "--fluid", "water");
+        Assert.Equal(8, result.ExitCode);
+        Assert.Contains("ambiguous", result.Stdout, StringComparison.Ordinal);
+    }
+
+    [Theory]
+    [InlineData("--coefficients", "8.07131,1730.63")]
+    [InlineData("--coefficients", "8.07131,abc,233.426")]
+    [InlineData("--pressure-unit", "furlong")]
+    [InlineData("--log-base", "2")]
+    [InlineData("--range", "100,1")]
+    public void Bad_input_exits_2_with_one_stderr_line(string option, string value)
+    {
+        var args = new List<string> { "audit", "--form", "antoine", "--coefficients", LangeWater, "--range", "1,100", "--temperature-unit", "degC" };
+        int i = args.IndexOf(option);
+        if (i >= 0)
+        {
+            args[i + 1] = value;
+        }
+        else
+        {
+            args.AddRange([option, value]);
+        }
+
+        CliHarness.AssertFailure(CliHarness.Run([.. args]), 2);
+    }
+}
