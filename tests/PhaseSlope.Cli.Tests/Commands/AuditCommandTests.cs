@@ -82,4 +82,25 @@ public class AuditCommandTests
 
         CliHarness.AssertFailure(CliHarness.Run([.. args]), 2);
     }
+
+    [Fact]
+    public void Audit_AgainstDataFile_ReportsTheDataDeviation()
+    {
+        // The Antoine constants are this dataset's own least-squares fit (phaseslope fit on the
+        // invented FRC-7 data, docs/examples): the largest deviation from its 14 points is 0.51 %,
+        // inside the pass band of the data check; with A raised by ln(1.1) every point is 10 %
+        // off and the same check fails, so the command exits 8.
+        string[] common = ["--log-base", "e", "--pressure-unit", "Pa", "--temperature-unit", "K", "--range", "300,480",
+            "--data", "../../../../../docs/examples/frc-7-vapour-pressure.csv", "--fluid", "../../../../../docs/examples/frc-7.fluid", "--format", "json"];
+        var good = CliHarness.RunJson(["audit", "--form", "antoine", "--coefficients", "20.987605815602315,2931.3062947977137,-57.81410056619607", .. common]);
+        var data = good.GetProperty("findings").EnumerateArray().Single(f => f.GetProperty("check").GetString() == "data-deviation");
+        Assert.Equal("pass", data.GetProperty("severity").GetString());
+
+        double shifted = 20.987605815602315 + Math.Log(1.1);
+        var bad = CliHarness.Run(["audit", "--form", "antoine", "--coefficients", $"{shifted.ToString("R", System.Globalization.CultureInfo.InvariantCulture)},2931.3062947977137,-57.81410056619607", .. common]);
+        Assert.Equal(8, bad.ExitCode);
+        using var doc = System.Text.Json.JsonDocument.Parse(bad.Stdout);
+        var failed = doc.RootElement.GetProperty("findings").EnumerateArray().Single(f => f.GetProperty("check").GetString() == "data-deviation");
+        Assert.Equal("fail", failed.GetProperty("severity").GetString());
+    }
 }
