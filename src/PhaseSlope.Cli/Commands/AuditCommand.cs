@@ -211,8 +211,7 @@ internal static class AuditCommand
 
     private static string Json(AuditReport report)
     {
-        using var stream = new MemoryStream();
-        using (var w = new Utf8JsonWriter(stream, JsonText.Options))
+        return JsonText.Write(w =>
         {
             w.WriteStartObject();
             w.WritePropertyName("detected");
@@ -287,9 +286,7 @@ internal static class AuditCommand
 
             w.WriteEndArray();
             w.WriteEndObject();
-        }
-
-        return Encoding.UTF8.GetString(stream.ToArray()) + Environment.NewLine;
+        });
     }
 
     private static void Number(Utf8JsonWriter w, string name, double v)

@@ -70,8 +70,7 @@ internal static class FluidsCheckCommand
 
     private static string Json(string path, FluidCheck check)
     {
-        using var stream = new MemoryStream();
-        using (var json = new Utf8JsonWriter(stream, JsonText.Options))
+        return JsonText.Write(json =>
         {
             json.WriteStartObject();
             json.WriteString("file", path);
@@ -102,8 +101,6 @@ internal static class FluidsCheckCommand
             json.WriteBoolean("solves_to_critical_point", check.SolvesToCriticalPoint);
             json.WriteBoolean("has_ideal_gas_heat_capacity", check.Fluid.IdealGasHeatCapacity is not null);
             json.WriteEndObject();
-        }
-
-        return Encoding.UTF8.GetString(stream.ToArray()) + Environment.NewLine;
+        });
     }
 }

@@ -27,8 +27,7 @@ internal static class CoexistenceWriter
 
     private static string Json(IReadOnlyList<CoexistenceRow> rows, bool single, Fluid fluid, CubicModel model, ReferenceState? reference)
     {
-        using var stream = new MemoryStream();
-        using (var json = new Utf8JsonWriter(stream, JsonText.Options))
+        return JsonText.Write(json =>
         {
             if (single)
             {
@@ -44,9 +43,7 @@ internal static class CoexistenceWriter
 
                 json.WriteEndArray();
             }
-        }
-
-        return Encoding.UTF8.GetString(stream.ToArray()) + Environment.NewLine;
+        });
     }
 
     private static void WriteObject(Utf8JsonWriter json, CoexistenceRow row, Fluid fluid, CubicModel model, ReferenceState? reference)

@@ -11,7 +11,7 @@ internal static class FitWriter
     public static string Fit(VapourPressureFit fit, IReadOnlyList<VapourPressureFit> candidates, OutputFormat format)
         => format switch
         {
-            OutputFormat.Json => Json(json =>
+            OutputFormat.Json => JsonText.Write(json =>
             {
                 json.WriteStartObject();
                 WriteFit(json, fit);
@@ -45,7 +45,7 @@ internal static class FitWriter
     public static string Latent(VapourPressureFit fit, VolumeChangeModel model, IReadOnlyList<LatentHeatPoint> points, IReadOnlyList<VapourPressureFit> candidates, OutputFormat format)
         => format switch
         {
-            OutputFormat.Json => Json(json =>
+            OutputFormat.Json => JsonText.Write(json =>
             {
                 json.WriteStartObject();
                 WriteFit(json, fit);
@@ -235,16 +235,5 @@ internal static class FitWriter
         text.AppendLine("u(dH) is the standard uncertainty from the fit covariance only; the volume model adds its own (see docs/validation.md).");
         text.AppendLine(CoexistenceWriter.Caution);
         return text.ToString();
-    }
-
-    private static string Json(Action<Utf8JsonWriter> write)
-    {
-        using var stream = new MemoryStream();
-        using (var json = new Utf8JsonWriter(stream, JsonText.Options))
-        {
-            write(json);
-        }
-
-        return Encoding.UTF8.GetString(stream.ToArray()) + Environment.NewLine;
     }
 }

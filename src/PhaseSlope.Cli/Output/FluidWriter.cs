@@ -37,8 +37,7 @@ internal static class FluidWriter
 
     private static string Json(IReadOnlyList<Fluid> fluids, bool single)
     {
-        using var stream = new MemoryStream();
-        using (var json = new Utf8JsonWriter(stream, JsonText.Options))
+        return JsonText.Write(json =>
         {
             if (!single)
             {
@@ -54,9 +53,7 @@ internal static class FluidWriter
             {
                 json.WriteEndArray();
             }
-        }
-
-        return Encoding.UTF8.GetString(stream.ToArray()) + Environment.NewLine;
+        });
     }
 
     private static void WriteObject(Utf8JsonWriter json, Fluid fluid)

@@ -14,7 +14,7 @@ internal static class StateWriter
     public static string State(PropertyModel engine, ThermodynamicState state, OutputFormat format, UnitSystem units)
         => format switch
         {
-            OutputFormat.Json => Json(json =>
+            OutputFormat.Json => JsonText.Write(json =>
             {
                 json.WriteStartObject();
                 WriteHeader(json, engine, state);
@@ -34,7 +34,7 @@ internal static class StateWriter
         string symbol = $"(d{of}/d{by})_{hold}";
         return format switch
         {
-            OutputFormat.Json => Json(json =>
+            OutputFormat.Json => JsonText.Write(json =>
             {
                 json.WriteStartObject();
                 WriteHeader(json, engine, state);
@@ -93,16 +93,5 @@ internal static class StateWriter
 
         text.AppendLine(CoexistenceWriter.Caution);
         return text.ToString();
-    }
-
-    private static string Json(Action<Utf8JsonWriter> write)
-    {
-        using var stream = new MemoryStream();
-        using (var json = new Utf8JsonWriter(stream, JsonText.Options))
-        {
-            write(json);
-        }
-
-        return Encoding.UTF8.GetString(stream.ToArray()) + Environment.NewLine;
     }
 }

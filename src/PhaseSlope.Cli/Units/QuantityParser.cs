@@ -292,28 +292,8 @@ internal static partial class QuantityParser
         return new UsageException(hint is null ? message : $"{message} {hint}");
     }
 
-    /// <summary>Makes user text safe to echo on one line: control characters (line breaks, tabs)
-    /// are shown as \uXXXX escapes.</summary>
-    private static string Clean(string text)
-    {
-        if (!text.Any(char.IsControl))
-        {
-            return text;
-        }
-        var builder = new StringBuilder(text.Length + 8);
-        foreach (char c in text)
-        {
-            if (char.IsControl(c))
-            {
-                builder.Append(CultureInfo.InvariantCulture, $"\\u{(int)c:X4}");
-            }
-            else
-            {
-                builder.Append(c);
-            }
-        }
-        return builder.ToString();
-    }
+    /// <summary>Makes user text safe to echo on one line (see <see cref="Input.DataFileException.OneLine"/>).</summary>
+    private static string Clean(string text) => Input.DataFileException.OneLine(text);
 
     private static string Format(double value) => value.ToString("G6", CultureInfo.InvariantCulture);
 }
