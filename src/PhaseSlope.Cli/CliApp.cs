@@ -18,6 +18,7 @@ internal static class CliApp
         root.Subcommands.Add(DeriveCommand.Create(io));
         root.Subcommands.Add(FitCommand.Create(io));
         root.Subcommands.Add(LatentCommand.Create(io));
+        root.Subcommands.Add(PlotCommand.Create(io));
         root.Subcommands.Add(FluidsCommand.Create(io));
 
         if (args.Length == 0)
