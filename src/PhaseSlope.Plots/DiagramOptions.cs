@@ -22,6 +22,6 @@ public sealed record DiagramOptions
     /// from (latent); null for none.</summary>
     public IReadOnlyList<VapourPressurePoint>? Data { get; init; }
 
-    /// <summary>The legend label of the measured data (for example the file name).</summary>
-    public string DataLabel { get; init; } = "measured";
+    /// <summary>The name of the measured data in legends (for example the file name).</summary>
+    public string DataLabel { get; init; } = "data";
 }

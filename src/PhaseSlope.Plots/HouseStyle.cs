@@ -64,6 +64,7 @@ public static class HouseStyle
             Title = title,
             TitleFontSize = 18,
             TitleFontWeight = FontWeights.Normal,
+            SubtitleFontSize = 13,
             DefaultFont = Font ?? "sans-serif",
             DefaultFontSize = 14,
             TextColor = Ink,

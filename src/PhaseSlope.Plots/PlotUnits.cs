@@ -3,7 +3,7 @@ namespace PhaseSlope.Plots;
 /// <summary>The unit system of a figure's axes.</summary>
 public enum PlotUnits
 {
-    /// <summary>K, kPa, mol/m³, m³/mol, kJ/mol, J/(mol·K).</summary>
+    /// <summary>K, kPa, mol/m³, cm³/mol, kJ/mol, J/(mol·K).</summary>
     Si,
 
     /// <summary>°C, bar, kg/m³, m³/kg, kJ/kg, kJ/(kg·K).</summary>
@@ -29,9 +29,10 @@ internal readonly record struct UnitScale(PlotUnits Units)
 
     public double Density(double molPerM3, double molarMass) => Si ? molPerM3 : molPerM3 * molarMass;
 
-    public string VolumeUnit => Si ? "m³/mol" : "m³/kg";
+    // cm³/mol rather than m³/mol: tick labels such as 50 and 2000 instead of 5e-05 and 0.002.
+    public string VolumeUnit => Si ? "cm³/mol" : "m³/kg";
 
-    public double Volume(double m3PerMol, double molarMass) => Si ? m3PerMol : m3PerMol / molarMass;
+    public double Volume(double m3PerMol, double molarMass) => Si ? m3PerMol * 1e6 : m3PerMol / molarMass;
 
     public string EnthalpyUnit => Si ? "kJ/mol" : "kJ/kg";
 

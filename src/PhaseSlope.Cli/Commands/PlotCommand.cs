@@ -95,7 +95,7 @@ internal static class PlotCommand
             var options = probe with
             {
                 Data = dataPath is null ? null : CorrelationOptions.ReadDataFile(dataPath, parse.GetValue(temperatureUnit), parse.GetValue(pressureUnit)),
-                DataLabel = dataPath is null ? "measured" : Path.GetFileName(dataPath),
+                DataLabel = dataPath is null ? "data" : Path.GetFileName(dataPath),
             };
             var model = Diagram.Build(kind, fluids, options);
             FigureExporter.Export(model, path, w, h);

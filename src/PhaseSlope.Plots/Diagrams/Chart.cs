@@ -31,20 +31,20 @@ internal static class Chart
         return series;
     }
 
-    /// <summary>The critical point: a black-edged diamond filled with the fluid's colour;
-    /// only the first one carries a legend entry.</summary>
-    public static ScatterSeries Critical(DataPoint point, OxyColor fill, bool inLegend)
+    /// <summary>Critical points: black diamonds (one look for every fluid, since in reduced
+    /// coordinates they coincide); one legend entry, after the curves.</summary>
+    public static ScatterSeries Critical(IEnumerable<DataPoint> points)
     {
         var series = new ScatterSeries
         {
-            Title = inLegend ? "critical point" : null,
+            Title = "critical point",
             MarkerType = MarkerType.Diamond,
             MarkerSize = 7,
-            MarkerFill = fill,
-            MarkerStroke = HouseStyle.Ink,
-            MarkerStrokeThickness = 1.5,
+            MarkerFill = HouseStyle.Ink,
+            MarkerStroke = OxyColors.White,
+            MarkerStrokeThickness = 1,
         };
-        series.Points.Add(new ScatterPoint(point.X, point.Y));
+        series.Points.AddRange(points.Select(p => new ScatterPoint(p.X, p.Y)));
         return series;
     }
 

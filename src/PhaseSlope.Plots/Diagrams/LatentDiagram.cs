@@ -24,6 +24,7 @@ public static class LatentDiagram
         model.Axes.Add(HouseStyle.Linear(AxisPosition.Bottom, "temperature T", units.TemperatureUnit));
         model.Axes.Add(HouseStyle.Linear(AxisPosition.Left, "enthalpy of vaporization Δh", units.EnthalpyUnit));
 
+        var criticals = new List<DataPoint>();
         for (int i = 0; i < fluids.Count; i++)
         {
             var fluid = fluids[i];
@@ -31,8 +32,10 @@ public static class LatentDiagram
             var curve = Chart.Curve(fluid, options.Points);
             model.Series.Add(Chart.Line($"{fluid.Name} (model)", HouseStyle.Colour(i),
                 curve.Select(c => new DataPoint(units.Temperature(c.Temperature), units.Enthalpy(c.EnthalpyOfVaporization, m)))));
-            model.Series.Add(Chart.Critical(new DataPoint(units.Temperature(curve[^1].Temperature), 0), HouseStyle.Colour(i), i == 0));
+            criticals.Add(new DataPoint(units.Temperature(curve[^1].Temperature), 0));
         }
+
+        model.Series.Add(Chart.Critical(criticals));
 
         if (options.Data is { Count: > 0 } data)
         {
@@ -42,9 +45,9 @@ public static class LatentDiagram
             var colour = HouseStyle.Colour(fluids.Count);
             var band = new AreaSeries
             {
-                Title = $"from {options.DataLabel}: ±u band",
+                Title = "±u (standard uncertainty)",
                 Color = OxyColors.Undefined,
-                Fill = OxyColor.FromAColor(70, colour),
+                Fill = OxyColor.FromAColor(110, colour),
                 StrokeThickness = 0,
                 Color2 = OxyColors.Undefined,
             };
@@ -56,7 +59,8 @@ public static class LatentDiagram
             }
 
             model.Series.Add(band);
-            model.Series.Add(Chart.Line($"from {options.DataLabel}: Clapeyron, Wagner (3, 6) fit", colour,
+            model.Subtitle = $"dashed: Clapeyron estimate from {options.DataLabel} (Wagner (3, 6) fit, Δz from the model)";
+            model.Series.Add(Chart.Line("from data", colour,
                 points.Select(p => new DataPoint(units.Temperature(p.Temperature), units.Enthalpy(p.EnthalpyOfVaporization, m))),
                 Chart.Thick, LineStyle.Dash));
         }

@@ -24,6 +24,7 @@ public static class LnPressureInverseTemperatureDiagram
         DataPoint Map(double t, double p, double tc, double pc)
             => options.Reduced ? new(tc / t, Math.Log(p / pc)) : new(1000 / t, Math.Log(units.Pressure(p)));
 
+        var criticals = new List<DataPoint>();
         for (int i = 0; i < fluids.Count; i++)
         {
             var fluid = fluids[i];
@@ -31,14 +32,16 @@ public static class LnPressureInverseTemperatureDiagram
             double tc = fluid.Model.CriticalTemperature;
             double pc = fluid.Model.CriticalPressure;
             model.Series.Add(Chart.Line(fluid.Name, HouseStyle.Colour(i), curve.Select(c => Map(c.Temperature, c.Pressure, tc, pc))));
-            model.Series.Add(Chart.Critical(Map(curve[^1].Temperature, curve[^1].Pressure, tc, pc), HouseStyle.Colour(i), i == 0));
+            criticals.Add(Map(curve[^1].Temperature, curve[^1].Pressure, tc, pc));
         }
+
+        model.Series.Add(Chart.Critical(criticals));
 
         if (options.Data is { Count: > 0 } data)
         {
             double tc = fluids[0].Model.CriticalTemperature;
             double pc = fluids[0].Model.CriticalPressure;
-            model.Series.Add(Chart.Measured(options.DataLabel, data.Select(d => Map(d.Temperature, d.Pressure, tc, pc))));
+            model.Series.Add(Chart.Measured($"measured ({options.DataLabel})", data.Select(d => Map(d.Temperature, d.Pressure, tc, pc))));
         }
 
         return model;

@@ -105,7 +105,7 @@ public static class PressureEnthalpyDiagram
             model.Series.Add(Chart.Line(label, HouseStyle.Colour(colour++), points, Chart.Thin + 0.5));
         }
 
-        model.Series.Add(Chart.Critical(Map(critical.Enthalpy, critical.Pressure), HouseStyle.Ink, true));
+        model.Series.Add(Chart.Critical([Map(critical.Enthalpy, critical.Pressure)]));
         return model;
     }
 

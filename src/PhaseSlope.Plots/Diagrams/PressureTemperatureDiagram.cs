@@ -24,6 +24,7 @@ public static class PressureTemperatureDiagram
             ? HouseStyle.Logarithmic(AxisPosition.Left, pTitle, pUnit)
             : HouseStyle.Linear(AxisPosition.Left, pTitle, pUnit));
 
+        var criticals = new List<DataPoint>();
         for (int i = 0; i < fluids.Count; i++)
         {
             var fluid = fluids[i];
@@ -33,14 +34,16 @@ public static class PressureTemperatureDiagram
             DataPoint Map(double t, double p) => options.Reduced ? new(t / tc, p / pc) : new(units.Temperature(t), units.Pressure(p));
             model.Series.Add(Chart.Line(fluid.Name, HouseStyle.Colour(i), curve.Select(c => Map(c.Temperature, c.Pressure))));
             var critical = curve[^1];
-            model.Series.Add(Chart.Critical(Map(critical.Temperature, critical.Pressure), HouseStyle.Colour(i), i == 0));
+            criticals.Add(Map(critical.Temperature, critical.Pressure));
         }
+
+        model.Series.Add(Chart.Critical(criticals));
 
         if (options.Data is { Count: > 0 } data)
         {
             double tc = fluids[0].Model.CriticalTemperature;
             double pc = fluids[0].Model.CriticalPressure;
-            model.Series.Add(Chart.Measured(options.DataLabel, data.Select(d => options.Reduced
+            model.Series.Add(Chart.Measured($"measured ({options.DataLabel})", data.Select(d => options.Reduced
                 ? new DataPoint(d.Temperature / tc, d.Pressure / pc)
                 : new DataPoint(units.Temperature(d.Temperature), units.Pressure(d.Pressure)))));
         }

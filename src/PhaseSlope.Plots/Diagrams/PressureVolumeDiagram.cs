@@ -92,7 +92,7 @@ public static class PressureVolumeDiagram
         model.Series.Add(Chart.Line("tie line at Psat (equal areas)", HouseStyle.Ink, Chart.Thin));
 
         var critical = dome[^1];
-        model.Series.Add(Chart.Critical(Map(critical.Liquid.MolarVolume, critical.Pressure), HouseStyle.Ink, true));
+        model.Series.Add(Chart.Critical([Map(critical.Liquid.MolarVolume, critical.Pressure)]));
         return model;
     }
 }

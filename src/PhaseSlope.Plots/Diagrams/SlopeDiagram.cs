@@ -23,6 +23,7 @@ public static class SlopeDiagram
             ? HouseStyle.Logarithmic(AxisPosition.Left, title, unit)
             : HouseStyle.Linear(AxisPosition.Left, title, unit));
 
+        var criticals = new List<DataPoint>();
         for (int i = 0; i < fluids.Count; i++)
         {
             var fluid = fluids[i];
@@ -32,8 +33,10 @@ public static class SlopeDiagram
             DataPoint Map(double t, double slope)
                 => options.Reduced ? new(t / tc, slope * tc / pc) : new(units.Temperature(t), units.Pressure(slope));
             model.Series.Add(Chart.Line(fluid.Name, HouseStyle.Colour(i), curve.Select(c => Map(c.Temperature, c.Slope))));
-            model.Series.Add(Chart.Critical(Map(curve[^1].Temperature, curve[^1].Slope), HouseStyle.Colour(i), i == 0));
+            criticals.Add(Map(curve[^1].Temperature, curve[^1].Slope));
         }
+
+        model.Series.Add(Chart.Critical(criticals));
 
         return model;
     }

@@ -21,6 +21,7 @@ public static class TemperatureDensityDiagram
             ? HouseStyle.Linear(AxisPosition.Left, "reduced temperature T/Tc", null)
             : HouseStyle.Linear(AxisPosition.Left, "temperature T", units.TemperatureUnit));
 
+        var criticals = new List<DataPoint>();
         for (int i = 0; i < fluids.Count; i++)
         {
             var fluid = fluids[i];
@@ -40,8 +41,10 @@ public static class TemperatureDensityDiagram
             model.Series.Add(Chart.Line($"{fluid.Name}: diameter (ρL + ρV)/2", colour,
                 curve.Select(c => Map((c.Liquid.Density + c.Vapour.Density) / 2, c.Temperature)), Chart.Thin, LineStyle.Dash));
             var critical = curve[^1];
-            model.Series.Add(Chart.Critical(Map(critical.Liquid.Density, critical.Temperature), colour, i == 0));
+            criticals.Add(Map(critical.Liquid.Density, critical.Temperature));
         }
+
+        model.Series.Add(Chart.Critical(criticals));
 
         return model;
     }

@@ -76,7 +76,7 @@ public static class TemperatureEntropyDiagram
             model.Series.Add(Chart.Line(label, HouseStyle.Colour(colour++), points, Chart.Thin + 0.5));
         }
 
-        model.Series.Add(Chart.Critical(Map(critical), HouseStyle.Ink, true));
+        model.Series.Add(Chart.Critical([Map(critical)]));
         return model;
     }
 
