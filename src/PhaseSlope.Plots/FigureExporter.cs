@@ -5,7 +5,7 @@ namespace PhaseSlope.Plots;
 
 /// <summary>Writes a plot model to a PNG or SVG file, chosen by the file's extension, through a
 /// temporary file in the same folder that is then renamed over the target.</summary>
-public static class FigureExporter
+public static partial class FigureExporter
 {
     /// <summary>Renders <paramref name="model"/> at <paramref name="width"/> × <paramref name="height"/>
     /// pixels into <paramref name="stream"/>.</summary>
@@ -27,9 +27,20 @@ public static class FigureExporter
         else
         {
             var svg = new OxyPlot.SkiaSharp.SvgExporter { Width = width, Height = height };
-            svg.Export(model, stream);
+            using var raw = new MemoryStream();
+            svg.Export(model, raw);
+            byte[] fixedText = System.Text.Encoding.UTF8.GetBytes(ValidGlyphPositions(System.Text.Encoding.UTF8.GetString(raw.ToArray())));
+            stream.Write(fixedText);
         }
     }
+
+    /// <summary>Skia writes per-glyph positions as <c>x="1.5, 2.5, "</c>; the trailing comma
+    /// makes the list invalid SVG, and strict viewers then drop the positions. This removes it.</summary>
+    internal static string ValidGlyphPositions(string svg)
+        => TrailingSeparator().Replace(svg, "$1=\"$2\"");
+
+    [System.Text.RegularExpressions.GeneratedRegex(@"\b([xy])=""([^""]*?)[,\s]+""")]
+    private static partial System.Text.RegularExpressions.Regex TrailingSeparator();
 
     /// <summary>Renders <paramref name="model"/> to the file <paramref name="path"/>: PNG for
     /// <c>.png</c>, SVG for <c>.svg</c>. A failed write leaves an existing file untouched.</summary>

@@ -89,6 +89,13 @@ public class RenderingTests
         int lines = document.Descendants(ns + "path").Count() + document.Descendants(ns + "polyline").Count();
         Assert.True(lines >= 5, $"{id}: {lines} path/polyline elements");
 
+        // Every coordinate list is a valid SVG list of numbers (no trailing separator).
+        foreach (var attribute in document.Descendants(ns + "text").Attributes().Where(a => a.Name.LocalName is "x" or "y"))
+        {
+            Assert.All(attribute.Value.Split(',', StringSplitOptions.TrimEntries),
+                n => Assert.True(double.TryParse(n, System.Globalization.CultureInfo.InvariantCulture, out _), $"{id}: {attribute.Name}=\"{attribute.Value}\""));
+        }
+
         var texts = document.Descendants(ns + "text").Select(t => t.Value.Trim()).ToHashSet(StringComparer.Ordinal);
         foreach (var axis in model.Axes)
         {
