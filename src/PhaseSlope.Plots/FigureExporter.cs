@@ -8,7 +8,8 @@ namespace PhaseSlope.Plots;
 public static partial class FigureExporter
 {
     /// <summary>Renders <paramref name="model"/> at <paramref name="width"/> × <paramref name="height"/>
-    /// pixels into <paramref name="stream"/>.</summary>
+    /// pixels into <paramref name="stream"/>, first fitting text sizes and the legend's place to
+    /// that size (<see cref="HouseStyle.FitTo"/>).</summary>
     /// <exception cref="InvalidInputException">A size outside
     /// [<see cref="HouseStyle.MinimumSize"/>, <see cref="HouseStyle.MaximumSize"/>].</exception>
     public static void Export(PlotModel model, Stream stream, FigureFormat format, int width = HouseStyle.DefaultWidth, int height = HouseStyle.DefaultHeight)
@@ -17,6 +18,7 @@ public static partial class FigureExporter
         ArgumentNullException.ThrowIfNull(stream);
         CheckSize(width, "width");
         CheckSize(height, "height");
+        HouseStyle.FitTo(model, width, height);
         if (format == FigureFormat.Png)
         {
             // Text shaping would need the HarfBuzz native library; plain glyph runs are enough

@@ -62,11 +62,11 @@ public static class HouseStyle
         var model = new PlotModel
         {
             Title = title,
-            TitleFontSize = 18,
+            TitleFontSize = BaseTitleFontSize,
             TitleFontWeight = FontWeights.Normal,
-            SubtitleFontSize = 13,
+            SubtitleFontSize = BaseLegendFontSize,
             DefaultFont = Font ?? "sans-serif",
-            DefaultFontSize = 14,
+            DefaultFontSize = BaseFontSize,
             TextColor = Ink,
             Background = OxyColors.White,
             PlotAreaBackground = OxyColors.White,
@@ -81,7 +81,7 @@ public static class HouseStyle
             LegendOrientation = LegendOrientation.Vertical,
             LegendBorder = OxyColors.Undefined,
             LegendBackground = OxyColors.Undefined,
-            LegendFontSize = 13,
+            LegendFontSize = BaseLegendFontSize,
             LegendSymbolLength = 28,
             LegendItemSpacing = 6,
         });
@@ -96,6 +96,96 @@ public static class HouseStyle
     public static LogarithmicAxis Logarithmic(AxisPosition position, string title, string? unit)
         => Style(new LogarithmicAxis { Position = position, Title = title, Unit = unit, Base = 10, UseSuperExponentialFormat = false });
 
+    /// <summary>A tick label: plain decimals from 0.001 to 10⁶ ("0.002", "4000"), else one
+    /// short exponent form ("1e-5", "2.5e+7"), never mixed within a decade.</summary>
+    public static string Tick(double value)
+    {
+        var invariant = System.Globalization.CultureInfo.InvariantCulture;
+        double magnitude = Math.Abs(value);
+        // Round away binary noise such as 0.30000000000000004 before choosing the form.
+        double rounded = double.Parse(value.ToString("g10", invariant), invariant);
+        return magnitude == 0 ? "0"
+            : magnitude >= 1e-3 && magnitude < 1e6 ? rounded.ToString("0.######", invariant)
+            : rounded.ToString("0.##e+0", invariant);
+    }
+
+    /// <summary>Base font size of axis labels and titles at the default size.</summary>
+    public const double BaseFontSize = 14;
+
+    /// <summary>Base size of the figure title at the default size.</summary>
+    public const double BaseTitleFontSize = 18;
+
+    /// <summary>Base size of the legend text and the subtitle at the default size.</summary>
+    public const double BaseLegendFontSize = 13;
+
+    /// <summary>Base size of small labels on curves (quality values) at the default size.</summary>
+    public const double BaseLabelFontSize = 11;
+
+    /// <summary>Scales the text to the figure size and moves the legend below the plot area
+    /// when beside it would leave too little room for the data; the title shrinks to fit the
+    /// width. Safe to call again for another size.</summary>
+    public static void FitTo(PlotModel model, int width, int height)
+    {
+        ArgumentNullException.ThrowIfNull(model);
+        double scale = Math.Clamp(Math.Min(width / (double)DefaultWidth, height / (double)DefaultHeight), 0.6, 2.5);
+        model.DefaultFontSize = BaseFontSize * scale;
+        model.TitleFontSize = FitText(model.Title, BaseTitleFontSize * scale, width);
+        model.SubtitleFontSize = FitText(model.Subtitle, BaseLegendFontSize * scale, width);
+        foreach (var axis in model.Axes)
+        {
+            axis.FontSize = BaseFontSize * scale;
+            axis.IntervalLength = (axis.IsHorizontal() ? 90 : 60) * scale;
+        }
+
+        foreach (var series in model.Series)
+        {
+            switch (series)
+            {
+                case OxyPlot.Series.LineSeries line when line.Tag is BaseSize b:
+                    line.StrokeThickness = b.Value * Math.Max(scale, 0.8);
+                    break;
+                case OxyPlot.Series.ScatterSeries scatter when scatter.Tag is BaseSize b:
+                    scatter.MarkerSize = b.Value * Math.Max(scale, 0.7);
+                    break;
+            }
+        }
+
+        foreach (var label in model.Annotations.OfType<OxyPlot.Annotations.TextAnnotation>())
+        {
+            label.FontSize = BaseLabelFontSize * scale;
+        }
+
+        double legendFont = BaseLegendFontSize * scale;
+        int longest = model.Series.Where(s => s.Title is not null).Select(s => s.Title!.Length).DefaultIfEmpty(0).Max();
+        // DejaVu Sans averages about 0.6 em per character; add the symbol and the margins.
+        double legendWidth = longest * 0.6 * legendFont + 28 * scale + 24;
+        bool below = legendWidth > 0.3 * width;
+        foreach (var legend in model.Legends.OfType<Legend>())
+        {
+            legend.LegendFontSize = legendFont;
+            legend.LegendSymbolLength = 28 * scale;
+            legend.LegendPlacement = LegendPlacement.Outside;
+            legend.LegendPosition = below ? LegendPosition.BottomCenter : LegendPosition.RightTop;
+            legend.LegendOrientation = below ? LegendOrientation.Horizontal : LegendOrientation.Vertical;
+        }
+    }
+
+    /// <summary>The line width or marker size a series has at the default figure size, kept in
+    /// its <c>Tag</c> so that <see cref="FitTo"/> can scale it for any size.</summary>
+    public sealed record BaseSize(double Value);
+
+    private static double FitText(string? text, double size, int width)
+    {
+        if (string.IsNullOrEmpty(text))
+        {
+            return size;
+        }
+
+        double needed = text.Length * 0.58 * size;
+        double room = width - 40;
+        return needed <= room ? size : Math.Max(8, size * room / needed);
+    }
+
     private static T Style<T>(T axis) where T : Axis
     {
         axis.TitleFormatString = "{0} ({1})";
@@ -106,7 +196,7 @@ public static class HouseStyle
         axis.TickStyle = TickStyle.Outside;
         // Wide enough intervals that tick labels never touch at any accepted size.
         axis.IntervalLength = axis.IsHorizontal() ? 90 : 60;
-        axis.StringFormat = "g6";
+        axis.LabelFormatter = Tick;
         axis.AxisTitleDistance = 8;
         // Keep markers and curve ends off the frame.
         axis.MinimumPadding = 0.03;

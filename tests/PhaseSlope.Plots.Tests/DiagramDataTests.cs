@@ -196,6 +196,17 @@ public class DiagramDataTests
         Assert.Equal(2, model.Series.OfType<ScatterSeries>().Single().Points.Count);
     }
 
+    [Theory]
+    [InlineData(0, "0")]
+    [InlineData(0.30000000000000004, "0.3")]
+    [InlineData(4000, "4000")]
+    [InlineData(-2000, "-2000")]
+    [InlineData(0.001, "0.001")]
+    [InlineData(1e-5, "1e-5")]
+    [InlineData(2.5e7, "2.5e+7")]
+    public void Tick_labels_use_one_form_per_range(double value, string expected)
+        => Assert.Equal(expected, HouseStyle.Tick(value));
+
     [Fact]
     public void Palette_is_okabe_ito_without_black()
     {

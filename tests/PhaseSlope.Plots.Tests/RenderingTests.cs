@@ -67,6 +67,38 @@ public class RenderingTests
         Assert.True(share < 0.5, $"{id}: {share:P2} of the pixels are drawn, the background is not white");
     }
 
+    public static TheoryData<string, int, int> KindsAndSizes()
+    {
+        var data = new TheoryData<string, int, int>();
+        foreach (string id in DiagramKinds.Ids)
+        {
+            data.Add(id, HouseStyle.MinimumSize + 100, HouseStyle.MinimumSize);
+            data.Add(id, HouseStyle.DefaultWidth, HouseStyle.DefaultHeight);
+        }
+
+        return data;
+    }
+
+    [Theory]
+    [MemberData(nameof(KindsAndSizes))]
+    public void Data_keep_most_of_the_figure_and_the_legend_stays_off_them(string id, int width, int height)
+    {
+        var model = Build(id);
+        Render(model, FigureFormat.Png, width, height);
+        var plot = model.PlotArea;
+        Assert.True(plot.Width >= 0.45 * width, $"{id} at {width}x{height}: plot area only {plot.Width:F0} px wide");
+        Assert.True(plot.Height >= 0.35 * height, $"{id} at {width}x{height}: plot area only {plot.Height:F0} px high");
+        foreach (var legend in model.Legends)
+        {
+            var area = legend.LegendArea;
+            double overlapX = Math.Min(area.Right, plot.Right) - Math.Max(area.Left, plot.Left);
+            double overlapY = Math.Min(area.Bottom, plot.Bottom) - Math.Max(area.Top, plot.Top);
+            Assert.False(overlapX > 0 && overlapY > 0, $"{id} at {width}x{height}: legend {area} overlaps the plot area {plot}");
+            Assert.True(area.Left >= 0 && area.Top >= 0 && area.Right <= width + 0.5 && area.Bottom <= height + 0.5,
+                $"{id} at {width}x{height}: legend {area} is cut off");
+        }
+    }
+
     [Fact]
     public void Default_size_is_1200_by_800()
     {

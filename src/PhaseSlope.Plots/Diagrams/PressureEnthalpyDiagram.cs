@@ -67,7 +67,7 @@ public static class PressureEnthalpyDiagram
                 Offset = new ScreenVector(0, -4),
                 TextHorizontalAlignment = HorizontalAlignment.Center,
                 Stroke = OxyColors.Undefined,
-                FontSize = 11,
+                FontSize = HouseStyle.BaseLabelFontSize,
                 TextColor = grey,
             });
             qualityInLegend = false;
