@@ -18,13 +18,18 @@ internal static class PlotCommand
         var fluidsArgument = new Argument<string>("FLUID") { Description = "Catalog name or fluid file; several separated by commas (p-t, lnp-invt, t-rho, slope, latent)" };
         var diagram = new Option<string>("--diagram", "-d") { Description = $"Diagram: {string.Join(", ", DiagramKinds.Ids)}", Required = true };
         var output = new Option<string>("--out", "-o") { Description = "Figure file; .png or .svg chooses the format", Required = true };
-        var width = new Option<int>("--width") { Description = $"Width in pixels, {HouseStyle.MinimumSize} to {HouseStyle.MaximumSize} (default {HouseStyle.DefaultWidth})", DefaultValueFactory = _ => HouseStyle.DefaultWidth };
-        var height = new Option<int>("--height") { Description = $"Height in pixels, {HouseStyle.MinimumSize} to {HouseStyle.MaximumSize} (default {HouseStyle.DefaultHeight})", DefaultValueFactory = _ => HouseStyle.DefaultHeight };
+        var width = new Option<int>("--width") { Description = $"Width in pixels, {HouseStyle.MinimumSize} to {HouseStyle.MaximumSize}", DefaultValueFactory = _ => HouseStyle.DefaultWidth };
+        var height = new Option<int>("--height") { Description = $"Height in pixels, {HouseStyle.MinimumSize} to {HouseStyle.MaximumSize}", DefaultValueFactory = _ => HouseStyle.DefaultHeight };
         var data = new Option<string>("--data") { Description = "CSV of measured vapour pressures (as for fit): overlaid on p-t and lnp-invt; on latent, the Clapeyron estimate with its +-u band" };
         var reduced = new Option<bool>("--reduced") { Description = "Reduced coordinates T/Tc, P/Pc, rho/rhoc for corresponding-states comparison (p-t, lnp-invt, t-rho, slope, p-v)" };
         var log = new Option<bool>("--log") { Description = "Logarithmic pressure axis (p-t) or slope axis (slope)" };
         var temperatureUnit = new Option<string>("--temperature-unit") { Description = "Unit of a data temperature column whose header gives none" };
         var pressureUnit = new Option<string>("--pressure-unit") { Description = "Unit of a data pressure column whose header gives none" };
+        var units = new Option<string>("--units")
+        {
+            Description = "Axis units: si (K, kPa, mol/m3, cm3/mol, kJ/mol) or engineering (degC, bar, kg/m3, m3/kg, kJ/kg)",
+            DefaultValueFactory = _ => "si",
+        };
 
         var command = new Command("plot", "Draw a phase diagram from the model as a PNG or SVG figure");
         command.Arguments.Add(fluidsArgument);
@@ -40,7 +45,7 @@ internal static class PlotCommand
         command.Options.Add(common.Eos);
         command.Options.Add(common.Alpha);
         command.Options.Add(common.VolumeShift);
-        command.Options.Add(common.Units);
+        command.Options.Add(units);
         command.SetAction(parse => io.Guard(() =>
         {
             // Everything that is a usage error is checked before any fluid is read or computed.
@@ -66,8 +71,8 @@ internal static class PlotCommand
                 }
             }
 
-            string unitsText = parse.GetValue(common.Units) ?? "si";
-            var units = unitsText.ToLowerInvariant() switch
+            string unitsText = parse.GetValue(units) ?? "si";
+            var axisUnits = unitsText.ToLowerInvariant() switch
             {
                 "si" => PlotUnits.Si,
                 "engineering" => PlotUnits.Engineering,
@@ -81,7 +86,7 @@ internal static class PlotCommand
             }
 
             string? dataPath = parse.GetValue(data);
-            var probe = new DiagramOptions { Reduced = parse.GetValue(reduced), Logarithmic = parse.GetValue(log), Units = units, Data = dataPath is null ? null : [] };
+            var probe = new DiagramOptions { Reduced = parse.GetValue(reduced), Logarithmic = parse.GetValue(log), Units = axisUnits, Data = dataPath is null ? null : [] };
             var fluids = names.Select(FluidResolver.Resolve).Select(f => new PlotFluid(f, common.Model(parse, f))).ToList();
             try
             {
