@@ -41,8 +41,9 @@ public static class PressureEnthalpyDiagram
         model.Axes.Add(HouseStyle.Linear(AxisPosition.Bottom, "enthalpy h", units.EnthalpyUnit));
         model.Axes.Add(HouseStyle.Logarithmic(AxisPosition.Left, "pressure P", units.PressureUnit));
 
-        // Start the dome where the vapour pressure is 1 % of Pc or at the lowest valid
-        // temperature, whichever is higher, so the dome fills the figure.
+        // Start the dome at 0.55 Tc (a vapour pressure of roughly 0.5-2 % of Pc for ordinary
+        // fluids) or at the lowest valid temperature, whichever is higher: below that the dome
+        // only widens into decades of pressure no one reads off a P-h chart.
         double tStart = Math.Max(solver.MinimumTemperature, 0.55 * tc);
         var curve = CoexistenceCurve.Trace(solver, tStart, tc, options.Points);
         var saturated = curve.Take(curve.Count - 1).Select(properties.Coexistence).ToList();
