@@ -42,6 +42,10 @@ internal sealed class CliIo(TextWriter output, TextWriter error)
         {
             return Fail(ex.Message, ExitCodes.OutputFile);
         }
+        catch (Plots.FigureFileException ex)
+        {
+            return Fail(ex.Message, ExitCodes.OutputFile);
+        }
         catch (Input.DataFileException ex)
         {
             return Fail(ex.Message, ExitCodes.DataFile);

@@ -61,9 +61,13 @@ internal sealed class CorrelationOptions
 
     /// <summary>Reads and converts the data file.</summary>
     public IReadOnlyList<VapourPressurePoint> ReadData(ParseResult parse)
+        => ReadDataFile(parse.GetValue(Data)!, parse.GetValue(TemperatureUnit), parse.GetValue(PressureUnit));
+
+    /// <summary>Reads and converts a data file of measured vapour pressures (also used by <c>plot --data</c>).</summary>
+    /// <exception cref="DataFileException">The file is missing, unreadable or invalid.</exception>
+    public static IReadOnlyList<VapourPressurePoint> ReadDataFile(string path, string? temperatureUnit, string? pressureUnit)
     {
-        string path = parse.GetValue(Data)!;
-        var options = new VapourPressureCsvOptions(parse.GetValue(TemperatureUnit), parse.GetValue(PressureUnit));
+        var options = new VapourPressureCsvOptions(temperatureUnit, pressureUnit);
         IReadOnlyList<VapourPressureRecord> records;
         try
         {

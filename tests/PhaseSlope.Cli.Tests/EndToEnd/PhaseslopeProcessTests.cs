@@ -63,6 +63,30 @@ public class PhaseslopeProcessTests
     }
 
     [Fact]
+    public void PlotPng_TheBuiltToolLoadsSkiaAndWritesTheFigure()
+    {
+        // The native rendering library must come with the built tool, not from the machine.
+        string folder = Directory.CreateTempSubdirectory("phaseslope-e2e-plot-").FullName;
+        try
+        {
+            string path = Path.Combine(folder, "pt.png");
+            var result = RunProcess("plot", "propane", "--diagram", "p-t", "--out", path, "--width", "500", "--height", "320");
+            Assert.True(result.ExitCode == 0, result.ToString());
+            Assert.Equal("", result.Stdout);
+            Assert.Equal("", result.Stderr);
+            byte[] png = File.ReadAllBytes(path);
+            Assert.Equal(0x89, png[0]);
+            Assert.Equal(500, System.Buffers.Binary.BinaryPrimitives.ReadInt32BigEndian(png.AsSpan(16, 4)));
+            Assert.Equal(320, System.Buffers.Binary.BinaryPrimitives.ReadInt32BigEndian(png.AsSpan(20, 4)));
+            Assert.Equal(["pt.png"], Directory.EnumerateFiles(folder).Select(Path.GetFileName));
+        }
+        finally
+        {
+            Directory.Delete(folder, recursive: true);
+        }
+    }
+
+    [Fact]
     public void Help_ExitZeroListsCommands()
     {
         var result = RunProcess("--help");
@@ -72,6 +96,7 @@ public class PhaseslopeProcessTests
         Assert.Contains("coexist", result.Stdout, StringComparison.Ordinal);
         Assert.Contains("curve", result.Stdout, StringComparison.Ordinal);
         Assert.Contains("fluids", result.Stdout, StringComparison.Ordinal);
+        Assert.Contains("plot", result.Stdout, StringComparison.Ordinal);
     }
 
     [Fact]

@@ -1,0 +1,88 @@
+using OxyPlot;
+using OxyPlot.Series;
+using PhaseSlope.Core.Equilibrium;
+
+namespace PhaseSlope.Plots.Diagrams;
+
+/// <summary>Series in the house style, shared by the diagram builders.</summary>
+internal static class Chart
+{
+    /// <summary>Line width of a main curve in pixels.</summary>
+    public const double Thick = 2.5;
+
+    /// <summary>Line width of a secondary curve (diameters, quality lines, tie lines).</summary>
+    public const double Thin = 1.5;
+
+    public static LineSeries Line(string? title, OxyColor colour, double thickness = Thick, LineStyle style = LineStyle.Solid)
+        => new()
+        {
+            Title = title,
+            Color = colour,
+            StrokeThickness = thickness,
+            Tag = new HouseStyle.BaseSize(thickness),
+            LineStyle = style,
+            MarkerType = MarkerType.None,
+            CanTrackerInterpolatePoints = false,
+        };
+
+    public static LineSeries Line(string? title, OxyColor colour, IEnumerable<DataPoint> points, double thickness = Thick, LineStyle style = LineStyle.Solid)
+    {
+        var series = Line(title, colour, thickness, style);
+        series.Points.AddRange(points);
+        return series;
+    }
+
+    /// <summary>Critical points: black diamonds (one look for every fluid, since in reduced
+    /// coordinates they coincide); one legend entry, after the curves.</summary>
+    public static ScatterSeries Critical(IEnumerable<DataPoint> points)
+    {
+        var series = new ScatterSeries
+        {
+            Title = "critical point",
+            MarkerType = MarkerType.Diamond,
+            MarkerSize = 7,
+            Tag = new HouseStyle.BaseSize(7),
+            MarkerFill = HouseStyle.Ink,
+            MarkerStroke = OxyColors.White,
+            MarkerStrokeThickness = 1,
+        };
+        series.Points.AddRange(points.Select(p => new ScatterPoint(p.X, p.Y)));
+        return series;
+    }
+
+    /// <summary>Measured points: open black circles, drawn over the curves.</summary>
+    public static ScatterSeries Measured(string title, IEnumerable<DataPoint> points)
+    {
+        var series = new ScatterSeries
+        {
+            Title = title,
+            MarkerType = MarkerType.Circle,
+            MarkerSize = 4.5,
+            Tag = new HouseStyle.BaseSize(4.5),
+            MarkerFill = OxyColors.White,
+            MarkerStroke = HouseStyle.Ink,
+            MarkerStrokeThickness = 1.5,
+        };
+        series.Points.AddRange(points.Select(p => new ScatterPoint(p.X, p.Y)));
+        return series;
+    }
+
+    /// <summary>The whole saturation curve of a fluid, ending at its critical point.</summary>
+    public static IReadOnlyList<CoexistencePoint> Curve(PlotFluid fluid, int points)
+        => CoexistenceCurve.Trace(fluid.Solver(), points);
+
+    /// <summary>Numbers in legends: four significant figures, invariant culture.</summary>
+    public static string Number(double value) => value.ToString("g4", System.Globalization.CultureInfo.InvariantCulture);
+
+    /// <summary>A short title suffix naming the model.</summary>
+    public static string ModelTitle(PlotFluid fluid) => Core.Models.CubicModelKinds.Title(fluid.Model.Kind);
+
+    /// <summary>"propane" or "propane, n-butane and water".</summary>
+    public static string Names(IReadOnlyList<PlotFluid> fluids)
+        => fluids.Count == 1 ? fluids[0].Name
+            : string.Join(", ", fluids.Take(fluids.Count - 1).Select(f => f.Name)) + " and " + fluids[^1].Name;
+
+    /// <summary>"Peng-Robinson (1976)" when every fluid uses one model, else "several models".</summary>
+    public static string Models(IReadOnlyList<PlotFluid> fluids)
+        => fluids.Select(f => f.Model.Kind).Distinct().Count() == 1 ? ModelTitle(fluids[0]) : "several models";
+}
