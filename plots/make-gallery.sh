@@ -20,6 +20,8 @@ $ps plot argon,propane,water --diagram t-rho --reduced --out $out/t-rho-reduced.
 $ps plot r-134a,r-32,ammonia --diagram slope --units engineering --out $out/slope-refrigerants.png
 # Latent heat of FRC-7 from the model and from the measurements, with the +-u band.
 $ps plot $ex/frc-7.fluid --diagram latent --data $ex/frc-7-vapour-pressure.csv --units engineering --out $out/latent-frc7.png
+# Residuals of the three best correlations (by AICc) fitted to the FRC-7 data.
+$ps plot $ex/frc-7.fluid --diagram residuals --data $ex/frc-7-vapour-pressure.csv --out $out/residuals-frc7.png
 # Isotherms of carbon dioxide with the model's loops and the equal-area tie lines.
 $ps plot carbon-dioxide --diagram p-v --out $out/p-v-carbon-dioxide.png
 # T-s of water and P-h of R-134a in engineering units.

@@ -26,6 +26,10 @@ public enum DiagramKind
 
     /// <summary>The log pressure–enthalpy dome with isotherms and lines of constant quality.</summary>
     PressureEnthalpy,
+
+    /// <summary>Deviations of the measured vapour pressures from fitted correlations (the forms
+    /// with the lowest AICc), with the data's stated uncertainties.</summary>
+    Residuals,
 }
 
 /// <summary>The command-line identifiers of the diagram kinds.</summary>
@@ -41,6 +45,7 @@ public static class DiagramKinds
         (DiagramKind.PressureVolume, "p-v"),
         (DiagramKind.TemperatureEntropy, "t-s"),
         (DiagramKind.PressureEnthalpy, "p-h"),
+        (DiagramKind.Residuals, "residuals"),
     ];
 
     /// <summary>Every identifier, in the order of <see cref="DiagramKind"/>.</summary>
@@ -82,5 +87,5 @@ public static class DiagramKinds
 
     /// <summary>Whether the kind can overlay measured vapour pressures.</summary>
     public static bool AllowsData(this DiagramKind kind)
-        => kind is DiagramKind.PressureTemperature or DiagramKind.LnPressureInverseTemperature or DiagramKind.Latent;
+        => kind is DiagramKind.PressureTemperature or DiagramKind.LnPressureInverseTemperature or DiagramKind.Latent or DiagramKind.Residuals;
 }

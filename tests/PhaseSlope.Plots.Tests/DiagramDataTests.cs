@@ -215,4 +215,30 @@ public class DiagramDataTests
         Assert.Equal(expected, HouseStyle.Palette.Select(c => $"#{c.R:x2}{c.G:x2}{c.B:x2}"));
         Assert.Equal(HouseStyle.Palette[0], HouseStyle.Colour(7));
     }
+
+    [Fact]
+    public void Residuals_are_the_deviations_of_the_best_fits_by_AICc()
+    {
+        var data = TestFluids.ModelVapourPressures(TestFluids.Propane, 12);
+        var model = ResidualsDiagram.Build(TestFluids.Propane, new DiagramOptions { Data = data });
+        var best = VapourPressureFitter.FitAll(
+            [new ClausiusClapeyronForm(), new AntoineForm(), new KirchhoffForm(), new RiedelForm(),
+             WagnerForm.ThreeSix(TestFluids.Propane.Model.CriticalTemperature, TestFluids.Propane.Model.CriticalPressure),
+             WagnerForm.TwoHalfFive(TestFluids.Propane.Model.CriticalTemperature, TestFluids.Propane.Model.CriticalPressure),
+             WagnerForm.SixTerm(TestFluids.Propane.Model.CriticalTemperature, TestFluids.Propane.Model.CriticalPressure)], data)[0];
+
+        var scatter = model.Series.OfType<ScatterSeries>().First();
+        Assert.StartsWith(best.Form.Id, scatter.Title, StringComparison.Ordinal);
+        Assert.Equal(best.DeviationsPercent, scatter.Points.Select(p => p.Y));
+        Assert.Equal(ResidualsDiagram.FormsShown, model.Series.OfType<ScatterSeries>().Count());
+        // The ±u band is drawn because every point states its uncertainty.
+        Assert.Single(model.Series.OfType<AreaSeries>());
+    }
+
+    [Fact]
+    public void Residuals_without_data_are_refused()
+    {
+        var ex = Assert.Throws<InvalidInputException>(() => Diagram.Build(DiagramKind.Residuals, [TestFluids.Propane], new DiagramOptions()));
+        Assert.Contains("--data", ex.Message, StringComparison.Ordinal);
+    }
 }

@@ -17,8 +17,10 @@ public class RenderingTests
     private static PlotModel Build(string id)
     {
         Assert.True(DiagramKinds.TryParse(id, out var kind));
-        // Few points keep the suite fast; the shapes are the same.
-        return Diagram.Build(kind, [TestFluids.Propane], new DiagramOptions { Points = 30 });
+        // Few points keep the suite fast; the shapes are the same. The residuals kind needs data:
+        // the model's own saturation pressures with a 0.3 % scatter pattern and stated uncertainty.
+        var data = kind == DiagramKind.Residuals ? TestFluids.ModelVapourPressures(TestFluids.Propane, 12) : null;
+        return Diagram.Build(kind, [TestFluids.Propane], new DiagramOptions { Points = 30, Data = data });
     }
 
     private static byte[] Render(PlotModel model, FigureFormat format, int width, int height)

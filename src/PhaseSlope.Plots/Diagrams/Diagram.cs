@@ -26,6 +26,7 @@ public static class Diagram
             DiagramKind.Latent => LatentDiagram.Build(fluids, options),
             DiagramKind.PressureVolume => PressureVolumeDiagram.Build(fluids[0], options),
             DiagramKind.TemperatureEntropy => TemperatureEntropyDiagram.Build(fluids[0], options),
+            DiagramKind.Residuals => ResidualsDiagram.Build(fluids[0], options),
             _ => PressureEnthalpyDiagram.Build(fluids[0], options),
         };
     }
@@ -64,7 +65,12 @@ public static class Diagram
 
         if (options.Data is not null && !kind.AllowsData())
         {
-            throw new InvalidInputException("data", 1, $"the {id} diagram takes no data (p-t, lnp-invt and latent do)");
+            throw new InvalidInputException("data", 1, $"the {id} diagram takes no data (p-t, lnp-invt, latent and residuals do)");
+        }
+
+        if (options.Data is null && kind == DiagramKind.Residuals)
+        {
+            throw new InvalidInputException("data", 0, "the residuals diagram needs measured vapour pressures (--data)");
         }
 
         if (options.Data is not null && kind == DiagramKind.Latent && fluids.Count > 1)
