@@ -14,30 +14,10 @@ public static class PressureTemperatureDiagram
         ArgumentNullException.ThrowIfNull(fluids);
         ArgumentNullException.ThrowIfNull(options);
         var units = new UnitScale(options.Units);
-        var model = HouseStyle.NewModel($"Saturation pressure of {Chart.Names(fluids)} ({Chart.Models(fluids)})");
-        model.Axes.Add(options.Reduced
-            ? HouseStyle.Linear(AxisPosition.Bottom, "reduced temperature T/Tc", null)
-            : HouseStyle.Linear(AxisPosition.Bottom, "temperature T", units.TemperatureUnit));
-        string pTitle = options.Reduced ? "reduced pressure P/Pc" : "saturation pressure Psat";
-        string? pUnit = options.Reduced ? null : units.PressureUnit;
-        model.Axes.Add(options.Logarithmic
-            ? HouseStyle.Logarithmic(AxisPosition.Left, pTitle, pUnit)
-            : HouseStyle.Linear(AxisPosition.Left, pTitle, pUnit));
-
-        var criticals = new List<DataPoint>();
-        for (int i = 0; i < fluids.Count; i++)
-        {
-            var fluid = fluids[i];
-            var curve = Chart.Curve(fluid, options.Points);
-            double tc = fluid.Model.CriticalTemperature;
-            double pc = fluid.Model.CriticalPressure;
-            DataPoint Map(double t, double p) => options.Reduced ? new(t / tc, p / pc) : new(units.Temperature(t), units.Pressure(p));
-            model.Series.Add(Chart.Line(fluid.Name, HouseStyle.Colour(i), curve.Select(c => Map(c.Temperature, c.Pressure))));
-            var critical = curve[^1];
-            criticals.Add(Map(critical.Temperature, critical.Pressure));
-        }
-
-        model.Series.Add(Chart.Critical(criticals));
+        var model = SaturationLineChart.Build(fluids, options,
+            $"Saturation pressure of {Chart.Names(fluids)} ({Chart.Models(fluids)})",
+            ("saturation pressure Psat", "reduced pressure P/Pc"), units.PressureUnit,
+            c => c.Pressure, (p, _, pc) => p / pc, units.Pressure);
 
         if (options.Data is { Count: > 0 } data)
         {
