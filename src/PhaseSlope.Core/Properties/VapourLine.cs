@@ -42,12 +42,14 @@ public sealed record VapourLine(VapourLineClass Class, double ReducedSlope, doub
         // Scan for the last + to − change of sign below Tc; the slope always ends negative near
         // Tc, where the vapour line bends into the dome.
         var grid = CoexistenceCurve.Trace(solver, solver.MinimumTemperature, tc * (1 - 1e-3), 48);
+        // One slope per traced state, from the states the curve already solved.
+        double[] slopes = [.. grid.Select(point => engine.Coexistence(point).Vapour.EntropySlope!.Value)];
         double? turn = null;
         for (int i = grid.Count - 2; i >= 0; i--)
         {
             double a = grid[i].Temperature;
             double b = grid[i + 1].Temperature;
-            if (Slope(a) > 0 && Slope(b) <= 0)
+            if (slopes[i] > 0 && slopes[i + 1] <= 0)
             {
                 // MathNet's Brent stops when either the bracket or |f| is below the accuracy, so
                 // the root is sought for the dimensionless ξ(τ), τ = T/Tc, where one accuracy
