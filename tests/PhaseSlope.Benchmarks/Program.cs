@@ -1,0 +1,11 @@
+using BenchmarkDotNet.Running;
+
+namespace PhaseSlope.Benchmarks;
+
+/// <summary>Entry point: `dotnet run -c Release --project tests/PhaseSlope.Benchmarks -- --filter '*'`
+/// runs every benchmark; see docs/performance.md for the results and how to read them.</summary>
+public static class Program
+{
+    /// <summary>Runs the benchmarks chosen on the command line.</summary>
+    public static void Main(string[] args) => BenchmarkSwitcher.FromAssembly(typeof(Program).Assembly).Run(args);
+}
