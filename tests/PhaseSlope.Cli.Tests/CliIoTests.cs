@@ -4,6 +4,9 @@ namespace PhaseSlope.Cli.Tests;
 /// standard output, and the documented exit code (see <see cref="ExitCodes"/>).</summary>
 public class CliIoTests
 {
+    /// <summary>An invented test fluid (Data/vanishing-attraction.fluid) on which coexistence cannot converge.</summary>
+    public static readonly string VanishingAttraction = Path.GetFullPath("../../../Data/vanishing-attraction.fluid");
+
     public static TheoryData<string[], int, string> ErrorCases => new()
     {
         // Fluid (3)
@@ -27,8 +30,10 @@ public class CliIoTests
         { ["curve", "propane", "--from", "369.89"], ExitCodes.OutOfRange, "--from: 369.89 K is at or above the critical temperature" },
         { ["curve", "propane", "--to", "50"], ExitCodes.OutOfRange, "--to: 50 K is below the lowest valid temperature" },
 
-        // Not converged (5): a temperature a picokelvin below Tc is below Tc but cannot be resolved
-        { ["coexist", "propane", "--temperature", "369.889999999999"], ExitCodes.NotConverged, "too close to the critical temperature" },
+        // Not converged (5): an invented model whose attraction vanishes at low temperature has
+        // no liquid-vapour loop there (a picokelvin below Tc, once the example here, now solves
+        // through the critical series).
+        { ["coexist", VanishingAttraction, "--alpha", "twu", "--temperature", "200"], ExitCodes.NotConverged, "did not converge" },
 
         // Usage (2): malformed numbers
         { ["coexist", "propane", "--temperature", "3..0"], ExitCodes.Usage, "--temperature: malformed number" },

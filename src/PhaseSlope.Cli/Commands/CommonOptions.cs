@@ -12,7 +12,7 @@ internal sealed class CommonOptions
     /// <summary>--eos: the cubic model.</summary>
     public Option<string> Eos { get; } = new("--eos")
     {
-        Description = $"Cubic model: {string.Join(", ", CubicModelKinds.Ids)}",
+        Description = $"Cubic model: {string.Join(", ", ModelRegistry.Ids)}",
         DefaultValueFactory = _ => "pr",
     };
 
@@ -68,9 +68,9 @@ internal sealed class CommonOptions
     public CubicModelKind ModelKind(ParseResult parse)
     {
         string id = parse.GetValue(Eos) ?? "pr";
-        return CubicModelKinds.TryParse(id, out var kind)
+        return ModelRegistry.TryParse(id, out var kind)
             ? kind
-            : throw new UsageException($"--eos: unknown model '{id}' (use {string.Join(", ", CubicModelKinds.Ids)})");
+            : throw new UsageException($"--eos: unknown model '{id}' (use {string.Join(", ", ModelRegistry.Ids)})");
     }
 
     /// <summary>The chosen model with its alpha function and volume shift, for a fluid.</summary>

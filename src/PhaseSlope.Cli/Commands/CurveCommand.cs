@@ -56,7 +56,7 @@ internal static class CurveCommand
             var data = FluidResolver.Resolve(parse.GetValue(fluid)!);
             var context = CoexistenceContext.Create(data, common.Model(parse, data), zero);
             var solver = context.Solver;
-            double tc = solver.Model.CriticalTemperature;
+            double tc = solver.CriticalTemperature;
             double start = tFrom ?? solver.MinimumTemperature;
             double end = tTo ?? tc;
             if (start < solver.MinimumTemperature)

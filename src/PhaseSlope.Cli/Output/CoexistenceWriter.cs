@@ -17,7 +17,7 @@ internal static class CoexistenceWriter
         "Model estimates. Before use for pressure equipment, relief sizing or flammable or toxic service, verify against measured data and follow local codes and licensed engineering practice.";
 
     /// <summary>Renders rows in a format; <paramref name="single"/> prints one object instead of an array.</summary>
-    public static string Render(IReadOnlyList<CoexistenceRow> rows, bool single, OutputFormat format, Fluid fluid, CubicModel model, ReferenceState? reference, UnitSystem units)
+    public static string Render(IReadOnlyList<CoexistenceRow> rows, bool single, OutputFormat format, Fluid fluid, IResidualModel model, ReferenceState? reference, UnitSystem units)
         => format switch
         {
             OutputFormat.Json => Json(rows, single, fluid, model, reference),
@@ -25,7 +25,7 @@ internal static class CoexistenceWriter
             _ => single ? SingleTable(rows[0], fluid, model, reference, units) : CurveTable(rows, fluid, model, reference, units),
         };
 
-    private static string Json(IReadOnlyList<CoexistenceRow> rows, bool single, Fluid fluid, CubicModel model, ReferenceState? reference)
+    private static string Json(IReadOnlyList<CoexistenceRow> rows, bool single, Fluid fluid, IResidualModel model, ReferenceState? reference)
     {
         return JsonText.Write(json =>
         {
@@ -46,12 +46,12 @@ internal static class CoexistenceWriter
         });
     }
 
-    private static void WriteObject(Utf8JsonWriter json, CoexistenceRow row, Fluid fluid, CubicModel model, ReferenceState? reference)
+    private static void WriteObject(Utf8JsonWriter json, CoexistenceRow row, Fluid fluid, IResidualModel model, ReferenceState? reference)
     {
         var point = row.Point;
         json.WriteStartObject();
         json.WriteString("fluid", fluid.Name);
-        json.WriteString("eos", model.Kind.Id());
+        ModelText.WriteJson(json, model.Identity);
         if (reference is not null && row.Full is not null)
         {
             json.WriteString("reference", reference.Id);
@@ -131,7 +131,7 @@ internal static class CoexistenceWriter
             rows.Select(r => columns.Select(c => NumberText.RoundTrip(Finite(c.Value(r), c.Key))).ToArray()));
     }
 
-    private static string CurveTable(IReadOnlyList<CoexistenceRow> rows, Fluid fluid, CubicModel model, ReferenceState? reference, UnitSystem units)
+    private static string CurveTable(IReadOnlyList<CoexistenceRow> rows, Fluid fluid, IResidualModel model, ReferenceState? reference, UnitSystem units)
     {
         var columns = CoexistenceColumns.For(rows).Where(c => c.InCurveTable).ToArray();
         var table = new TextTable(columns.Select(c => CoexistenceColumns.Header(c, units)).ToArray(), columns.Select(_ => true).ToArray());
@@ -156,7 +156,7 @@ internal static class CoexistenceWriter
             ? $"h and s reference: {reference.Description}"
             : "h and s not shown: the fluid file has no ideal-gas heat capacity";
 
-    private static string SingleTable(CoexistenceRow row, Fluid fluid, CubicModel model, ReferenceState? reference, UnitSystem units)
+    private static string SingleTable(CoexistenceRow row, Fluid fluid, IResidualModel model, ReferenceState? reference, UnitSystem units)
     {
         var point = row.Point;
         double m = fluid.MolarMass.Value;

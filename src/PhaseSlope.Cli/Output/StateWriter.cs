@@ -60,7 +60,7 @@ internal static class StateWriter
     private static void WriteHeader(Utf8JsonWriter json, PropertyModel engine, ThermodynamicState state)
     {
         json.WriteString("fluid", engine.Fluid.Name);
-        json.WriteString("eos", engine.Model.Kind.Id());
+        ModelText.WriteJson(json, engine.Model.Identity);
         json.WriteString("reference", engine.Reference.Id);
         json.WriteString("phase", state.Phase.ToString().ToLowerInvariant());
         json.WriteBoolean("metastable", state.Metastable);

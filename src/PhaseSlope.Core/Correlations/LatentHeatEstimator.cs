@@ -24,8 +24,8 @@ public sealed class LatentHeatEstimator
         Fit = fit;
         VolumeModel = volumeModel;
         Solver = solver;
-        CriticalTemperature = criticalTemperature ?? solver?.Model.CriticalTemperature;
-        CriticalPressure = criticalPressure ?? solver?.Model.CriticalPressure;
+        CriticalTemperature = criticalTemperature ?? solver?.CriticalTemperature;
+        CriticalPressure = criticalPressure ?? solver?.CriticalPressure;
         if (volumeModel == VolumeChangeModel.EquationOfState && solver is null)
         {
             throw new InvalidInputException("volume model", double.NaN, "the eos volume model needs a fluid (its coexisting volumes come from the model)");

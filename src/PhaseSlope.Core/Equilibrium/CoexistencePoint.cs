@@ -14,8 +14,8 @@ namespace PhaseSlope.Core.Equilibrium;
 /// </remarks>
 public sealed record CoexistencePoint
 {
-    /// <summary>Which model produced the point.</summary>
-    public required CubicModelKind Model { get; init; }
+    /// <summary>Which model produced the point: equation, alpha function, volume shift.</summary>
+    public required ModelIdentity Model { get; init; }
 
     /// <summary>Saturation temperature in K.</summary>
     public required double Temperature { get; init; }

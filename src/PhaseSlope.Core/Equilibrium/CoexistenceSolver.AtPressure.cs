@@ -1,84 +1,230 @@
-using MathNet.Numerics.RootFinding;
 using PhaseSlope.Core.Errors;
+using PhaseSlope.Core.Models;
 
 namespace PhaseSlope.Core.Equilibrium;
 
 public sealed partial class CoexistenceSolver
 {
-    /// <summary>Reduced distance below Tc of the highest temperature the pressure search visits.</summary>
-    private const double PressureSearchTopGap = 1e-8;
-
     /// <summary>The coexistence state at pressure <paramref name="pressure"/> (Pa): the saturation
     /// temperature and both phases.</summary>
-    /// <remarks>Newton iteration on T/Tc for ln Psat(T) = ln P, with the exact derivative
-    /// d ln Psat/dT = (dPsat/dT)/Psat from the Clapeyron slope, safeguarded by bisection inside
-    /// [<see cref="MinimumTemperature"/>, Tc·(1 − 1e-8)].</remarks>
     /// <exception cref="InvalidInputException">P is not finite and positive, is at or above Pc,
     /// or is below the saturation pressure at <see cref="MinimumTemperature"/>.</exception>
-    public CoexistencePoint AtPressure(double pressure)
+    /// <exception cref="ConvergenceException">No route met the tolerance.</exception>
+    public CoexistencePoint AtPressure(double pressure) => AtPressure(pressure, null);
+
+    /// <summary>The coexistence state at <paramref name="pressure"/> (Pa), started from a nearby
+    /// solved point when one is given (carried along the line by its exact slopes).</summary>
+    /// <remarks>Newton iteration on T and the logarithms of both densities for PL = P, PV = P and
+    /// gL = gV, two model evaluations per step. With E_L = PL − P, E_V = PV − P,
+    /// E_G = (gL − gV)/RT and P_T = (∂P/∂T)_ρ, a = (∂P/∂ρ)_T, the linear system eliminates to
+    /// ΔT·[∂E_G/∂T − (P_T,L/ρL − P_T,V/ρV)/RT] = −E_G + (E_L/ρL − E_V/ρV)/RT, then
+    /// Δln ρ = −(E + P_T·ΔT)/(ρ·a) for each phase. Without a neighbour the start is the
+    /// coexistence state at an ancillary temperature (the inverse of the corresponding-states
+    /// vapour pressure; near Pc the critical isochore), carried to P by its slopes.</remarks>
+    /// <exception cref="InvalidInputException">As <see cref="AtPressure(double)"/>.</exception>
+    /// <exception cref="ConvergenceException">No route met the tolerance.</exception>
+    public CoexistencePoint AtPressure(double pressure, CoexistencePoint? near)
     {
         Preconditions.Positive(pressure, "pressure");
-        double pc = Model.CriticalPressure;
+        double pc = CriticalPressure;
         if (pressure >= pc)
         {
             throw new InvalidInputException("pressure", pressure,
                 $"pressure {Preconditions.Format(pressure)} Pa is at or above the critical pressure {Preconditions.Format(pc)} Pa: no liquid-vapour coexistence");
         }
 
-        double tc = Model.CriticalTemperature;
-        var bottom = AtTemperature(MinimumTemperature);
-        if (pressure < bottom.Pressure * (1 - BoundaryRoundingTolerance))
+        var work = new Work();
+        string? failure = null;
+        if (1 - pressure / pc < 0.01 && pressure > Series.TopPressure)
         {
-            throw new InvalidInputException("pressure", pressure,
-                $"pressure {Preconditions.Format(pressure)} Pa is below the saturation pressure {Preconditions.Format(bottom.Pressure)} Pa at the lowest valid temperature {Preconditions.Format(MinimumTemperature)} K");
+            return SeriesAtPressure(pressure, work) ?? throw new ConvergenceException(
+                $"saturation temperature at {Preconditions.Format(pressure)} Pa did not converge on the critical series", work.Evaluations, double.NaN);
         }
 
-        var top = AtTemperature(tc * (1 - PressureSearchTopGap));
-        if (pressure > top.Pressure)
+        CoexistenceStart startKind = CoexistenceStart.Neighbour;
+        if (near is null || near.IsCritical)
         {
-            throw new InvalidInputException("pressure", pressure,
-                $"pressure {Preconditions.Format(pressure)} Pa is within {Preconditions.Format(PressureSearchTopGap)} of the critical pressure in reduced temperature; treat the state as critical");
+            double estimate = AncillaryTemperature(pressure);
+            estimate = Math.Min(Math.Max(estimate, MinimumTemperature), CriticalTemperature * (1 - 1e-6));
+            near = Solve(estimate, null, work);
+            startKind = near.Report.Start;
         }
 
-        int steps = 0;
-        CoexistencePoint? last = null;
-        double lnTarget = Math.Log(pressure);
-        CoexistencePoint At(double reduced)
+        var point = IterateAtPressure(pressure, near, startKind, work, ref failure);
+        if (point is null)
         {
-            if (last is null || last.Temperature != reduced * tc)
+            // A second start: the state at the temperature the first attempt was heading for.
+            double estimate = near.Temperature + (pressure - near.Pressure) / near.Slope;
+            if (estimate > MinimumTemperature * 0.5 && estimate < CriticalTemperature)
             {
-                last = AtTemperature(reduced * tc);
+                near = Solve(Math.Max(estimate, MinimumTemperature), null, work);
+                point = IterateAtPressure(pressure, near, near.Report.Start, work, ref failure);
+            }
+        }
+
+        if (point is null)
+        {
+            if (pressure < BottomPressure())
+            {
+                throw BelowBottom(pressure);
             }
 
-            return last;
-        }
-
-        double F(double reduced)
-        {
-            steps++;
-            return Math.Log(At(reduced).Pressure) - lnTarget;
-        }
-
-        double DF(double reduced)
-        {
-            var point = At(reduced);
-            return point.Slope * tc / point.Pressure;
-        }
-
-        // The slack admits a root a rounding error below the limit (see BoundaryRoundingTolerance).
-        double lo = MinimumTemperature * (1 - 0.5 * BoundaryRoundingTolerance) / tc;
-        double hi = 1 - PressureSearchTopGap;
-        if (!RobustNewtonRaphson.TryFindRoot(F, DF, lo, hi, 1e-13, Options.MaxIterations, 20, out double root))
-        {
             throw new ConvergenceException(
-                $"saturation temperature at {Preconditions.Format(pressure)} Pa did not converge", steps, last?.Pressure - pressure ?? double.NaN);
+                $"saturation temperature at {Preconditions.Format(pressure)} Pa did not converge ({failure})", work.Evaluations, double.NaN);
         }
 
-        var point = At(root);
-        return point with { Report = point.Report with { Method = CoexistenceMethod.TemperatureIteration, Iterations = steps } };
+        if (point.Temperature < MinimumTemperature * (1 - BoundaryRoundingTolerance))
+        {
+            throw BelowBottom(pressure);
+        }
+
+        return point;
     }
 
-    /// <summary>Like <see cref="AtPressure"/>, returning false instead of throwing.</summary>
+    /// <summary>Like <see cref="AtPressure(double)"/>, returning false instead of throwing.</summary>
     public bool TryAtPressure(double pressure, out CoexistencePoint? point)
         => TrySolve(() => AtPressure(pressure), out point);
+
+    private double BottomPressure() => AtTemperature(MinimumTemperature).Pressure;
+
+    private InvalidInputException BelowBottom(double pressure)
+    {
+        double bottom = BottomPressure();
+        return new InvalidInputException("pressure", pressure,
+            $"pressure {Preconditions.Format(pressure)} Pa is below the saturation pressure {Preconditions.Format(bottom)} Pa at the lowest valid temperature {Preconditions.Format(MinimumTemperature)} K");
+    }
+
+    private CoexistencePoint? IterateAtPressure(double pressure, CoexistencePoint near, CoexistenceStart start, Work work, ref string? failure)
+    {
+        double tc = CriticalTemperature;
+        double lowest = 0.5 * MinimumTemperature;
+
+        // The start: T on the tangent of the line, densities along their slopes, linear in √(Tc − T).
+        double t = near.Temperature + (pressure - near.Pressure) / near.Slope;
+        if (!(t > lowest && t < tc))
+        {
+            t = near.Temperature;
+        }
+
+        double s0 = Math.Sqrt(tc - near.Temperature);
+        double s = Math.Sqrt(tc - t);
+        double Carry(Properties.PhaseState phase)
+        {
+            double slopeT = (near.Slope - phase.PressureTemperatureDerivative) / phase.PressureDensityDerivative;
+            return phase.Density * Math.Exp(slopeT / phase.Density * (-2 * s0) * (s - s0));
+        }
+
+        double rhoL = Carry(near.Liquid);
+        double rhoV = Carry(near.Vapour);
+        if (!(rhoV > 0 && rhoV < rhoL && rhoL < _densityBound))
+        {
+            (t, rhoL, rhoV) = (near.Temperature, near.Liquid.Density, near.Vapour.Density);
+        }
+
+        var dl = Evaluate(work, t, rhoL);
+        var dv = Evaluate(work, t, rhoV);
+        HelmholtzDerivatives bestL = dl, bestV = dv;
+        double bestStep = double.PositiveInfinity;
+        int bestIteration = 0;
+        double previousStep = double.PositiveInfinity;
+        int iteration = 0;
+        while (iteration < Options.MaxIterations)
+        {
+            iteration++;
+            double rt = R * t;
+            double aL = dl.PressureDRho;
+            double aV = dv.PressureDRho;
+            if (!(aL > 0 && aV > 0))
+            {
+                failure = "a phase left its stable branch";
+                break;
+            }
+
+            double pl = dl.Pressure;
+            double pv = dv.Pressure;
+            double eL = pl - pressure;
+            double eV = pv - pressure;
+            double eG = Math.Log(rhoL / rhoV) + (dl.Value - dv.Value) / rt + (pl / rhoL - pv / rhoV) / rt;
+            double ptL = dl.PressureDT;
+            double ptV = dv.PressureDT;
+            // ∂E_G/∂T at constant densities (the ideal-gas parts cancel between the phases).
+            double gT = (dl.DT - dv.DT) / rt - (dl.Value - dv.Value) / (rt * t)
+                        + (ptL / rhoL - ptV / rhoV) / rt - (pl / rhoL - pv / rhoV) / (rt * t);
+            double c = gT - (ptL / rhoL - ptV / rhoV) / rt;
+            double dT = (-eG + (eL / rhoL - eV / rhoV) / rt) / c;
+            double du = (-eL - ptL * dT) / (rhoL * aL);
+            double dw = (-eV - ptV * dT) / (rhoV * aV);
+            double step = Math.Max(Math.Abs(dT) / t, Math.Max(Math.Abs(du), Math.Abs(dw)));
+            if (!double.IsFinite(step))
+            {
+                failure = "singular Jacobian";
+                break;
+            }
+
+            if (step < bestStep)
+            {
+                (bestL, bestV, bestStep, bestIteration) = (dl, dv, step, iteration);
+            }
+
+            if (step <= StepTolerance
+                || (previousStep < 1e-7 && step > 0.5 * previousStep)
+                || iteration - bestIteration > 3)
+            {
+                break;
+            }
+
+            previousStep = step;
+            double lambda = step > 0.5 ? 0.5 / step : 1;
+            bool moved = false;
+            for (int halving = 0; halving < 40; halving++, lambda *= 0.5)
+            {
+                double nextT = t + lambda * dT;
+                double nextL = rhoL * Math.Exp(lambda * du);
+                double nextV = rhoV * Math.Exp(lambda * dw);
+                if (!(nextT > lowest && nextT < tc && nextL < _densityBound && nextV < nextL))
+                {
+                    continue;
+                }
+
+                var trialL = Evaluate(work, nextT, nextL);
+                var trialV = Evaluate(work, nextT, nextV);
+                if (trialL.PressureDRho > 0 && trialV.PressureDRho > 0)
+                {
+                    (t, rhoL, rhoV, dl, dv) = (nextT, nextL, nextV, trialL, trialV);
+                    moved = true;
+                    break;
+                }
+            }
+
+            if (!moved)
+            {
+                failure = "no step keeps both phases on their stable branches below Tc";
+                break;
+            }
+        }
+
+        StopReason stop;
+        if (bestStep <= StepTolerance || (bestStep <= RoundingFloorTolerance && 1 - bestL.Temperature / tc < 1e-2))
+        {
+            stop = StopReason.Converged;
+        }
+        else if (bestStep <= LargestAcceptedUncertainty && 1 - bestL.Temperature / tc < 1e-2)
+        {
+            stop = StopReason.RoundingLimit;
+        }
+        else
+        {
+            failure = $"temperature iteration stalled with a correction of {Preconditions.Format(bestStep)}";
+            return null;
+        }
+
+        var point = Build(bestL, bestV, pressure, CoexistenceMethod.TemperatureIteration, iteration, stop, work, start, bestStep);
+        if (!Acceptable(point))
+        {
+            failure = $"residual {Preconditions.Format(point.Report.FugacityResidual)} after {iteration} iterations";
+            return null;
+        }
+
+        return point;
+    }
 }

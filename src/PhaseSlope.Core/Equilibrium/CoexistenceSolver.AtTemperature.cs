@@ -1,5 +1,5 @@
-using MathNet.Numerics.RootFinding;
 using PhaseSlope.Core.Errors;
+using PhaseSlope.Core.Models;
 
 namespace PhaseSlope.Core.Equilibrium;
 
@@ -9,51 +9,112 @@ public sealed partial class CoexistenceSolver
     /// saturation pressure and both densities.</summary>
     /// <exception cref="InvalidInputException">T is not finite and positive, is below
     /// <see cref="MinimumTemperature"/>, or is at or above Tc.</exception>
-    /// <exception cref="ConvergenceException">Neither route met the tolerance.</exception>
-    public CoexistencePoint AtTemperature(double temperature)
+    /// <exception cref="ConvergenceException">No route met the tolerance.</exception>
+    public CoexistencePoint AtTemperature(double temperature) => AtTemperature(temperature, null);
+
+    /// <summary>The coexistence state at <paramref name="temperature"/> (K), started from a nearby
+    /// solved point of the same solver when one is given: its densities carried to
+    /// <paramref name="temperature"/> along their exact slopes dρ/dT|σ = (dPsat/dT − (∂P/∂T)_ρ)/(∂P/∂ρ)_T,
+    /// linear in √(Tc − T). The answer does not depend on the start; only the cost does.</summary>
+    /// <exception cref="InvalidInputException">As <see cref="AtTemperature(double)"/>.</exception>
+    /// <exception cref="ConvergenceException">No route met the tolerance.</exception>
+    public CoexistencePoint AtTemperature(double temperature, CoexistencePoint? near)
     {
         CheckTemperature(temperature);
-        string? failure = null;
-        bool densityFirst = temperature / Model.CriticalTemperature > DensityRouteReducedTemperature;
-        if (!SpinodalWindow.TryFind(Model, temperature, out var window))
+        return Solve(temperature, near, new Work());
+    }
+
+    private CoexistencePoint Solve(double temperature, CoexistencePoint? near, Work work, bool seriesAllowed = true)
+    {
+        if (seriesAllowed && 1 - temperature / CriticalTemperature < CriticalSeriesReducedGap)
         {
-            throw new ConvergenceException(
-                $"temperature {Preconditions.Format(temperature)} K is too close to the critical temperature {Preconditions.Format(Model.CriticalTemperature)} K for two phases to be resolved in double precision",
-                0, double.NaN);
+            return SeriesPoint(temperature, work);
         }
 
-        for (int attempt = 0; attempt < 2; attempt++)
+        string? failure = null;
+        if (near is not null && !near.IsCritical && near.Temperature < CriticalTemperature)
         {
-            bool useDensity = densityFirst == (attempt == 0);
-            var point = useDensity
-                ? SolveByDensities(temperature, window, ref failure)
-                : SolveByPressure(temperature, window, ref failure);
-            if (point is not null && Acceptable(point))
+            double s0 = Math.Sqrt(CriticalTemperature - near.Temperature);
+            double s = Math.Sqrt(CriticalTemperature - temperature);
+            double LnDensity(Properties.PhaseState phase)
+            {
+                double slopeT = (near.Slope - phase.PressureTemperatureDerivative) / phase.PressureDensityDerivative;
+                // d ln ρ/ds = (dρ/dT)/ρ · dT/ds with T = Tc − s², dT/ds = −2s.
+                return Math.Log(phase.Density) + slopeT / phase.Density * (-2 * s0) * (s - s0);
+            }
+
+            var point = Iterate(temperature, Math.Exp(LnDensity(near.Liquid)), Math.Exp(LnDensity(near.Vapour)), CoexistenceStart.Neighbour, work, ref failure);
+            if (point is not null)
             {
                 return point;
             }
+        }
 
+        return Cold(temperature, work, failure);
+    }
+
+    /// <summary>Like <see cref="AtTemperature(double)"/>, returning false instead of throwing.</summary>
+    public bool TryAtTemperature(double temperature, out CoexistencePoint? point)
+        => TrySolve(() => AtTemperature(temperature), out point);
+
+    /// <summary>The state at T started from given densities (a traced curve's extrapolation);
+    /// falls back on a cold start if the Newton iteration from them fails.</summary>
+    internal CoexistencePoint AtTemperatureFrom(double temperature, double liquidDensity, double vapourDensity)
+    {
+        CheckTemperature(temperature);
+        var work = new Work();
+        string? failure = null;
+        return Iterate(temperature, liquidDensity, vapourDensity, CoexistenceStart.Neighbour, work, ref failure)
+            ?? Cold(temperature, work, failure);
+    }
+
+    private CoexistencePoint Cold(double temperature, Work work, string? failure)
+    {
+        if (temperature / CriticalTemperature >= CriticalScalingReducedTemperature)
+        {
+            var (liquid, vapour) = CriticalScalingStart(temperature);
+            var point = Iterate(temperature, liquid, vapour, CoexistenceStart.CriticalScaling, work, ref failure);
             if (point is not null)
             {
-                failure = $"residual {Preconditions.Format(point.Report.FugacityResidual)} after {point.Report.Iterations} iterations";
+                return point;
+            }
+        }
+        else if (AncillaryStart(temperature, work, out double liquid, out double vapour))
+        {
+            var point = Iterate(temperature, liquid, vapour, CoexistenceStart.Ancillary, work, ref failure);
+            if (point is not null)
+            {
+                return point;
             }
         }
 
-        throw new ConvergenceException(
-            $"coexistence at {Preconditions.Format(temperature)} K did not converge ({failure})", Options.MaxIterations, double.NaN);
-    }
+        if (BracketingStart(temperature, work, out double l, out double v, ref failure))
+        {
+            var point = Iterate(temperature, l, v, CoexistenceStart.Bracketing, work, ref failure);
+            if (point is not null)
+            {
+                return point with { Report = point.Report with { Method = CoexistenceMethod.PressureIteration } };
+            }
+        }
 
-    /// <summary>Like <see cref="AtTemperature"/>, returning false instead of throwing.</summary>
-    public bool TryAtTemperature(double temperature, out CoexistencePoint? point)
-        => TrySolve(() => AtTemperature(temperature), out point);
+        if (1 - temperature / CriticalTemperature < 1e-6)
+        {
+            throw new ConvergenceException(
+                $"temperature {Preconditions.Format(temperature)} K is too close to the critical temperature {Preconditions.Format(CriticalTemperature)} K for two phases to be resolved in double precision ({failure})",
+                work.Evaluations, double.NaN);
+        }
+
+        throw new ConvergenceException(
+            $"coexistence at {Preconditions.Format(temperature)} K did not converge ({failure})", work.Evaluations, double.NaN);
+    }
 
     private void CheckTemperature(double temperature)
     {
         Preconditions.Positive(temperature, "temperature");
-        if (temperature >= Model.CriticalTemperature)
+        if (temperature >= CriticalTemperature)
         {
             throw new InvalidInputException("temperature", temperature,
-                $"temperature {Preconditions.Format(temperature)} K is at or above the critical temperature {Preconditions.Format(Model.CriticalTemperature)} K: no liquid-vapour coexistence");
+                $"temperature {Preconditions.Format(temperature)} K is at or above the critical temperature {Preconditions.Format(CriticalTemperature)} K: no liquid-vapour coexistence");
         }
 
         // A temperature that lands a few ulps below the limit through unit conversion
@@ -70,134 +131,129 @@ public sealed partial class CoexistenceSolver
     /// values that differ from the limit only by rounding.</summary>
     private const double BoundaryRoundingTolerance = 1e-12;
 
-    private CoexistencePoint? SolveByPressure(double temperature, SpinodalWindow window, ref string? failure)
-    {
-        int evaluations = 0;
-        double Difference(double lnP)
-        {
-            evaluations++;
-            double p = Math.Exp(lnP);
-            double rhoL = window.LiquidRoot(Model, temperature, p);
-            double rhoV = window.VapourRoot(Model, temperature, p);
-            var liquid = Properties.PhaseState.EvaluateAtPressure(Model, temperature, rhoL, p);
-            var vapour = Properties.PhaseState.EvaluateAtPressure(Model, temperature, rhoV, p);
-            return liquid.LnFugacityCoefficient - vapour.LnFugacityCoefficient;
-        }
-
-        double Slope(double lnP)
-        {
-            // d(ln φL − ln φV)/d ln P at constant T = Z_L − Z_V.
-            double p = Math.Exp(lnP);
-            double rhoL = window.LiquidRoot(Model, temperature, p);
-            double rhoV = window.VapourRoot(Model, temperature, p);
-            return p / (R * temperature) * (1 / rhoL - 1 / rhoV);
-        }
-
-        // Stay 1e-9 (relative) inside the window so both roots exist despite rounding in the
-        // spinodal pressures. Below the liquid spinodal pressure (often negative) any tiny positive
-        // pressure bounds Psat from below: there ln φL ≈ ln(Psat/P) ≫ 0 while ln φV ≈ 0.
-        double upper = Math.Log(window.VapourPressure) - 1e-9;
-        double lower = window.LiquidPressure > 0 ? Math.Log(window.LiquidPressure) + 1e-9 : upper - 460;
-        if (!(lower < upper))
-        {
-            failure = "spinodal pressure window too narrow for the pressure iteration";
-            return null;
-        }
-        double lnP;
-        try
-        {
-            if (!RobustNewtonRaphson.TryFindRoot(Difference, Slope, lower, upper, 1e-14, Options.MaxIterations, 20, out lnP))
-            {
-                failure = "pressure iteration did not converge";
-                return null;
-            }
-        }
-        catch (Exception ex) when (ex is ArithmeticException or ArgumentException or MathNet.Numerics.NonConvergenceException)
-        {
-            failure = "pressure iteration left the spinodal window";
-            return null;
-        }
-
-        double pressure = Math.Exp(lnP);
-        return Build(temperature, pressure, window.LiquidRoot(Model, temperature, pressure),
-            window.VapourRoot(Model, temperature, pressure), CoexistenceMethod.PressureIteration, evaluations);
-    }
-
-    /// <summary>Target of the density iteration on max(|PL − PV|/P, |gL − gV|/RT): two orders
-    /// below the default fugacity tolerance, and above the rounding floor near Tc.</summary>
-    private const double DensityIterationTolerance = 1e-14;
-
-    private CoexistencePoint? SolveByDensities(double temperature, SpinodalWindow window, ref string? failure)
+    /// <summary>Newton iteration on u = ln ρL, w = ln ρV at fixed T for equal pressure and equal
+    /// Gibbs energy; null when it cannot proceed from this start.</summary>
+    /// <remarks>
+    /// F1 = (PL − PV)/RT and F2 = (gL − gV)/RT = ln(ρL/ρV) + (A_r,L − A_r,V)/RT + (PL/ρL − PV/ρV)/RT.
+    /// With a = (∂P/∂ρ)_T and ∂(g/RT)/∂ln ρ = a/RT (Gibbs–Duhem) the Jacobian is
+    /// [[ρL·aL, −ρV·aV], [aL, −aV]]/RT, whose solution is
+    /// Δu = −RT(F1 − ρV·F2)/((ρL − ρV)·aL), Δw = RT(ρL·F2 − F1)/((ρL − ρV)·aV).
+    /// Each step evaluates the model once per phase; the state returned is the last one
+    /// evaluated, so nothing is evaluated twice. A step that would leave a phase's stable branch
+    /// ((∂P/∂ρ)_T ≤ 0) or cross the other phase is halved. The reported pressure is the vapour's,
+    /// which (unlike a dense liquid's) is computed from its density without cancellation.
+    /// </remarks>
+    private CoexistencePoint? Iterate(double temperature, double liquidDensity, double vapourDensity, CoexistenceStart start, Work work, ref string? failure)
     {
         double rt = R * temperature;
-        double rhoMax = Model.MaximumDensity;
-        // Classical (mean-field) models have coexistence densities √3 times farther from the
-        // inflection than the spinodals, to leading order in (1 − T/Tc).
-        double sqrt3 = Math.Sqrt(3);
-        double rhoV = Math.Max(window.InflectionDensity - sqrt3 * (window.InflectionDensity - window.VapourDensity), 0.5 * window.VapourDensity);
-        double rhoL = Math.Min(window.InflectionDensity + sqrt3 * (window.LiquidDensity - window.InflectionDensity), 0.5 * (window.LiquidDensity + rhoMax));
+        double rhoL = liquidDensity;
+        double rhoV = vapourDensity;
+        if (!(rhoV > 0 && rhoV < rhoL && rhoL < _densityBound))
+        {
+            failure = "start outside the density range";
+            return null;
+        }
 
-        // Near Tc the Newton steps become noise-dominated once the residuals reach rounding
-        // level ((∂P/∂ρ)_T → 0 amplifies the last bit of P), so the loop keeps the best iterate and
-        // stops when it has not improved for a few steps.
-        double bestNorm = double.PositiveInfinity;
-        double bestL = rhoL, bestV = rhoV;
+        var dl = Evaluate(work, temperature, rhoL);
+        var dv = Evaluate(work, temperature, rhoV);
+        HelmholtzDerivatives bestL = dl, bestV = dv;
+        double bestStep = double.PositiveInfinity;
         int bestIteration = 0;
+        double previousStep = double.PositiveInfinity;
         int iteration = 0;
         while (iteration < Options.MaxIterations)
         {
             iteration++;
-            var dl = Model.Residual(temperature, rhoL);
-            var dv = Model.Residual(temperature, rhoV);
+            double aL = dl.PressureDRho;
+            double aV = dv.PressureDRho;
+            if (!(aL > 0 && aV > 0))
+            {
+                failure = "a phase left its stable branch";
+                break;
+            }
+
             double pl = dl.Pressure;
             double pv = dv.Pressure;
-            // F1 = (PL − PV)/RT; F2 = (gL − gV)/RT with g = A_ig + A_r + P/ρ at equal T.
             double f1 = (pl - pv) / rt;
             double f2 = Math.Log(rhoL / rhoV) + (dl.Value - dv.Value) / rt + (pl / rhoL - pv / rhoV) / rt;
-            double norm = Math.Max(Math.Abs(pl - pv) / Math.Max(Math.Abs(pl), Math.Abs(pv)), Math.Abs(f2));
-            if (norm < bestNorm)
+            double gap = rhoL - rhoV;
+            double du = -rt * (f1 - rhoV * f2) / (gap * aL);
+            double dw = rt * (rhoL * f2 - f1) / (gap * aV);
+            double step = Math.Max(Math.Abs(du), Math.Abs(dw));
+            if (!double.IsFinite(step))
             {
-                bestNorm = norm;
-                bestL = rhoL;
-                bestV = rhoV;
-                bestIteration = iteration;
+                failure = "singular Jacobian";
+                break;
             }
 
-            if (norm < DensityIterationTolerance || iteration - bestIteration > 5)
+            if (step < bestStep)
+            {
+                (bestL, bestV, bestStep, bestIteration) = (dl, dv, step, iteration);
+            }
+
+            if (step <= StepTolerance)
             {
                 break;
             }
 
-            double al = dl.PressureDRho / rt;
-            double av = dv.PressureDRho / rt;
-            double det = 1 / rhoL - 1 / rhoV;
-            double stepV = (f1 / rhoL - f2) / (av * det);
-            double stepL = (-f1 + av * stepV) / al;
-            if (!double.IsFinite(stepV) || !double.IsFinite(stepL))
+            // Quadratic convergence shrinks a small correction by orders of magnitude per step;
+            // once it stops shrinking the equations are at their rounding floor.
+            if ((previousStep < 1e-7 && step > 0.5 * previousStep) || iteration - bestIteration > 3)
             {
-                failure = "density iteration met a singular Jacobian";
                 break;
             }
 
-            // Damp the step so each density stays on its own side of the spinodal window.
-            double lambda = 1;
-            while (lambda > 1e-6
-                   && !(rhoV + lambda * stepV > 0 && rhoV + lambda * stepV < window.VapourDensity
-                        && rhoL + lambda * stepL > window.LiquidDensity && rhoL + lambda * stepL < rhoMax))
+            previousStep = step;
+            double lambda = step > 1 ? 1 / step : 1;
+            bool moved = false;
+            for (int halving = 0; halving < 40; halving++, lambda *= 0.5)
             {
-                lambda *= 0.5;
+                double nextL = rhoL * Math.Exp(lambda * du);
+                double nextV = rhoV * Math.Exp(lambda * dw);
+                if (!(nextL < _densityBound && nextV < nextL))
+                {
+                    continue;
+                }
+
+                var trialL = Evaluate(work, temperature, nextL);
+                var trialV = Evaluate(work, temperature, nextV);
+                if (trialL.PressureDRho > 0 && trialV.PressureDRho > 0)
+                {
+                    (rhoL, rhoV, dl, dv) = (nextL, nextV, trialL, trialV);
+                    moved = true;
+                    break;
+                }
             }
 
-            rhoV += lambda * stepV;
-            rhoL += lambda * stepL;
+            if (!moved)
+            {
+                failure = "no step keeps both phases on their stable branches";
+                break;
+            }
         }
 
-        if (!(bestNorm < DensityIterationTolerance))
+        StopReason stop;
+        if (bestStep <= StepTolerance || (bestStep <= RoundingFloorTolerance && 1 - temperature / CriticalTemperature < 1e-2))
         {
-            failure ??= $"density iteration stalled at residual {Preconditions.Format(bestNorm)}";
+            stop = StopReason.Converged;
+        }
+        else if (bestStep <= LargestAcceptedUncertainty && 1 - temperature / CriticalTemperature < 1e-2)
+        {
+            stop = StopReason.RoundingLimit;
+        }
+        else
+        {
+            failure ??= $"density iteration stalled with a correction of {Preconditions.Format(bestStep)}";
+            return null;
         }
 
-        double pressure = Model.Pressure(temperature, bestV);
-        return Build(temperature, pressure, bestL, bestV, CoexistenceMethod.DensityIteration, iteration);
+        var point = Build(bestL, bestV, bestV.Pressure, CoexistenceMethod.DensityIteration, iteration, stop, work, start, bestStep);
+        if (!Acceptable(point))
+        {
+            failure = $"residual {Preconditions.Format(point.Report.FugacityResidual)} after {iteration} iterations";
+            return null;
+        }
+
+        return point;
     }
 }

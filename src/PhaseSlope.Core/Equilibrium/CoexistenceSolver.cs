@@ -5,36 +5,78 @@ using PhaseSlope.Core.Properties;
 
 namespace PhaseSlope.Core.Equilibrium;
 
-/// <summary>Liquid–vapour coexistence of one model: equal temperature, pressure and Gibbs
-/// energy (fugacity) between a liquid and a vapour root.</summary>
+/// <summary>Liquid–vapour coexistence of one pure-fluid model: equal temperature, pressure and
+/// Gibbs energy (fugacity) between a liquid and a vapour root.</summary>
 /// <remarks>
-/// Valid from <see cref="MinimumTemperature"/> (0.3·Tc, or the triple point when known and
-/// higher) up to, not including, Tc. Away from Tc the solver iterates on ln P
-/// (<see cref="CoexistenceMethod.PressureIteration"/>), which stays well conditioned for dense
-/// liquids with tiny vapour pressures. Near Tc the spinodal pressure window shrinks as
-/// (1 − T/Tc)^(3/2) and cannot be resolved in P, so it iterates on the two densities
-/// (<see cref="CoexistenceMethod.DensityIteration"/>) from a start outside the spinodals, which
-/// cannot fall onto the trivial solution ρL = ρV. Either route falls back on the other.
+/// <para>Valid from <see cref="MinimumTemperature"/> (0.3·Tc, or the triple point when known and
+/// higher) up to, not including, Tc. Every route is a Newton iteration on the logarithms of the
+/// two densities (and, at given pressure, the temperature), two model evaluations per step,
+/// started as close to the answer as is known:</para>
+/// <list type="bullet">
+/// <item>from a neighbouring solved point (<see cref="CoexistenceCurve"/> extrapolates through the
+/// last few points in √(Tc − T); <see cref="AtTemperature(double, CoexistencePoint?)"/> takes one
+/// point and its exact slopes), which costs 4 evaluations on a finely traced curve;</item>
+/// <item>from the density roots at an ancillary vapour pressure (corresponding states with the
+/// model's own acentric factor, found once per solver), about 10–20 evaluations;</item>
+/// <item>above 0.97·Tc from the classical critical scaling ρ = ρc ± A·(Tc − T)^½, A from the
+/// model's derivatives at its critical point (found once per solver).</item>
+/// </list>
+/// <para>If a Newton start fails, a bracketing iteration on ln P with the density roots at each
+/// trial pressure (<see cref="CoexistenceMethod.PressureIteration"/>) finds a start that cannot.
+/// Near Tc the phases' pressure difference shrinks as (Tc − T)^(3/2) and is lost in rounding;
+/// there the Newton corrections stop shrinking before the tolerance and the point is returned
+/// with <see cref="StopReason.RoundingLimit"/> and its stated density uncertainty, never
+/// labelled converged. The solver sees the model only through <see cref="IResidualModel"/>.</para>
 /// </remarks>
 public sealed partial class CoexistenceSolver
 {
     private const double R = Constants.GasConstant;
 
-    /// <summary>Above this reduced temperature the density iteration is tried first.</summary>
-    private const double DensityRouteReducedTemperature = 0.97;
+    /// <summary>At and above this reduced temperature a cold start uses the critical scaling.</summary>
+    private const double CriticalScalingReducedTemperature = 0.97;
 
-    /// <summary>Creates a solver for a model with its lowest valid temperature.</summary>
-    /// <param name="model">The cubic model.</param>
+    /// <summary>Relative size of the Newton correction (in each density, and in T at given P)
+    /// below which a point is converged: three orders above double rounding, so that it is
+    /// reached wherever the equations are well conditioned, and small enough that every
+    /// returned property is within about 1e-12 of the exact solution of the model.</summary>
+    private const double StepTolerance = 1e-13;
+
+    /// <summary>Near Tc (within 1e-2) the Newton corrections stop shrinking at the rounding floor
+    /// of the pressure difference; a floor at or below this relative size still counts as
+    /// converged (it is the accuracy the model's double-precision evaluation allows, and it is
+    /// stated in the report).</summary>
+    private const double RoundingFloorTolerance = 1e-10;
+
+    /// <summary>Relative density uncertainty above which a point that stopped at the rounding
+    /// floor is not returned but reported as a failure.</summary>
+    private const double LargestAcceptedUncertainty = 1e-6;
+
+    private readonly ModelCriticalPoint _critical;
+    private readonly double _densityBound;
+    private double? _acentricFactor;
+    private double? _scalingAmplitude;
+    private double? _criticalIsochoreSlope;
+
+    /// <summary>Creates a solver for a pure-fluid model with its lowest valid temperature.</summary>
+    /// <param name="model">The model (one component).</param>
     /// <param name="minimumTemperature">Lowest temperature accepted, in K, below Tc.</param>
     /// <param name="options">Tolerances; <see cref="CoexistenceOptions.Default"/> when null.</param>
-    public CoexistenceSolver(CubicModel model, double minimumTemperature, CoexistenceOptions? options = null)
+    public CoexistenceSolver(IResidualModel model, double minimumTemperature, CoexistenceOptions? options = null)
     {
         ArgumentNullException.ThrowIfNull(model);
+        if (model.ComponentCount != 1)
+        {
+            throw new InvalidInputException("model", model.ComponentCount,
+                $"pure-fluid coexistence needs a one-component model, got {model.ComponentCount} components");
+        }
+
         Preconditions.Positive(minimumTemperature, "minimum temperature");
-        if (!(minimumTemperature < model.CriticalTemperature))
+        _critical = model.CriticalPoint(Composition.Pure);
+        _densityBound = model.DensityBound(Composition.Pure);
+        if (!(minimumTemperature < _critical.Temperature))
         {
             throw new InvalidInputException("minimum temperature", minimumTemperature,
-                $"minimum temperature {Preconditions.Format(minimumTemperature)} K is not below the critical temperature {Preconditions.Format(model.CriticalTemperature)} K");
+                $"minimum temperature {Preconditions.Format(minimumTemperature)} K is not below the critical temperature {Preconditions.Format(_critical.Temperature)} K");
         }
 
         Model = model;
@@ -58,7 +100,16 @@ public sealed partial class CoexistenceSolver
     }
 
     /// <summary>The model.</summary>
-    public CubicModel Model { get; }
+    public IResidualModel Model { get; }
+
+    /// <summary>The model's critical temperature, K.</summary>
+    public double CriticalTemperature => _critical.Temperature;
+
+    /// <summary>The model's critical pressure, Pa.</summary>
+    public double CriticalPressure => _critical.Pressure;
+
+    /// <summary>The model's critical density, mol/m³.</summary>
+    public double CriticalDensity => _critical.Density;
 
     /// <summary>Lowest accepted temperature in K.</summary>
     public double MinimumTemperature { get; }
@@ -70,32 +121,46 @@ public sealed partial class CoexistenceSolver
     /// density, no jumps, and the slope of the critical isochore.</summary>
     public CoexistencePoint CriticalPoint()
     {
-        double tc = Model.CriticalTemperature;
-        var state = PhaseState.Evaluate(Model, tc, Model.CriticalDensity);
+        var state = PhaseState.Evaluate(Model, _critical.Temperature, _critical.Density);
         return new CoexistencePoint
         {
-            Model = Model.Kind,
-            Temperature = tc,
+            Model = Model.Identity,
+            Temperature = _critical.Temperature,
             Pressure = state.Pressure,
             Liquid = state,
             Vapour = state,
-            Report = new SolverReport(CoexistenceMethod.CriticalState, 0, 0, StopReason.CriticalPoint),
+            Report = new SolverReport(CoexistenceMethod.CriticalState, 0, 0, StopReason.CriticalPoint, 1),
         };
     }
 
-    private CoexistencePoint Build(double temperature, double pressure, double rhoL, double rhoV, CoexistenceMethod method, int iterations)
+    /// <summary>Counts the model evaluations of one solve (a solve may nest another).</summary>
+    private sealed class Work
     {
-        var liquid = PhaseState.EvaluateAtPressure(Model, temperature, rhoL, pressure);
-        var vapour = PhaseState.EvaluateAtPressure(Model, temperature, rhoV, pressure);
+        public int Evaluations;
+    }
+
+    private HelmholtzDerivatives Evaluate(Work work, double temperature, double density)
+    {
+        work.Evaluations++;
+        return Model.Residual(temperature, density, Composition.Pure);
+    }
+
+    /// <summary>The point from the derivatives already evaluated at the two densities, at the
+    /// pressure <paramref name="pressure"/> (known exactly to the caller).</summary>
+    private CoexistencePoint Build(in HelmholtzDerivatives liquidDerivatives, in HelmholtzDerivatives vapourDerivatives, double pressure,
+        CoexistenceMethod method, int iterations, StopReason stop, Work work, CoexistenceStart start, double uncertainty)
+    {
+        var liquid = PhaseState.From(liquidDerivatives, pressure);
+        var vapour = PhaseState.From(vapourDerivatives, pressure);
         double residual = Math.Abs(liquid.LnFugacityCoefficient - vapour.LnFugacityCoefficient);
         return new CoexistencePoint
         {
-            Model = Model.Kind,
-            Temperature = temperature,
+            Model = Model.Identity,
+            Temperature = liquidDerivatives.Temperature,
             Pressure = pressure,
             Liquid = liquid,
             Vapour = vapour,
-            Report = new SolverReport(method, iterations, residual, StopReason.Converged),
+            Report = new SolverReport(method, iterations, residual, stop, work.Evaluations, start, uncertainty),
         };
     }
 

@@ -31,7 +31,7 @@ public sealed record FluidCheck(Fluid Fluid, CubicModelKind Model, double? Predi
     {
         ArgumentNullException.ThrowIfNull(fluid);
         var solver = CoexistenceSolver.For(fluid, kind);
-        double tc = solver.Model.CriticalTemperature;
+        double tc = solver.CriticalTemperature;
         string? failure = null;
         foreach (double t in new[] { solver.MinimumTemperature, Math.Max(0.7 * tc, solver.MinimumTemperature), tc * (1 - 1e-8) })
         {

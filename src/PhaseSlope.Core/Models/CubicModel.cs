@@ -15,11 +15,13 @@ namespace PhaseSlope.Core.Models;
 /// F = η/(1 + δ′η) when δ′1 = δ′2 = δ′ (van der Waals: F = η/(1 + cρ)). Then dF/dρ = b/D with
 /// D = (1 + δ′1η)(1 + δ′2η). With c = 0, δ′_i = δ_i and b′ = b exactly, so the untranslated
 /// model is computed by the same operations as before translation was added. Every pressure,
-/// fugacity and caloric residual comes from <see cref="Residual"/>; none is written a second time.
+/// fugacity and caloric residual comes from <see cref="Residual(double, double)"/>; none is written a second time.
+/// Density roots at given (T, P) are the roots of the cubic in v, in closed form
+/// (<see cref="DensityRoots"/>), polished by Newton steps on P(v), with no Helmholtz evaluation.
 /// The model is valid for T &gt; 0 and 0 &lt; ρ &lt; 1/b′; both attractive factors 1 + e_iρ
 /// stay positive there because b′ + e_i = (1 + δ_i)·b &gt; 0 for every form used here.
 /// </remarks>
-public sealed class CubicModel
+public sealed class CubicModel : IResidualModel
 {
     private const double R = Constants.GasConstant;
     private readonly double _delta1;
@@ -64,6 +66,8 @@ public sealed class CubicModel
         _delta2 = form.Delta2 + shift;
         _u = _delta1 + _delta2;
         _w = _delta1 * _delta2;
+        var entry = kind.Entry();
+        Identity = new ModelIdentity(entry.Id, entry.Title, alpha.Description, volumeShift);
     }
 
     /// <summary>Builds a model for a fluid from its Tc, Pc and ω, with a chosen alpha function
@@ -93,13 +97,14 @@ public sealed class CubicModel
 
         Preconditions.Positive(tc, "critical temperature");
         Preconditions.Finite(omega, "acentric factor");
-        CubicForm form = kind switch
+        var entry = kind.Entry();
+        if (!entry.AcceptsAlphaChoice)
         {
-            CubicModelKind.PengRobinson or CubicModelKind.PengRobinson1978 => CubicForm.PengRobinson,
-            CubicModelKind.SoaveRedlichKwong => CubicForm.RedlichKwong,
-            _ => throw new InvalidInputException("alpha form", double.NaN,
-                $"the {AlphaName(alpha)} alpha function applies to the Peng-Robinson and Soave-Redlich-Kwong models only, not {kind.Title()}"),
-        };
+            throw new InvalidInputException("alpha form", double.NaN,
+                $"the {AlphaName(alpha)} alpha function applies to the Peng-Robinson and Soave-Redlich-Kwong models only, not {entry.Title}");
+        }
+
+        CubicForm form = entry.Form;
         AlphaParameterSet? set = FindParameters(fluid, kind, alpha);
         IAlphaFunction function = alpha switch
         {
@@ -127,23 +132,8 @@ public sealed class CubicModel
     public static CubicModel For(CubicModelKind kind, double criticalTemperature, double criticalPressure, double acentricFactor, double volumeShift = 0)
     {
         Preconditions.Finite(acentricFactor, "acentric factor");
-        return kind switch
-        {
-            CubicModelKind.PengRobinson => new CubicModel(kind, CubicForm.PengRobinson,
-                new SoaveAlpha(SoaveAlpha.PengRobinson1976Slope(acentricFactor), criticalTemperature, "Peng & Robinson 1976"),
-                criticalTemperature, criticalPressure, volumeShift),
-            CubicModelKind.PengRobinson1978 => new CubicModel(kind, CubicForm.PengRobinson,
-                new SoaveAlpha(SoaveAlpha.PengRobinson1978Slope(acentricFactor), criticalTemperature, "Robinson & Peng 1978"),
-                criticalTemperature, criticalPressure, volumeShift),
-            CubicModelKind.SoaveRedlichKwong => new CubicModel(kind, CubicForm.RedlichKwong,
-                new SoaveAlpha(SoaveAlpha.SoaveSlope(acentricFactor), criticalTemperature, "Soave 1972"),
-                criticalTemperature, criticalPressure, volumeShift),
-            CubicModelKind.RedlichKwong => new CubicModel(kind, CubicForm.RedlichKwong,
-                new InverseRootAlpha(criticalTemperature), criticalTemperature, criticalPressure, volumeShift),
-            CubicModelKind.VanDerWaals => new CubicModel(kind, CubicForm.VanDerWaals,
-                new ConstantAlpha(), criticalTemperature, criticalPressure, volumeShift),
-            _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, "unknown cubic model"),
-        };
+        var entry = kind.Entry();
+        return new CubicModel(kind, entry.Form, entry.OwnAlpha(acentricFactor, criticalTemperature), criticalTemperature, criticalPressure, volumeShift);
     }
 
     /// <summary>The same model with volume shift <paramref name="volumeShift"/> (m³/mol) in
@@ -158,9 +148,9 @@ public sealed class CubicModel
     private static AlphaParameterSet? FindParameters(Fluid fluid, CubicModelKind kind, AlphaForm alpha)
     {
         AlphaParameterSet? own = fluid.AlphaParameters.FirstOrDefault(p => p.Form == alpha && p.Model == kind);
-        if (own is null && kind == CubicModelKind.PengRobinson1978)
+        if (own is null && kind.Entry().AlphaParametersOf is CubicModelKind other)
         {
-            own = fluid.AlphaParameters.FirstOrDefault(p => p.Form == alpha && p.Model == CubicModelKind.PengRobinson);
+            own = fluid.AlphaParameters.FirstOrDefault(p => p.Form == alpha && p.Model == other);
         }
 
         return own;
@@ -179,6 +169,12 @@ public sealed class CubicModel
 
     /// <summary>Which published model this is.</summary>
     public CubicModelKind Kind { get; }
+
+    /// <inheritdoc />
+    public ModelIdentity Identity { get; }
+
+    /// <inheritdoc />
+    public int ComponentCount => 1;
 
     /// <summary>The cubic form (δ1, δ2, Ωa, Ωb, Zc).</summary>
     public CubicForm Form { get; }
@@ -210,6 +206,54 @@ public sealed class CubicModel
 
     /// <summary>The highest density the model admits, 1/(b − c), in mol/m³.</summary>
     public double MaximumDensity => 1 / TranslatedCovolume;
+
+    /// <inheritdoc />
+    public double DensityBound(ReadOnlySpan<double> amounts)
+    {
+        RequirePure(amounts);
+        return MaximumDensity;
+    }
+
+    /// <inheritdoc />
+    public ModelCriticalPoint CriticalPoint(ReadOnlySpan<double> amounts)
+    {
+        RequirePure(amounts);
+        return new ModelCriticalPoint(CriticalTemperature, CriticalPressure, CriticalDensity);
+    }
+
+    /// <inheritdoc />
+    public HelmholtzDerivatives Residual(double temperature, double density, ReadOnlySpan<double> amounts)
+    {
+        RequirePure(amounts);
+        return Residual(temperature, density);
+    }
+
+    /// <inheritdoc />
+    public void LnFugacityCoefficients(double temperature, double density, ReadOnlySpan<double> amounts, Span<double> lnFugacityCoefficients)
+    {
+        RequirePure(amounts);
+        var d = Residual(temperature, density);
+        lnFugacityCoefficients[0] = d.LnFugacityCoefficient(d.Pressure);
+    }
+
+    /// <inheritdoc />
+    public int DensityRoots(double temperature, double pressure, ReadOnlySpan<double> amounts, Span<double> roots)
+    {
+        RequirePure(amounts);
+        return CubicRoots.Find(this, temperature, pressure, roots);
+    }
+
+    private static void RequirePure(ReadOnlySpan<double> amounts)
+    {
+        if (amounts.Length != 1 || !(amounts[0] > 0))
+        {
+            throw new InvalidInputException("composition", amounts.Length,
+                $"this cubic model describes one component; got a composition of {amounts.Length} amounts");
+        }
+    }
+
+    /// <summary>The shifted δ′1 = δ1 + c/b and δ′2 of the attractive denominator (v + δ′1·b)(v + δ′2·b).</summary>
+    internal (double Delta1, double Delta2) ShiftedDeltas => (_delta1, _delta2);
 
     /// <summary>The residual Helmholtz energy and its derivatives at (T, ρ).</summary>
     /// <param name="temperature">T in K, positive.</param>

@@ -37,4 +37,28 @@ public readonly record struct HelmholtzDerivatives(
 
     /// <summary>(∂P/∂T)_ρ = ρR + ρ²·A_r,Tρ in Pa/K.</summary>
     public double PressureDT => Density * (R + Density * DTRho);
+
+    // The residual properties below are written here once; every state and solver uses them.
+    // Each takes the pressure explicitly: for a dense liquid at low reduced temperature P
+    // recomputed from ρ is a small difference of large terms, while a solver knows P exactly.
+
+    /// <summary>Z = P/(ρRT) at the given pressure (Pa).</summary>
+    public double CompressibilityFactor(double pressure) => pressure / (Density * R * Temperature);
+
+    /// <summary>ln φ = A_r/(RT) + Z − 1 − ln Z at the given pressure (Pa).</summary>
+    public double LnFugacityCoefficient(double pressure)
+    {
+        double z = CompressibilityFactor(pressure);
+        return Value / (R * Temperature) + z - 1 - Math.Log(z);
+    }
+
+    /// <summary>Residual internal energy u_r = A_r − T·A_r,T in J/mol.</summary>
+    public double ResidualInternalEnergy => Value - Temperature * DT;
+
+    /// <summary>Residual enthalpy h_r = u_r + RT(Z − 1) at the given pressure, J/mol.</summary>
+    public double ResidualEnthalpy(double pressure) => ResidualInternalEnergy + R * Temperature * (CompressibilityFactor(pressure) - 1);
+
+    /// <summary>Residual entropy s_r = −A_r,T + R·ln Z at the given pressure (departure at equal T
+    /// and P), J/(mol·K).</summary>
+    public double ResidualEntropy(double pressure) => -DT + R * Math.Log(CompressibilityFactor(pressure));
 }

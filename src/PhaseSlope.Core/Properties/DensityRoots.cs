@@ -1,58 +1,30 @@
-using MathNet.Numerics.RootFinding;
-using PhaseSlope.Core.Equilibrium;
 using PhaseSlope.Core.Models;
 
 namespace PhaseSlope.Core.Properties;
 
-/// <summary>The mechanically stable density roots of P(T, ρ) = P for a model.</summary>
+/// <summary>The mechanically stable density roots of P(T, ρ) = P for a pure-fluid model, labelled.</summary>
 internal static class DensityRoots
 {
-    /// <summary>The liquid and vapour roots (either may be missing beyond its spinodal) below Tc,
-    /// or the single root at and above Tc (returned as <see cref="PhaseLabel.Supercritical"/>).</summary>
-    public static IReadOnlyList<(double Density, PhaseLabel Phase)> Find(CubicModel model, double temperature, double pressure)
+    /// <summary>Below Tc the vapour and liquid roots (either may be missing beyond its spinodal);
+    /// at and above Tc the single root, labelled <see cref="PhaseLabel.Supercritical"/>.</summary>
+    /// <remarks>A lone root below Tc is labelled by the curvature of the isotherm there: the
+    /// vapour branch lies below the inflection of P(ρ), where (∂²P/∂ρ²)_T &lt; 0, the liquid
+    /// branch above it. Each returned root carries its Helmholtz derivatives, evaluated once.</remarks>
+    public static IReadOnlyList<(HelmholtzDerivatives Helmholtz, PhaseLabel Phase)> Find(IResidualModel model, double temperature, double pressure)
     {
-        if (temperature < model.CriticalTemperature && SpinodalWindow.TryFind(model, temperature, out var window))
+        Span<double> roots = stackalloc double[2];
+        int count = model.DensityRoots(temperature, pressure, Composition.Pure, roots);
+        double tc = model.CriticalPoint(Composition.Pure).Temperature;
+        var result = new List<(HelmholtzDerivatives, PhaseLabel)>(count);
+        for (int i = 0; i < count; i++)
         {
-            var roots = new List<(double, PhaseLabel)>(2);
-            if (pressure <= window.VapourPressure)
-            {
-                roots.Add((window.VapourRoot(model, temperature, pressure), PhaseLabel.Vapour));
-            }
-
-            if (pressure >= window.LiquidPressure)
-            {
-                roots.Add((window.LiquidRoot(model, temperature, pressure), PhaseLabel.Liquid));
-            }
-
-            return roots;
+            var d = model.Residual(temperature, roots[i], Composition.Pure);
+            PhaseLabel label = temperature >= tc ? PhaseLabel.Supercritical
+                : count == 2 ? (i == 0 ? PhaseLabel.Vapour : PhaseLabel.Liquid)
+                : d.PressureDRhoRho < 0 ? PhaseLabel.Vapour : PhaseLabel.Liquid;
+            result.Add((d, label));
         }
 
-        return [(MonotonicRoot(model, temperature, pressure), temperature < model.CriticalTemperature ? PhaseLabel.Liquid : PhaseLabel.Supercritical)];
-    }
-
-    /// <summary>The root of a monotonic isotherm (at or above Tc, or just below it where the
-    /// loop is narrower than rounding).</summary>
-    private static double MonotonicRoot(CubicModel model, double temperature, double pressure)
-    {
-        // P(ρ) rises from 0 at ρ → 0 to +∞ at ρ → 1/b; at ρ = P/(RT)·1e-3 the pressure is far below
-        // the target for any Z of order one. Solve in ln ρ, then polish with Newton steps.
-        double rt = Constants.GasConstant * temperature;
-        double lo = Math.Log(pressure / rt * 1e-3);
-        double hi = Math.Log(model.MaximumDensity * (1 - 1e-12));
-        double F(double x) => model.Pressure(temperature, Math.Exp(x)) - pressure;
-        double rho = Math.Exp(Brent.FindRoot(F, lo, hi, 1e-13, 400));
-        for (int i = 0; i < 2; i++)
-        {
-            var d = model.Residual(temperature, rho);
-            double next = rho - (d.Pressure - pressure) / d.PressureDRho;
-            if (!(next > 0 && next < model.MaximumDensity))
-            {
-                break;
-            }
-
-            rho = next;
-        }
-
-        return rho;
+        return result;
     }
 }

@@ -7,7 +7,8 @@ namespace PhaseSlope.Core.Properties;
 /// <remarks>
 /// Residual properties are departures from the ideal gas at the same T and P:
 /// Z = 1 + ρ·A_r,ρ/(RT); ln φ = A_r/(RT) + Z − 1 − ln Z; u_r = A_r − T·A_r,T;
-/// h_r = u_r + RT(Z − 1); s_r = −A_r,T + R·ln Z; g_r = h_r − T·s_r = RT·ln φ.
+/// h_r = u_r + RT(Z − 1); s_r = −A_r,T + R·ln Z; g_r = h_r − T·s_r = RT·ln φ, each written once
+/// in <see cref="HelmholtzDerivatives"/>.
 /// Units: K, mol/m³, Pa, m³/mol, J/mol, J/(mol·K).
 /// </remarks>
 public sealed record PhaseState
@@ -50,40 +51,35 @@ public sealed record PhaseState
     /// <summary>(∂P/∂T)_ρ in Pa/K.</summary>
     public required double PressureTemperatureDerivative { get; init; }
 
-    /// <summary>Evaluates the state at (T, ρ), the pressure following from the model.</summary>
-    public static PhaseState Evaluate(CubicModel model, double temperature, double density)
+    /// <summary>The model's residual Helmholtz derivatives at this state, from which every
+    /// member above is computed (kept so that nothing is evaluated twice).</summary>
+    public required HelmholtzDerivatives Helmholtz { get; init; }
+
+    /// <summary>Evaluates the state of a pure-fluid model at (T, ρ), the pressure following from the model.</summary>
+    public static PhaseState Evaluate(IResidualModel model, double temperature, double density)
     {
         ArgumentNullException.ThrowIfNull(model);
-        var d = model.Residual(temperature, density);
-        return Build(d, d.Pressure);
+        var d = model.Residual(temperature, density, Composition.Pure);
+        return From(d, d.Pressure);
     }
 
-    /// <summary>Evaluates the state at (T, ρ) where ρ is a root of P(T, ρ) = <paramref name="pressure"/>.</summary>
+    /// <summary>The state from derivatives already evaluated at (T, ρ), where ρ is a root of
+    /// P(T, ρ) = <paramref name="pressure"/>.</summary>
     /// <remarks>For a dense liquid at low reduced temperature, P recomputed from ρ loses digits
     /// (it is a small difference of large terms), while P is known exactly. Using the given P in
     /// Z and in every P-dependent residual keeps ln φ and h_r at full precision.</remarks>
-    internal static PhaseState EvaluateAtPressure(CubicModel model, double temperature, double density, double pressure)
-        => Build(model.Residual(temperature, density), pressure);
-
-    private static PhaseState Build(in HelmholtzDerivatives d, double pressure)
+    public static PhaseState From(in HelmholtzDerivatives d, double pressure) => new()
     {
-        double t = d.Temperature;
-        double rt = R * t;
-        double z = pressure / (d.Density * rt);
-        double lnZ = Math.Log(z);
-        double ur = d.Value - t * d.DT;
-        return new PhaseState
-        {
-            Temperature = t,
-            Density = d.Density,
-            Pressure = pressure,
-            CompressibilityFactor = z,
-            LnFugacityCoefficient = d.Value / rt + z - 1 - lnZ,
-            ResidualInternalEnergy = ur,
-            ResidualEnthalpy = ur + rt * (z - 1),
-            ResidualEntropy = -d.DT + R * lnZ,
-            PressureDensityDerivative = d.PressureDRho,
-            PressureTemperatureDerivative = d.PressureDT,
-        };
-    }
+        Temperature = d.Temperature,
+        Density = d.Density,
+        Pressure = pressure,
+        CompressibilityFactor = d.CompressibilityFactor(pressure),
+        LnFugacityCoefficient = d.LnFugacityCoefficient(pressure),
+        ResidualInternalEnergy = d.ResidualInternalEnergy,
+        ResidualEnthalpy = d.ResidualEnthalpy(pressure),
+        ResidualEntropy = d.ResidualEntropy(pressure),
+        PressureDensityDerivative = d.PressureDRho,
+        PressureTemperatureDerivative = d.PressureDT,
+        Helmholtz = d,
+    };
 }

@@ -12,7 +12,8 @@ namespace PhaseSlope.Core.Properties;
 /// h_ig(T) = ∫_{T0}^{T} cp° dT, s_ig(T, ρ) = ∫_{T0}^{T} cp°/T dT − R·ln(ρRT/P0). The chosen
 /// <see cref="ReferenceState"/> adds constant offsets to h and s. Then u = h_ig − RT + u_r,
 /// h = u + P/ρ, s = s_ig − A_r,T, a = u − Ts, g = h − Ts and cv = cp° − R − T·A_r,TT, with the
-/// residual terms from <see cref="CubicModel.Residual"/>.
+/// residual terms from <see cref="IResidualModel.Residual"/> (through <see cref="PhaseState"/>,
+/// where each residual formula is written once).
 /// </remarks>
 public sealed class PropertyModel
 {
@@ -25,7 +26,7 @@ public sealed class PropertyModel
     /// <exception cref="FluidDataException">The fluid has no ideal-gas heat capacity.</exception>
     /// <exception cref="InvalidInputException">The reference convention's anchor state does not exist for this fluid (for example 0 °C above
     /// its critical temperature).</exception>
-    public PropertyModel(Fluid fluid, CubicModel model, ReferenceState? reference = null, CoexistenceOptions? options = null)
+    public PropertyModel(Fluid fluid, IResidualModel model, ReferenceState? reference = null, CoexistenceOptions? options = null)
     {
         ArgumentNullException.ThrowIfNull(fluid);
         ArgumentNullException.ThrowIfNull(model);
@@ -45,8 +46,8 @@ public sealed class PropertyModel
     /// <summary>The fluid.</summary>
     public Fluid Fluid { get; }
 
-    /// <summary>The cubic model of the residual part.</summary>
-    public CubicModel Model { get; }
+    /// <summary>The model of the residual part.</summary>
+    public IResidualModel Model { get; }
 
     /// <summary>The reference convention.</summary>
     public ReferenceState Reference { get; }
@@ -63,13 +64,14 @@ public sealed class PropertyModel
     {
         Preconditions.Positive(temperature, "temperature");
         Preconditions.Positive(density, "density");
-        if (density >= Model.MaximumDensity)
+        double bound = Model.DensityBound(Composition.Pure);
+        if (density >= bound)
         {
             throw new InvalidInputException("density", density,
-                $"density {Preconditions.Format(density)} mol/m3 is at or above the model's limit 1/b = {Preconditions.Format(Model.MaximumDensity)} mol/m3");
+                $"density {Preconditions.Format(density)} mol/m3 is at or above the model's limit 1/b = {Preconditions.Format(bound)} mol/m3");
         }
 
-        var residual = Model.Residual(temperature, density);
+        var residual = Model.Residual(temperature, density, Composition.Pure);
         double pressure = residual.Pressure;
         if (!(pressure > 0))
         {
@@ -80,9 +82,10 @@ public sealed class PropertyModel
                 $"the model gives a non-positive pressure ({Preconditions.Format(pressure)} Pa) at {Preconditions.Format(temperature)} K and {Preconditions.Format(density)} mol/m3 ({where})");
         }
 
-        PhaseLabel label = temperature >= Model.CriticalTemperature ? PhaseLabel.Supercritical
-            : density >= Model.CriticalDensity ? PhaseLabel.Liquid : PhaseLabel.Vapour;
-        return Build(temperature, density, pressure, label, metastable: false);
+        var critical = Model.CriticalPoint(Composition.Pure);
+        PhaseLabel label = temperature >= critical.Temperature ? PhaseLabel.Supercritical
+            : density >= critical.Density ? PhaseLabel.Liquid : PhaseLabel.Vapour;
+        return Build(PhaseState.From(residual, pressure), label, metastable: false);
     }
 
     /// <summary>The state at temperature (K) and pressure (Pa): the stable root, or the chosen
@@ -97,10 +100,10 @@ public sealed class PropertyModel
         if (roots.Count == 1 && roots[0].Phase == PhaseLabel.Supercritical && phase != PhaseChoice.Stable)
         {
             throw new InvalidInputException("phase", double.NaN,
-                $"at {Preconditions.Format(temperature)} K, at or above the critical temperature {Preconditions.Format(Model.CriticalTemperature)} K, there is one fluid phase: do not choose liquid or vapour");
+                $"at {Preconditions.Format(temperature)} K, at or above the critical temperature {Preconditions.Format(Solver.CriticalTemperature)} K, there is one fluid phase: do not choose liquid or vapour");
         }
 
-        var states = roots.Select(r => Build(temperature, r.Density, pressure, r.Phase, metastable: false)).ToList();
+        var states = roots.Select(r => Build(PhaseState.From(r.Helmholtz, pressure), r.Phase, metastable: false)).ToList();
         var stable = states.MinBy(s => s.LnFugacityCoefficient)!;
         if (phase == PhaseChoice.Stable)
         {
@@ -118,23 +121,23 @@ public sealed class PropertyModel
     public CoexistenceProperties Coexistence(CoexistencePoint point)
     {
         ArgumentNullException.ThrowIfNull(point);
-        var liquid = Build(point.Temperature, point.Liquid.Density, point.Pressure, PhaseLabel.Liquid, false);
-        var vapour = Build(point.Temperature, point.Vapour.Density, point.Pressure, PhaseLabel.Vapour, false);
+        var liquid = Build(point.Liquid, PhaseLabel.Liquid, false);
+        var vapour = Build(point.Vapour, PhaseLabel.Vapour, false);
         return new CoexistenceProperties(point, SaturatedPhase.Along(liquid, point), SaturatedPhase.Along(vapour, point));
     }
 
-    private ThermodynamicState Build(double temperature, double density, double pressure, PhaseLabel label, bool metastable)
+    /// <summary>The complete state from its residual part: the ideal-gas part added, nothing
+    /// evaluated again.</summary>
+    private ThermodynamicState Build(PhaseState residual, PhaseLabel label, bool metastable)
     {
-        var d = Model.Residual(temperature, density);
-        double t = temperature;
+        var d = residual.Helmholtz;
+        double t = residual.Temperature;
+        double density = residual.Density;
+        double pressure = residual.Pressure;
         double rt = R * t;
-        double z = pressure / (density * rt);
         double cp0 = _heatCapacity.HeatCapacity(t);
-        double hig = _enthalpyOffset + _heatCapacity.EnthalpyIntegral(ReferenceState.IdealGasTemperature, t);
-        double sig = _entropyOffset + _heatCapacity.EntropyIntegral(ReferenceState.IdealGasTemperature, t)
-            - R * Math.Log(density * rt / ReferenceState.IdealGasPressure);
-        double ur = d.Value - t * d.DT;
-        double u = hig - rt + ur;
+        var (hig, sig) = IdealGas(t, density * rt);
+        double u = _enthalpyOffset + hig - rt + residual.ResidualInternalEnergy;
         return new ThermodynamicState
         {
             Temperature = t,
@@ -144,19 +147,27 @@ public sealed class PropertyModel
             Phase = label,
             Metastable = metastable,
             IdealGasExtrapolated = !_heatCapacity.InRange(t),
-            CompressibilityFactor = z,
+            CompressibilityFactor = residual.CompressibilityFactor,
             InternalEnergy = u,
             Enthalpy = u + pressure / density,
-            Entropy = sig - d.DT,
-            ResidualEnthalpy = ur + rt * (z - 1),
-            ResidualEntropy = -d.DT + R * Math.Log(z),
-            LnFugacityCoefficient = d.Value / rt + z - 1 - Math.Log(z),
+            Entropy = _entropyOffset + sig - d.DT,
+            ResidualEnthalpy = residual.ResidualEnthalpy,
+            ResidualEntropy = residual.ResidualEntropy,
+            LnFugacityCoefficient = residual.LnFugacityCoefficient,
             IsochoricHeatCapacity = cp0 - R - t * d.DTT,
             IdealGasHeatCapacity = cp0,
             PressureTemperatureDerivative = d.PressureDT,
             PressureDensityDerivative = d.PressureDRho,
         };
     }
+
+    /// <summary>Ideal-gas enthalpy and entropy on the base convention (h = s = 0 for the ideal gas
+    /// at T0 = 298.15 K and P0 = 1 bar) at T and the ideal-gas pressure <paramref name="idealPressure"/>
+    /// (ρRT for a state of density ρ): h_ig = ∫cp° dT, s_ig = ∫cp°/T dT − R·ln(P/P0).</summary>
+    private (double Enthalpy, double Entropy) IdealGas(double temperature, double idealPressure)
+        => (_heatCapacity.EnthalpyIntegral(ReferenceState.IdealGasTemperature, temperature),
+            _heatCapacity.EntropyIntegral(ReferenceState.IdealGasTemperature, temperature)
+            - R * Math.Log(idealPressure / ReferenceState.IdealGasPressure));
 
     private (double Enthalpy, double Entropy) Offsets(ReferenceState reference)
     {
@@ -168,14 +179,11 @@ public sealed class PropertyModel
         {
             case ReferenceAnchor.IdealGas:
                 // The base convention itself, shifted by the targets at its own anchor.
-                double t0 = reference.Temperature!.Value;
-                double hBase = _heatCapacity.EnthalpyIntegral(ReferenceState.IdealGasTemperature, t0);
-                double sBase = _heatCapacity.EntropyIntegral(ReferenceState.IdealGasTemperature, t0)
-                    - R * Math.Log(reference.Pressure!.Value / ReferenceState.IdealGasPressure);
+                var (hBase, sBase) = IdealGas(reference.Temperature!.Value, reference.Pressure!.Value);
                 return (hTarget - hBase, sTarget - sBase);
             case ReferenceAnchor.SaturatedLiquid:
                 var point = AnchorPoint(reference);
-                anchor = Build(point.Temperature, point.Liquid.Density, point.Pressure, PhaseLabel.Liquid, false);
+                anchor = Build(point.Liquid, PhaseLabel.Liquid, false);
                 break;
             default:
                 anchor = AtPressure(reference.Temperature!.Value, reference.Pressure!.Value);

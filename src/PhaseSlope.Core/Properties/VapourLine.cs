@@ -32,8 +32,9 @@ public sealed record VapourLine(VapourLineClass Class, double ReducedSlope, doub
     {
         ArgumentNullException.ThrowIfNull(engine);
         var solver = engine.Solver;
-        double tc = engine.Model.CriticalTemperature;
-        double Slope(double t) => engine.Coexistence(solver.AtTemperature(t)).Vapour.EntropySlope!.Value;
+        double tc = engine.Solver.CriticalTemperature;
+        CoexistencePoint? near = null;
+        double Slope(double t) => engine.Coexistence(solver.AtTemperature(t, near)).Vapour.EntropySlope!.Value;
 
         double reading = Math.Max(ReadingReducedTemperature * tc, solver.MinimumTemperature);
         double xi = tc / Constants.GasConstant * Slope(reading);
@@ -51,6 +52,8 @@ public sealed record VapourLine(VapourLineClass Class, double ReducedSlope, doub
             double b = grid[i + 1].Temperature;
             if (slopes[i] > 0 && slopes[i + 1] <= 0)
             {
+                // Every state of the root search starts from the bracketing grid point.
+                near = grid[i];
                 // MathNet's Brent stops when either the bracket or |f| is below the accuracy, so
                 // the root is sought for the dimensionless ξ(τ), τ = T/Tc, where one accuracy
                 // serves both (in T and ds/dT it stopped at |ds/dT| ~ 1e-9·Tc J/(mol·K²), some

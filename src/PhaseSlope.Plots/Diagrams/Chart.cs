@@ -75,7 +75,7 @@ internal static class Chart
     public static string Number(double value) => value.ToString("g4", System.Globalization.CultureInfo.InvariantCulture);
 
     /// <summary>A short title suffix naming the model.</summary>
-    public static string ModelTitle(PlotFluid fluid) => Core.Models.CubicModelKinds.Title(fluid.Model.Kind);
+    public static string ModelTitle(PlotFluid fluid) => Core.Models.ModelRegistry.Title(fluid.Model.Kind);
 
     /// <summary>"propane" or "propane, n-butane and water".</summary>
     public static string Names(IReadOnlyList<PlotFluid> fluids)

@@ -57,7 +57,7 @@ public class DeriveCommandTests
     public void Run_AtModelCriticalState_UndefinedDerivativeExits4()
     {
         // (∂V/∂P)_T diverges at the critical point of the model, where (∂P/∂V)_T = 0.
-        var model = StateCommandTests.Engine("propane", CubicModelKind.PengRobinson).Model;
+        var model = StateCommandTests.Engine("propane", CubicModelKind.PengRobinson).Solver;
         var result = Run("derive", "propane", "--of", "V", "--by", "P", "--hold", "T",
             "-T", model.CriticalTemperature.ToString("R", CultureInfo.InvariantCulture),
             "--density", model.CriticalDensity.ToString("R", CultureInfo.InvariantCulture), "--format", "json");

@@ -117,7 +117,7 @@ public class PhaseslopeProcessTests
         { ExitCodes.Usage, ["coexist", "propane", "--temperature", "3..0"] },
         { ExitCodes.Fluid, ["coexist", "propanne", "--temperature", "300"] },
         { ExitCodes.OutOfRange, ["coexist", "propane", "--temperature", "400"] },
-        { ExitCodes.NotConverged, ["coexist", "propane", "--temperature", "369.889999999999"] },
+        { ExitCodes.NotConverged, ["coexist", CliIoTests.VanishingAttraction, "--alpha", "twu", "--temperature", "200"] },
         { ExitCodes.OutputFile, ["curve", "propane", "--points", "3", "--out", Path.Combine(Path.GetTempPath(), "phaseslope-no-such-folder-3f1c", "curve.csv")] },
     };
 

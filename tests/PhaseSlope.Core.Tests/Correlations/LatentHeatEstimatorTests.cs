@@ -132,7 +132,7 @@ public class LatentHeatEstimatorTests(ITestOutputHelper output)
     public void At_AtOrAboveTcWithEquationOfState_ThrowsInvalidInput()
     {
         var estimator = new LatentHeatEstimator(RangeFit(new KirchhoffForm()), VolumeChangeModel.EquationOfState, WaterPengRobinson.Value);
-        double tc = WaterPengRobinson.Value.Model.CriticalTemperature;
+        double tc = WaterPengRobinson.Value.CriticalTemperature;
         Assert.Throws<InvalidInputException>(() => estimator.At(tc));
         Assert.Throws<InvalidInputException>(() => estimator.At(tc + 10));
     }

@@ -26,7 +26,7 @@ public class CoexistenceCurveTests
         Assert.Equal(CoexistenceCurve.DefaultPoints, curve.Count);
         Assert.Equal(solver.MinimumTemperature, curve[0].Temperature);
         Assert.True(curve[^1].IsCritical);
-        Assert.Equal(solver.Model.CriticalTemperature, curve[^1].Temperature);
+        Assert.Equal(solver.CriticalTemperature, curve[^1].Temperature);
         Assert.All(curve.Take(curve.Count - 1), p => Assert.Equal(StopReason.Converged, p.Report.StopReason));
         for (int i = 1; i < curve.Count; i++)
         {
@@ -60,7 +60,7 @@ public class CoexistenceCurveTests
     public void Trace_EndBelowTc_EndsAtThatTemperatureWithoutCriticalPoint()
     {
         var solver = Solver();
-        double tc = solver.Model.CriticalTemperature;
+        double tc = solver.CriticalTemperature;
 
         var curve = CoexistenceCurve.Trace(solver, 0.5 * tc, 0.9 * tc, 5);
 
@@ -86,7 +86,7 @@ public class CoexistenceCurveTests
     public void Trace_EndAboveTc_ThrowsNamingTheEnd()
     {
         var solver = Solver();
-        double tc = solver.Model.CriticalTemperature;
+        double tc = solver.CriticalTemperature;
 
         var ex = Assert.Throws<InvalidInputException>(() => CoexistenceCurve.Trace(solver, 0.5 * tc, 1.01 * tc));
 
@@ -97,7 +97,7 @@ public class CoexistenceCurveTests
     public void Trace_StartNotBelowEnd_ThrowsNamingTheStart()
     {
         var solver = Solver();
-        double tc = solver.Model.CriticalTemperature;
+        double tc = solver.CriticalTemperature;
 
         Assert.Equal("from temperature", Assert.Throws<InvalidInputException>(() => CoexistenceCurve.Trace(solver, 0.8 * tc, 0.7 * tc)).Field);
         Assert.Equal("from temperature", Assert.Throws<InvalidInputException>(() => CoexistenceCurve.Trace(solver, 0.8 * tc, 0.8 * tc)).Field);

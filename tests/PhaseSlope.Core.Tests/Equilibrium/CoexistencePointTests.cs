@@ -23,7 +23,7 @@ public class CoexistencePointTests
     private static CoexistencePoint Point(string fluid, CubicModelKind kind, double reduced)
     {
         var solver = CoexistenceSolver.For(FluidCatalog.Embedded.Find(fluid), kind);
-        return solver.AtTemperature(reduced * solver.Model.CriticalTemperature);
+        return solver.AtTemperature(reduced * solver.CriticalTemperature);
     }
 
     [Theory]

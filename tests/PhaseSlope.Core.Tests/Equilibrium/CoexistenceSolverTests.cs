@@ -115,7 +115,7 @@ public class CoexistenceSolverTests
         // residual ≤ 1e-12, typically 1e-15), i.e. ≤ 1e-10. 1e-7 keeps ample margin while any
         // error in Δh or Δv shows at O(1).
         var solver = Solver(fluid, kind);
-        double tc = solver.Model.CriticalTemperature;
+        double tc = solver.CriticalTemperature;
         foreach (double tr in ReducedTemperatures)
         {
             double t = tr * tc;
@@ -136,7 +136,7 @@ public class CoexistenceSolverTests
         // Inverse functions. AtPressure iterates to 1e-13 in T/Tc on ln P, so 1e-10 relative
         // allows for the ~1e-14 noise in Psat divided by d ln Psat/d ln T (≥ 5).
         var solver = Solver(fluid, kind);
-        double tc = solver.Model.CriticalTemperature;
+        double tc = solver.CriticalTemperature;
         foreach (double tr in ReducedTemperatures.Append(0.999))
         {
             double t = tr * tc;
@@ -157,7 +157,7 @@ public class CoexistenceSolverTests
     public void AtTemperature_OneMinus1e8OfTc_ConvergesToTwoDistinctPhases(string fluid, CubicModelKind kind)
     {
         var solver = Solver(fluid, kind);
-        var model = solver.Model;
+        var model = (CubicModel)solver.Model;
         double tc = model.CriticalTemperature;
         double epsilon = 1e-8;
 
@@ -194,7 +194,7 @@ public class CoexistenceSolverTests
     public void AtTemperature_FromLowestValidTemperatureUp_ConvergesToStablePhases(string fluid, CubicModelKind kind)
     {
         var solver = Solver(fluid, kind);
-        var model = solver.Model;
+        var model = (CubicModel)solver.Model;
         double tmin = solver.MinimumTemperature;
         double top = 0.999 * model.CriticalTemperature;
         double previous = 0;
@@ -227,7 +227,7 @@ public class CoexistenceSolverTests
         // Coexistence (Gibbs): equal T, P and g. The ideal-gas parts g_ig(T, P) of the two
         // phases are equal at the same T and P, so gL = gV is g_r,L = g_r,V, i.e. ln φL = ln φV.
         var solver = Solver(fluid, kind);
-        var model = solver.Model;
+        var model = (CubicModel)solver.Model;
         foreach (double tr in ReducedTemperatures)
         {
             double t = tr * model.CriticalTemperature;
@@ -277,7 +277,7 @@ public class CoexistenceSolverTests
     public void AtTemperature_AtOrAboveTc_ThrowsNamingTemperature(double reduced)
     {
         var solver = Solver("propane");
-        double t = reduced * solver.Model.CriticalTemperature;
+        double t = reduced * solver.CriticalTemperature;
 
         var ex = Assert.Throws<InvalidInputException>(() => solver.AtTemperature(t));
 
@@ -320,7 +320,7 @@ public class CoexistenceSolverTests
     public void AtPressure_AtOrAbovePc_ThrowsNamingPressure(double reduced)
     {
         var solver = Solver("propane");
-        double p = reduced * solver.Model.CriticalPressure;
+        double p = reduced * solver.CriticalPressure;
 
         var ex = Assert.Throws<InvalidInputException>(() => solver.AtPressure(p));
 
@@ -385,7 +385,7 @@ public class CoexistenceSolverTests
         foreach (string fluid in new[] { "propane", "water", "ethanol" })
         {
             var solver = Solver(fluid, kind);
-            var model = solver.Model;
+            var model = (CubicModel)solver.Model;
 
             var point = solver.CriticalPoint();
 
@@ -414,7 +414,7 @@ public class CoexistenceSolverTests
         // the Clapeyron equation with ρL, ρV → ρc; see CoexistencePoint remarks). The approach is
         // linear in 1 − T/Tc, so at 1e-6 below Tc the slopes agree to ~1e-5: tolerance 1e-4.
         var solver = Solver("propane", kind);
-        double tc = solver.Model.CriticalTemperature;
+        double tc = solver.CriticalTemperature;
 
         var critical = solver.CriticalPoint();
         var below = solver.AtTemperature(tc * (1 - 1e-6));

@@ -27,7 +27,7 @@ public class CoexistencePropertiesTests(ITestOutputHelper output)
     /// triple point is at T/Tc = 0.42, carbon dioxide's at 0.71, nitrogen's at 0.50).</summary>
     private static IEnumerable<double> Temperatures(PropertyModel engine, double lo, double hi)
         => ReducedTemperatures.Where(r => r >= lo && r <= hi)
-            .Select(r => r * engine.Model.CriticalTemperature)
+            .Select(r => r * engine.Solver.CriticalTemperature)
             .Where(t => t >= engine.Solver.MinimumTemperature);
 
     [Theory]
@@ -48,7 +48,7 @@ public class CoexistencePropertiesTests(ITestOutputHelper output)
             var c = engine.Coexistence(point);
             double dv = c.Vapour.State.MolarVolume - c.Liquid.State.MolarVolume;
             double clapeyron = t * dv * point.Slope;
-            string at = $"{fluid} {kind} at {t / engine.Model.CriticalTemperature:F2} Tc";
+            string at = $"{fluid} {kind} at {t / engine.Solver.CriticalTemperature:F2} Tc";
             AssertClose.Relative(clapeyron, c.EnthalpyOfVaporization, 1e-9, $"h_V - h_L = T dv dPsat/dT, {at}");
             AssertClose.Relative(point.EnthalpyOfVaporization, c.EnthalpyOfVaporization, 1e-9, $"h_V - h_L = solver dh, {at}");
             AssertClose.Relative(dv * point.Slope, c.EntropyOfVaporization, 1e-9, $"s_V - s_L = dv dPsat/dT, {at}");
@@ -106,7 +106,7 @@ public class CoexistencePropertiesTests(ITestOutputHelper output)
                     // solver's relative error times the size of the value (h, s, u carry the jump
                     // Δh, Δs as their sensitivity to which root is found).
                     double tolerance = TruncationTolerance * check.Scale + 1.5 * SolverRelativeError * check.ValueScale / step;
-                    string what = $"{fluid} {kind} {name} {check.What} at {t / engine.Model.CriticalTemperature:F2} Tc";
+                    string what = $"{fluid} {kind} {name} {check.What} at {t / engine.Solver.CriticalTemperature:F2} Tc";
                     AssertClose.Absolute(check.Exact, difference, tolerance, what);
                     worst = Math.Max(worst, Math.Abs(difference - check.Exact) / check.Scale);
                 }

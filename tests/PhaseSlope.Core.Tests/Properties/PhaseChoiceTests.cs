@@ -2,6 +2,7 @@ using PhaseSlope.Core.Equilibrium;
 using PhaseSlope.Core.Errors;
 using PhaseSlope.Core.Models;
 using PhaseSlope.Core.Properties;
+using PhaseSlope.Core.Tests.TestSupport;
 
 namespace PhaseSlope.Core.Tests.Properties;
 
@@ -19,8 +20,8 @@ public class PhaseChoiceTests
     private static (PropertyModel Engine, double T, CoexistencePoint Point, SpinodalWindow Window) Setup(string fluid, CubicModelKind kind, double reduced)
     {
         var engine = TestSupport.Engines.For(fluid, kind);
-        double t = reduced * engine.Model.CriticalTemperature;
-        Assert.True(SpinodalWindow.TryFind(engine.Model, t, out var window));
+        double t = reduced * engine.Solver.CriticalTemperature;
+        Assert.True(SpinodalWindow.TryFind((CubicModel)engine.Model, t, out var window));
         return (engine, t, engine.Solver.AtTemperature(t), window);
     }
 
@@ -90,7 +91,7 @@ public class PhaseChoiceTests
     public void AtPressure_AboveCriticalTemperatureWithPhaseChosen_Throws(PhaseChoice choice)
     {
         var engine = TestSupport.Engines.For("propane", CubicModelKind.PengRobinson);
-        double t = 1.1 * engine.Model.CriticalTemperature;
+        double t = 1.1 * engine.Solver.CriticalTemperature;
 
         var ex = Assert.Throws<InvalidInputException>(() => engine.AtPressure(t, 5e6, choice));
 
@@ -104,7 +105,7 @@ public class PhaseChoiceTests
     public void AtDensity_AtOrAboveInverseCovolume_Throws(double factor)
     {
         var engine = TestSupport.Engines.For("propane", CubicModelKind.PengRobinson);
-        double limit = engine.Model.MaximumDensity;
+        double limit = ((CubicModel)engine.Model).MaximumDensity;
 
         var ex = Assert.Throws<InvalidInputException>(() => engine.AtDensity(300, factor * limit));
 
@@ -117,7 +118,7 @@ public class PhaseChoiceTests
     {
         // With the Péneloux shift c the limit moves to 1/(b − c).
         var engine = TestSupport.Engines.For("propane", CubicModelKind.PengRobinson, peneloux: true);
-        var model = engine.Model;
+        var model = (CubicModel)engine.Model;
         Assert.NotEqual(0, model.VolumeShift);
 
         Assert.Throws<InvalidInputException>(() => engine.AtDensity(300, 1 / model.TranslatedCovolume));

@@ -26,9 +26,9 @@ public class PhaseStateTests
         // with MathNet's 64-point Gauss–Legendre rule, each Z from the vapour root at P'.
         Fluid propane = FluidCatalog.Embedded.Find("propane");
         var solver = CoexistenceSolver.For(propane, kind);
-        double t = 0.8 * solver.Model.CriticalTemperature;
+        double t = 0.8 * solver.CriticalTemperature;
         var vapour = solver.AtTemperature(t).Vapour;
-        var model = solver.Model;
+        var model = (CubicModel)solver.Model;
         double upper = vapour.Density * (1 + 1e-6);
 
         double Integrand(double p)
@@ -55,7 +55,7 @@ public class PhaseStateTests
         // order RT, so 1e-12·RT is rounding level.
         Fluid water = FluidCatalog.Embedded.Find("water");
         var solver = CoexistenceSolver.For(water, kind);
-        var model = solver.Model;
+        var model = (CubicModel)solver.Model;
         double tc = model.CriticalTemperature;
         var point = solver.AtTemperature(0.6 * tc);
         var supercritical = PhaseState.Evaluate(model, 1.3 * tc, 2 * model.CriticalDensity);
@@ -79,7 +79,7 @@ public class PhaseStateTests
         // PhaseState combines A_r and ∂A_r/∂T.
         Fluid propane = FluidCatalog.Embedded.Find("propane");
         var solver = CoexistenceSolver.For(propane, kind);
-        var model = solver.Model;
+        var model = (CubicModel)solver.Model;
         double t = 0.75 * model.CriticalTemperature;
         var saturated = solver.AtTemperature(t).Vapour;
         double p = 0.5 * saturated.Pressure;

@@ -25,9 +25,9 @@ public class VapourLineTests
         Assert.True(line.ReducedSlope < -VapourLine.IsentropicBand, $"xi = {line.ReducedSlope}");
         Assert.Null(line.MaximumEntropyTemperature);
         // The reading: ξ = (Tc/R)·ds_V/dT|σ at 0.7 Tc, from the engine's along-line slope.
-        double t = VapourLine.ReadingReducedTemperature * engine.Model.CriticalTemperature;
+        double t = VapourLine.ReadingReducedTemperature * engine.Solver.CriticalTemperature;
         double slope = engine.Coexistence(engine.Solver.AtTemperature(t)).Vapour.EntropySlope!.Value;
-        AssertClose.Relative(engine.Model.CriticalTemperature / Constants.GasConstant * slope, line.ReducedSlope, 1e-12, $"{fluid} xi");
+        AssertClose.Relative(engine.Solver.CriticalTemperature / Constants.GasConstant * slope, line.ReducedSlope, 1e-12, $"{fluid} xi");
     }
 
     [Theory]
@@ -38,7 +38,7 @@ public class VapourLineTests
     public void Classify_HeavierOrganics_DryWithEntropyMaximumBelowTc(string fluid, CubicModelKind kind)
     {
         var engine = TestSupport.Engines.For(fluid, kind);
-        double tc = engine.Model.CriticalTemperature;
+        double tc = engine.Solver.CriticalTemperature;
 
         var line = VapourLine.Classify(engine);
 

@@ -237,7 +237,7 @@ public static class CorrelationAuditor
 
         foreach (double t in grid)
         {
-            if (t >= solver.MinimumTemperature && t < solver.Model.CriticalTemperature && solver.TryAtTemperature(t, out var p))
+            if (t >= solver.MinimumTemperature && t < solver.CriticalTemperature && solver.TryAtTemperature(t, out var p))
             {
                 points.Add(new ModelPoint(t, Math.Log(p!.Pressure), p.CompressibilityChange));
             }

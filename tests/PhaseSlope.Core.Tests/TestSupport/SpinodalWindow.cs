@@ -1,13 +1,16 @@
 using MathNet.Numerics.RootFinding;
 using PhaseSlope.Core.Models;
 
-namespace PhaseSlope.Core.Equilibrium;
+using PhaseSlope.Core;
 
-/// <summary>The mechanical-stability limits of a model's isotherm below Tc: the vapour spinodal
+namespace PhaseSlope.Core.Tests.TestSupport;
+
+/// <summary>Test reference (the grid scan the solver used before it had closed-form roots, kept
+/// as an independent check): the mechanical-stability limits of a model's isotherm below Tc: the vapour spinodal
 /// (local maximum of P(ρ)), the liquid spinodal (local minimum) and the inflection between them.</summary>
 /// <remarks>Every coexistence state lies outside the window: ρV &lt; VapourDensity and
 /// ρL &gt; LiquidDensity, and Psat lies in (LiquidPressure, VapourPressure).</remarks>
-internal readonly record struct SpinodalWindow(
+public readonly record struct SpinodalWindow(
     double InflectionDensity,
     double VapourDensity,
     double LiquidDensity,
