@@ -166,7 +166,11 @@ public sealed partial class CoexistenceSolver
                 (bestL, bestV, bestStep, bestIteration) = (dl, dv, step, iteration);
             }
 
-            if (step <= StepTolerance
+            double noiseF2 = RoundingUnit * (GibbsScale(dl, rt) + GibbsScale(dv, rt));
+            double noise = 8 * Math.Max(
+                (RoundingUnit * PressureScale(dl, rt) + Math.Abs(ptL) * Math.Abs(noiseF2 / c)) / (rhoL * aL),
+                (RoundingUnit * PressureScale(dv, rt) + Math.Abs(ptV) * Math.Abs(noiseF2 / c)) / (rhoV * aV));
+            if (step <= StepTolerance || (iteration > 1 && step <= noise)
                 || (previousStep < 1e-7 && step > 0.5 * previousStep)
                 || iteration - bestIteration > 3)
             {
@@ -204,7 +208,7 @@ public sealed partial class CoexistenceSolver
         }
 
         StopReason stop;
-        if (bestStep <= StepTolerance || (bestStep <= RoundingFloorTolerance && 1 - bestL.Temperature / tc < 1e-2))
+        if (bestStep <= StepTolerance || bestStep <= RoundingFloorTolerance)
         {
             stop = StopReason.Converged;
         }

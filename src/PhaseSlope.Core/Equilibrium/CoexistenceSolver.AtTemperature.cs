@@ -63,6 +63,11 @@ public sealed partial class CoexistenceSolver
     {
         CheckTemperature(temperature);
         var work = new Work();
+        if (1 - temperature / CriticalTemperature < CriticalSeriesReducedGap)
+        {
+            return SeriesPoint(temperature, work);
+        }
+
         string? failure = null;
         return Iterate(temperature, liquidDensity, vapourDensity, CoexistenceStart.Neighbour, work, ref failure)
             ?? Cold(temperature, work, failure);
@@ -191,7 +196,14 @@ public sealed partial class CoexistenceSolver
                 (bestL, bestV, bestStep, bestIteration) = (dl, dv, step, iteration);
             }
 
-            if (step <= StepTolerance)
+            // The correction that rounding alone produces: each pressure carries about ε·(ρRT +
+            // ρ²|A_r,ρ|) of error, each Gibbs energy ε·(|A_r| + P/ρ + RT)/RT, amplified by the
+            // same factors as F1 and F2 (a factor 8 of margin).
+            double noiseF1 = RoundingUnit * (PressureScale(dl, rt) + PressureScale(dv, rt)) / rt;
+            double noiseF2 = RoundingUnit * (GibbsScale(dl, rt) + GibbsScale(dv, rt));
+            double noise = 8 * rt * Math.Max((noiseF1 + rhoV * noiseF2) / (gap * aL), (rhoL * noiseF2 + noiseF1) / (gap * aV));
+            // A raw start is never accepted at the noise floor: at least one Newton step is taken.
+            if (step <= StepTolerance || (iteration > 1 && step <= noise))
             {
                 break;
             }
@@ -233,7 +245,7 @@ public sealed partial class CoexistenceSolver
         }
 
         StopReason stop;
-        if (bestStep <= StepTolerance || (bestStep <= RoundingFloorTolerance && 1 - temperature / CriticalTemperature < 1e-2))
+        if (bestStep <= StepTolerance || bestStep <= RoundingFloorTolerance)
         {
             stop = StopReason.Converged;
         }
@@ -256,4 +268,15 @@ public sealed partial class CoexistenceSolver
 
         return point;
     }
+
+    /// <summary>Double-precision unit roundoff.</summary>
+    private const double RoundingUnit = 1.1102230246251565e-16;
+
+    /// <summary>Size of the terms P = ρRT + ρ²·A_r,ρ is summed from, Pa.</summary>
+    private static double PressureScale(in HelmholtzDerivatives d, double rt)
+        => d.Density * (rt + d.Density * Math.Abs(d.DRho));
+
+    /// <summary>Size of the terms of g/RT = ln ρ + A_r/RT + P/(ρRT) + …, dimensionless.</summary>
+    private static double GibbsScale(in HelmholtzDerivatives d, double rt)
+        => 1 + (Math.Abs(d.Value) + PressureScale(d, rt) / d.Density) / rt;
 }

@@ -41,10 +41,11 @@ public sealed partial class CoexistenceSolver
     /// returned property is within about 1e-12 of the exact solution of the model.</summary>
     private const double StepTolerance = 1e-13;
 
-    /// <summary>Near Tc (within 1e-2) the Newton corrections stop shrinking at the rounding floor
-    /// of the pressure difference; a floor at or below this relative size still counts as
-    /// converged (it is the accuracy the model's double-precision evaluation allows, and it is
-    /// stated in the report).</summary>
+    /// <summary>Where the Newton corrections stop shrinking at the rounding floor of the
+    /// equations (estimated from the size of the terms each is summed from) before
+    /// <see cref="StepTolerance"/>, a floor at or below this relative size still counts as
+    /// converged: it is the accuracy the model's double-precision evaluation allows, and it is
+    /// stated in the report as the density uncertainty.</summary>
     private const double RoundingFloorTolerance = 1e-10;
 
     /// <summary>Relative density uncertainty above which a point that stopped at the rounding
