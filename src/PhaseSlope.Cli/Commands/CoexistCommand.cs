@@ -17,12 +17,14 @@ internal static class CoexistCommand
         var pressure = new Option<string>("--pressure", "-P") { Description = "Saturation pressure, e.g. 101.325 kPa, 1.2 bar, 14.7 psi, 1 atm (bare number: Pa)" };
         var reference = ReferenceOption.Create();
         var common = new CommonOptions();
+        var diagnostics = new DiagnosticsOption();
         var command = new Command("coexist", "One liquid-vapour coexistence state at a given temperature or pressure");
         command.Arguments.Add(fluid);
         command.Options.Add(temperature);
         command.Options.Add(pressure);
         command.Options.Add(reference);
         common.AddTo(command, withEos: true);
+        diagnostics.AddTo(command);
         command.SetAction(parse => io.Guard(() =>
         {
             string? tText = parse.GetValue(temperature);
@@ -39,9 +41,10 @@ internal static class CoexistCommand
             double? p = pText is null ? null : QuantityParser.ParsePressure(pText, "--pressure");
             var zero = ReferenceOption.Parse(parse.GetValue(reference)!);
             var data = FluidResolver.Resolve(parse.GetValue(fluid)!);
-            var context = CoexistenceContext.Create(data, common.Model(parse, data), zero);
+            var context = CoexistenceContext.Create(data, diagnostics.Begin(parse, common.Model(parse, data)), zero);
             var point = t is double tv ? context.Solver.AtTemperature(tv) : context.Solver.AtPressure(p!.Value);
             io.Out.Write(CoexistenceWriter.Render([context.Row(point)], single: true, format, data, context.Solver.Model, zero, units));
+            diagnostics.End(io, [point]);
         }));
         return command;
     }

@@ -27,7 +27,7 @@ internal sealed class CoexistenceContext
     public ReferenceState Reference { get; }
 
     /// <summary>Builds the context for a fluid, model and reference.</summary>
-    public static CoexistenceContext Create(Fluid fluid, CubicModel model, ReferenceState reference)
+    public static CoexistenceContext Create(Fluid fluid, IResidualModel model, ReferenceState reference)
     {
         if (fluid.IdealGasHeatCapacity is null)
         {

@@ -25,6 +25,7 @@ internal static class CurveCommand
         var output = new Option<string>("--out", "-o") { Description = "Write to this file instead of the terminal (format from --format, else from the extension .csv/.json, else table)" };
         var reference = ReferenceOption.Create();
         var common = new CommonOptions();
+        var diagnostics = new DiagnosticsOption();
         var command = new Command("curve", "The saturation curve as a table of coexistence states");
         command.Arguments.Add(fluid);
         command.Options.Add(from);
@@ -33,6 +34,7 @@ internal static class CurveCommand
         command.Options.Add(output);
         command.Options.Add(reference);
         common.AddTo(command, withEos: true);
+        diagnostics.AddTo(command);
         command.SetAction(parse => io.Guard(() =>
         {
             _ = common.ModelKind(parse); // reject a bad --eos before the fluid is resolved
@@ -54,7 +56,7 @@ internal static class CurveCommand
 
             var zero = ReferenceOption.Parse(parse.GetValue(reference)!);
             var data = FluidResolver.Resolve(parse.GetValue(fluid)!);
-            var context = CoexistenceContext.Create(data, common.Model(parse, data), zero);
+            var context = CoexistenceContext.Create(data, diagnostics.Begin(parse, common.Model(parse, data)), zero);
             var solver = context.Solver;
             double tc = solver.CriticalTemperature;
             double start = tFrom ?? solver.MinimumTemperature;
@@ -99,6 +101,8 @@ internal static class CurveCommand
                 AtomicFile.WriteAllText(outPath, text);
                 io.Error.WriteLine($"phaseslope: wrote {curve.Count} coexistence states to {outPath}");
             }
+
+            diagnostics.End(io, curve);
         }));
         return command;
     }

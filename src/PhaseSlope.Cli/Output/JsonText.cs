@@ -17,14 +17,20 @@ internal static class JsonText
 
     /// <summary>Runs <paramref name="write"/> on a writer with <see cref="Options"/> and returns
     /// the text with a final line break.</summary>
-    public static string Write(Action<Utf8JsonWriter> write)
+    public static string Write(Action<Utf8JsonWriter> write) => Write(write, Options) + Environment.NewLine;
+
+    /// <summary>Like <see cref="Write(Action{Utf8JsonWriter})"/> on one line, without the line
+    /// break (for diagnostics lines on standard error).</summary>
+    public static string WriteLine(Action<Utf8JsonWriter> write) => Write(write, Options with { Indented = false });
+
+    private static string Write(Action<Utf8JsonWriter> write, JsonWriterOptions options)
     {
         using var stream = new MemoryStream();
-        using (var json = new Utf8JsonWriter(stream, Options))
+        using (var json = new Utf8JsonWriter(stream, options))
         {
             write(json);
         }
 
-        return Encoding.UTF8.GetString(stream.ToArray()) + Environment.NewLine;
+        return Encoding.UTF8.GetString(stream.ToArray());
     }
 }

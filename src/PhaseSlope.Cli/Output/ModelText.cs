@@ -10,7 +10,8 @@ internal static class ModelText
     /// (its description carries its parameters and source) and the volume shift when there is one.</summary>
     public static string Describe(IResidualModel model)
     {
-        bool chosenAlpha = model is CubicModel cubic && cubic.Alpha is TwuAlpha or GeneralisedTwuAlpha or MathiasCopemanAlpha;
+        var inner = model is CountingModel counting ? counting.Inner : model;
+        bool chosenAlpha = inner is CubicModel cubic && cubic.Alpha is TwuAlpha or GeneralisedTwuAlpha or MathiasCopemanAlpha;
         return model.Identity.Describe(withAlpha: chosenAlpha);
     }
 

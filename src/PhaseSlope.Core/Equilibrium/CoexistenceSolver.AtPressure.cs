@@ -125,6 +125,7 @@ public sealed partial class CoexistenceSolver
         var dv = Evaluate(work, t, rhoV);
         HelmholtzDerivatives bestL = dl, bestV = dv;
         double bestStep = double.PositiveInfinity;
+        double bestNoise = 0;
         int bestIteration = 0;
         double previousStep = double.PositiveInfinity;
         int iteration = 0;
@@ -161,15 +162,14 @@ public sealed partial class CoexistenceSolver
                 break;
             }
 
-            if (step < bestStep)
-            {
-                (bestL, bestV, bestStep, bestIteration) = (dl, dv, step, iteration);
-            }
-
             double noiseF2 = RoundingUnit * (GibbsScale(dl, rt) + GibbsScale(dv, rt));
             double noise = 8 * Math.Max(
                 (RoundingUnit * PressureScale(dl, rt) + Math.Abs(ptL) * Math.Abs(noiseF2 / c)) / (rhoL * aL),
                 (RoundingUnit * PressureScale(dv, rt) + Math.Abs(ptV) * Math.Abs(noiseF2 / c)) / (rhoV * aV));
+            if (step < bestStep)
+            {
+                (bestL, bestV, bestStep, bestNoise, bestIteration) = (dl, dv, step, noise, iteration);
+            }
             if (step <= StepTolerance || (iteration > 1 && step <= noise)
                 || (previousStep < 1e-7 && step > 0.5 * previousStep)
                 || iteration - bestIteration > 3)
@@ -207,22 +207,14 @@ public sealed partial class CoexistenceSolver
             }
         }
 
-        StopReason stop;
-        if (bestStep <= StepTolerance || bestStep <= RoundingFloorTolerance)
-        {
-            stop = StopReason.Converged;
-        }
-        else if (bestStep <= LargestAcceptedUncertainty && 1 - bestL.Temperature / tc < 1e-2)
-        {
-            stop = StopReason.RoundingLimit;
-        }
-        else
+        double uncertainty = bestStep <= StepTolerance ? bestStep : Math.Max(bestStep, bestNoise / 8);
+        if (!Classify(uncertainty, bestL.Temperature, out var stop))
         {
             failure = $"temperature iteration stalled with a correction of {Preconditions.Format(bestStep)}";
             return null;
         }
 
-        var point = Build(bestL, bestV, pressure, CoexistenceMethod.TemperatureIteration, iteration, stop, work, start, bestStep);
+        var point = Build(bestL, bestV, pressure, CoexistenceMethod.TemperatureIteration, iteration, stop, work, start, uncertainty);
         if (!Acceptable(point))
         {
             failure = $"residual {Preconditions.Format(point.Report.FugacityResidual)} after {iteration} iterations";

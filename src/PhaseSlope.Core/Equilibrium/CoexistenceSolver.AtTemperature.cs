@@ -163,6 +163,7 @@ public sealed partial class CoexistenceSolver
         var dv = Evaluate(work, temperature, rhoV);
         HelmholtzDerivatives bestL = dl, bestV = dv;
         double bestStep = double.PositiveInfinity;
+        double bestNoise = 0;
         int bestIteration = 0;
         double previousStep = double.PositiveInfinity;
         int iteration = 0;
@@ -191,17 +192,16 @@ public sealed partial class CoexistenceSolver
                 break;
             }
 
-            if (step < bestStep)
-            {
-                (bestL, bestV, bestStep, bestIteration) = (dl, dv, step, iteration);
-            }
-
             // The correction that rounding alone produces: each pressure carries about ε·(ρRT +
             // ρ²|A_r,ρ|) of error, each Gibbs energy ε·(|A_r| + P/ρ + RT)/RT, amplified by the
             // same factors as F1 and F2 (a factor 8 of margin).
             double noiseF1 = RoundingUnit * (PressureScale(dl, rt) + PressureScale(dv, rt)) / rt;
             double noiseF2 = RoundingUnit * (GibbsScale(dl, rt) + GibbsScale(dv, rt));
             double noise = 8 * rt * Math.Max((noiseF1 + rhoV * noiseF2) / (gap * aL), (rhoL * noiseF2 + noiseF1) / (gap * aV));
+            if (step < bestStep)
+            {
+                (bestL, bestV, bestStep, bestNoise, bestIteration) = (dl, dv, step, noise, iteration);
+            }
             // A raw start is never accepted at the noise floor: at least one Newton step is taken.
             if (step <= StepTolerance || (iteration > 1 && step <= noise))
             {
@@ -244,22 +244,16 @@ public sealed partial class CoexistenceSolver
             }
         }
 
-        StopReason stop;
-        if (bestStep <= StepTolerance || bestStep <= RoundingFloorTolerance)
-        {
-            stop = StopReason.Converged;
-        }
-        else if (bestStep <= LargestAcceptedUncertainty && 1 - temperature / CriticalTemperature < 1e-2)
-        {
-            stop = StopReason.RoundingLimit;
-        }
-        else
+        // Below the step tolerance the pending correction is the error; at the rounding floor the
+        // rounding estimate bounds it too (a correction can be small by chance there).
+        double uncertainty = bestStep <= StepTolerance ? bestStep : Math.Max(bestStep, bestNoise / 8);
+        if (!Classify(uncertainty, temperature, out var stop))
         {
             failure ??= $"density iteration stalled with a correction of {Preconditions.Format(bestStep)}";
             return null;
         }
 
-        var point = Build(bestL, bestV, bestV.Pressure, CoexistenceMethod.DensityIteration, iteration, stop, work, start, bestStep);
+        var point = Build(bestL, bestV, bestV.Pressure, CoexistenceMethod.DensityIteration, iteration, stop, work, start, uncertainty);
         if (!Acceptable(point))
         {
             failure = $"residual {Preconditions.Format(point.Report.FugacityResidual)} after {iteration} iterations";

@@ -70,8 +70,9 @@ public sealed partial class CoexistenceSolver
         double[] gap = LeastSquares(gapDesign, gapValues);
         double[] mean = LeastSquares(meanDesign, meanValues);
         var series = new CriticalSeries(gap, mean, 0, points[0].Pressure);
-        double uncertainty = 0;
         var check = Solve(tc * (1 - SeriesCheckGap), points[0], new Work(), seriesAllowed: false);
+        // The Newton points themselves are only as good as their own stated uncertainty.
+        double uncertainty = points.Append(check).Max(p => p.Report.DensityUncertainty);
         foreach (var point in points.Append(check))
         {
             var (liquid, vapour) = SeriesDensities(series, point.Temperature);

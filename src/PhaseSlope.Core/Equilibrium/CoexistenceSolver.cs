@@ -44,9 +44,10 @@ public sealed partial class CoexistenceSolver
     /// <summary>Where the Newton corrections stop shrinking at the rounding floor of the
     /// equations (estimated from the size of the terms each is summed from) before
     /// <see cref="StepTolerance"/>, a floor at or below this relative size still counts as
-    /// converged: it is the accuracy the model's double-precision evaluation allows, and it is
-    /// stated in the report as the density uncertainty.</summary>
-    private const double RoundingFloorTolerance = 1e-10;
+    /// converged: it is the accuracy the model's double-precision evaluation allows (about
+    /// 1e-16/(1 − T/Tc) relative, i.e. up to ~5e-10 at 1e-4 below Tc, where the critical series
+    /// takes over), and it is stated in the report as the density uncertainty.</summary>
+    private const double RoundingFloorTolerance = 1e-9;
 
     /// <summary>Relative density uncertainty above which a point that stopped at the rounding
     /// floor is not returned but reported as a failure.</summary>
@@ -163,6 +164,17 @@ public sealed partial class CoexistenceSolver
             Vapour = vapour,
             Report = new SolverReport(method, iterations, residual, stop, work.Evaluations, start, uncertainty),
         };
+    }
+
+    /// <summary>Converged when the density uncertainty is at or below <see cref="RoundingFloorTolerance"/>;
+    /// within 1 % of Tc, where rounding limits what the iteration can resolve, a larger one up to
+    /// <see cref="LargestAcceptedUncertainty"/> is returned as <see cref="StopReason.RoundingLimit"/>;
+    /// anything else is a failure.</summary>
+    private bool Classify(double uncertainty, double temperature, out StopReason stop)
+    {
+        stop = uncertainty <= RoundingFloorTolerance ? StopReason.Converged : StopReason.RoundingLimit;
+        return uncertainty <= RoundingFloorTolerance
+               || (uncertainty <= LargestAcceptedUncertainty && 1 - temperature / CriticalTemperature < 1e-2);
     }
 
     private static bool TrySolve(Func<CoexistencePoint> solve, out CoexistencePoint? point)

@@ -55,7 +55,10 @@ public static class DefaultDensityRoots
             var d = model.Residual(t, rho, amounts);
             double f = d.Pressure - p;
             double slope = d.PressureDRho;
-            if (slope > 0 && Math.Abs(f) <= 1e-14 * Math.Max(p, Math.Abs(d.Pressure)))
+            // P is summed from terms of size ρRT and ρ²|A_r,ρ|, which for a dense liquid are many
+            // times P itself: the attainable accuracy of f is set by them, not by P.
+            double scale = p + rho * (Constants.GasConstant * t + rho * Math.Abs(d.DRho));
+            if (slope > 0 && Math.Abs(f) <= 1e-14 * scale)
             {
                 return rho;
             }
@@ -76,7 +79,7 @@ public static class DefaultDensityRoots
             if (!(hi - lo > 4e-16 * hi))
             {
                 // Closed in on a spinodal (or on the root at rounding level).
-                return slope > 0 && Math.Abs(f) <= 1e-9 * p ? rho : null;
+                return slope > 0 && Math.Abs(f) <= 1e-12 * scale ? rho : null;
             }
 
             double next = slope > 0 ? rho - f / slope : double.NaN;
