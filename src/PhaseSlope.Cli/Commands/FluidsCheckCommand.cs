@@ -38,7 +38,7 @@ internal static class FluidsCheckCommand
         table.Add("file", $"valid: {fluid.Name}, schema {FluidFile.FormatTag} {FluidFile.FormatVersion}");
         table.Add("normal boiling point", BoilingPointText(check));
         table.Add("coexistence", check.SolvesToCriticalPoint
-            ? $"converges from the lowest valid temperature to Tc (1 - 1e-8) with {check.Model.Id()}"
+            ? $"converges from the lowest valid temperature to Tc (1 - 1e-8) with {check.Model.Equation}"
             : $"FAILS: {check.Failure}");
         table.Add("ideal-gas heat capacity", fluid.IdealGasHeatCapacity is { } cp
             ? $"present, {NumberText.Table(cp.MinimumTemperature)}-{NumberText.Table(cp.MaximumTemperature)} K; cp0(298.15 K) = {NumberText.Table(cp.HeatCapacity(298.15))} J/(mol K)"
@@ -76,7 +76,7 @@ internal static class FluidsCheckCommand
             json.WriteString("file", path);
             json.WriteString("name", check.Fluid.Name);
             json.WriteBoolean("valid", true);
-            json.WriteString("eos", check.Model.Id());
+            ModelText.WriteJson(json, check.Model);
             if (check.Fluid.NormalBoilingPoint is { } tb)
             {
                 json.WriteNumber("normal_boiling_point_K", tb.Value);

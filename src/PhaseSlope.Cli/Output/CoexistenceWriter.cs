@@ -78,6 +78,9 @@ internal static class CoexistenceWriter
         json.WriteNumber("iterations", point.Report.Iterations);
         json.WriteNumber("fugacity_residual", point.Report.FugacityResidual);
         json.WriteString("stop_reason", Kebab(point.Report.StopReason.ToString()));
+        json.WriteString("start", Kebab(point.Report.Start.ToString()));
+        json.WriteNumber("model_evaluations", point.Report.ModelEvaluations);
+        json.WriteNumber("density_uncertainty", point.Report.DensityUncertainty);
         json.WriteEndObject();
         json.WriteEndObject();
     }
@@ -205,7 +208,7 @@ internal static class CoexistenceWriter
         text.AppendLine();
         text.Append(jumps.Render());
         text.AppendLine();
-        text.AppendLine($"solver: {Kebab(point.Report.Method.ToString())}, {point.Report.Iterations} iterations, |ln phi_L - ln phi_V| = {point.Report.FugacityResidual.ToString("G3", CultureInfo.InvariantCulture)}, {Kebab(point.Report.StopReason.ToString())}");
+        text.AppendLine($"solver: {Kebab(point.Report.Method.ToString())}, {point.Report.Iterations} iterations, {point.Report.ModelEvaluations} model evaluations, |ln phi_L - ln phi_V| = {point.Report.FugacityResidual.ToString("G3", CultureInfo.InvariantCulture)}, densities to {point.Report.DensityUncertainty.ToString("G2", CultureInfo.InvariantCulture)} relative, {Kebab(point.Report.StopReason.ToString())}");
         text.AppendLine(Caution);
         return text.ToString();
     }

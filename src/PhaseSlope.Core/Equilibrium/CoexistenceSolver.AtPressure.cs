@@ -35,7 +35,7 @@ public sealed partial class CoexistenceSolver
 
         var work = new Work();
         string? failure = null;
-        if (1 - pressure / pc < 0.01 && pressure > Series.TopPressure)
+        if (1 - pressure / pc < 0.01 && pressure > Series(work).TopPressure)
         {
             return SeriesAtPressure(pressure, work) ?? throw new ConvergenceException(
                 $"saturation temperature at {Preconditions.Format(pressure)} Pa did not converge on the critical series", work.Evaluations, double.NaN);
@@ -44,7 +44,7 @@ public sealed partial class CoexistenceSolver
         CoexistenceStart startKind = CoexistenceStart.Neighbour;
         if (near is null || near.IsCritical)
         {
-            double estimate = AncillaryTemperature(pressure);
+            double estimate = AncillaryTemperature(pressure, work);
             estimate = Math.Min(Math.Max(estimate, MinimumTemperature), CriticalTemperature * (1 - 1e-6));
             near = Solve(estimate, null, work);
             startKind = near.Report.Start;

@@ -34,9 +34,11 @@ public sealed partial class CoexistenceSolver
     /// </remarks>
     private sealed record CriticalSeries(double[] Gap, double[] Mean, double Uncertainty, double TopPressure);
 
-    private CriticalSeries Series => _series ??= FitSeries();
+    /// <summary>The series, fitted on first use; the evaluations of that first use are charged
+    /// to <paramref name="work"/>, so the point that pays for it says so.</summary>
+    private CriticalSeries Series(Work work) => _series ??= FitSeries(work);
 
-    private CriticalSeries FitSeries()
+    private CriticalSeries FitSeries(Work work)
     {
         double tc = CriticalTemperature;
         double rhoc = CriticalDensity;
@@ -51,7 +53,7 @@ public sealed partial class CoexistenceSolver
         {
             // From the widest gap inward, each point started from the previous one.
             double eps = SeriesFitGaps[k];
-            points[k] = near = Solve(tc * (1 - eps), near, new Work(), seriesAllowed: false);
+            points[k] = near = Solve(tc * (1 - eps), near, work, seriesAllowed: false);
             double s = Math.Sqrt(eps);
             double s2 = eps;
             gapValues[k] = (points[k].Liquid.Density - points[k].Vapour.Density) / (2 * s);
@@ -70,7 +72,7 @@ public sealed partial class CoexistenceSolver
         double[] gap = LeastSquares(gapDesign, gapValues);
         double[] mean = LeastSquares(meanDesign, meanValues);
         var series = new CriticalSeries(gap, mean, 0, points[0].Pressure);
-        var check = Solve(tc * (1 - SeriesCheckGap), points[0], new Work(), seriesAllowed: false);
+        var check = Solve(tc * (1 - SeriesCheckGap), points[0], work, seriesAllowed: false);
         // The Newton points themselves are only as good as their own stated uncertainty.
         double uncertainty = points.Append(check).Max(p => p.Report.DensityUncertainty);
         foreach (var point in points.Append(check))
@@ -113,7 +115,7 @@ public sealed partial class CoexistenceSolver
     /// <summary>The point at T from the series: both phases evaluated once at the series densities.</summary>
     private CoexistencePoint SeriesPoint(double temperature, Work work)
     {
-        var series = Series;
+        var series = Series(work);
         var (liquid, vapour) = SeriesDensities(series, temperature);
         var dl = Evaluate(work, temperature, liquid);
         var dv = Evaluate(work, temperature, vapour);

@@ -45,7 +45,7 @@ public sealed partial class CoexistenceSolver
 
     /// <summary>The model's own acentric factor, ω = −1 − log10(Psat(0.7·Tc)/Pc), solved once per
     /// solver from a bracketing start: the parameter of the ancillary vapour pressure.</summary>
-    private double ModelAcentricFactor()
+    private double ModelAcentricFactor(Work work)
     {
         if (_acentricFactor is double known)
         {
@@ -53,7 +53,6 @@ public sealed partial class CoexistenceSolver
         }
 
         double t = 0.7 * CriticalTemperature;
-        var work = new Work();
         string? failure = null;
         CoexistencePoint? point = null;
         if (BracketingStart(t, work, out double liquid, out double vapour, ref failure))
@@ -69,13 +68,13 @@ public sealed partial class CoexistenceSolver
 
     /// <summary>log10(P/Pc) = (7/3)(1 + ω)(1 − Tc/T): exact at Tc and, through the model's own ω,
     /// at 0.7·Tc (the corresponding-states relation usually credited to Edmister).</summary>
-    private double AncillaryPressure(double temperature)
-        => CriticalPressure * Math.Pow(10, 7.0 / 3 * (1 + ModelAcentricFactor()) * (1 - CriticalTemperature / temperature));
+    private double AncillaryPressure(double temperature, Work work)
+        => CriticalPressure * Math.Pow(10, 7.0 / 3 * (1 + ModelAcentricFactor(work)) * (1 - CriticalTemperature / temperature));
 
     /// <summary>The temperature at which <see cref="AncillaryPressure"/> equals P: near Pc the
     /// line through the critical point with the critical isochore's slope, elsewhere the inverse
     /// of the corresponding-states relation.</summary>
-    private double AncillaryTemperature(double pressure)
+    private double AncillaryTemperature(double pressure, Work work)
     {
         double tc = CriticalTemperature;
         if (1 - pressure / CriticalPressure < 0.02)
@@ -83,7 +82,7 @@ public sealed partial class CoexistenceSolver
             return tc - (CriticalPressure - pressure) / CriticalIsochoreSlope;
         }
 
-        double inverse = 1 - Math.Log10(pressure / CriticalPressure) / (7.0 / 3 * (1 + ModelAcentricFactor()));
+        double inverse = 1 - Math.Log10(pressure / CriticalPressure) / (7.0 / 3 * (1 + ModelAcentricFactor(work)));
         return tc / inverse;
     }
 
@@ -91,7 +90,7 @@ public sealed partial class CoexistenceSolver
     /// root there, the pressure is moved toward the other branch a few times.</summary>
     private bool AncillaryStart(double temperature, Work work, out double liquid, out double vapour)
     {
-        double pressure = AncillaryPressure(temperature);
+        double pressure = AncillaryPressure(temperature, work);
         Span<double> roots = stackalloc double[2];
         for (int attempt = 0; attempt < 8 && pressure < CriticalPressure; attempt++)
         {

@@ -7,14 +7,14 @@ namespace PhaseSlope.Core.Fluids;
 /// <summary>Consistency checks of a fluid's data against a model, beyond the validation done
 /// when the file is read.</summary>
 /// <param name="Fluid">The fluid checked.</param>
-/// <param name="Model">The model used.</param>
+/// <param name="Model">The model used (equation, alpha function, volume shift).</param>
 /// <param name="PredictedBoilingPoint">The model's saturation temperature at 101325 Pa, K, or null
 /// when it has none in the valid range (e.g. carbon dioxide).</param>
 /// <param name="BoilingPointDeviation">(predicted − tabulated)/tabulated, or null.</param>
 /// <param name="SolvesToCriticalPoint">Whether coexistence converges at the lowest valid
 /// temperature, at 0.7·Tc and at Tc·(1 − 1e-8).</param>
 /// <param name="Failure">Why it does not solve, or null.</param>
-public sealed record FluidCheck(Fluid Fluid, CubicModelKind Model, double? PredictedBoilingPoint, double? BoilingPointDeviation, bool SolvesToCriticalPoint, string? Failure)
+public sealed record FluidCheck(Fluid Fluid, ModelIdentity Model, double? PredictedBoilingPoint, double? BoilingPointDeviation, bool SolvesToCriticalPoint, string? Failure)
 {
     /// <summary>Largest |ΔTb/Tb| counted as consistent: Peng–Robinson and Soave–Redlich–Kwong with
     /// a correct ω reproduce the normal boiling point of normal fluids to a few tenths of a percent
@@ -57,6 +57,6 @@ public sealed record FluidCheck(Fluid Fluid, CubicModelKind Model, double? Predi
             }
         }
 
-        return new FluidCheck(fluid, kind, predicted, deviation, failure is null, failure);
+        return new FluidCheck(fluid, solver.Model.Identity, predicted, deviation, failure is null, failure);
     }
 }
