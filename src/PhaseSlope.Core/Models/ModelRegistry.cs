@@ -31,18 +31,13 @@ public static class ModelRegistry
     [
         new(CubicModelKind.PengRobinson, "pr", "Peng-Robinson (1976)", CubicForm.PengRobinson,
             (omega, tc) => new SoaveAlpha(SoaveAlpha.PengRobinson1976Slope(omega), tc, "Peng & Robinson 1976"),
-            true, null,
-            // As quoted for the Peng–Robinson form in the phase-behaviour literature; from memory
-            // (see VolumeShift.PenelouxPengRobinson).
-            (0.50033, 0.25969)),
+            true, null, VolumeShift.PengRobinsonCoefficients),
         new(CubicModelKind.PengRobinson1978, "pr78", "Peng-Robinson (1978 kappa for omega > 0.491)", CubicForm.PengRobinson,
             (omega, tc) => new SoaveAlpha(SoaveAlpha.PengRobinson1978Slope(omega), tc, "Robinson & Peng 1978"),
-            true, CubicModelKind.PengRobinson, (0.50033, 0.25969)),
+            true, CubicModelKind.PengRobinson, VolumeShift.PengRobinsonCoefficients),
         new(CubicModelKind.SoaveRedlichKwong, "srk", "Soave-Redlich-Kwong (1972)", CubicForm.RedlichKwong,
             (omega, tc) => new SoaveAlpha(SoaveAlpha.SoaveSlope(omega), tc, "Soave 1972"),
-            true, null,
-            // Péneloux, Rauzy & Fréze, Fluid Phase Equilib. 8, 7 (1982); from memory of the paper.
-            (0.40768, 0.29441)),
+            true, null, VolumeShift.SoaveRedlichKwongCoefficients),
         new(CubicModelKind.RedlichKwong, "rk", "Redlich-Kwong (1949)", CubicForm.RedlichKwong,
             (_, tc) => new InverseRootAlpha(tc), false, null, null),
         new(CubicModelKind.VanDerWaals, "vdw", "van der Waals (1873)", CubicForm.VanDerWaals,

@@ -22,7 +22,13 @@ public static class VolumeShift
     /// (for example from <see cref="RackettCompressibility"/>).</param>
     /// <returns>c in m³/mol.</returns>
     public static double PenelouxSoaveRedlichKwong(double criticalTemperature, double criticalPressure, double rackettCompressibility)
-        => Correlation(0.40768, 0.29441, criticalTemperature, criticalPressure, rackettCompressibility);
+        => Correlation(SoaveRedlichKwongCoefficients, criticalTemperature, criticalPressure, rackettCompressibility);
+
+    /// <summary>Slope and offset of the Soave–Redlich–Kwong correlation (see <see cref="PenelouxSoaveRedlichKwong"/>).</summary>
+    internal static readonly (double Slope, double Offset) SoaveRedlichKwongCoefficients = (0.40768, 0.29441);
+
+    /// <summary>Slope and offset of the Peng–Robinson correlation (see <see cref="PenelouxPengRobinson"/>).</summary>
+    internal static readonly (double Slope, double Offset) PengRobinsonCoefficients = (0.50033, 0.25969);
 
     /// <summary>The analogous correlation for Peng–Robinson,
     /// c = 0.50033·(0.25969 − Z_RA)·R·Tc/Pc, as it is quoted in the phase-behaviour literature
@@ -30,19 +36,16 @@ public static class VolumeShift
     /// memory; the original paper that introduced them is not recalled with certainty.</summary>
     /// <returns>c in m³/mol.</returns>
     public static double PenelouxPengRobinson(double criticalTemperature, double criticalPressure, double rackettCompressibility)
-        => Correlation(0.50033, 0.25969, criticalTemperature, criticalPressure, rackettCompressibility);
+        => Correlation(PengRobinsonCoefficients, criticalTemperature, criticalPressure, rackettCompressibility);
 
-    /// <summary>The Péneloux-type correlation of a model: Soave–Redlich–Kwong, or Peng–Robinson
-    /// (1976 or 1978 κ, which share the form).</summary>
+    /// <summary>The Péneloux-type correlation of a model, as its <see cref="ModelRegistry"/> row
+    /// gives it: Soave–Redlich–Kwong, or Peng–Robinson (1976 or 1978 κ, which share the form).</summary>
     /// <exception cref="InvalidInputException">For the other models, which have no such correlation.</exception>
     public static double Peneloux(CubicModelKind kind, double criticalTemperature, double criticalPressure, double rackettCompressibility)
-        => kind switch
-        {
-            CubicModelKind.SoaveRedlichKwong => PenelouxSoaveRedlichKwong(criticalTemperature, criticalPressure, rackettCompressibility),
-            CubicModelKind.PengRobinson or CubicModelKind.PengRobinson1978 => PenelouxPengRobinson(criticalTemperature, criticalPressure, rackettCompressibility),
-            _ => throw new InvalidInputException("model", double.NaN,
-                $"the Peneloux volume-shift correlation exists for Soave-Redlich-Kwong and Peng-Robinson only, not {kind.Title()}"),
-        };
+        => kind.Entry().Peneloux is { } coefficients
+            ? Correlation(coefficients, criticalTemperature, criticalPressure, rackettCompressibility)
+            : throw new InvalidInputException("model", double.NaN,
+                $"the Peneloux volume-shift correlation exists for Soave-Redlich-Kwong and Peng-Robinson only, not {kind.Title()}");
 
     /// <summary>The Rackett compressibility factor from the acentric factor by the relation of
     /// Yamada &amp; Gunn, J. Chem. Eng. Data 18, 234 (1973): Z_RA = 0.29056 − 0.08775ω
@@ -79,8 +82,9 @@ public static class VolumeShift
         return shift;
     }
 
-    private static double Correlation(double slope, double offset, double criticalTemperature, double criticalPressure, double rackettCompressibility)
+    private static double Correlation((double Slope, double Offset) coefficients, double criticalTemperature, double criticalPressure, double rackettCompressibility)
     {
+        var (slope, offset) = coefficients;
         Preconditions.Positive(criticalTemperature, "critical temperature");
         Preconditions.Positive(criticalPressure, "critical pressure");
         Preconditions.Positive(rackettCompressibility, "Rackett compressibility factor");
