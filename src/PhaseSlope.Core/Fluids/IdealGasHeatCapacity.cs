@@ -120,6 +120,12 @@ public sealed class IdealGasHeatCapacity
         return R * sum;
     }
 
+    /// <summary>cp°(T) and the antiderivatives H(T) = ∫cp° dT and S(T) = ∫cp°/T dT (J/mol,
+    /// J/(mol·K), each up to its own constant) in one pass, sharing the exponentials of the
+    /// Planck–Einstein terms: the ideal-gas part of a state costs one call.</summary>
+    internal (double HeatCapacity, double Enthalpy, double Entropy) Terms(double temperature)
+        => (HeatCapacity(temperature), EnthalpyAntiderivative(temperature), EntropyAntiderivative(temperature));
+
     /// <summary>Enthalpy integral ∫ from <paramref name="from"/> to <paramref name="to"/> of cp° dT, J/mol.</summary>
     public double EnthalpyIntegral(double from, double to) => EnthalpyAntiderivative(to) - EnthalpyAntiderivative(from);
 

@@ -22,6 +22,9 @@ public sealed class PropertyModel
     private readonly double _enthalpyOffset;
     private readonly double _entropyOffset;
 
+    /// <summary>The antiderivatives of cp° and cp°/T at T0 = 298.15 K, subtracted from every state.</summary>
+    private readonly (double Enthalpy, double Entropy) _idealGasAnchor;
+
     /// <summary>Builds the engine for a fluid, a cubic model and a reference convention.</summary>
     /// <exception cref="FluidDataException">The fluid has no ideal-gas heat capacity.</exception>
     /// <exception cref="InvalidInputException">The reference convention's anchor state does not exist for this fluid (for example 0 °C above
@@ -36,6 +39,8 @@ public sealed class PropertyModel
         _heatCapacity = fluid.IdealGasHeatCapacity ?? throw new FluidDataException(fluid.Origin, 0, "ideal_gas_cp",
             $"fluid '{fluid.Name}' has no ideal-gas heat capacity, which absolute caloric properties need (coexistence and residual properties work without it)");
         Solver = new CoexistenceSolver(model, CoexistenceSolver.LowestValidTemperature(fluid), options);
+        var anchor = _heatCapacity.Terms(ReferenceState.IdealGasTemperature);
+        _idealGasAnchor = (anchor.Enthalpy, anchor.Entropy);
         (_enthalpyOffset, _entropyOffset) = Offsets(Reference);
     }
 
@@ -121,22 +126,27 @@ public sealed class PropertyModel
     public CoexistenceProperties Coexistence(CoexistencePoint point)
     {
         ArgumentNullException.ThrowIfNull(point);
-        var liquid = Build(point.Liquid, PhaseLabel.Liquid, false);
-        var vapour = Build(point.Vapour, PhaseLabel.Vapour, false);
+        // Both phases share T, so their temperature-dependent ideal-gas part is computed once.
+        var idealGas = _heatCapacity.Terms(point.Temperature);
+        var liquid = Build(point.Liquid, PhaseLabel.Liquid, false, idealGas);
+        var vapour = Build(point.Vapour, PhaseLabel.Vapour, false, idealGas);
         return new CoexistenceProperties(point, SaturatedPhase.Along(liquid, point), SaturatedPhase.Along(vapour, point));
     }
 
     /// <summary>The complete state from its residual part: the ideal-gas part added, nothing
     /// evaluated again.</summary>
     private ThermodynamicState Build(PhaseState residual, PhaseLabel label, bool metastable)
+        => Build(residual, label, metastable, _heatCapacity.Terms(residual.Temperature));
+
+    private ThermodynamicState Build(PhaseState residual, PhaseLabel label, bool metastable, (double HeatCapacity, double Enthalpy, double Entropy) idealGasAtT)
     {
         var d = residual.Helmholtz;
         double t = residual.Temperature;
         double density = residual.Density;
         double pressure = residual.Pressure;
         double rt = R * t;
-        double cp0 = _heatCapacity.HeatCapacity(t);
-        var (hig, sig) = IdealGas(t, density * rt);
+        double cp0 = idealGasAtT.HeatCapacity;
+        var (hig, sig) = IdealGas(idealGasAtT, density * rt);
         double u = _enthalpyOffset + hig - rt + residual.ResidualInternalEnergy;
         return new ThermodynamicState
         {
@@ -162,12 +172,12 @@ public sealed class PropertyModel
     }
 
     /// <summary>Ideal-gas enthalpy and entropy on the base convention (h = s = 0 for the ideal gas
-    /// at T0 = 298.15 K and P0 = 1 bar) at T and the ideal-gas pressure <paramref name="idealPressure"/>
-    /// (ρRT for a state of density ρ): h_ig = ∫cp° dT, s_ig = ∫cp°/T dT − R·ln(P/P0).</summary>
-    private (double Enthalpy, double Entropy) IdealGas(double temperature, double idealPressure)
-        => (_heatCapacity.EnthalpyIntegral(ReferenceState.IdealGasTemperature, temperature),
-            _heatCapacity.EntropyIntegral(ReferenceState.IdealGasTemperature, temperature)
-            - R * Math.Log(idealPressure / ReferenceState.IdealGasPressure));
+    /// at T0 = 298.15 K and P0 = 1 bar) from the antiderivatives of cp° at T and the ideal-gas
+    /// pressure <paramref name="idealPressure"/> (ρRT for a state of density ρ):
+    /// h_ig = ∫_{T0}^{T} cp° dT, s_ig = ∫_{T0}^{T} cp°/T dT − R·ln(P/P0).</summary>
+    private (double Enthalpy, double Entropy) IdealGas((double HeatCapacity, double Enthalpy, double Entropy) atT, double idealPressure)
+        => (atT.Enthalpy - _idealGasAnchor.Enthalpy,
+            atT.Entropy - _idealGasAnchor.Entropy - R * Math.Log(idealPressure / ReferenceState.IdealGasPressure));
 
     private (double Enthalpy, double Entropy) Offsets(ReferenceState reference)
     {
@@ -179,7 +189,7 @@ public sealed class PropertyModel
         {
             case ReferenceAnchor.IdealGas:
                 // The base convention itself, shifted by the targets at its own anchor.
-                var (hBase, sBase) = IdealGas(reference.Temperature!.Value, reference.Pressure!.Value);
+                var (hBase, sBase) = IdealGas(_heatCapacity.Terms(reference.Temperature!.Value), reference.Pressure!.Value);
                 return (hTarget - hBase, sTarget - sBase);
             case ReferenceAnchor.SaturatedLiquid:
                 var point = AnchorPoint(reference);
