@@ -54,7 +54,7 @@ public sealed partial class CoexistenceSolver
         if (point is null)
         {
             // A second start: the state at the temperature the first attempt was heading for.
-            double estimate = near.Temperature + (pressure - near.Pressure) / near.Slope;
+            double estimate = ClausiusClapeyronTemperature(near, pressure);
             if (estimate > MinimumTemperature * 0.5 && estimate < CriticalTemperature)
             {
                 near = Solve(Math.Max(estimate, MinimumTemperature), null, work);
@@ -99,8 +99,8 @@ public sealed partial class CoexistenceSolver
         double tc = CriticalTemperature;
         double lowest = 0.5 * MinimumTemperature;
 
-        // The start: T on the tangent of the line, densities along their slopes, linear in √(Tc − T).
-        double t = near.Temperature + (pressure - near.Pressure) / near.Slope;
+        // The start: T on the tangent of ln P against 1/T, densities along their slopes, linear in √(Tc − T).
+        double t = ClausiusClapeyronTemperature(near, pressure);
         if (!(t > lowest && t < tc))
         {
             t = near.Temperature;
@@ -222,5 +222,15 @@ public sealed partial class CoexistenceSolver
         }
 
         return point;
+    }
+
+    /// <summary>The temperature where the tangent of ln Psat against 1/T at a solved point
+    /// reaches ln P: 1/T = 1/T0 − ln(P/P0)·P0/(T0²·dPsat/dT). Exact for a constant latent heat
+    /// and an ideal-gas vapour, so good over decades of pressure where the tangent of P(T) is not.</summary>
+    private static double ClausiusClapeyronTemperature(CoexistencePoint near, double pressure)
+    {
+        double t0 = near.Temperature;
+        double inverse = 1 / t0 - Math.Log(pressure / near.Pressure) * near.Pressure / (t0 * t0 * near.Slope);
+        return inverse > 0 ? 1 / inverse : t0;
     }
 }

@@ -36,6 +36,24 @@ internal static class CubicRoots
 
         Span<double> z = stackalloc double[3];
         int real = SolveCubic(c2, c1, c0, z);
+        if (c0 != 0)
+        {
+            // The closed form gives each root to an absolute error of ~1e-16 of the largest, which
+            // at Psat/Pc ~ 1e-14 leaves nothing of a liquid Z of 1e-12 (it may even lose the root).
+            // The reversed cubic in y = 1/Z, y³ + (c1/c0)·y² + (c2/c0)·y + 1/c0 = 0, has the
+            // liquid and middle roots as its largest, so there they come out to full relative
+            // precision; the vapour root stays with the direct form.
+            Span<double> y = stackalloc double[3];
+            if (SolveCubic(c1 / c0, c2 / c0, 1 / c0, y) == 3 && y[2] > 0 && y[1] > 0)
+            {
+                double vapour = z[real == 3 ? 2 : 0];
+                z[0] = 1 / y[2];
+                z[1] = 1 / y[1];
+                z[2] = Math.Max(vapour, z[1]);
+                real = 3;
+            }
+        }
+
         int count = 0;
         double lastKept = double.NaN;
         for (int i = 0; i < real; i++)
