@@ -121,17 +121,14 @@ public sealed partial class CoexistenceSolver
             (t, rhoL, rhoV) = (near.Temperature, near.Liquid.Density, near.Vapour.Density);
         }
 
-        var dl = Evaluate(work, t, rhoL);
-        var dv = Evaluate(work, t, rhoV);
-        HelmholtzDerivatives bestL = dl, bestV = dv;
-        double bestStep = double.PositiveInfinity;
-        double bestNoise = 0;
-        int bestIteration = 0;
-        double previousStep = double.PositiveInfinity;
-        int iteration = 0;
-        while (iteration < Options.MaxIterations)
+        var track = new NewtonTrack(this, work, t, rhoL, rhoV);
+        while (track.Iteration < Options.MaxIterations)
         {
-            iteration++;
+            track.Iteration++;
+            var (dl, dv) = (track.Liquid, track.Vapour);
+            t = dl.Temperature;
+            rhoL = dl.Density;
+            rhoV = dv.Density;
             double rt = R * t;
             double aL = dl.PressureDRho;
             double aV = dv.PressureDRho;
@@ -166,62 +163,25 @@ public sealed partial class CoexistenceSolver
             double noise = 8 * Math.Max(
                 (RoundingUnit * PressureScale(dl, rt) + Math.Abs(ptL) * Math.Abs(noiseF2 / c)) / (rhoL * aL),
                 (RoundingUnit * PressureScale(dv, rt) + Math.Abs(ptV) * Math.Abs(noiseF2 / c)) / (rhoV * aV));
-            if (step < bestStep)
-            {
-                (bestL, bestV, bestStep, bestNoise, bestIteration) = (dl, dv, step, noise, iteration);
-            }
-            if (step <= StepTolerance || (iteration > 1 && step <= noise)
-                || (previousStep < 1e-7 && step > 0.5 * previousStep)
-                || iteration - bestIteration > 3)
+            if (track.Done(step, noise))
             {
                 break;
             }
 
-            previousStep = step;
-            double lambda = step > 0.5 ? 0.5 / step : 1;
-            bool moved = false;
-            for (int halving = 0; halving < 40; halving++, lambda *= 0.5)
-            {
-                double nextT = t + lambda * dT;
-                double nextL = rhoL * Math.Exp(lambda * du);
-                double nextV = rhoV * Math.Exp(lambda * dw);
-                if (!(nextT > lowest && nextT < tc && nextL < _densityBound && nextV < nextL))
-                {
-                    continue;
-                }
-
-                var trialL = Evaluate(work, nextT, nextL);
-                var trialV = Evaluate(work, nextT, nextV);
-                if (trialL.PressureDRho > 0 && trialV.PressureDRho > 0)
-                {
-                    (t, rhoL, rhoV, dl, dv) = (nextT, nextL, nextV, trialL, trialV);
-                    moved = true;
-                    break;
-                }
-            }
-
-            if (!moved)
+            if (!track.Move(dT, du, dw, step > 0.5 ? 0.5 / step : 1, lowestTemperature: 0.5 * MinimumTemperature))
             {
                 failure = "no step keeps both phases on their stable branches below Tc";
                 break;
             }
         }
 
-        double uncertainty = bestStep <= StepTolerance ? bestStep : Math.Max(bestStep, bestNoise / 8);
-        if (!Classify(uncertainty, bestL.Temperature, out var stop))
+        var finished = track.Finish(pressure, CoexistenceMethod.TemperatureIteration, start, ref failure);
+        if (finished is null)
         {
-            failure = $"temperature iteration stalled with a correction of {Preconditions.Format(bestStep)}";
-            return null;
+            failure ??= $"temperature iteration stalled with a correction of {Preconditions.Format(track.BestStep)}";
         }
 
-        var point = Build(bestL, bestV, pressure, CoexistenceMethod.TemperatureIteration, iteration, stop, work, start, uncertainty);
-        if (!Acceptable(point))
-        {
-            failure = $"residual {Preconditions.Format(point.Report.FugacityResidual)} after {iteration} iterations";
-            return null;
-        }
-
-        return point;
+        return finished;
     }
 
     /// <summary>The temperature where the tangent of ln Psat against 1/T at a solved point

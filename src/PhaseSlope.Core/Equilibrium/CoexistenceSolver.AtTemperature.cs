@@ -159,17 +159,11 @@ public sealed partial class CoexistenceSolver
             return null;
         }
 
-        var dl = Evaluate(work, temperature, rhoL);
-        var dv = Evaluate(work, temperature, rhoV);
-        HelmholtzDerivatives bestL = dl, bestV = dv;
-        double bestStep = double.PositiveInfinity;
-        double bestNoise = 0;
-        int bestIteration = 0;
-        double previousStep = double.PositiveInfinity;
-        int iteration = 0;
-        while (iteration < Options.MaxIterations)
+        var track = new NewtonTrack(this, work, temperature, rhoL, rhoV);
+        while (track.Iteration < Options.MaxIterations)
         {
-            iteration++;
+            track.Iteration++;
+            var (dl, dv) = (track.Liquid, track.Vapour);
             double aL = dl.PressureDRho;
             double aV = dv.PressureDRho;
             if (!(aL > 0 && aV > 0))
@@ -178,6 +172,8 @@ public sealed partial class CoexistenceSolver
                 break;
             }
 
+            rhoL = dl.Density;
+            rhoV = dv.Density;
             double pl = dl.Pressure;
             double pv = dv.Pressure;
             double f1 = (pl - pv) / rt;
@@ -198,69 +194,25 @@ public sealed partial class CoexistenceSolver
             double noiseF1 = RoundingUnit * (PressureScale(dl, rt) + PressureScale(dv, rt)) / rt;
             double noiseF2 = RoundingUnit * (GibbsScale(dl, rt) + GibbsScale(dv, rt));
             double noise = 8 * rt * Math.Max((noiseF1 + rhoV * noiseF2) / (gap * aL), (rhoL * noiseF2 + noiseF1) / (gap * aV));
-            if (step < bestStep)
-            {
-                (bestL, bestV, bestStep, bestNoise, bestIteration) = (dl, dv, step, noise, iteration);
-            }
-            // A raw start is never accepted at the noise floor: at least one Newton step is taken.
-            if (step <= StepTolerance || (iteration > 1 && step <= noise))
+            if (track.Done(step, noise))
             {
                 break;
             }
 
-            // Quadratic convergence shrinks a small correction by orders of magnitude per step;
-            // once it stops shrinking the equations are at their rounding floor.
-            if ((previousStep < 1e-7 && step > 0.5 * previousStep) || iteration - bestIteration > 3)
-            {
-                break;
-            }
-
-            previousStep = step;
-            double lambda = step > 1 ? 1 / step : 1;
-            bool moved = false;
-            for (int halving = 0; halving < 40; halving++, lambda *= 0.5)
-            {
-                double nextL = rhoL * Math.Exp(lambda * du);
-                double nextV = rhoV * Math.Exp(lambda * dw);
-                if (!(nextL < _densityBound && nextV < nextL))
-                {
-                    continue;
-                }
-
-                var trialL = Evaluate(work, temperature, nextL);
-                var trialV = Evaluate(work, temperature, nextV);
-                if (trialL.PressureDRho > 0 && trialV.PressureDRho > 0)
-                {
-                    (rhoL, rhoV, dl, dv) = (nextL, nextV, trialL, trialV);
-                    moved = true;
-                    break;
-                }
-            }
-
-            if (!moved)
+            if (!track.Move(0, du, dw, step > 1 ? 1 / step : 1, lowestTemperature: 0))
             {
                 failure = "no step keeps both phases on their stable branches";
                 break;
             }
         }
 
-        // Below the step tolerance the pending correction is the error; at the rounding floor the
-        // rounding estimate bounds it too (a correction can be small by chance there).
-        double uncertainty = bestStep <= StepTolerance ? bestStep : Math.Max(bestStep, bestNoise / 8);
-        if (!Classify(uncertainty, temperature, out var stop))
+        var finished = track.Finish(null, CoexistenceMethod.DensityIteration, start, ref failure);
+        if (finished is null)
         {
-            failure ??= $"density iteration stalled with a correction of {Preconditions.Format(bestStep)}";
-            return null;
+            failure ??= $"density iteration stalled with a correction of {Preconditions.Format(track.BestStep)}";
         }
 
-        var point = Build(bestL, bestV, bestV.Pressure, CoexistenceMethod.DensityIteration, iteration, stop, work, start, uncertainty);
-        if (!Acceptable(point))
-        {
-            failure = $"residual {Preconditions.Format(point.Report.FugacityResidual)} after {iteration} iterations";
-            return null;
-        }
-
-        return point;
+        return finished;
     }
 
     /// <summary>Double-precision unit roundoff.</summary>
