@@ -30,10 +30,27 @@ public static class FluidFile
     {
         ArgumentNullException.ThrowIfNull(stream);
         ArgumentNullException.ThrowIfNull(origin);
-        var encoding = new UTF8Encoding(encoderShouldEmitUTF8Identifier: false, throwOnInvalidBytes: true);
-        using var reader = new StreamReader(stream, encoding, detectEncodingFromByteOrderMarks: true,
-            bufferSize: 4096, leaveOpen: true);
+        using var reader = OpenText(stream);
         return Parse(reader, origin);
+    }
+
+    /// <summary>Reads only the name and synonyms of a fluid file (see
+    /// <see cref="FluidFileParser.ScanNames"/>); the rest of the file is not validated.</summary>
+    /// <param name="stream">The open stream; it is left open.</param>
+    /// <param name="origin">File path or resource name, used in error messages.</param>
+    /// <returns>The canonical name and the synonyms as a full read would give them.</returns>
+    /// <exception cref="FluidDataException">The name or the synonyms are missing or malformed.</exception>
+    internal static (string Name, IReadOnlyList<string> Synonyms) ScanNames(Stream stream, string origin)
+    {
+        using var reader = OpenText(stream);
+        return new FluidFileParser(origin).ScanNames(reader);
+    }
+
+    private static StreamReader OpenText(Stream stream)
+    {
+        var encoding = new UTF8Encoding(encoderShouldEmitUTF8Identifier: false, throwOnInvalidBytes: true);
+        return new StreamReader(stream, encoding, detectEncodingFromByteOrderMarks: true,
+            bufferSize: 4096, leaveOpen: true);
     }
 
     /// <summary>Reads a fluid file from text.</summary>
@@ -134,35 +151,8 @@ internal sealed partial class FluidFileParser
     {
         int lineNumber = 0;
         bool sawFormat = false;
-        while (true)
+        while (NextEntry(reader, ref lineNumber) is { } trimmed)
         {
-            string? line;
-            try
-            {
-                line = reader.ReadLine();
-            }
-            catch (DecoderFallbackException)
-            {
-                throw Fail(lineNumber + 1, null, "the text is not valid UTF-8");
-            }
-
-            if (line is null)
-            {
-                break;
-            }
-
-            lineNumber++;
-            if (lineNumber == 1 && line.Length > 0 && line[0] == '\uFEFF')
-            {
-                line = line[1..];
-            }
-
-            string trimmed = line.Trim();
-            if (trimmed.Length == 0 || trimmed[0] == '#')
-            {
-                continue;
-            }
-
             SplitKey(trimmed, out string key, out string rest);
             if (!sawFormat && key != KeyFormat)
             {
@@ -190,6 +180,78 @@ internal sealed partial class FluidFileParser
         }
 
         return Build();
+    }
+
+    /// <summary>Reads only the <c>name</c> and <c>synonyms</c> entries, with the same checks as a
+    /// full read gives them, and stops as soon as it has both: the cheap pass that lets a catalog
+    /// index its files without parsing them.</summary>
+    /// <returns>The canonical name and the synonyms (empty when the file gives none).</returns>
+    /// <exception cref="FluidDataException">The name is missing or malformed, or a synonym is.</exception>
+    internal (string Name, IReadOnlyList<string> Synonyms) ScanNames(TextReader reader)
+    {
+        int lineNumber = 0;
+        bool sawSynonyms = false;
+        while (!(sawSynonyms && _text.ContainsKey(KeyName)) && NextEntry(reader, ref lineNumber) is { } trimmed)
+        {
+            SplitKey(trimmed, out string key, out string rest);
+            if (key is KeyName or KeySynonyms)
+            {
+                ReadEntry(lineNumber, key, rest);
+                sawSynonyms |= key == KeySynonyms;
+            }
+        }
+
+        if (!_text.TryGetValue(KeyName, out string? name))
+        {
+            throw Fail(Math.Max(lineNumber, 1), KeyName, "required field is missing (end of file reached without it)");
+        }
+
+        CheckSynonymsDifferFromName(name);
+        return (name, _synonyms.AsReadOnly());
+    }
+
+    /// <summary>The next line that holds an entry, trimmed (blank and comment lines skipped, a
+    /// byte-order mark on line 1 removed), or null at the end of the text.</summary>
+    private string? NextEntry(TextReader reader, ref int lineNumber)
+    {
+        while (true)
+        {
+            string? line;
+            try
+            {
+                line = reader.ReadLine();
+            }
+            catch (DecoderFallbackException)
+            {
+                throw Fail(lineNumber + 1, null, "the text is not valid UTF-8");
+            }
+
+            if (line is null)
+            {
+                return null;
+            }
+
+            lineNumber++;
+            if (lineNumber == 1 && line.Length > 0 && line[0] == '\uFEFF')
+            {
+                line = line[1..];
+            }
+
+            string trimmed = line.Trim();
+            if (trimmed.Length != 0 && trimmed[0] != '#')
+            {
+                return trimmed;
+            }
+        }
+    }
+
+    private void CheckSynonymsDifferFromName(string name)
+    {
+        if (_synonyms.Any(s => FluidNames.Normalise(s) == FluidNames.Normalise(name)))
+        {
+            throw Fail(_lineOfKey[KeySynonyms], KeySynonyms,
+                $"a synonym is the same as the name '{name}' once normalised");
+        }
     }
 
     private static void SplitKey(string trimmed, out string key, out string rest)
@@ -510,11 +572,7 @@ internal sealed partial class FluidFileParser
         }
 
         string name = _text[KeyName];
-        if (_synonyms.Any(s => FluidNames.Normalise(s) == FluidNames.Normalise(name)))
-        {
-            throw Fail(_lineOfKey[KeySynonyms], KeySynonyms,
-                $"a synonym is the same as the name '{name}' once normalised");
-        }
+        CheckSynonymsDifferFromName(name);
 
         return new Fluid
         {
