@@ -14,6 +14,9 @@ public sealed class ClausiusClapeyronForm : VapourPressureForm
     public override IReadOnlyList<string> ParameterNames { get; } = ["A", "B"];
 
     /// <inheritdoc />
+    public override bool IsLinearInParameters => true;
+
+    /// <inheritdoc />
     public override double LnPressure(double t, IReadOnlyList<double> p) => p[0] - p[1] / t;
 
     /// <inheritdoc />
@@ -139,6 +142,9 @@ public sealed class KirchhoffForm : VapourPressureForm
     public override IReadOnlyList<string> ParameterNames { get; } = ["A", "B", "C"];
 
     /// <inheritdoc />
+    public override bool IsLinearInParameters => true;
+
+    /// <inheritdoc />
     public override double LnPressure(double t, IReadOnlyList<double> p) => p[0] + p[1] / t + p[2] * Math.Log(t);
 
     /// <inheritdoc />
@@ -180,6 +186,9 @@ public sealed class RiedelForm : VapourPressureForm
 
     /// <inheritdoc />
     public override IReadOnlyList<string> ParameterNames { get; } = ["A", "B", "C", "D"];
+
+    /// <inheritdoc />
+    public override bool IsLinearInParameters => true;
 
     /// <inheritdoc />
     public override double LnPressure(double t, IReadOnlyList<double> p) => p[0] + p[1] / t + p[2] * Math.Log(t) + p[3] * Math.Pow(t, 6);

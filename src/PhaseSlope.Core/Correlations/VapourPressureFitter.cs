@@ -9,6 +9,10 @@ namespace PhaseSlope.Core.Correlations;
 /// the corrected Akaike information criterion.</summary>
 public static class VapourPressureFitter
 {
+    /// <summary>The <see cref="VapourPressureFit.StopReason"/> of a form solved directly by linear
+    /// least squares (<see cref="VapourPressureForm.IsLinearInParameters"/>).</summary>
+    public const string DirectLinearSolve = "direct linear least squares";
+
     /// <summary>Fits a form to data.</summary>
     /// <exception cref="InvalidInputException">Too few points for the form (it needs at least one
     /// more point than parameters), a duplicate temperature, or a point at or above the form's
@@ -17,7 +21,7 @@ public static class VapourPressureFitter
     {
         ArgumentNullException.ThrowIfNull(form);
         ArgumentNullException.ThrowIfNull(data);
-        var points = data.OrderBy(d => d.Temperature).ToArray();
+        var points = SortedByTemperature(data);
         int n = points.Length;
         int p = form.ParameterCount;
         if (n < Math.Max(p + 1, 1))
@@ -57,44 +61,16 @@ public static class VapourPressureFitter
         double[] parameters;
         int iterations = 0;
         string stop = "no parameters to fit";
-        if (p > 0)
+        if (p > 0 && form.IsLinearInParameters)
+        {
+            // ln P affine in θ: the weighted linear least-squares solution is the minimum itself.
+            parameters = form.StartingValues(t, lnP, w);
+            stop = DirectLinearSolve;
+        }
+        else if (p > 0)
         {
             double[] start = form.StartingValues(t, lnP, w);
-            Vector<double> Model(Vector<double> theta, Vector<double> x)
-                => Vector<double>.Build.Dense(x.Count, i => form.LnPressure(x[i], [.. theta]));
-            Matrix<double> Jacobian(Vector<double> theta, Vector<double> x)
-            {
-                var jac = Matrix<double>.Build.Dense(x.Count, theta.Count);
-                var g = new double[theta.Count];
-                double[] th = [.. theta];
-                for (int i = 0; i < x.Count; i++)
-                {
-                    form.LnPressureGradient(x[i], th, g);
-                    for (int j = 0; j < g.Length; j++)
-                    {
-                        jac[i, j] = g[j];
-                    }
-                }
-
-                return jac;
-            }
-
-            var objective = ObjectiveFunction.NonlinearModel(Model, Jacobian,
-                Vector<double>.Build.DenseOfArray(t), Vector<double>.Build.DenseOfArray(lnP), Vector<double>.Build.DenseOfArray(w));
-            // Parameter scales from the start: the forms mix parameters of very different size
-            // (Riedel's D ~ 1e-18 beside A ~ 10), and LM works in scaled steps.
-            double[] scales = [.. start.Select(v => Math.Abs(v) > 0 ? Math.Abs(v) : 1)];
-            var minimizer = new LevenbergMarquardtMinimizer(1e-3, 1e-15, 1e-15, 1e-15, 1000);
-            var result = minimizer.FindMinimum(objective, start, null, null, scales, null);
-            parameters = [.. result.MinimizingPoint];
-            iterations = Math.Max(result.Iterations, 0);
-            stop = result.ReasonForExit.ToString();
-            // Keep the start if LM made it worse (it cannot for the linear forms; guards Antoine).
-            if (ChiSquare(form, start, t, lnP, w) < ChiSquare(form, parameters, t, lnP, w))
-            {
-                parameters = start;
-                stop += " (linearised start kept)";
-            }
+            (parameters, iterations, stop) = Minimise(form, start, t, lnP, w);
         }
         else
         {
@@ -138,6 +114,90 @@ public static class VapourPressureFitter
             : throw new InvalidInputException("data", data.Count, $"{data.Count} points are too few to choose a form by AICc (the two-parameter form needs at least 5)");
     }
 
+    /// <summary>Levenberg–Marquardt (MathNet.Numerics) from <paramref name="start"/>, keeping
+    /// the start if the minimiser made χ² worse.</summary>
+    /// <remarks>MathNet's weighted <c>NonlinearModel</c> turns a weight vector into a dense n×n
+    /// diagonal matrix (8 MB at 1 000 points, out of memory near 50 000). Instead the model handed
+    /// to it is the weighted residual itself, r_i(θ) = √w_i·(ln P(T_i; θ) − ln P_i), observed
+    /// as zero, with Jacobian rows √w_i·∂ln P/∂θ: the same sum of squares in linear memory. The
+    /// operations are those MathNet performs with a weight matrix, (ln P_i − f_i)·√w_i and
+    /// J_ij·√w_i, so the iterates are the same to the last bit.</remarks>
+    private static (double[] Parameters, int Iterations, string Stop) Minimise(VapourPressureForm form, double[] start, double[] t, double[] lnP, double[] w)
+    {
+        int n = t.Length;
+        double[] root = new double[n];
+        for (int i = 0; i < n; i++)
+        {
+            root[i] = Math.Sqrt(w[i]);
+        }
+
+        Vector<double> Residual(Vector<double> theta, Vector<double> x)
+        {
+            double[] th = [.. theta];
+            var r = new double[n];
+            for (int i = 0; i < n; i++)
+            {
+                r[i] = (form.LnPressure(t[i], th) - lnP[i]) * root[i];
+            }
+
+            return Vector<double>.Build.Dense(r);
+        }
+
+        Matrix<double> Jacobian(Vector<double> theta, Vector<double> x)
+        {
+            int p = theta.Count;
+            // Column-major, as MathNet stores a dense matrix.
+            var jac = new double[n * p];
+            var g = new double[p];
+            double[] th = [.. theta];
+            for (int i = 0; i < n; i++)
+            {
+                form.LnPressureGradient(t[i], th, g);
+                for (int j = 0; j < p; j++)
+                {
+                    jac[j * n + i] = g[j] * root[i];
+                }
+            }
+
+            return Matrix<double>.Build.Dense(n, p, jac);
+        }
+
+        // The observed x are not used by the residual (it reads t directly); MathNet needs them only for their count.
+        var objective = ObjectiveFunction.NonlinearModel(Residual, Jacobian,
+            Vector<double>.Build.DenseOfArray(t), Vector<double>.Build.Dense(n));
+        // Parameter scales from the start: the forms mix parameters of very different size
+        // (Riedel's D ~ 1e-18 beside A ~ 10), and LM works in scaled steps.
+        double[] scales = [.. start.Select(v => Math.Abs(v) > 0 ? Math.Abs(v) : 1)];
+        var minimizer = new LevenbergMarquardtMinimizer(1e-3, 1e-15, 1e-15, 1e-15, 1000);
+        var result = minimizer.FindMinimum(objective, start, null, null, scales, null);
+        double[] parameters = [.. result.MinimizingPoint];
+        int iterations = Math.Max(result.Iterations, 0);
+        string stop = result.ReasonForExit.ToString();
+        // Keep the start if LM made it worse (guards Antoine, whose start is a scan).
+        if (ChiSquare(form, start, t, lnP, w) < ChiSquare(form, parameters, t, lnP, w))
+        {
+            parameters = start;
+            stop += " (linearised start kept)";
+        }
+
+        return (parameters, iterations, stop);
+    }
+
+    /// <summary>The data in increasing temperature: a copy as given when already in order (a
+    /// file read by the command line is), else a stable sort.</summary>
+    private static VapourPressurePoint[] SortedByTemperature(IReadOnlyList<VapourPressurePoint> data)
+    {
+        var points = new VapourPressurePoint[data.Count];
+        bool sorted = true;
+        for (int i = 0; i < points.Length; i++)
+        {
+            points[i] = data[i] ?? throw new ArgumentNullException(nameof(data), $"point {i} is null");
+            sorted &= i == 0 || !(points[i].Temperature < points[i - 1].Temperature);
+        }
+
+        return sorted ? points : [.. points.OrderBy(d => d.Temperature)];
+    }
+
     private static double ChiSquare(VapourPressureForm form, IReadOnlyList<double> parameters, double[] t, double[] lnP, double[] w)
     {
         double sum = 0;
@@ -159,7 +219,9 @@ public static class VapourPressureFitter
             return cov;
         }
 
-        var jtwj = Matrix<double>.Build.Dense(p, p);
+        // Accumulated in a plain array (the MathNet indexer costs more than the product), in the
+        // same order as before.
+        var jtwj = new double[p, p];
         var g = new double[p];
         for (int i = 0; i < t.Length; i++)
         {

@@ -57,6 +57,10 @@ public sealed class WagnerForm : VapourPressureForm
     /// <inheritdoc />
     public override double UpperLimit => CriticalTemperature;
 
+    /// <inheritdoc />
+    /// <remarks>Linear in the a_i because Tc and Pc are given, not fitted.</remarks>
+    public override bool IsLinearInParameters => true;
+
     private (double S, double S1, double S2) Sums(double t, IReadOnlyList<double> p)
     {
         double tau = 1 - t / CriticalTemperature;
@@ -72,9 +76,23 @@ public sealed class WagnerForm : VapourPressureForm
         return (s, s1, s2);
     }
 
+    /// <summary>S alone, summed exactly as in <see cref="Sums"/> (ln P is evaluated at every
+    /// point several times per fit; its derivatives are not needed there).</summary>
+    private double Sum(double t, IReadOnlyList<double> p)
+    {
+        double tau = 1 - t / CriticalTemperature;
+        double s = 0;
+        for (int i = 0; i < _exponents.Length; i++)
+        {
+            s += p[i] * Math.Pow(tau, _exponents[i]);
+        }
+
+        return s;
+    }
+
     /// <inheritdoc />
     public override double LnPressure(double t, IReadOnlyList<double> p)
-        => Math.Log(CriticalPressure) + CriticalTemperature / t * Sums(t, p).S;
+        => Math.Log(CriticalPressure) + CriticalTemperature / t * Sum(t, p);
 
     /// <inheritdoc />
     public override double Slope(double t, IReadOnlyList<double> p)
