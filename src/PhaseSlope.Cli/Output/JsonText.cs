@@ -1,4 +1,4 @@
-using System.Text;
+using System.Globalization;
 using System.Text.Encodings.Web;
 using System.Text.Json;
 
@@ -19,12 +19,23 @@ internal static class JsonText
     /// the text with a final line break.</summary>
     public static string Write(Action<Utf8JsonWriter> write)
     {
-        using var stream = new MemoryStream();
-        using (var json = new Utf8JsonWriter(stream, Options))
+        using var text = new StringWriter(CultureInfo.InvariantCulture);
+        Write(text, write);
+        return text.ToString();
+    }
+
+    /// <summary>Runs <paramref name="write"/> on a writer with <see cref="Options"/> that streams
+    /// its text, then a final line break, to <paramref name="output"/> in blocks of a few
+    /// kilobytes (for results too long to hold as one string).</summary>
+    public static void Write(TextWriter output, Action<Utf8JsonWriter> write)
+    {
+        var buffer = new Utf8TextBufferWriter(output);
+        using (var json = new Utf8JsonWriter(buffer, Options))
         {
             write(json);
         }
 
-        return Encoding.UTF8.GetString(stream.ToArray()) + Environment.NewLine;
+        buffer.Complete();
+        output.Write(Environment.NewLine);
     }
 }
