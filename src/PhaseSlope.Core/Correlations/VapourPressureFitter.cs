@@ -116,55 +116,12 @@ public static class VapourPressureFitter
 
     /// <summary>Levenberg–Marquardt (MathNet.Numerics) from <paramref name="start"/>, keeping
     /// the start if the minimiser made χ² worse.</summary>
-    /// <remarks>MathNet's weighted <c>NonlinearModel</c> turns a weight vector into a dense n×n
-    /// diagonal matrix (8 MB at 1 000 points, out of memory near 50 000). Instead the model handed
-    /// to it is the weighted residual itself, r_i(θ) = √w_i·(ln P(T_i; θ) − ln P_i), observed
-    /// as zero, with Jacobian rows √w_i·∂ln P/∂θ: the same sum of squares in linear memory. The
-    /// operations are those MathNet performs with a weight matrix, (ln P_i − f_i)·√w_i and
-    /// J_ij·√w_i, so the iterates are the same to the last bit.</remarks>
+    /// <remarks>The objective is <see cref="WeightedLnPressureObjective"/>: MathNet's weighted
+    /// least squares in ln P, with its sums accumulated point by point instead of through an n×n
+    /// weight matrix and n×p Jacobians (see there why).</remarks>
     private static (double[] Parameters, int Iterations, string Stop) Minimise(VapourPressureForm form, double[] start, double[] t, double[] lnP, double[] w)
     {
-        int n = t.Length;
-        double[] root = new double[n];
-        for (int i = 0; i < n; i++)
-        {
-            root[i] = Math.Sqrt(w[i]);
-        }
-
-        Vector<double> Residual(Vector<double> theta, Vector<double> x)
-        {
-            double[] th = [.. theta];
-            var r = new double[n];
-            for (int i = 0; i < n; i++)
-            {
-                r[i] = (form.LnPressure(t[i], th) - lnP[i]) * root[i];
-            }
-
-            return Vector<double>.Build.Dense(r);
-        }
-
-        Matrix<double> Jacobian(Vector<double> theta, Vector<double> x)
-        {
-            int p = theta.Count;
-            // Column-major, as MathNet stores a dense matrix.
-            var jac = new double[n * p];
-            var g = new double[p];
-            double[] th = [.. theta];
-            for (int i = 0; i < n; i++)
-            {
-                form.LnPressureGradient(t[i], th, g);
-                for (int j = 0; j < p; j++)
-                {
-                    jac[j * n + i] = g[j] * root[i];
-                }
-            }
-
-            return Matrix<double>.Build.Dense(n, p, jac);
-        }
-
-        // The observed x are not used by the residual (it reads t directly); MathNet needs them only for their count.
-        var objective = ObjectiveFunction.NonlinearModel(Residual, Jacobian,
-            Vector<double>.Build.DenseOfArray(t), Vector<double>.Build.Dense(n));
+        var objective = new WeightedLnPressureObjective(form, t, lnP, w);
         // Parameter scales from the start: the forms mix parameters of very different size
         // (Riedel's D ~ 1e-18 beside A ~ 10), and LM works in scaled steps.
         double[] scales = [.. start.Select(v => Math.Abs(v) > 0 ? Math.Abs(v) : 1)];

@@ -56,7 +56,7 @@ public abstract class VapourPressureForm
     {
         int n = temperatures.Count;
         int m = basis.Length;
-        // Column-major storage handed to MathNet without a copy.
+        // Column-major, as MathNet's provider takes a matrix.
         var a = new double[n * m];
         var y = new double[n];
         for (int i = 0; i < n; i++)
@@ -94,9 +94,14 @@ public abstract class VapourPressureForm
             }
         }
 
-        var matrix = MathNet.Numerics.LinearAlgebra.Matrix<double>.Build.Dense(n, m, a);
-        var x = matrix.QR(MathNet.Numerics.LinearAlgebra.Factorization.QRMethod.Thin)
-            .Solve(MathNet.Numerics.LinearAlgebra.Vector<double>.Build.Dense(y));
+        // The thin QR of MathNet's provider, in place: Matrix.QR(QRMethod.Thin) would first clone
+        // the n×m matrix (48 MB at a million points and six parameters) and then do exactly this.
+        var provider = MathNet.Numerics.Providers.LinearAlgebra.LinearAlgebraControl.Provider;
+        var r = new double[m * m];
+        var tau = new double[m];
+        provider.ThinQRFactor(a, n, m, r, tau);
+        var x = new double[m];
+        provider.QRSolveFactored(a, r, n, m, tau, y, 1, x, MathNet.Numerics.LinearAlgebra.Factorization.QRMethod.Thin);
         var result = new double[m];
         for (int j = 0; j < m; j++)
         {
