@@ -123,8 +123,7 @@ public sealed class AntoineForm : VapourPressureForm
     /// centred closed form of a two-parameter fit.</summary>
     /// <remarks>Written out rather than by a MathNet QR per candidate: the scan has 101
     /// candidates, and 101 QR factorisations of an n×2 matrix allocate ~9 kB per data point
-    /// (1 GB of short-lived arrays for 100 000 points, a peak of ~1 GB resident for a
-    /// 1 000 000-row file); these sums allocate nothing. Centring keeps the sums accurate, and
+    /// (about 1 GB of short-lived arrays per fit to 100 000 points); these sums allocate nothing. Centring keeps the sums accurate, and
     /// only the comparison between candidates uses them: χ² is stationary at the best line, so
     /// its rounding differs from the QR's only in the second order.</remarks>
     private static double LineMisfit(IReadOnlyList<double> t, IReadOnlyList<double> lnP, IReadOnlyList<double> w, double c)

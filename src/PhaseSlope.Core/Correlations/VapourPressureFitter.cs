@@ -4,9 +4,12 @@ using PhaseSlope.Core.Errors;
 
 namespace PhaseSlope.Core.Correlations;
 
-/// <summary>Weighted nonlinear least squares of vapour-pressure forms in ln P (Levenberg–Marquardt
-/// from MathNet.Numerics), started from each form's linearised fit, and selection among forms by
+/// <summary>Weighted least squares of vapour-pressure forms in ln P, and selection among forms by
 /// the corrected Akaike information criterion.</summary>
+/// <remarks>A form linear in its parameters (<see cref="VapourPressureForm.IsLinearInParameters"/>)
+/// is solved directly by its weighted linear least squares (thin QR); the others by
+/// Levenberg–Marquardt from MathNet.Numerics, started from the form's linearised fit. Time and
+/// memory are linear in the number of points (docs/performance-fitting.md).</remarks>
 public static class VapourPressureFitter
 {
     /// <summary>The <see cref="VapourPressureFit.StopReason"/> of a form solved directly by linear
@@ -123,7 +126,7 @@ public static class VapourPressureFitter
     {
         var objective = new WeightedLnPressureObjective(form, t, lnP, w);
         // Parameter scales from the start: the forms mix parameters of very different size
-        // (Riedel's D ~ 1e-18 beside A ~ 10), and LM works in scaled steps.
+        // (Antoine's B ~ 4000 beside C ~ −40), and LM works in scaled steps.
         double[] scales = [.. start.Select(v => Math.Abs(v) > 0 ? Math.Abs(v) : 1)];
         var minimizer = new LevenbergMarquardtMinimizer(1e-3, 1e-15, 1e-15, 1e-15, 1000);
         var result = minimizer.FindMinimum(objective, start, null, null, scales, null);
