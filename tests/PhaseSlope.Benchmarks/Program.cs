@@ -1,18 +1,27 @@
+using System.Globalization;
 using BenchmarkDotNet.Running;
 
 namespace PhaseSlope.Benchmarks;
 
 /// <summary>Entry point: `dotnet run -c Release --project tests/PhaseSlope.Benchmarks -- --filter '*'`
-/// runs every benchmark, `-- counts` prints model evaluations per operation; see
-/// docs/performance.md for the results and how to read them.</summary>
+/// runs every benchmark; see docs/performance.md for the results and how to read them.
+/// `-- counts` instead prints model evaluations per operation (machine-independent), and
+/// `-- --write-fit-csv PATH N` writes N generated water vapour pressures as a data file
+/// (see <see cref="GeneratedSaturationData"/>), for timing `phaseslope fit` as a process.</summary>
 public static class Program
 {
-    /// <summary>Runs the benchmarks chosen on the command line.</summary>
+    /// <summary>Runs the benchmarks chosen on the command line, prints the counts, or writes the data file.</summary>
     public static void Main(string[] args)
     {
         if (args is ["counts"])
         {
             Counts.Print(Console.Out);
+            return;
+        }
+
+        if (args is ["--write-fit-csv", string path, string count])
+        {
+            GeneratedSaturationData.WriteCsv(path, int.Parse(count, CultureInfo.InvariantCulture));
             return;
         }
 

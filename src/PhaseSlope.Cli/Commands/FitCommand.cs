@@ -22,7 +22,7 @@ internal static class FitCommand
             var forms = options.Forms(parse, fluid, out bool auto);
             var data = options.ReadData(parse);
             var fits = CorrelationOptions.Fit(forms, auto, data);
-            io.Out.Write(FitWriter.Fit(fits[0], fits, format));
+            FitWriter.Fit(io.Out, fits[0], fits, format);
         }));
         return command;
     }

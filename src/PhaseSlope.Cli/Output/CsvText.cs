@@ -10,18 +10,21 @@ internal static class CsvText
     public static string Write(IReadOnlyList<string> header, IEnumerable<IReadOnlyList<string>> rows)
     {
         using var text = new StringWriter(CultureInfo.InvariantCulture);
-        var options = new CsvWriterOptions { FormatProvider = CultureInfo.InvariantCulture, NewLine = "\n" };
-        using (var csv = CsvWriter.Create(text, options, true))
-        {
-            csv.WriteRecord([.. header]);
-            foreach (var row in rows)
-            {
-                csv.WriteRecord([.. row]);
-            }
+        Write(text, header, rows);
+        return text.ToString();
+    }
 
-            csv.Flush();
+    /// <summary>Writes the CSV text to <paramref name="output"/> row by row (left open).</summary>
+    public static void Write(TextWriter output, IReadOnlyList<string> header, IEnumerable<IReadOnlyList<string>> rows)
+    {
+        var options = new CsvWriterOptions { FormatProvider = CultureInfo.InvariantCulture, NewLine = "\n" };
+        using var csv = CsvWriter.Create(output, options, true);
+        csv.WriteRecord([.. header]);
+        foreach (var row in rows)
+        {
+            csv.WriteRecord([.. row]);
         }
 
-        return text.ToString();
+        csv.Flush();
     }
 }

@@ -7,39 +7,65 @@ namespace PhaseSlope.Cli.Output;
 /// <summary>Renders fitted correlations (<c>fit</c>) and latent heats from data (<c>latent</c>).</summary>
 internal static class FitWriter
 {
-    /// <summary>Renders a fit; <paramref name="candidates"/> are the other forms tried by auto.</summary>
-    public static string Fit(VapourPressureFit fit, IReadOnlyList<VapourPressureFit> candidates, OutputFormat format)
-        => format switch
+    /// <summary>Writes a fit to <paramref name="output"/>; <paramref name="candidates"/> are the
+    /// other forms tried by auto.</summary>
+    /// <remarks>The text streams out in chunks as it is made (a fit to a million points has a
+    /// million residual rows), rather than being built as one string first.</remarks>
+    public static void Fit(TextWriter output, VapourPressureFit fit, IReadOnlyList<VapourPressureFit> candidates, OutputFormat format)
+    {
+        using var chunked = new ChunkedTextWriter(output);
+        switch (format)
         {
-            OutputFormat.Json => JsonText.Write(json =>
-            {
-                json.WriteStartObject();
-                WriteFit(json, fit);
-                json.WriteStartArray("residuals");
-                foreach (var (point, i) in fit.Data.Select((p, i) => (p, i)))
-                {
-                    json.WriteStartObject();
-                    json.WriteNumber("temperature_K", point.Temperature);
-                    json.WriteNumber("pressure_Pa", point.Pressure);
-                    json.WriteNumber("fitted_pressure_Pa", fit.Pressure(point.Temperature));
-                    json.WriteNumber("deviation_percent", fit.DeviationsPercent[i]);
-                    json.WriteNumber("ln_pressure_residual", fit.Residuals[i]);
-                    json.WriteEndObject();
-                }
+            case OutputFormat.Json:
+                FitJson(chunked, fit, candidates);
+                break;
+            case OutputFormat.Csv:
+                FitCsv(chunked, fit);
+                break;
+            default:
+                FitTable(chunked, fit, candidates);
+                break;
+        }
+    }
 
-                json.WriteEndArray();
-                WriteCandidates(json, candidates);
+    private static void FitJson(TextWriter output, VapourPressureFit fit, IReadOnlyList<VapourPressureFit> candidates)
+        => JsonText.Write(output, json =>
+        {
+            json.WriteStartObject();
+            WriteFit(json, fit);
+            json.WriteStartArray("residuals");
+            // Each list is computed once (the properties compute it on every access).
+            var deviations = fit.DeviationsPercent;
+            var residuals = fit.Residuals;
+            for (int i = 0; i < fit.Data.Count; i++)
+            {
+                var point = fit.Data[i];
+                json.WriteStartObject();
+                json.WriteNumber("temperature_K", point.Temperature);
+                json.WriteNumber("pressure_Pa", point.Pressure);
+                json.WriteNumber("fitted_pressure_Pa", fit.Pressure(point.Temperature));
+                json.WriteNumber("deviation_percent", deviations[i]);
+                json.WriteNumber("ln_pressure_residual", residuals[i]);
                 json.WriteEndObject();
-            }),
-            OutputFormat.Csv => CsvText.Write(
-                ["temperature_K", "pressure_Pa", "fitted_pressure_Pa", "deviation_percent", "ln_pressure_residual"],
-                fit.Data.Select((p, i) => new[]
-                {
-                    NumberText.RoundTrip(p.Temperature), NumberText.RoundTrip(p.Pressure), NumberText.RoundTrip(fit.Pressure(p.Temperature)),
-                    NumberText.RoundTrip(fit.DeviationsPercent[i]), NumberText.RoundTrip(fit.Residuals[i]),
-                })),
-            _ => FitTable(fit, candidates),
-        };
+            }
+
+            json.WriteEndArray();
+            WriteCandidates(json, candidates);
+            json.WriteEndObject();
+        });
+
+    private static void FitCsv(TextWriter output, VapourPressureFit fit)
+    {
+        var deviations = fit.DeviationsPercent;
+        var residuals = fit.Residuals;
+        CsvText.Write(output,
+            ["temperature_K", "pressure_Pa", "fitted_pressure_Pa", "deviation_percent", "ln_pressure_residual"],
+            fit.Data.Select((p, i) => new[]
+            {
+                NumberText.RoundTrip(p.Temperature), NumberText.RoundTrip(p.Pressure), NumberText.RoundTrip(fit.Pressure(p.Temperature)),
+                NumberText.RoundTrip(deviations[i]), NumberText.RoundTrip(residuals[i]),
+            }));
+    }
 
     /// <summary>Renders latent heats.</summary>
     public static string Latent(VapourPressureFit fit, VolumeChangeModel model, IReadOnlyList<LatentHeatPoint> points, IReadOnlyList<VapourPressureFit> candidates, OutputFormat format)
@@ -168,7 +194,7 @@ internal static class FitWriter
         json.WriteEndArray();
     }
 
-    private static string FitTable(VapourPressureFit fit, IReadOnlyList<VapourPressureFit> candidates)
+    private static void FitTable(TextWriter output, VapourPressureFit fit, IReadOnlyList<VapourPressureFit> candidates)
     {
         var text = new StringBuilder();
         text.AppendLine($"form: {fit.Form.Id}");
@@ -193,14 +219,15 @@ internal static class FitWriter
             + (fit.ReducedChiSquare is double r ? $", reduced {NumberText.Table(r)}" : "")
             + (fit.Aicc is double a ? $", AICc {NumberText.Table(a)}" : ""));
         text.AppendLine();
-        var residuals = new TextTable(["T [K]", "P [kPa]", "P fit [kPa]", "deviation [%]"], [true, true, true, true]);
-        for (int i = 0; i < fit.Data.Count; i++)
+        output.Write(text);
+        text.Clear();
+        // One row per point, made when written (twice: the columns are measured first).
+        var deviations = fit.DeviationsPercent;
+        TextTable.Write(output, ["T [K]", "P [kPa]", "P fit [kPa]", "deviation [%]"], [true, true, true, true], fit.Data.Count, i =>
         {
             var p = fit.Data[i];
-            residuals.Add(NumberText.Table(p.Temperature), NumberText.Table(p.Pressure / 1e3), NumberText.Table(fit.Pressure(p.Temperature) / 1e3), NumberText.Table(fit.DeviationsPercent[i]));
-        }
-
-        text.Append(residuals.Render());
+            return [NumberText.Table(p.Temperature), NumberText.Table(p.Pressure / 1e3), NumberText.Table(fit.Pressure(p.Temperature) / 1e3), NumberText.Table(deviations[i])];
+        });
         if (candidates.Count > 1)
         {
             text.AppendLine();
@@ -214,7 +241,7 @@ internal static class FitWriter
             text.Append(table.Render());
         }
 
-        return text.ToString();
+        output.Write(text);
     }
 
     private static string LatentTable(VapourPressureFit fit, VolumeChangeModel model, IReadOnlyList<LatentHeatPoint> points)

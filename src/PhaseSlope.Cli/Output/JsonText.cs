@@ -1,4 +1,4 @@
-using System.Text;
+using System.Globalization;
 using System.Text.Encodings.Web;
 using System.Text.Json;
 
@@ -17,20 +17,39 @@ internal static class JsonText
 
     /// <summary>Runs <paramref name="write"/> on a writer with <see cref="Options"/> and returns
     /// the text with a final line break.</summary>
-    public static string Write(Action<Utf8JsonWriter> write) => Write(write, Options) + Environment.NewLine;
+    public static string Write(Action<Utf8JsonWriter> write)
+    {
+        using var text = new StringWriter(CultureInfo.InvariantCulture);
+        Write(text, write);
+        return text.ToString();
+    }
 
     /// <summary>Like <see cref="Write(Action{Utf8JsonWriter})"/> on one line, without the line
     /// break (for diagnostics lines on standard error).</summary>
-    public static string WriteLine(Action<Utf8JsonWriter> write) => Write(write, Options with { Indented = false });
-
-    private static string Write(Action<Utf8JsonWriter> write, JsonWriterOptions options)
+    public static string WriteLine(Action<Utf8JsonWriter> write)
     {
-        using var stream = new MemoryStream();
-        using (var json = new Utf8JsonWriter(stream, options))
+        using var text = new StringWriter(CultureInfo.InvariantCulture);
+        Write(text, write, Options with { Indented = false });
+        return text.ToString();
+    }
+
+    /// <summary>Runs <paramref name="write"/> on a writer with <see cref="Options"/> that streams
+    /// its text, then a final line break, to <paramref name="output"/> in blocks of a few
+    /// kilobytes (for results too long to hold as one string).</summary>
+    public static void Write(TextWriter output, Action<Utf8JsonWriter> write)
+    {
+        Write(output, write, Options);
+        output.Write(Environment.NewLine);
+    }
+
+    private static void Write(TextWriter output, Action<Utf8JsonWriter> write, JsonWriterOptions options)
+    {
+        var buffer = new Utf8TextBufferWriter(output);
+        using (var json = new Utf8JsonWriter(buffer, options))
         {
             write(json);
         }
 
-        return Encoding.UTF8.GetString(stream.ToArray());
+        buffer.Complete();
     }
 }

@@ -1,4 +1,4 @@
-using System.Text;
+using System.Globalization;
 
 namespace PhaseSlope.Cli.Output;
 
@@ -30,26 +30,49 @@ internal sealed class TextTable
     /// <summary>Renders the table with two spaces between columns and a rule under the header.</summary>
     public string Render()
     {
-        int[] width = new int[_headers.Length];
-        for (int c = 0; c < width.Length; c++)
-        {
-            width[c] = _rows.Select(r => r[c].Length).Prepend(_headers[c].Length).Max();
-        }
-
-        var text = new StringBuilder();
-        AppendRow(text, _headers, width);
-        text.AppendLine(string.Join("  ", width.Select(w => new string('-', w))));
-        foreach (var row in _rows)
-        {
-            AppendRow(text, row, width);
-        }
-
+        using var text = new StringWriter(CultureInfo.InvariantCulture);
+        Write(text, _headers, _numeric, _rows.Count, i => _rows[i]);
         return text.ToString();
     }
 
-    private void AppendRow(StringBuilder text, string[] cells, int[] width)
+    /// <summary>Writes a table as <see cref="Render"/> does, with rows made on demand: for a
+    /// table too long to hold, <paramref name="row"/> is called twice per row, once to measure the
+    /// columns and once to write, and no row is kept.</summary>
+    /// <param name="output">Where the text goes.</param>
+    /// <param name="headers">The column headers.</param>
+    /// <param name="numeric">Whether column i is right-aligned.</param>
+    /// <param name="count">Number of rows.</param>
+    /// <param name="row">The cells of row i, one per header; the same on both calls.</param>
+    public static void Write(TextWriter output, IReadOnlyList<string> headers, IReadOnlyList<bool> numeric, int count, Func<int, IReadOnlyList<string>> row)
     {
-        var padded = cells.Select((cell, c) => _numeric[c] ? cell.PadLeft(width[c]) : cell.PadRight(width[c]));
-        text.AppendLine(string.Join("  ", padded).TrimEnd());
+        int[] width = [.. headers.Select(h => h.Length)];
+        for (int i = 0; i < count; i++)
+        {
+            var cells = row(i);
+            if (cells.Count != headers.Count)
+            {
+                throw new ArgumentException($"row {i} has {cells.Count} cells, table has {headers.Count} columns", nameof(row));
+            }
+
+            for (int c = 0; c < width.Length; c++)
+            {
+                width[c] = Math.Max(width[c], cells[c].Length);
+            }
+        }
+
+        WriteRow(output, headers, numeric, width);
+        output.Write(string.Join("  ", width.Select(w => new string('-', w))));
+        output.Write(Environment.NewLine);
+        for (int i = 0; i < count; i++)
+        {
+            WriteRow(output, row(i), numeric, width);
+        }
+    }
+
+    private static void WriteRow(TextWriter output, IReadOnlyList<string> cells, IReadOnlyList<bool> numeric, int[] width)
+    {
+        var padded = cells.Select((cell, c) => numeric[c] ? cell.PadLeft(width[c]) : cell.PadRight(width[c]));
+        output.Write(string.Join("  ", padded).TrimEnd());
+        output.Write(Environment.NewLine);
     }
 }

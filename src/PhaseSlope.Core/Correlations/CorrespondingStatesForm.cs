@@ -79,36 +79,18 @@ public sealed class CorrespondingStatesForm : VapourPressureForm
         double w = AcentricFactor;
         if (!_ambroseWalton)
         {
-            // f0 = 5.92714 − 6.09648/Tr − 1.28862 ln Tr + 0.169347 Tr⁶ (and f1 likewise).
-            var (f0, f1) = CorrespondingStates.LeeKeslerTerms(tr);
-            double d0 = 6.09648 / (tr * tr) - 1.28862 / tr + 6 * 0.169347 * Math.Pow(tr, 5);
-            double d1 = 15.6875 / (tr * tr) - 13.4721 / tr + 6 * 0.43577 * Math.Pow(tr, 5);
-            double dd0 = -2 * 6.09648 / (tr * tr * tr) + 1.28862 / (tr * tr) + 30 * 0.169347 * Math.Pow(tr, 4);
-            double dd1 = -2 * 15.6875 / (tr * tr * tr) + 13.4721 / (tr * tr) + 30 * 0.43577 * Math.Pow(tr, 4);
+            var (f0, d0, dd0) = CorrespondingStates.LeeKeslerTerm(0, tr);
+            var (f1, d1, dd1) = CorrespondingStates.LeeKeslerTerm(1, tr);
             return (f0 + w * f1, d0 + w * d1, dd0 + w * dd1);
         }
 
-        // f_k = g_k(τ)/Tr with g_k = Σ c τ^e, τ = 1 − Tr: f′ = −g′/Tr − g/Tr², f″ = g″/Tr + 2g′/Tr² + 2g/Tr³.
-        double[] e = [1, 1.5, 2.5, 5];
-        double[][] c =
-        [
-            [-5.97616, 1.29874, -0.60394, -1.06841],
-            [-5.03365, 1.11505, -5.41217, -7.46628],
-            [-0.64771, 2.41539, -4.26979, 3.25259],
-        ];
+        // f_k = g_k(τ)/Tr, τ = 1 − Tr: f′ = −g′/Tr − g/Tr², f″ = g″/Tr + 2g′/Tr² + 2g/Tr³.
         double tau = 1 - tr;
         double value = 0, first = 0, second = 0;
         double[] weight = [1, w, w * w];
         for (int k = 0; k < 3; k++)
         {
-            double g = 0, g1 = 0, g2 = 0;
-            for (int i = 0; i < 4; i++)
-            {
-                g += c[k][i] * Math.Pow(tau, e[i]);
-                g1 += c[k][i] * e[i] * Math.Pow(tau, e[i] - 1);
-                g2 += c[k][i] * e[i] * (e[i] - 1) * Math.Pow(tau, e[i] - 2);
-            }
-
+            var (g, g1, g2) = CorrespondingStates.AmbroseWaltonSeries(k, tau);
             value += weight[k] * g / tr;
             first += weight[k] * (-g1 / tr - g / (tr * tr));
             second += weight[k] * (g2 / tr + 2 * g1 / (tr * tr) + 2 * g / (tr * tr * tr));

@@ -4,14 +4,12 @@ using PhaseSlope.Core.Errors;
 namespace PhaseSlope.Core.Correlations;
 
 /// <summary>Enthalpy of vaporization from a fitted vapour-pressure correlation through the
-/// Clapeyron equation, ΔH = T·Δv·dP/dT = R·T²·ΔZ·d ln P/dT.</summary>
+/// Clapeyron equation, ΔH = T·Δv·dP/dT = R·T²·ΔZ·d ln P/dT (<see cref="ClapeyronEquation"/>).</summary>
 /// <remarks>u(ΔH) = R·T²·ΔZ·u(d ln P/dT), the delta method on the fit covariance; the
 /// uncertainty of Δv itself (the volume model) is not included and is stated separately in
 /// docs/validation.md.</remarks>
 public sealed class LatentHeatEstimator
 {
-    private const double R = Constants.GasConstant;
-
     /// <summary>Creates the estimator.</summary>
     /// <param name="fit">The fitted correlation.</param>
     /// <param name="volumeModel">Where Δv comes from.</param>
@@ -81,7 +79,9 @@ public sealed class LatentHeatEstimator
             VolumeChangeModel.EquationOfState => Solver!.AtTemperature(temperature).CompressibilityChange,
             _ => Math.Sqrt(Math.Max(0, 1 - p / CriticalPressure!.Value / Math.Pow(temperature / CriticalTemperature!.Value, 3))),
         };
-        double factor = R * temperature * temperature * dz;
-        return new LatentHeatPoint(temperature, p, factor * slope, factor * Fit.SlopeStandardUncertainty(temperature), dz, !Fit.InRange(temperature));
+        return new LatentHeatPoint(temperature, p,
+            ClapeyronEquation.EnthalpyOfVaporization(temperature, slope, dz),
+            ClapeyronEquation.EnthalpyOfVaporization(temperature, Fit.SlopeStandardUncertainty(temperature), dz),
+            dz, !Fit.InRange(temperature));
     }
 }

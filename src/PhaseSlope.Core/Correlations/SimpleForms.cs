@@ -14,6 +14,9 @@ public sealed class ClausiusClapeyronForm : VapourPressureForm
     public override IReadOnlyList<string> ParameterNames { get; } = ["A", "B"];
 
     /// <inheritdoc />
+    public override bool IsLinearInParameters => true;
+
+    /// <inheritdoc />
     public override double LnPressure(double t, IReadOnlyList<double> p) => p[0] - p[1] / t;
 
     /// <inheritdoc />
@@ -96,32 +99,63 @@ public sealed class AntoineForm : VapourPressureForm
     public override double[] StartingValues(IReadOnlyList<double> t, IReadOnlyList<double> lnP, IReadOnlyList<double> w)
     {
         // For a fixed C the form is linear in A and B: scan C over the range handbook fits span
-        // (from −0.8·Tmin to +0.2·Tmin) and keep the best linear fit.
+        // (from −0.8·Tmin to +0.2·Tmin), keep the C whose best line fits best, and solve for A
+        // and B there by the QR of LinearFit.
         double tMin = t.Min();
         double bestC = 0;
         double bestSse = double.PositiveInfinity;
-        double[] best = [0, 0, 0];
         for (int k = 0; k <= 100; k++)
         {
             double c = tMin * (-0.8 + k / 100.0);
-            var ab = LinearFit(t, lnP, w, _ => 1, x => -1 / (x + c));
-            double sse = 0;
-            for (int i = 0; i < t.Count; i++)
-            {
-                double r = lnP[i] - (ab[0] - ab[1] / (t[i] + c));
-                sse += w[i] * r * r;
-            }
-
+            double sse = LineMisfit(t, lnP, w, c);
             if (sse < bestSse)
             {
                 bestSse = sse;
                 bestC = c;
-                best = [ab[0], ab[1], c];
             }
         }
 
-        best[2] = bestC;
-        return best;
+        var ab = LinearFit(t, lnP, w, _ => 1, x => -1 / (x + bestC));
+        return [ab[0], ab[1], bestC];
+    }
+
+    /// <summary>Weighted χ² of the best straight line ln P = A + B·x, x = −1/(T + C), by the
+    /// centred closed form of a two-parameter fit.</summary>
+    /// <remarks>Written out rather than by a MathNet QR per candidate: the scan has 101
+    /// candidates, and 101 QR factorisations of an n×2 matrix allocate ~9 kB per data point
+    /// (about 1 GB of short-lived arrays per fit to 100 000 points); these sums allocate nothing. Centring keeps the sums accurate, and
+    /// only the comparison between candidates uses them: χ² is stationary at the best line, so
+    /// its rounding differs from the QR's only in the second order.</remarks>
+    private static double LineMisfit(IReadOnlyList<double> t, IReadOnlyList<double> lnP, IReadOnlyList<double> w, double c)
+    {
+        int n = t.Count;
+        double sw = 0, sx = 0, sy = 0;
+        for (int i = 0; i < n; i++)
+        {
+            double x = -1 / (t[i] + c);
+            sw += w[i];
+            sx += w[i] * x;
+            sy += w[i] * lnP[i];
+        }
+
+        double xMean = sx / sw, yMean = sy / sw;
+        double sxx = 0, sxy = 0;
+        for (int i = 0; i < n; i++)
+        {
+            double dx = -1 / (t[i] + c) - xMean;
+            sxx += w[i] * dx * dx;
+            sxy += w[i] * dx * (lnP[i] - yMean);
+        }
+
+        double slope = sxy / sxx;
+        double sse = 0;
+        for (int i = 0; i < n; i++)
+        {
+            double r = lnP[i] - yMean - slope * (-1 / (t[i] + c) - xMean);
+            sse += w[i] * r * r;
+        }
+
+        return sse;
     }
 }
 
@@ -137,6 +171,9 @@ public sealed class KirchhoffForm : VapourPressureForm
 
     /// <inheritdoc />
     public override IReadOnlyList<string> ParameterNames { get; } = ["A", "B", "C"];
+
+    /// <inheritdoc />
+    public override bool IsLinearInParameters => true;
 
     /// <inheritdoc />
     public override double LnPressure(double t, IReadOnlyList<double> p) => p[0] + p[1] / t + p[2] * Math.Log(t);
@@ -180,6 +217,9 @@ public sealed class RiedelForm : VapourPressureForm
 
     /// <inheritdoc />
     public override IReadOnlyList<string> ParameterNames { get; } = ["A", "B", "C", "D"];
+
+    /// <inheritdoc />
+    public override bool IsLinearInParameters => true;
 
     /// <inheritdoc />
     public override double LnPressure(double t, IReadOnlyList<double> p) => p[0] + p[1] / t + p[2] * Math.Log(t) + p[3] * Math.Pow(t, 6);

@@ -36,10 +36,12 @@ public sealed record VapourPressureFit
     /// with K = p + 1 (the parameters and the scatter); null when n ≤ K + 1.</summary>
     public required double? Aicc { get; init; }
 
-    /// <summary>Iterations of the Levenberg–Marquardt minimiser (0 for predictive forms).</summary>
+    /// <summary>Iterations of the Levenberg–Marquardt minimiser (0 for predictive forms and for
+    /// forms linear in their parameters, which are solved directly).</summary>
     public required int Iterations { get; init; }
 
-    /// <summary>Why the minimiser stopped.</summary>
+    /// <summary>Why the minimiser stopped, <see cref="VapourPressureFitter.DirectLinearSolve"/> for a
+    /// form solved by linear least squares, or "no parameters to fit".</summary>
     public required string StopReason { get; init; }
 
     /// <summary>Degrees of freedom n − p.</summary>
@@ -85,9 +87,11 @@ public sealed record VapourPressureFit
     }
 
     /// <summary>Residual ln P_data − ln P_fit per point.</summary>
+    /// <remarks>Computed anew, for every point, on each access: take it once before a loop.</remarks>
     public IReadOnlyList<double> Residuals => [.. Data.Select(d => Math.Log(d.Pressure) - LnPressure(d.Temperature))];
 
     /// <summary>Deviation 100·(P_fit − P_data)/P_data per point, %.</summary>
+    /// <remarks>Computed anew, for every point, on each access: take it once before a loop.</remarks>
     public IReadOnlyList<double> DeviationsPercent => [.. Data.Select(d => 100 * (Pressure(d.Temperature) / d.Pressure - 1))];
 
     /// <summary>Average absolute deviation in P, %.</summary>

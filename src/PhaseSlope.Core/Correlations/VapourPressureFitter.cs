@@ -4,11 +4,18 @@ using PhaseSlope.Core.Errors;
 
 namespace PhaseSlope.Core.Correlations;
 
-/// <summary>Weighted nonlinear least squares of vapour-pressure forms in ln P (Levenberg–Marquardt
-/// from MathNet.Numerics), started from each form's linearised fit, and selection among forms by
+/// <summary>Weighted least squares of vapour-pressure forms in ln P, and selection among forms by
 /// the corrected Akaike information criterion.</summary>
+/// <remarks>A form linear in its parameters (<see cref="VapourPressureForm.IsLinearInParameters"/>)
+/// is solved directly by its weighted linear least squares (thin QR); the others by
+/// Levenberg–Marquardt from MathNet.Numerics, started from the form's linearised fit. Time and
+/// memory are linear in the number of points (docs/performance-fitting.md).</remarks>
 public static class VapourPressureFitter
 {
+    /// <summary>The <see cref="VapourPressureFit.StopReason"/> of a form solved directly by linear
+    /// least squares (<see cref="VapourPressureForm.IsLinearInParameters"/>).</summary>
+    public const string DirectLinearSolve = "direct linear least squares";
+
     /// <summary>Fits a form to data.</summary>
     /// <exception cref="InvalidInputException">Too few points for the form (it needs at least one
     /// more point than parameters), a duplicate temperature, or a point at or above the form's
@@ -17,7 +24,7 @@ public static class VapourPressureFitter
     {
         ArgumentNullException.ThrowIfNull(form);
         ArgumentNullException.ThrowIfNull(data);
-        var points = data.OrderBy(d => d.Temperature).ToArray();
+        var points = SortedByTemperature(data);
         int n = points.Length;
         int p = form.ParameterCount;
         if (n < Math.Max(p + 1, 1))
@@ -57,44 +64,16 @@ public static class VapourPressureFitter
         double[] parameters;
         int iterations = 0;
         string stop = "no parameters to fit";
-        if (p > 0)
+        if (p > 0 && form.IsLinearInParameters)
+        {
+            // ln P affine in θ: the weighted linear least-squares solution is the minimum itself.
+            parameters = form.StartingValues(t, lnP, w);
+            stop = DirectLinearSolve;
+        }
+        else if (p > 0)
         {
             double[] start = form.StartingValues(t, lnP, w);
-            Vector<double> Model(Vector<double> theta, Vector<double> x)
-                => Vector<double>.Build.Dense(x.Count, i => form.LnPressure(x[i], [.. theta]));
-            Matrix<double> Jacobian(Vector<double> theta, Vector<double> x)
-            {
-                var jac = Matrix<double>.Build.Dense(x.Count, theta.Count);
-                var g = new double[theta.Count];
-                double[] th = [.. theta];
-                for (int i = 0; i < x.Count; i++)
-                {
-                    form.LnPressureGradient(x[i], th, g);
-                    for (int j = 0; j < g.Length; j++)
-                    {
-                        jac[i, j] = g[j];
-                    }
-                }
-
-                return jac;
-            }
-
-            var objective = ObjectiveFunction.NonlinearModel(Model, Jacobian,
-                Vector<double>.Build.DenseOfArray(t), Vector<double>.Build.DenseOfArray(lnP), Vector<double>.Build.DenseOfArray(w));
-            // Parameter scales from the start: the forms mix parameters of very different size
-            // (Riedel's D ~ 1e-18 beside A ~ 10), and LM works in scaled steps.
-            double[] scales = [.. start.Select(v => Math.Abs(v) > 0 ? Math.Abs(v) : 1)];
-            var minimizer = new LevenbergMarquardtMinimizer(1e-3, 1e-15, 1e-15, 1e-15, 1000);
-            var result = minimizer.FindMinimum(objective, start, null, null, scales, null);
-            parameters = [.. result.MinimizingPoint];
-            iterations = Math.Max(result.Iterations, 0);
-            stop = result.ReasonForExit.ToString();
-            // Keep the start if LM made it worse (it cannot for the linear forms; guards Antoine).
-            if (ChiSquare(form, start, t, lnP, w) < ChiSquare(form, parameters, t, lnP, w))
-            {
-                parameters = start;
-                stop += " (linearised start kept)";
-            }
+            (parameters, iterations, stop) = Minimise(form, start, t, lnP, w);
         }
         else
         {
@@ -138,6 +117,47 @@ public static class VapourPressureFitter
             : throw new InvalidInputException("data", data.Count, $"{data.Count} points are too few to choose a form by AICc (the two-parameter form needs at least 5)");
     }
 
+    /// <summary>Levenberg–Marquardt (MathNet.Numerics) from <paramref name="start"/>, keeping
+    /// the start if the minimiser made χ² worse.</summary>
+    /// <remarks>The objective is <see cref="WeightedLnPressureObjective"/>: MathNet's weighted
+    /// least squares in ln P, with its sums accumulated point by point instead of through an n×n
+    /// weight matrix and n×p Jacobians (see there why).</remarks>
+    private static (double[] Parameters, int Iterations, string Stop) Minimise(VapourPressureForm form, double[] start, double[] t, double[] lnP, double[] w)
+    {
+        var objective = new WeightedLnPressureObjective(form, t, lnP, w);
+        // Parameter scales from the start: the forms mix parameters of very different size
+        // (Antoine's B ~ 4000 beside C ~ −40), and LM works in scaled steps.
+        double[] scales = [.. start.Select(v => Math.Abs(v) > 0 ? Math.Abs(v) : 1)];
+        var minimizer = new LevenbergMarquardtMinimizer(1e-3, 1e-15, 1e-15, 1e-15, 1000);
+        var result = minimizer.FindMinimum(objective, start, null, null, scales, null);
+        double[] parameters = [.. result.MinimizingPoint];
+        int iterations = Math.Max(result.Iterations, 0);
+        string stop = result.ReasonForExit.ToString();
+        // Keep the start if LM made it worse (guards Antoine, whose start is a scan).
+        if (ChiSquare(form, start, t, lnP, w) < ChiSquare(form, parameters, t, lnP, w))
+        {
+            parameters = start;
+            stop += " (linearised start kept)";
+        }
+
+        return (parameters, iterations, stop);
+    }
+
+    /// <summary>The data in increasing temperature: a copy as given when already in order (a
+    /// file read by the command line is), else a stable sort.</summary>
+    private static VapourPressurePoint[] SortedByTemperature(IReadOnlyList<VapourPressurePoint> data)
+    {
+        var points = new VapourPressurePoint[data.Count];
+        bool sorted = true;
+        for (int i = 0; i < points.Length; i++)
+        {
+            points[i] = data[i] ?? throw new ArgumentNullException(nameof(data), $"point {i} is null");
+            sorted &= i == 0 || !(points[i].Temperature < points[i - 1].Temperature);
+        }
+
+        return sorted ? points : [.. points.OrderBy(d => d.Temperature)];
+    }
+
     private static double ChiSquare(VapourPressureForm form, IReadOnlyList<double> parameters, double[] t, double[] lnP, double[] w)
     {
         double sum = 0;
@@ -159,7 +179,9 @@ public static class VapourPressureFitter
             return cov;
         }
 
-        var jtwj = Matrix<double>.Build.Dense(p, p);
+        // Accumulated in a plain array (the MathNet indexer costs more than the product), in the
+        // same order as before.
+        var jtwj = new double[p, p];
         var g = new double[p];
         for (int i = 0; i < t.Length; i++)
         {

@@ -37,41 +37,77 @@ public abstract class VapourPressureForm
     /// <summary>∂(d ln P/dT)/∂θ_j at T, written into <paramref name="gradient"/>.</summary>
     public abstract void SlopeGradient(double temperature, IReadOnlyList<double> parameters, Span<double> gradient);
 
-    /// <summary>Starting values for a fit to (T, ln P) with weights, from a linearised fit.</summary>
+    /// <summary>True when ln P is affine in the parameters, ln P = c(T) + Σ θ_j·φ_j(T): then
+    /// <see cref="StartingValues"/> returns the exact weighted least-squares solution, which the
+    /// fitter uses as it is, without iterating.</summary>
+    public virtual bool IsLinearInParameters => false;
+
+    /// <summary>Starting values for a fit to (T, ln P) with weights, from a linearised fit; for a
+    /// form that is <see cref="IsLinearInParameters"/>, the weighted least-squares solution itself.</summary>
     public abstract double[] StartingValues(IReadOnlyList<double> temperatures, IReadOnlyList<double> lnPressures, IReadOnlyList<double> weights);
 
     /// <summary>Weighted linear least squares of ln P on the given basis functions of T; the
     /// linear forms' exact solution and the other forms' starting point.</summary>
+    /// <remarks>Rows are scaled by √w_i and columns to unit norm, then solved by the thin
+    /// (n×m) Householder QR of MathNet.Numerics: memory and time linear in the number of points.
+    /// The full QR would build an n×n Q (8 GB at 32 000 points) and is never needed for a
+    /// least-squares solve.</remarks>
     protected static double[] LinearFit(IReadOnlyList<double> temperatures, IReadOnlyList<double> values, IReadOnlyList<double> weights, params Func<double, double>[] basis)
     {
         int n = temperatures.Count;
         int m = basis.Length;
-        var a = MathNet.Numerics.LinearAlgebra.Matrix<double>.Build.Dense(n, m);
-        var y = MathNet.Numerics.LinearAlgebra.Vector<double>.Build.Dense(n);
+        // Column-major, as MathNet's provider takes a matrix.
+        var a = new double[n * m];
+        var y = new double[n];
         for (int i = 0; i < n; i++)
         {
             double w = Math.Sqrt(weights[i]);
+            double t = temperatures[i];
             for (int j = 0; j < m; j++)
             {
-                a[i, j] = w * basis[j](temperatures[i]);
+                a[j * n + i] = w * basis[j](t);
             }
 
             y[i] = w * values[i];
         }
 
         // Columns scaled to unit norm, then QR: the bases differ by many orders of magnitude
-        // (T⁶ beside 1), and equilibration keeps the solve accurate.
+        // (T⁶ beside 1), and equilibration keeps the solve accurate. The norm is accumulated with
+        // MathNet's overflow-safe hypotenuse, in order, as its Vector.L2Norm does.
         var scale = new double[m];
         for (int j = 0; j < m; j++)
         {
-            scale[j] = a.Column(j).L2Norm();
-            if (scale[j] > 0)
+            var column = a.AsSpan(j * n, n);
+            double norm = 0;
+            foreach (double v in column)
             {
-                a.SetColumn(j, a.Column(j) / scale[j]);
+                norm = MathNet.Numerics.SpecialFunctions.Hypotenuse(norm, v);
+            }
+
+            scale[j] = norm;
+            if (norm > 0)
+            {
+                for (int i = 0; i < column.Length; i++)
+                {
+                    column[i] /= norm;
+                }
             }
         }
 
-        var x = a.QR().Solve(y);
-        return [.. x.Select((v, j) => scale[j] > 0 ? v / scale[j] : v)];
+        // The thin QR of MathNet's provider, in place: Matrix.QR(QRMethod.Thin) would first clone
+        // the n×m matrix (48 MB at a million points and six parameters) and then do exactly this.
+        var provider = MathNet.Numerics.Providers.LinearAlgebra.LinearAlgebraControl.Provider;
+        var r = new double[m * m];
+        var tau = new double[m];
+        provider.ThinQRFactor(a, n, m, r, tau);
+        var x = new double[m];
+        provider.QRSolveFactored(a, r, n, m, tau, y, 1, x, MathNet.Numerics.LinearAlgebra.Factorization.QRMethod.Thin);
+        var result = new double[m];
+        for (int j = 0; j < m; j++)
+        {
+            result[j] = scale[j] > 0 ? x[j] / scale[j] : x[j];
+        }
+
+        return result;
     }
 }

@@ -57,24 +57,42 @@ public sealed class WagnerForm : VapourPressureForm
     /// <inheritdoc />
     public override double UpperLimit => CriticalTemperature;
 
+    /// <inheritdoc />
+    /// <remarks>Linear in the a_i because Tc and Pc are given, not fitted.</remarks>
+    public override bool IsLinearInParameters => true;
+
+    /// <summary>S = Σ a_i τ^(e_i): all ln P needs (it is evaluated at every point several times
+    /// per fit), so the derivative sums are left to <see cref="Sums"/>.</summary>
+    private double Sum(double t, IReadOnlyList<double> p)
+    {
+        double tau = 1 - t / CriticalTemperature;
+        double s = 0;
+        for (int i = 0; i < _exponents.Length; i++)
+        {
+            s += p[i] * Math.Pow(tau, _exponents[i]);
+        }
+
+        return s;
+    }
+
+    /// <summary>S with S′ = dS/dτ and S″ = d²S/dτ².</summary>
     private (double S, double S1, double S2) Sums(double t, IReadOnlyList<double> p)
     {
         double tau = 1 - t / CriticalTemperature;
-        double s = 0, s1 = 0, s2 = 0;
+        double s1 = 0, s2 = 0;
         for (int i = 0; i < _exponents.Length; i++)
         {
             double e = _exponents[i];
-            s += p[i] * Math.Pow(tau, e);
             s1 += p[i] * e * Math.Pow(tau, e - 1);
             s2 += p[i] * e * (e - 1) * Math.Pow(tau, e - 2);
         }
 
-        return (s, s1, s2);
+        return (Sum(t, p), s1, s2);
     }
 
     /// <inheritdoc />
     public override double LnPressure(double t, IReadOnlyList<double> p)
-        => Math.Log(CriticalPressure) + CriticalTemperature / t * Sums(t, p).S;
+        => Math.Log(CriticalPressure) + CriticalTemperature / t * Sum(t, p);
 
     /// <inheritdoc />
     public override double Slope(double t, IReadOnlyList<double> p)

@@ -10,15 +10,38 @@ namespace PhaseSlope.Core.Estimation;
 /// fluids to a few percent.</remarks>
 public static class CorrespondingStates
 {
+    // The constants of both relations are written here only; CorrespondingStatesForm takes its
+    // derivatives from LeeKeslerTerm and AmbroseWaltonSeries.
+    // Lee–Kesler, AIChE J. 21, 510 (1975): f_k = c0 + c1/Tr + c2 ln Tr + c3 Tr⁶ (coefficients as
+    // printed in the book named in the remarks, from memory).
+    private static readonly double[] LeeKesler0 = [5.92714, -6.09648, -1.28862, 0.169347];
+    private static readonly double[] LeeKesler1 = [15.2518, -15.6875, -13.4721, 0.43577];
+
+    // Ambrose–Walton, Pure Appl. Chem. 61, 1395 (1989): f_k = (Σ c_i τ^(e_i))/Tr, τ = 1 − Tr
+    // (coefficients as printed in the same book, from memory).
+    private static readonly double[] AmbroseWaltonExponents = [1, 1.5, 2.5, 5];
+    private static readonly double[][] AmbroseWaltonCoefficients =
+    [
+        [-5.97616, 1.29874, -0.60394, -1.06841],
+        [-5.03365, 1.11505, -5.41217, -7.46628],
+        [-0.64771, 2.41539, -4.26979, 3.25259],
+    ];
+
     /// <summary>Lee–Kesler: f0 = 5.92714 − 6.09648/Tr − 1.28862 ln Tr + 0.169347 Tr⁶,
     /// f1 = 15.2518 − 15.6875/Tr − 13.4721 ln Tr + 0.43577 Tr⁶; ln Pr = f0 + ω f1.</summary>
     public static (double F0, double F1) LeeKeslerTerms(double reducedTemperature)
+        => (LeeKeslerTerm(0, reducedTemperature).Value, LeeKeslerTerm(1, reducedTemperature).Value);
+
+    /// <summary>The Lee–Kesler term f_k (k = 0 or 1) with its first two Tr-derivatives:
+    /// f′ = −c1/Tr² + c2/Tr + 6c3 Tr⁵, f″ = 2c1/Tr³ − c2/Tr² + 30c3 Tr⁴.</summary>
+    internal static (double Value, double First, double Second) LeeKeslerTerm(int k, double reducedTemperature)
     {
+        double[] c = k == 0 ? LeeKesler0 : LeeKesler1;
         double tr = reducedTemperature;
-        double tr6 = Math.Pow(tr, 6);
-        double lnTr = Math.Log(tr);
-        return (5.92714 - 6.09648 / tr - 1.28862 * lnTr + 0.169347 * tr6,
-                15.2518 - 15.6875 / tr - 13.4721 * lnTr + 0.43577 * tr6);
+        double value = c[0] + c[1] / tr + c[2] * Math.Log(tr) + c[3] * Math.Pow(tr, 6);
+        double first = -c[1] / (tr * tr) + c[2] / tr + 6 * c[3] * Math.Pow(tr, 5);
+        double second = 2 * c[1] / (tr * tr * tr) - c[2] / (tr * tr) + 30 * c[3] * Math.Pow(tr, 4);
+        return (value, first, second);
     }
 
     /// <summary>Ambrose–Walton with τ = 1 − Tr:
@@ -28,13 +51,25 @@ public static class CorrespondingStates
     public static (double F0, double F1, double F2) AmbroseWaltonTerms(double reducedTemperature)
     {
         double tr = reducedTemperature;
-        double t = 1 - tr;
-        double t15 = Math.Pow(t, 1.5);
-        double t25 = Math.Pow(t, 2.5);
-        double t5 = Math.Pow(t, 5);
-        return ((-5.97616 * t + 1.29874 * t15 - 0.60394 * t25 - 1.06841 * t5) / tr,
-                (-5.03365 * t + 1.11505 * t15 - 5.41217 * t25 - 7.46628 * t5) / tr,
-                (-0.64771 * t + 2.41539 * t15 - 4.26979 * t25 + 3.25259 * t5) / tr);
+        double tau = 1 - tr;
+        return (AmbroseWaltonSeries(0, tau).Value / tr, AmbroseWaltonSeries(1, tau).Value / tr, AmbroseWaltonSeries(2, tau).Value / tr);
+    }
+
+    /// <summary>The Ambrose–Walton sum g_k(τ) = Σ c_i τ^(e_i) (k = 0, 1, 2; f_k = g_k/Tr) with
+    /// its first two τ-derivatives; τ &gt; 0.</summary>
+    internal static (double Value, double First, double Second) AmbroseWaltonSeries(int k, double tau)
+    {
+        double[] c = AmbroseWaltonCoefficients[k];
+        double[] e = AmbroseWaltonExponents;
+        double g = 0, g1 = 0, g2 = 0;
+        for (int i = 0; i < e.Length; i++)
+        {
+            g += c[i] * Math.Pow(tau, e[i]);
+            g1 += c[i] * e[i] * Math.Pow(tau, e[i] - 1);
+            g2 += c[i] * e[i] * (e[i] - 1) * Math.Pow(tau, e[i] - 2);
+        }
+
+        return (g, g1, g2);
     }
 
     /// <summary>The acentric factor from Tc (K), Pc (Pa) and one vapour pressure (T in K, P in Pa).</summary>

@@ -63,9 +63,10 @@ public static class ResidualsDiagram
                 MarkerFill = HouseStyle.Colour(i),
                 MarkerStroke = HouseStyle.Colour(i),
             };
+            var deviations = fit.DeviationsPercent; // computed on each access: once, not per point
             for (int k = 0; k < fit.Data.Count; k++)
             {
-                series.Points.Add(new ScatterPoint(units.Temperature(fit.Data[k].Temperature), fit.DeviationsPercent[k]));
+                series.Points.Add(new ScatterPoint(units.Temperature(fit.Data[k].Temperature), deviations[k]));
             }
 
             model.Series.Add(series);

@@ -85,8 +85,6 @@ public static class CorrelationAuditor
     /// <summary>Best score above which no candidate is consistent.</summary>
     public const double InconsistentScore = 5;
 
-    private const double R = Constants.GasConstant;
-
     /// <summary>The default range when none is stated and no data are given: from 0.8·Tb (not
     /// below the model's lowest valid temperature) to Tb, about where printed Antoine sets are
     /// fitted; without Tb, 0.5–0.7 Tc.</summary>
@@ -341,8 +339,9 @@ public static class CorrelationAuditor
     {
         var dz = model.ToDictionary(m => m.Temperature, m => m.CompressibilityChange);
         string dzText = model.Count > 0 ? "with the model's compressibility change" : "with an ideal-gas vapour (dZ = 1)";
-        var rows = grid.Select(t => (T: t, Reduced: R * t * t * form.Slope(t, si), Dz: dz.TryGetValue(t, out double z) ? z : 1.0))
-            .Select(r => (r.T, r.Reduced, H: r.Reduced * r.Dz)).ToList();
+        // Reduced = ΔH/ΔZ = R T² d ln P/dT (Waring's quantity); H = ΔH with the model's ΔZ.
+        var rows = grid.Select(t => (T: t, Slope: form.Slope(t, si), Dz: dz.TryGetValue(t, out double z) ? z : 1.0))
+            .Select(r => (r.T, Reduced: ClapeyronEquation.EnthalpyOfVaporization(r.T, r.Slope, 1), H: ClapeyronEquation.EnthalpyOfVaporization(r.T, r.Slope, r.Dz))).ToList();
 
         var negative = rows.Where(r => !(r.H > 0)).ToList();
         if (negative.Count > 0)
