@@ -6,7 +6,7 @@ namespace PhaseSlope.Benchmarks;
 /// <summary>Vapour-pressure fitting at 1 000, 10 000 and 100 000 points: the two Wagner forms
 /// (linear in their parameters, one direct solve) and Antoine (Levenberg–Marquardt after a
 /// 101-step scan of its linearised start). Time and allocated bytes should grow in proportion to
-/// the points; docs/performance-fitting.md has the results.</summary>
+/// the points; docs/performance.md has the results.</summary>
 /// <remarks>The data are generated, not measured: see <see cref="GeneratedSaturationData"/>.</remarks>
 [MemoryDiagnoser]
 public class FitBenchmarks

@@ -4,7 +4,7 @@ using PhaseSlope.Core.Correlations;
 namespace PhaseSlope.Benchmarks;
 
 /// <summary>Generated, not measured, vapour pressures of water for the fitting benchmarks and for
-/// the million-row file of docs/performance-fitting.md.</summary>
+/// the million-row file of docs/performance.md.</summary>
 /// <remarks>The IAPWS saturation-pressure equation, ln(P/Pc) = (Tc/T)(a1τ + a2τ^1.5 + a3τ³ +
 /// a4τ^3.5 + a5τ⁴ + a6τ^7.5), τ = 1 − T/Tc, of Wagner &amp; Pruss, J. Phys. Chem. Ref. Data 22, 783
 /// (1993) (constants below from memory), at evenly spaced temperatures from 275 K to 645 K, with

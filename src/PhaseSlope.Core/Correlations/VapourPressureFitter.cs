@@ -9,7 +9,7 @@ namespace PhaseSlope.Core.Correlations;
 /// <remarks>A form linear in its parameters (<see cref="VapourPressureForm.IsLinearInParameters"/>)
 /// is solved directly by its weighted linear least squares (thin QR); the others by
 /// Levenberg–Marquardt from MathNet.Numerics, started from the form's linearised fit. Time and
-/// memory are linear in the number of points (docs/performance-fitting.md).</remarks>
+/// memory are linear in the number of points (docs/performance.md).</remarks>
 public static class VapourPressureFitter
 {
     /// <summary>The <see cref="VapourPressureFit.StopReason"/> of a form solved directly by linear
