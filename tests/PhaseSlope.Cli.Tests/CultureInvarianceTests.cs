@@ -1,0 +1,52 @@
+using static PhaseSlope.Cli.Tests.CliHarness;
+
+namespace PhaseSlope.Cli.Tests;
+
+/// <summary>Every printed result is byte-identical whatever the culture of the process: a
+/// comma-decimal culture, a culture with non-Latin digits and grouping, and the invariant one.</summary>
+public class CultureInvarianceTests
+{
+    public static TheoryData<string[]> Invocations()
+    {
+        string data = PhaseSlope.Cli.Tests.Commands.FitData.ExampleCsv;
+        string fluid = PhaseSlope.Cli.Tests.Commands.FitData.ExampleFluid;
+        var rows = new TheoryData<string[]>();
+        foreach (string format in new[] { "table", "csv", "json" })
+        {
+            rows.Add(["coexist", "propane", "--temperature", "26.85 degC", "--format", format]);
+            rows.Add(["coexist", "r-134a", "--pressure", "1.2 bar", "--format", format, "--units", "engineering"]);
+            rows.Add(["curve", "water", "--points", "12", "--format", format]);
+            rows.Add(["state", "toluene", "--temperature", "25 degC", "--pressure", "3 bar", "--format", format]);
+            rows.Add(["fit", data, "--fluid", fluid, "--format", format]);
+        }
+
+        rows.Add(["derive", "toluene", "--of", "U", "--by", "V", "--hold", "T", "--temperature", "25 degC", "--pressure", "3 bar", "--format", "json"]);
+        rows.Add(["fluids", "show", "propane", "--format", "json"]);
+        rows.Add(["fluids", "list"]);
+        rows.Add(["latent", data, "--fluid", fluid, "--format", "json"]);
+        return rows;
+    }
+
+    [Theory]
+    [MemberData(nameof(Invocations))]
+    public void Output_UnderAnyCulture_IsByteIdentical(string[] args)
+    {
+        CliResult reference;
+        using (new CultureScope("en-US"))
+        {
+            reference = Run(args);
+        }
+
+        Assert.True(reference.ExitCode == 0, reference.ToString());
+        // German and French write decimal commas; Arabic (Saudi Arabia) has its own digits,
+        // separators and calendar; Turkish has the dotless i that breaks case-insensitive ids.
+        foreach (string culture in new[] { "de-DE", "fr-FR", "ar-SA", "tr-TR" })
+        {
+            using var scope = new CultureScope(culture);
+            var result = Run(args);
+            Assert.Equal(reference.ExitCode, result.ExitCode);
+            Assert.True(reference.Stdout == result.Stdout, $"{culture}: stdout differs for {string.Join(' ', args)}");
+            Assert.Equal(reference.Stderr, result.Stderr);
+        }
+    }
+}
