@@ -11,17 +11,7 @@ internal static class CliApp
     public static int Run(string[] args, TextWriter output, TextWriter error)
     {
         var io = new CliIo(output, error);
-        var root = new RootCommand("phaseslope: liquid-vapour coexistence of pure fluids from cubic equations of state");
-        root.Subcommands.Add(CoexistCommand.Create(io));
-        root.Subcommands.Add(CurveCommand.Create(io));
-        root.Subcommands.Add(StateCommand.Create(io));
-        root.Subcommands.Add(DeriveCommand.Create(io));
-        root.Subcommands.Add(FitCommand.Create(io));
-        root.Subcommands.Add(LatentCommand.Create(io));
-        root.Subcommands.Add(AuditCommand.Create(io));
-        root.Subcommands.Add(PlotCommand.Create(io));
-        root.Subcommands.Add(FluidsCommand.Create(io));
-
+        var root = Root(io);
         if (args.Length == 0)
         {
             return io.Fail("no command given; 'phaseslope --help' lists the commands", ExitCodes.Usage);
@@ -37,5 +27,22 @@ internal static class CliApp
 
         var config = new InvocationConfiguration { Output = output, Error = error, EnableDefaultExceptionHandler = false };
         return parse.Invoke(config);
+    }
+
+    /// <summary>The command tree, its actions writing to <paramref name="io"/> (the tests walk it
+    /// to check that every offered option is honoured).</summary>
+    public static RootCommand Root(CliIo io)
+    {
+        var root = new RootCommand("phaseslope: liquid-vapour coexistence of pure fluids from cubic equations of state");
+        root.Subcommands.Add(CoexistCommand.Create(io));
+        root.Subcommands.Add(CurveCommand.Create(io));
+        root.Subcommands.Add(StateCommand.Create(io));
+        root.Subcommands.Add(DeriveCommand.Create(io));
+        root.Subcommands.Add(FitCommand.Create(io));
+        root.Subcommands.Add(LatentCommand.Create(io));
+        root.Subcommands.Add(AuditCommand.Create(io));
+        root.Subcommands.Add(PlotCommand.Create(io));
+        root.Subcommands.Add(FluidsCommand.Create(io));
+        return root;
     }
 }

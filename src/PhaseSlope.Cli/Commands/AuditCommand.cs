@@ -21,19 +21,21 @@ internal static class AuditCommand
         var form = new Option<string>("--form") { Description = $"Printed form: {string.Join(", ", PublishedCorrelation.FormIds)}", Required = true };
         var coefficients = new Option<string>("--coefficients") { Description = "Coefficients as printed, comma-separated (A,B,C for antoine and kirchhoff, A,B for clausius-clapeyron, A,B,C,D for riedel)", Required = true };
         var logBase = new Option<string>("--log-base") { Description = "Logarithm of the printed form: 10 or e (omit to detect)" };
-        var pressureUnit = new Option<string>("--pressure-unit") { Description = "Pressure unit of the printed form: Pa, kPa, MPa, bar, mmHg, atm, psi (omit to detect)" };
-        var temperatureUnit = new Option<string>("--temperature-unit") { Description = "Temperature of the printed form: K or degC (degC for antoine only; omit to detect)" };
-        var range = new Option<string>("--range") { Description = "Stated range TMIN,TMAX (bare numbers in --temperature-unit if given, else K; or with units, e.g. \"1 degC,100 degC\")" };
+        var pressureUnit = new Option<string>("--correlation-pressure-unit") { Description = "Pressure unit of the printed form: Pa, kPa, MPa, bar, mmHg, atm, psi (omit to detect)" };
+        var temperatureUnit = new Option<string>("--correlation-temperature-unit") { Description = "Temperature of the printed form: K or degC (degC for antoine only; omit to detect)" };
+        var range = new Option<string>("--range") { Description = "Stated range TMIN,TMAX (bare numbers in --correlation-temperature-unit if given, else K; or with units, e.g. \"1 degC,100 degC\")" };
         var data = new Option<string>("--data") { Description = "CSV file of measured vapour pressures with units in the headers (see docs/data-files.md)" };
         var fluid = new Option<string>("--fluid") { Description = "Catalog fluid or fluid file: normal boiling point, Tc and the model's vapour pressure to test against" };
         var against = new Option<string>("--against") { Description = "Form of a second correlation to compare with" };
         var coefficients2 = new Option<string>("--coefficients2") { Description = "Coefficients of the second correlation" };
         var logBase2 = new Option<string>("--log-base2") { Description = "Log base of the second correlation (default: the first's)" };
-        var pressureUnit2 = new Option<string>("--pressure-unit2") { Description = "Pressure unit of the second correlation (default: the first's)" };
-        var temperatureUnit2 = new Option<string>("--temperature-unit2") { Description = "Temperature unit of the second correlation (default: the first's)" };
+        var pressureUnit2 = new Option<string>("--correlation-pressure-unit2") { Description = "Pressure unit of the second correlation (default: the first's)" };
+        var temperatureUnit2 = new Option<string>("--correlation-temperature-unit2") { Description = "Temperature unit of the second correlation (default: the first's)" };
         var threshold = new Option<string>("--threshold") { Description = "Difference in percent above which the two correlations disagree (default 1)" };
         var format = new Option<string>("--format") { Description = "Output format: table or json", DefaultValueFactory = _ => "table" };
-        var eos = new CommonOptions().Eos;
+        var common = new CommonOptions();
+        var eos = common.Eos;
+        eos.Description += "; the model whose vapour pressure --fluid's checks use (needs --fluid)";
         var command = new Command("audit", "Audit a published vapour-pressure correlation in its own convention: detect or confirm log base and units, and check it; exit 8 when a check fails");
         foreach (var o in new Option[] { form, coefficients, logBase, pressureUnit, temperatureUnit, range, data, fluid, against, coefficients2, logBase2, pressureUnit2, temperatureUnit2, threshold, format, eos })
         {
@@ -53,8 +55,8 @@ internal static class AuditCommand
 
                 var correlation = Correlation(parse.GetValue(form)!, parse.GetValue(coefficients)!, "--form", "--coefficients");
                 var lb = parse.GetValue(logBase) is string b ? Base(b, "--log-base") : (LogBase?)null;
-                var pu = parse.GetValue(pressureUnit) is string p ? Pressure(p, "--pressure-unit") : (PublishedPressureUnit?)null;
-                var tu = parse.GetValue(temperatureUnit) is string t ? Temperature(t, "--temperature-unit", correlation) : (PublishedTemperatureUnit?)null;
+                var pu = parse.GetValue(pressureUnit) is string p ? Pressure(p, "--correlation-pressure-unit") : (PublishedPressureUnit?)null;
+                var tu = parse.GetValue(temperatureUnit) is string t ? Temperature(t, "--correlation-temperature-unit", correlation) : (PublishedTemperatureUnit?)null;
                 (double, double)? tRange = parse.GetValue(range) is string r ? Range(r, tu) : null;
                 PublishedCorrelation? second = null;
                 if (parse.GetValue(against) is string a)
@@ -63,7 +65,7 @@ internal static class AuditCommand
                 }
                 else if (parse.GetValue(coefficients2) is not null || parse.GetValue(logBase2) is not null || parse.GetValue(pressureUnit2) is not null || parse.GetValue(temperatureUnit2) is not null || parse.GetValue(threshold) is not null)
                 {
-                    throw new UsageException("--coefficients2, --log-base2, --pressure-unit2, --temperature-unit2 and --threshold need --against");
+                    throw new UsageException("--coefficients2, --log-base2, --correlation-pressure-unit2, --correlation-temperature-unit2 and --threshold need --against");
                 }
 
                 double limit = 0.01;
@@ -73,6 +75,13 @@ internal static class AuditCommand
                         ? v / 100 : throw new UsageException($"--threshold: '{th}' is not a percentage between 0 and 100");
                 }
 
+                // --eos is read (and checked) before the fluid; it chooses the model the fluid's checks use.
+                var kind = common.ModelKind(parse);
+                if (CommonOptions.Given(parse, eos) && parse.GetValue(fluid) is null)
+                {
+                    throw new UsageException("--eos: needs --fluid (the model's vapour pressure is computed for that fluid)");
+                }
+
                 var theFluid = parse.GetValue(fluid) is string f ? FluidResolver.Resolve(f) : null;
                 var dataPoints = parse.GetValue(data) is string path ? ReadData(path) : null;
                 if (tRange is null && dataPoints is null && theFluid is null)
@@ -80,7 +89,6 @@ internal static class AuditCommand
                     throw new UsageException("audit: give --range, --data or --fluid (there is no temperature range to audit)");
                 }
 
-                var kind = new CommonOptions().ModelKind(parse);
                 var solver = theFluid is null ? null : new CoexistenceSolver(Core.Models.CubicModel.For(kind, theFluid), CoexistenceSolver.LowestValidTemperature(theFluid));
                 report = CorrelationAuditor.Audit(new AuditRequest
                 {
@@ -94,8 +102,8 @@ internal static class AuditCommand
                     Solver = solver,
                     Against = second,
                     AgainstLogBase = parse.GetValue(logBase2) is string b2 ? Base(b2, "--log-base2") : null,
-                    AgainstPressureUnit = parse.GetValue(pressureUnit2) is string p2 ? Pressure(p2, "--pressure-unit2") : null,
-                    AgainstTemperatureUnit = parse.GetValue(temperatureUnit2) is string t2 && second is not null ? Temperature(t2, "--temperature-unit2", second) : null,
+                    AgainstPressureUnit = parse.GetValue(pressureUnit2) is string p2 ? Pressure(p2, "--correlation-pressure-unit2") : null,
+                    AgainstTemperatureUnit = parse.GetValue(temperatureUnit2) is string t2 && second is not null ? Temperature(t2, "--correlation-temperature-unit2", second) : null,
                     AgainstThreshold = limit,
                 });
                 io.Out.Write(fmt == "json" ? Json(report) : Table(report));

@@ -34,14 +34,13 @@ internal static class CoexistCommand
                 throw new UsageException("coexist: give exactly one of --temperature and --pressure");
             }
 
-            _ = common.ModelKind(parse); // reject a bad --eos before the fluid is resolved
-            var format = common.OutputFormat(parse);
-            var units = common.UnitSystem(parse);
+            var model = common.BindModel(parse); // reject a bad --eos, --alpha or --volume-shift before the fluid is resolved
+            var (format, units) = common.BindOutput(parse);
             double? t = tText is null ? null : QuantityParser.ParseTemperature(tText, "--temperature");
             double? p = pText is null ? null : QuantityParser.ParsePressure(pText, "--pressure");
             var zero = ReferenceOption.Parse(parse.GetValue(reference)!);
             var data = FluidResolver.Resolve(parse.GetValue(fluid)!);
-            var context = CoexistenceContext.Create(data, diagnostics.Begin(parse, common.Model(parse, data)), zero);
+            var context = CoexistenceContext.Create(data, diagnostics.Begin(parse, model.For(data)), zero);
             var point = t is double tv ? context.Solver.AtTemperature(tv) : context.Solver.AtPressure(p!.Value);
             io.Out.Write(CoexistenceWriter.Render([context.Row(point)], single: true, format, data, context.Solver.Model, zero, units));
             diagnostics.End(io, [point]);

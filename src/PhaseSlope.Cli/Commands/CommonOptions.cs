@@ -50,8 +50,10 @@ internal sealed class CommonOptions
     public static Argument<string> FluidArgument()
         => new("FLUID") { Description = "Catalog name or synonym, or the path of a .fluid file" };
 
-    /// <summary>Adds the options to a command; <paramref name="withEos"/> adds --eos too.</summary>
-    public void AddTo(Command command, bool withEos)
+    /// <summary>Adds the options a command honours: <paramref name="withEos"/> adds --eos, --alpha
+    /// and --volume-shift; <paramref name="withUnits"/> adds --units (only for commands whose
+    /// tables have a display unit choice). --format is always added.</summary>
+    public void AddTo(Command command, bool withEos, bool withUnits = true)
     {
         if (withEos)
         {
@@ -61,8 +63,51 @@ internal sealed class CommonOptions
         }
 
         command.Options.Add(Format);
-        command.Options.Add(Units);
+        if (withUnits)
+        {
+            command.Options.Add(Units);
+        }
     }
+
+    /// <summary>Whether <paramref name="option"/> was given on the command line (not defaulted).</summary>
+    public static bool Given(ParseResult parse, Option option) => parse.GetResult(option) is { Implicit: false };
+
+    /// <summary>Whether the command being run offers <paramref name="option"/>.</summary>
+    public static bool Offered(ParseResult parse, Option option) => parse.CommandResult.Command.Options.Contains(option);
+
+    /// <summary>Binds --eos, --alpha and --volume-shift to a typed choice, checking their spelling
+    /// before any fluid is read.</summary>
+    public ModelChoice BindModel(ParseResult parse)
+    {
+        var kind = ModelKind(parse);
+        string alphaText = parse.GetValue(Alpha) ?? "default";
+        var alpha = alphaText.Trim().ToLowerInvariant() switch
+        {
+            "default" => AlphaForm.Default,
+            "twu" => AlphaForm.Twu,
+            "mathias-copeman" => AlphaForm.MathiasCopeman,
+            _ => throw new UsageException($"--alpha: unknown alpha function '{alphaText}' (use default, twu or mathias-copeman)"),
+        };
+        string shiftText = Offered(parse, VolumeShift) ? parse.GetValue(VolumeShift) ?? "none" : "none";
+        _ = ParseShift(shiftText, kind, fluid: null);
+        return new ModelChoice(kind, alpha, shiftText);
+    }
+
+    /// <summary>Binds --format and, when offered, --units. --units changes table units only, so
+    /// giving it with csv or json output (always SI) is refused rather than ignored.</summary>
+    public OutputChoice BindOutput(ParseResult parse, OutputFormat format)
+    {
+        var units = Offered(parse, Units) ? UnitSystem(parse) : Cli.Units.UnitSystem.Si;
+        if (format != Output.OutputFormat.Table && Offered(parse, Units) && Given(parse, Units))
+        {
+            throw new UsageException($"--units: applies to tables only; {format.ToString().ToLowerInvariant()} output is always in SI units");
+        }
+
+        return new OutputChoice(format, units);
+    }
+
+    /// <summary>Binds --format and, when offered, --units.</summary>
+    public OutputChoice BindOutput(ParseResult parse) => BindOutput(parse, OutputFormat(parse));
 
     /// <summary>The chosen model.</summary>
     public CubicModelKind ModelKind(ParseResult parse)
@@ -74,22 +119,11 @@ internal sealed class CommonOptions
     }
 
     /// <summary>The chosen model with its alpha function and volume shift, for a fluid.</summary>
-    public CubicModel Model(ParseResult parse, Fluid fluid)
-    {
-        var kind = ModelKind(parse);
-        string alphaText = parse.GetValue(Alpha) ?? "default";
-        var alpha = alphaText.ToLowerInvariant() switch
-        {
-            "default" => AlphaForm.Default,
-            "twu" => AlphaForm.Twu,
-            "mathias-copeman" => AlphaForm.MathiasCopeman,
-            _ => throw new UsageException($"--alpha: unknown alpha function '{alphaText}' (use default, twu or mathias-copeman)"),
-        };
-        double shift = ParseShift(parse.GetValue(VolumeShift) ?? "none", kind, fluid);
-        return CubicModel.For(kind, fluid, alpha, shift);
-    }
+    public CubicModel Model(ParseResult parse, Fluid fluid) => BindModel(parse).For(fluid);
 
-    private static double ParseShift(string text, CubicModelKind kind, Fluid fluid)
+    /// <summary>The volume shift c in m³/mol named by <paramref name="text"/>; with no fluid,
+    /// only the spelling is checked (peneloux then gives 0).</summary>
+    internal static double ParseShift(string text, CubicModelKind kind, Fluid? fluid)
     {
         string t = text.Trim();
         if (string.Equals(t, "none", StringComparison.OrdinalIgnoreCase))
@@ -99,7 +133,7 @@ internal sealed class CommonOptions
 
         if (string.Equals(t, "peneloux", StringComparison.OrdinalIgnoreCase))
         {
-            return Core.Models.VolumeShift.Peneloux(kind, fluid.CriticalTemperature.Value, fluid.CriticalPressure.Value,
+            return fluid is null ? 0 : Core.Models.VolumeShift.Peneloux(kind, fluid.CriticalTemperature.Value, fluid.CriticalPressure.Value,
                 Core.Models.VolumeShift.RackettCompressibility(fluid.AcentricFactor.Value));
         }
 

@@ -86,17 +86,49 @@ internal sealed class CorrelationOptions
         return [.. records.Select(r => new VapourPressurePoint(r.Temperature, r.Pressure, r.StandardUncertainty, r.Weight))];
     }
 
-    /// <summary>The fluid, when --fluid is given.</summary>
-    public Fluid? FluidOf(ParseResult parse) => parse.GetValue(Fluid) is string f ? FluidResolver.Resolve(f) : null;
+    /// <summary>The fluid, when --fluid is given. A fluid brings its own Tc and Pc, so --tc or
+    /// --pc beside it is refused rather than one of them silently winning; --tc and --pc go together.</summary>
+    public Fluid? FluidOf(ParseResult parse)
+    {
+        string? fluid = parse.GetValue(Fluid);
+        bool tc = parse.GetValue(CriticalTemperature) is not null;
+        bool pc = parse.GetValue(CriticalPressure) is not null;
+        if (fluid is not null && (tc || pc))
+        {
+            throw new UsageException($"{(tc ? "--tc" : "--pc")}: conflicts with --fluid, which gives the critical point; give --fluid, or --tc and --pc");
+        }
+
+        if (tc != pc)
+        {
+            throw new UsageException($"{(tc ? "--tc" : "--pc")}: needs {(tc ? "--pc" : "--tc")} too (the critical point is both)");
+        }
+
+        return fluid is not null ? FluidResolver.Resolve(fluid) : null;
+    }
+
+    /// <summary>Whether --fluid, or --tc and --pc, were given.</summary>
+    public bool CriticalPointGiven(ParseResult parse)
+        => parse.GetValue(Fluid) is not null || parse.GetValue(CriticalTemperature) is not null;
 
     /// <summary>The candidate forms: the one named, or every form for auto.</summary>
-    public IReadOnlyList<VapourPressureForm> Forms(ParseResult parse, Fluid? fluid, out bool auto)
+    /// <param name="parse">The parsed command line.</param>
+    /// <param name="fluid">The --fluid, if given.</param>
+    /// <param name="auto">Set when --form is auto.</param>
+    /// <param name="criticalPointUsedElsewhere">Whether the command uses the fluid or the critical
+    /// point for more than the forms (latent's volume change); when it does not, a critical point
+    /// given with a form that has no use for it is refused.</param>
+    public IReadOnlyList<VapourPressureForm> Forms(ParseResult parse, Fluid? fluid, out bool auto, bool criticalPointUsedElsewhere = false)
     {
         string id = (parse.GetValue(Form) ?? "auto").Trim().ToLowerInvariant();
         auto = id == "auto";
         if (!auto && !FormIds.Contains(id))
         {
             throw new UsageException($"--form: unknown form '{id}' (use {string.Join(", ", FormIds)} or auto)");
+        }
+
+        if (!auto && !CriticalForms.Contains(id) && !criticalPointUsedElsewhere && CriticalPointGiven(parse))
+        {
+            throw new UsageException($"{(parse.GetValue(Fluid) is null ? "--tc" : "--fluid")}: the {id} form does not use a critical point; leave it out, or choose a form that does ({string.Join(", ", CriticalForms)})");
         }
 
         double? tc = fluid?.CriticalTemperature.Value ?? (parse.GetValue(CriticalTemperature) is string t ? QuantityParser.ParseTemperature(t, "--tc") : null);

@@ -37,10 +37,9 @@ internal static class CurveCommand
         diagnostics.AddTo(command);
         command.SetAction(parse => io.Guard(() =>
         {
-            _ = common.ModelKind(parse); // reject a bad --eos before the fluid is resolved
-            var units = common.UnitSystem(parse);
+            var model = common.BindModel(parse); // reject a bad --eos, --alpha or --volume-shift before the fluid is resolved
             string? outPath = parse.GetValue(output);
-            var format = common.FormatGiven(parse) || outPath is null ? common.OutputFormat(parse) : FormatFromExtension(outPath);
+            var (format, units) = common.BindOutput(parse, common.FormatGiven(parse) || outPath is null ? common.OutputFormat(parse) : FormatFromExtension(outPath));
             int n = parse.GetValue(points);
             if (n < 2 || n > MaxPoints)
             {
@@ -56,7 +55,7 @@ internal static class CurveCommand
 
             var zero = ReferenceOption.Parse(parse.GetValue(reference)!);
             var data = FluidResolver.Resolve(parse.GetValue(fluid)!);
-            var context = CoexistenceContext.Create(data, diagnostics.Begin(parse, common.Model(parse, data)), zero);
+            var context = CoexistenceContext.Create(data, diagnostics.Begin(parse, model.For(data)), zero);
             var solver = context.Solver;
             double tc = solver.CriticalTemperature;
             double start = tFrom ?? solver.MinimumTemperature;

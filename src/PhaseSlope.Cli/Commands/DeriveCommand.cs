@@ -21,7 +21,7 @@ internal static class DeriveCommand
         command.Options.Add(of);
         command.Options.Add(by);
         command.Options.Add(hold);
-        options.AddTo(command);
+        options.AddTo(command, withUnits: false); // one value, always printed in SI
         command.SetAction(parse => io.Guard(() =>
         {
             var format = options.Common.OutputFormat(parse);

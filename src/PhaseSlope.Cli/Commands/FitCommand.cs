@@ -13,7 +13,7 @@ internal static class FitCommand
         var common = new CommonOptions();
         var command = new Command("fit", "Fit a vapour-pressure correlation to measured P-T data by weighted least squares in ln P");
         options.AddTo(command);
-        common.AddTo(command, withEos: false);
+        common.AddTo(command, withEos: false, withUnits: false); // the table is in K, kPa and %
         command.SetAction(parse => io.Guard(() =>
         {
             var format = common.OutputFormat(parse);

@@ -3,7 +3,6 @@ using System.Text;
 using System.Text.Json;
 using PhaseSlope.Cli.Output;
 using PhaseSlope.Core.Fluids;
-using PhaseSlope.Core.Models;
 
 namespace PhaseSlope.Cli.Commands;
 
@@ -18,14 +17,14 @@ internal static class FluidsCheckCommand
         var common = new CommonOptions();
         var command = new Command("check", "Validate a fluid file (line, field and value checks) and test its data against a model");
         command.Arguments.Add(file);
-        common.AddTo(command, withEos: true);
+        common.AddTo(command, withEos: true, withUnits: false);
         command.SetAction(parse => io.Guard(() =>
         {
             var format = common.OutputFormat(parse);
-            var kind = common.ModelKind(parse);
+            var model = common.BindModel(parse);
             string path = parse.GetValue(file)!;
             var fluid = FluidResolver.ReadFile(path);
-            var check = FluidCheck.Run(fluid, kind);
+            var check = FluidCheck.Run(fluid, model.For(fluid));
             io.Out.Write(format == OutputFormat.Json ? Json(path, check) : Table(path, check));
         }));
         return command;
@@ -38,7 +37,7 @@ internal static class FluidsCheckCommand
         table.Add("file", $"valid: {fluid.Name}, schema {FluidFile.FormatTag} {FluidFile.FormatVersion}");
         table.Add("normal boiling point", BoilingPointText(check));
         table.Add("coexistence", check.SolvesToCriticalPoint
-            ? $"converges from the lowest valid temperature to Tc (1 - 1e-8) with {check.Model.Equation}"
+            ? $"converges from the lowest valid temperature to Tc (1 - 1e-8) with {check.Model.Describe(withAlpha: true)}"
             : $"FAILS: {check.Failure}");
         table.Add("ideal-gas heat capacity", fluid.IdealGasHeatCapacity is { } cp
             ? $"present, {NumberText.Table(cp.MinimumTemperature)}-{NumberText.Table(cp.MaximumTemperature)} K; cp0(298.15 K) = {NumberText.Table(cp.HeatCapacity(298.15))} J/(mol K)"

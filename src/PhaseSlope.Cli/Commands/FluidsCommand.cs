@@ -22,8 +22,7 @@ internal static class FluidsCommand
         listCommon.AddTo(list, withEos: false);
         list.SetAction(parse => io.Guard(() =>
         {
-            var format = listCommon.OutputFormat(parse);
-            var units = listCommon.UnitSystem(parse);
+            var (format, units) = listCommon.BindOutput(parse);
             string? familyText = parse.GetValue(family);
             string? nameText = parse.GetValue(fragment);
             var fluids = FluidCatalog.Embedded.All
@@ -46,8 +45,7 @@ internal static class FluidsCommand
         showCommon.AddTo(show, withEos: false);
         show.SetAction(parse => io.Guard(() =>
         {
-            var format = showCommon.OutputFormat(parse);
-            var units = showCommon.UnitSystem(parse);
+            var (format, units) = showCommon.BindOutput(parse);
             var data = FluidResolver.Resolve(parse.GetValue(fluid)!);
             io.Out.Write(FluidWriter.Render([data], single: true, format, units));
         }));

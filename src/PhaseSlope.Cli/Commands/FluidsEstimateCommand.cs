@@ -76,6 +76,17 @@ internal static class FluidsEstimateCommand
             SourcedValue? tbValue = tbGiven is double t0 ? new SourcedValue(t0, Given)
                 : joback is not null ? new SourcedValue(joback.NormalBoilingPoint, jobackSource) : null;
             var mass = MolarMass(parse.GetValue(molarMass), formulaText);
+            if (parse.GetValue(omega) is not null)
+            {
+                foreach (var option in new Option[] { vapourPressure, method })
+                {
+                    if (CommonOptions.Given(parse, option))
+                    {
+                        throw new UsageException($"{option.Name}: conflicts with --omega (it estimates the acentric factor that --omega gives); give one or the other");
+                    }
+                }
+            }
+
             var omegaValue = parse.GetValue(omega) is string omegaText
                 ? new SourcedValue(Number(omegaText, "--omega"), Given)
                 : EstimateOmega(parse.GetValue(vapourPressure), parse.GetValue(method)!, tcValue.Value, pcValue.Value, tbValue);

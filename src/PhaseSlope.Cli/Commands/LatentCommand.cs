@@ -34,7 +34,11 @@ internal static class LatentCommand
         command.Options.Add(from);
         command.Options.Add(to);
         command.Options.Add(points);
-        common.AddTo(command, withEos: true);
+        // --eos and --alpha choose the model behind --volume-model eos; a volume shift moves both
+        // coexisting volumes alike and cannot change a latent heat, so it is not offered.
+        command.Options.Add(common.Eos);
+        command.Options.Add(common.Alpha);
+        common.AddTo(command, withEos: false, withUnits: false); // the table is in K, kPa and J/mol
         command.SetAction(parse => io.Guard(() =>
         {
             var format = common.OutputFormat(parse);
@@ -49,6 +53,13 @@ internal static class LatentCommand
             {
                 throw new UsageException("latent: give --temperature or --from/--to, not both");
             }
+
+            if (parse.GetValue(temperature) is not null && CommonOptions.Given(parse, points))
+            {
+                throw new UsageException("--points: applies to a range (--from/--to or the data range), not to one --temperature");
+            }
+
+            var modelChoice = common.BindModel(parse);
 
             bool criticalGiven = parse.GetValue(options.CriticalTemperature) is not null && parse.GetValue(options.CriticalPressure) is not null;
             string volumeText = parse.GetValue(volume) ?? (fluid is not null ? "eos" : criticalGiven ? "haggenmacher" : "ideal-gas");
@@ -69,13 +80,24 @@ internal static class LatentCommand
                 throw new UsageException("--volume-model haggenmacher: needs --fluid, or --tc and --pc");
             }
 
+            if (model != VolumeChangeModel.EquationOfState)
+            {
+                foreach (var option in new Option[] { common.Eos, common.Alpha })
+                {
+                    if (CommonOptions.Given(parse, option))
+                    {
+                        throw new UsageException($"{option.Name}: chooses the model of --volume-model eos only (the volume model here is {FitWriter.VolumeModelId(model)})");
+                    }
+                }
+            }
+
             // Options first, then the data file: a bad --form is a usage error whatever the file holds.
-            var forms = options.Forms(parse, fluid, out bool auto);
+            var forms = options.Forms(parse, fluid, out bool auto, criticalPointUsedElsewhere: model != VolumeChangeModel.IdealGas);
             var data = options.ReadData(parse);
             var fits = CorrelationOptions.Fit(forms, auto, data);
             var fit = fits[0];
             var solver = fluid is not null && model == VolumeChangeModel.EquationOfState
-                ? new CoexistenceSolver(common.Model(parse, fluid), CoexistenceSolver.LowestValidTemperature(fluid))
+                ? new CoexistenceSolver(modelChoice.For(fluid), CoexistenceSolver.LowestValidTemperature(fluid))
                 : null;
             double? tc = fluid?.CriticalTemperature.Value ?? (criticalGiven ? QuantityParser.ParseTemperature(parse.GetValue(options.CriticalTemperature)!, "--tc") : null);
             double? pc = fluid?.CriticalPressure.Value ?? (criticalGiven ? QuantityParser.ParsePressure(parse.GetValue(options.CriticalPressure)!, "--pc") : null);

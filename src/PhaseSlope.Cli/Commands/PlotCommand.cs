@@ -86,6 +86,14 @@ internal static class PlotCommand
             }
 
             string? dataPath = parse.GetValue(data);
+            foreach (var unitOption in new Option[] { temperatureUnit, pressureUnit })
+            {
+                if (dataPath is null && CommonOptions.Given(parse, unitOption))
+                {
+                    throw new UsageException($"{unitOption.Name}: the unit of a --data column; needs --data");
+                }
+            }
+
             var probe = new DiagramOptions { Reduced = parse.GetValue(reduced), Logarithmic = parse.GetValue(log), Units = axisUnits, Data = dataPath is null ? null : [] };
             var fluids = names.Select(FluidResolver.Resolve).Select(f => new PlotFluid(f, common.Model(parse, f))).ToList();
             try

@@ -11,13 +11,12 @@ internal static class StateCommand
     {
         var options = new StateOptions();
         var command = new Command("state", "Every single-phase property at a temperature and a pressure (or density)");
-        options.AddTo(command);
+        options.AddTo(command, withUnits: true);
         command.SetAction(parse => io.Guard(() =>
         {
-            var format = options.Common.OutputFormat(parse);
-            var units = options.Common.UnitSystem(parse);
+            var output = options.Common.BindOutput(parse);
             var (engine, state) = options.Resolve(parse);
-            io.Out.Write(StateWriter.State(engine, state, format, units));
+            io.Out.Write(StateWriter.State(engine, state, output.Format, output.Units));
         }));
         return command;
     }

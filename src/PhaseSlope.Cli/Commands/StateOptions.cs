@@ -34,8 +34,9 @@ internal sealed class StateOptions
     /// <summary>--eos, --format, --units.</summary>
     public CommonOptions Common { get; } = new();
 
-    /// <summary>Adds every option to a command.</summary>
-    public void AddTo(Command command)
+    /// <summary>Adds every option to a command; <paramref name="withUnits"/> adds --units, for a
+    /// command whose table has display units to choose.</summary>
+    public void AddTo(Command command, bool withUnits)
     {
         command.Arguments.Add(Fluid);
         command.Options.Add(Temperature);
@@ -43,7 +44,7 @@ internal sealed class StateOptions
         command.Options.Add(Density);
         command.Options.Add(Phase);
         command.Options.Add(Reference);
-        Common.AddTo(command, withEos: true);
+        Common.AddTo(command, withEos: true, withUnits);
     }
 
     /// <summary>Parses the options, builds the engine and evaluates the state.</summary>
@@ -56,7 +57,7 @@ internal sealed class StateOptions
             throw new UsageException("give exactly one of --pressure and --density with --temperature");
         }
 
-        _ = Common.ModelKind(parse); // reject a bad --eos before the fluid is resolved
+        var model = Common.BindModel(parse); // reject a bad --eos, --alpha or --volume-shift before the fluid is resolved
         var phase = ParsePhase(parse.GetValue(Phase) ?? "stable");
         if (dText is not null && phase != PhaseChoice.Stable)
         {
@@ -68,7 +69,7 @@ internal sealed class StateOptions
         double? p = pText is null ? null : QuantityParser.ParsePressure(pText, "--pressure");
         Fluid fluid = FluidResolver.Resolve(parse.GetValue(Fluid)!);
         double? rho = dText is null ? null : QuantityParser.ParseDensity(dText, "--density", fluid.MolarMass.Value);
-        var engine = new PropertyModel(fluid, Common.Model(parse, fluid), reference);
+        var engine = new PropertyModel(fluid, model.For(fluid), reference);
         var state = p is double pv ? engine.AtPressure(t, pv, phase) : engine.AtDensity(t, rho!.Value);
         return (engine, state);
     }

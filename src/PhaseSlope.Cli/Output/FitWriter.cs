@@ -142,7 +142,7 @@ internal static class FitWriter
         }
 
         json.WriteEndArray();
-        json.WriteNumber("points", fit.Data.Count);
+        json.WriteNumber("point_count", fit.Data.Count);
         json.WriteNumber("degrees_of_freedom", fit.DegreesOfFreedom);
         json.WriteNumber("chi_square", fit.ChiSquare);
         if (fit.ReducedChiSquare is double r)

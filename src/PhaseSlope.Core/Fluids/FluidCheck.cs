@@ -26,11 +26,23 @@ public sealed record FluidCheck(Fluid Fluid, ModelIdentity Model, double? Predic
     /// <summary>True when the tabulated boiling point, if any, agrees within the tolerance.</summary>
     public bool BoilingPointConsistent => BoilingPointDeviation is not double d || Math.Abs(d) <= BoilingPointTolerance;
 
-    /// <summary>Runs the checks.</summary>
+    /// <summary>Runs the checks with the published model <paramref name="kind"/> and its own alpha
+    /// function, unshifted.</summary>
     public static FluidCheck Run(Fluid fluid, CubicModelKind kind = CubicModelKind.PengRobinson)
     {
         ArgumentNullException.ThrowIfNull(fluid);
-        var solver = CoexistenceSolver.For(fluid, kind);
+        return Run(fluid, CubicModel.For(kind, fluid));
+    }
+
+    /// <summary>Runs the checks with <paramref name="model"/> (any alpha function and volume
+    /// shift), which must be built from <paramref name="fluid"/>'s constants.</summary>
+    /// <remarks>A volume shift moves densities only, so it leaves the boiling point and
+    /// convergence unchanged and shows in <see cref="Model"/>; an alpha function changes both.</remarks>
+    public static FluidCheck Run(Fluid fluid, IResidualModel model)
+    {
+        ArgumentNullException.ThrowIfNull(fluid);
+        ArgumentNullException.ThrowIfNull(model);
+        var solver = new CoexistenceSolver(model, CoexistenceSolver.LowestValidTemperature(fluid));
         double tc = solver.CriticalTemperature;
         string? failure = null;
         foreach (double t in new[] { solver.MinimumTemperature, Math.Max(0.7 * tc, solver.MinimumTemperature), tc * (1 - 1e-8) })

@@ -116,7 +116,9 @@ public sealed class CubicModel : IResidualModel
             AlphaForm.MathiasCopeman when set is not null => new MathiasCopemanAlpha(
                 Parameter(set, fluid, 0), Parameter(set, fluid, 1), Parameter(set, fluid, 2), tc, set.Source),
             AlphaForm.MathiasCopeman => throw new InvalidInputException("alpha form", double.NaN,
-                $"no Mathias-Copeman parameters for {fluid.Name} with {kind.Title()}"),
+                $"no Mathias-Copeman parameters for {fluid.Name} with {kind.Title()}: add a line "
+                + $"'alpha_mathias_copeman_{(form == CubicForm.PengRobinson ? "pr" : "srk")}  c1 c2 c3  | source' to a fluid file for it "
+                + "and give the file's path as the fluid (docs/fluid-files.md)"),
             _ => throw new ArgumentOutOfRangeException(nameof(alpha), alpha, "unknown alpha form"),
         };
         return new CubicModel(kind, form, function, tc, pc, volumeShift);

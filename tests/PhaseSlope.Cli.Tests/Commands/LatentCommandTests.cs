@@ -156,8 +156,8 @@ public class LatentCommandTests
         Assert.Equal("eos", RunJson("latent", Csv, "--fluid", FluidFile, "-T", "400", "--format", "json").GetProperty("volume_model").GetString());
         Assert.Equal("haggenmacher", RunJson("latent", Csv, "--tc", "540", "--pc", "3.1MPa", "-T", "400", "--format", "json").GetProperty("volume_model").GetString());
         Assert.Equal("ideal-gas", RunJson("latent", Csv, "-T", "400", "--format", "json").GetProperty("volume_model").GetString());
-        // Tc alone is not a critical point for the volume model.
-        Assert.Equal("ideal-gas", RunJson("latent", Csv, "--tc", "540", "-T", "400", "--format", "json").GetProperty("volume_model").GetString());
+        // Tc alone is not a critical point: refused rather than silently ignored.
+        AssertFailure(Run("latent", Csv, "--tc", "540", "-T", "400", "--format", "json"), ExitCodes.Usage, "--tc: needs --pc too");
     }
 
     [Fact]

@@ -105,11 +105,13 @@ public class AlphaSelectionTests
     [Fact]
     public void For_MathiasCopemanWithoutFluidParameters_Throws()
     {
-        foreach (var kind in new[] { CubicModelKind.PengRobinson, CubicModelKind.SoaveRedlichKwong })
+        foreach (var (kind, line) in new[] { (CubicModelKind.PengRobinson, "alpha_mathias_copeman_pr"), (CubicModelKind.SoaveRedlichKwong, "alpha_mathias_copeman_srk") })
         {
             var ex = Assert.Throws<InvalidInputException>(() => CubicModel.For(kind, Propane, AlphaForm.MathiasCopeman));
 
-            Assert.Equal($"no Mathias-Copeman parameters for propane with {kind.Title()}", ex.Message);
+            // The message names the fluid and model, and how to supply the constants.
+            Assert.StartsWith($"no Mathias-Copeman parameters for propane with {kind.Title()}: add a line '{line}  c1 c2 c3  | source'", ex.Message, StringComparison.Ordinal);
+            Assert.EndsWith("(docs/fluid-files.md)", ex.Message, StringComparison.Ordinal);
         }
     }
 

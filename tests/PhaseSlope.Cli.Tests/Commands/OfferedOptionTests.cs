@@ -1,0 +1,461 @@
+using System.CommandLine;
+using System.CommandLine.Help;
+using System.Globalization;
+using System.Text;
+using System.Text.Json;
+using static PhaseSlope.Cli.Tests.CliHarness;
+
+namespace PhaseSlope.Cli.Tests.Commands;
+
+/// <summary>Every option a command offers is honoured: giving it changes what the command
+/// produces (standard output, standard error, exit code or the files it writes), or it is
+/// refused with the usage exit code (or the documented code for a missing model parameter).
+/// The rows are checked against the command tree, so an option added without a row fails.</summary>
+public sealed class OfferedOptionTests : IDisposable
+{
+    private static readonly string Csv = FitData.ExampleCsv;
+    private static readonly string FluidFile = FitData.ExampleFluid;
+    private const string LangeWater = "8.07131,1730.63,233.426";
+    private const string BridgemanWater = "5.40221,1838.675,-31.737";
+
+    // A data file whose headers give no units, so --temperature-unit and --pressure-unit apply
+    // (values on ln P = A − 3000 K/T with P in kPa: rising, smooth, any unit choice gives a valid fit).
+    private const string BareData = "T,P\n300,10\n310,13.81\n320,18.68\n330,24.82\n340,32.42\n";
+
+    private readonly TempFolder _data = new();
+
+    /// <summary>Which commands and options the rows cover, and how the option shows.</summary>
+    /// <param name="Command">Command path, e.g. "fluids check".</param>
+    /// <param name="Option">The option's name.</param>
+    /// <param name="Baseline">A command line without the option (or with another value).</param>
+    /// <param name="Variant">The same with the option (or its other value).</param>
+    /// <param name="RefusedWith">Null when the variant must change the output; else its exit code.</param>
+    public sealed record Row(string Command, string Option, string[] Baseline, string[] Variant, int? RefusedWith)
+    {
+        public override string ToString() => $"{Command} {Option}: {string.Join(' ', Variant)}";
+    }
+
+    private static Row Changes(string command, string option, string[] baseline, params string[] extra)
+        => new(command, option, baseline, [.. baseline, .. extra], null);
+
+    private static Row Differs(string command, string option, string[] baseline, string[] variant)
+        => new(command, option, baseline, variant, null);
+
+    private static Row Refused(string command, string option, string[] variant, int code = ExitCodes.Usage)
+        => new(command, option, [], variant, code);
+
+    private static IEnumerable<Row> AllRows()
+    {
+        string[] coexist = ["coexist", "propane", "-T", "300"];
+        yield return Differs("coexist", "--temperature", coexist, ["coexist", "propane", "-T", "310"]);
+        yield return Differs("coexist", "--pressure", coexist, ["coexist", "propane", "-P", "1MPa"]);
+        yield return Refused("coexist", "--pressure", [.. coexist, "-P", "1MPa"]);
+        foreach (var row in ModelAndOutputRows("coexist", coexist, units: true))
+        {
+            yield return row;
+        }
+
+        yield return Changes("coexist", "--reference", coexist, "--reference", "nbp");
+        yield return Changes("coexist", "--diagnostics", coexist, "--diagnostics");
+
+        string[] curve = ["curve", "propane", "--points", "5"];
+        yield return Changes("curve", "--from", curve, "--from", "250");
+        yield return Changes("curve", "--to", curve, "--to", "350");
+        yield return Differs("curve", "--points", curve, ["curve", "propane", "--points", "6"]);
+        yield return Changes("curve", "--out", curve, "--out", "{dir}/out.csv");
+        yield return Refused("curve", "--units", [.. curve, "--out", "{dir}/out.csv", "--units", "engineering"]);
+        yield return Changes("curve", "--reference", curve, "--reference", "nbp");
+        yield return Changes("curve", "--diagnostics", curve, "--diagnostics");
+        foreach (var row in ModelAndOutputRows("curve", curve, units: true))
+        {
+            yield return row;
+        }
+
+        string[] state = ["state", "propane", "-T", "300", "-P", "1MPa"];
+        foreach (var row in StateRows("state", state))
+        {
+            yield return row;
+        }
+
+        foreach (var row in ModelAndOutputRows("state", state, units: true))
+        {
+            yield return row;
+        }
+
+        string[] derive = ["derive", "propane", "--of", "U", "--by", "V", "--hold", "T", "-T", "300", "-P", "1MPa"];
+        yield return Differs("derive", "--of", derive, ["derive", "propane", "--of", "H", "--by", "V", "--hold", "T", "-T", "300", "-P", "1MPa"]);
+        yield return Differs("derive", "--by", derive, ["derive", "propane", "--of", "U", "--by", "P", "--hold", "T", "-T", "300", "-P", "1MPa"]);
+        yield return Differs("derive", "--hold", derive, ["derive", "propane", "--of", "U", "--by", "V", "--hold", "S", "-T", "300", "-P", "1MPa"]);
+        yield return Refused("derive", "--hold", ["derive", "propane", "--of", "U", "--by", "V", "--hold", "V", "-T", "300", "-P", "1MPa"]);
+        string[] gibbs = ["derive", "propane", "--of", "G", "--by", "T", "--hold", "P", "-T", "300", "-P", "1MPa"];
+        yield return Changes("derive", "--reference", gibbs, "--reference", "nbp");
+        foreach (var row in StateRows("derive", derive).Where(r => r.Option != "--reference"))
+        {
+            yield return row;
+        }
+
+        foreach (var row in ModelAndOutputRows("derive", derive, units: false))
+        {
+            yield return row;
+        }
+
+        string[] fit = ["fit", Csv, "--form", "antoine"];
+        string[] fitAuto = ["fit", Csv];
+        string[] fitBare = ["fit", "{bare}", "--form", "clausius-clapeyron", "--temperature-unit", "K", "--pressure-unit", "kPa"];
+        yield return Differs("fit", "--form", fit, ["fit", Csv, "--form", "kirchhoff"]);
+        yield return Changes("fit", "--fluid", fitAuto, "--fluid", FluidFile);
+        yield return Refused("fit", "--fluid", [.. fit, "--fluid", FluidFile]);
+        yield return Changes("fit", "--tc", fitAuto, "--tc", "540", "--pc", "3.1MPa");
+        yield return Refused("fit", "--tc", [.. fitAuto, "--tc", "540"]);
+        yield return Refused("fit", "--tc", [.. fitAuto, "--fluid", FluidFile, "--tc", "540", "--pc", "3.1MPa"]);
+        yield return Changes("fit", "--pc", fitAuto, "--pc", "3.1MPa", "--tc", "540");
+        yield return Refused("fit", "--pc", [.. fitAuto, "--fluid", FluidFile, "--pc", "3.1MPa"]);
+        yield return Differs("fit", "--temperature-unit", fitBare, [.. fitBare[..4], "--temperature-unit", "degC", "--pressure-unit", "kPa"]);
+        yield return Differs("fit", "--pressure-unit", fitBare, [.. fitBare[..4], "--temperature-unit", "K", "--pressure-unit", "bar"]);
+        yield return Changes("fit", "--format", fit, "--format", "json");
+
+        string[] latent = ["latent", Csv, "--form", "antoine"];
+        string[] latentFluid = [.. latent, "--fluid", FluidFile];
+        string[] latentBare = ["latent", "{bare}", "--form", "clausius-clapeyron", "--temperature-unit", "K", "--pressure-unit", "kPa"];
+        yield return Differs("latent", "--form", latent, ["latent", Csv, "--form", "kirchhoff"]);
+        yield return Changes("latent", "--fluid", latent, "--fluid", FluidFile);
+        yield return Refused("latent", "--fluid", [.. latent, "--volume-model", "ideal-gas", "--fluid", FluidFile]);
+        yield return Changes("latent", "--tc", latent, "--tc", "540", "--pc", "3.1MPa");
+        yield return Refused("latent", "--tc", [.. latentFluid, "--tc", "540", "--pc", "3.1MPa"]);
+        yield return Changes("latent", "--pc", latent, "--pc", "3.1MPa", "--tc", "540");
+        yield return Refused("latent", "--pc", [.. latent, "--pc", "3.1MPa"]);
+        yield return Differs("latent", "--temperature-unit", latentBare, [.. latentBare[..4], "--temperature-unit", "degC", "--pressure-unit", "kPa"]);
+        yield return Differs("latent", "--pressure-unit", latentBare, [.. latentBare[..4], "--temperature-unit", "K", "--pressure-unit", "bar"]);
+        yield return Changes("latent", "--volume-model", latentFluid, "--volume-model", "haggenmacher");
+        yield return Changes("latent", "--temperature", latent, "--temperature", "350");
+        yield return Refused("latent", "--temperature", [.. latent, "--temperature", "350", "--from", "320"]);
+        yield return Changes("latent", "--from", latent, "--from", "320");
+        yield return Changes("latent", "--to", latent, "--to", "400");
+        yield return Changes("latent", "--points", latent, "--points", "5");
+        yield return Refused("latent", "--points", [.. latent, "--temperature", "350", "--points", "5"]);
+        yield return Changes("latent", "--eos", latentFluid, "--eos", "srk");
+        yield return Refused("latent", "--eos", [.. latent, "--eos", "srk"]);
+        yield return Changes("latent", "--alpha", latentFluid, "--alpha", "twu");
+        yield return Refused("latent", "--alpha", [.. latent, "--tc", "540", "--pc", "3.1MPa", "--alpha", "twu"]);
+        yield return Changes("latent", "--format", latent, "--format", "json");
+
+        string[] audit = ["audit", "--form", "antoine", "--coefficients", LangeWater, "--range", "1,100", "--log-base", "10",
+            "--correlation-pressure-unit", "mmHg", "--correlation-temperature-unit", "degC"];
+        string[] auditFluid = [.. audit, "--fluid", "water"];
+        string[] against = [.. audit, "--against", "antoine", "--coefficients2", BridgemanWater, "--log-base2", "10",
+            "--correlation-pressure-unit2", "bar", "--correlation-temperature-unit2", "K"];
+        yield return Differs("audit", "--form", audit, ["audit", "--form", "clausius-clapeyron", "--coefficients", "8.8,2000", "--range", "1,100", "--log-base", "10",
+            "--correlation-pressure-unit", "mmHg", "--correlation-temperature-unit", "K"]);
+        yield return Differs("audit", "--coefficients", audit, Replace(audit, LangeWater, "8.2,1730.63,233.426"));
+        yield return Differs("audit", "--log-base", audit, Replace(audit, "10", "e"));
+        yield return Differs("audit", "--correlation-pressure-unit", audit, Replace(audit, "mmHg", "kPa"));
+        yield return Differs("audit", "--correlation-temperature-unit", audit, Replace(audit, "degC", "K"));
+        yield return Differs("audit", "--range", audit, Replace(audit, "1,100", "10,90"));
+        yield return Changes("audit", "--data", audit, "--data", Csv);
+        yield return Changes("audit", "--fluid", audit, "--fluid", "water");
+        yield return Changes("audit", "--eos", auditFluid, "--eos", "vdw");
+        yield return Refused("audit", "--eos", [.. audit, "--eos", "srk"]);
+        yield return Refused("audit", "--eos", [.. auditFluid, "--eos", "nonesuch"]);
+        yield return Differs("audit", "--against", audit, against);
+        yield return Refused("audit", "--coefficients2", [.. audit, "--coefficients2", BridgemanWater]);
+        yield return Differs("audit", "--coefficients2", against, Replace(against, BridgemanWater, "5.3,1838.675,-31.737"));
+        yield return Differs("audit", "--log-base2", against, Replace(against, "10", "e", skip: 1));
+        yield return Differs("audit", "--correlation-pressure-unit2", against, Replace(against, "bar", "MPa"));
+        yield return Differs("audit", "--correlation-temperature-unit2", against, Replace(against, "K", "degC"));
+        yield return Changes("audit", "--threshold", against, "--threshold", "50");
+        yield return Refused("audit", "--threshold", [.. audit, "--threshold", "5"]);
+        yield return Changes("audit", "--format", audit, "--format", "json");
+
+        string[] plot = ["plot", "propane", "--diagram", "p-t", "--out", "{dir}/out.svg"];
+        string[] dome = ["plot", "propane", "--diagram", "t-rho", "--out", "{dir}/out.svg"];
+        string[] plotBare = [.. plot, "--data", "{bare}", "--temperature-unit", "K", "--pressure-unit", "kPa"];
+        yield return Differs("plot", "--diagram", plot, Replace(plot, "p-t", "slope"));
+        yield return Differs("plot", "--out", plot, Replace(plot, "{dir}/out.svg", "{dir}/out.png"));
+        yield return Changes("plot", "--width", plot, "--width", "800");
+        yield return Changes("plot", "--height", plot, "--height", "600");
+        yield return Changes("plot", "--data", plot, "--data", Csv);
+        yield return Changes("plot", "--reduced", plot, "--reduced");
+        yield return Changes("plot", "--log", plot, "--log");
+        yield return Differs("plot", "--temperature-unit", plotBare, Replace(plotBare, "K", "degC"));
+        yield return Refused("plot", "--temperature-unit", [.. plot, "--temperature-unit", "K"]);
+        yield return Differs("plot", "--pressure-unit", plotBare, Replace(plotBare, "kPa", "bar"));
+        yield return Refused("plot", "--pressure-unit", [.. plot, "--pressure-unit", "kPa"]);
+        yield return Changes("plot", "--eos", plot, "--eos", "srk");
+        yield return Changes("plot", "--alpha", plot, "--alpha", "twu");
+        yield return Changes("plot", "--volume-shift", dome, "--volume-shift", "peneloux");
+        yield return Changes("plot", "--units", plot, "--units", "engineering");
+
+        string[] list = ["fluids", "list"];
+        yield return Changes("fluids list", "--family", list, "--family", "alkane");
+        yield return Changes("fluids list", "--name", list, "--name", "prop");
+        yield return Changes("fluids list", "--format", list, "--format", "json");
+        yield return Changes("fluids list", "--units", list, "--units", "engineering");
+        yield return Refused("fluids list", "--units", [.. list, "--format", "csv", "--units", "si"]);
+
+        string[] show = ["fluids", "show", "propane"];
+        yield return Changes("fluids show", "--format", show, "--format", "json");
+        yield return Changes("fluids show", "--units", show, "--units", "engineering");
+        yield return Refused("fluids show", "--units", [.. show, "--format", "json", "--units", "engineering"]);
+
+        string[] check = ["fluids", "check", FluidFile];
+        yield return Changes("fluids check", "--eos", check, "--eos", "srk");
+        yield return Changes("fluids check", "--alpha", check, "--alpha", "twu");
+        yield return Refused("fluids check", "--alpha", [.. check, "--alpha", "mathias-copeman"], ExitCodes.OutOfRange);
+        yield return Changes("fluids check", "--volume-shift", check, "--volume-shift", "peneloux");
+        yield return Changes("fluids check", "--format", check, "--format", "json");
+
+        string[] estimate = ["fluids", "estimate", "--name", "test-fluid", "--molar-mass", "100 g/mol", "--tc", "500", "--pc", "3MPa", "--tb", "350"];
+        yield return Differs("fluids estimate", "--name", estimate, Replace(estimate, "test-fluid", "other-fluid"));
+        yield return Changes("fluids estimate", "--formula", estimate, "--formula", "C7H16");
+        yield return Changes("fluids estimate", "--cas", estimate, "--cas", "142-82-5");
+        yield return Changes("fluids estimate", "--family", estimate, "--family", "alkane");
+        yield return Changes("fluids estimate", "--synonyms", estimate, "--synonyms", "tf;test");
+        yield return Differs("fluids estimate", "--molar-mass", estimate, Replace(estimate, "100 g/mol", "120 g/mol"));
+        yield return Changes("fluids estimate", "--groups", estimate, "--groups", "CH3:2,CH2:5");
+        yield return Differs("fluids estimate", "--tc", estimate, Replace(estimate, "500", "510"));
+        yield return Differs("fluids estimate", "--pc", estimate, Replace(estimate, "3MPa", "3.2MPa"));
+        yield return Differs("fluids estimate", "--tb", estimate, Replace(estimate, "350", "360"));
+        yield return Changes("fluids estimate", "--omega", estimate, "--omega", "0.3");
+        yield return Changes("fluids estimate", "--vapour-pressure", estimate, "--vapour-pressure", "400 K, 300 kPa");
+        yield return Refused("fluids estimate", "--vapour-pressure", [.. estimate, "--omega", "0.3", "--vapour-pressure", "400 K, 300 kPa"]);
+        yield return Changes("fluids estimate", "--omega-method", estimate, "--omega-method", "edmister");
+        yield return Refused("fluids estimate", "--omega-method", [.. estimate, "--omega", "0.3", "--omega-method", "edmister"]);
+        yield return Changes("fluids estimate", "--out", estimate, "--out", "{dir}/out.fluid");
+    }
+
+    /// <summary>--eos, --alpha, --volume-shift, --format and (where offered) --units.</summary>
+    private static IEnumerable<Row> ModelAndOutputRows(string command, string[] baseline, bool units)
+    {
+        yield return Changes(command, "--eos", baseline, "--eos", "srk");
+        yield return Refused(command, "--eos", [.. baseline, "--eos", "nonesuch"]);
+        yield return Changes(command, "--alpha", baseline, "--alpha", "twu");
+        // No catalog fluid has Mathias-Copeman constants: refused, exit 4 (see MathiasCopeman_* below).
+        yield return Refused(command, "--alpha", [.. baseline, "--alpha", "mathias-copeman"], ExitCodes.OutOfRange);
+        yield return Changes(command, "--volume-shift", baseline, "--volume-shift", "peneloux");
+        yield return Changes(command, "--format", baseline, "--format", "json");
+        if (units)
+        {
+            yield return Changes(command, "--units", baseline, "--units", "engineering");
+            yield return Refused(command, "--units", [.. baseline, "--format", "json", "--units", "engineering"]);
+        }
+    }
+
+    /// <summary>--temperature, --pressure, --density, --phase and --reference on a state at 300 K, 1 MPa.</summary>
+    private static IEnumerable<Row> StateRows(string command, string[] baseline)
+    {
+        yield return Differs(command, "--temperature", baseline, Replace(baseline, "300", "310"));
+        yield return Differs(command, "--pressure", baseline, Replace(baseline, "1MPa", "2MPa"));
+        yield return Differs(command, "--density", baseline, [.. baseline[..^2], "--density", "100"]);
+        yield return Refused(command, "--density", [.. baseline, "--density", "100"]);
+        yield return Changes(command, "--phase", baseline, "--phase", "vapour");
+        yield return Refused(command, "--phase", [.. baseline[..^2], "--density", "100", "--phase", "liquid"]);
+        yield return Changes(command, "--reference", baseline, "--reference", "nbp");
+    }
+
+    private static string[] Replace(string[] args, string from, string to, int skip = 0)
+    {
+        var result = (string[])args.Clone();
+        int seen = 0;
+        for (int i = 0; i < result.Length; i++)
+        {
+            if (result[i] == from && seen++ == skip)
+            {
+                result[i] = to;
+                return result;
+            }
+        }
+
+        throw new ArgumentException($"'{from}' not in the command line {string.Join(' ', args)}");
+    }
+
+    public static TheoryData<Row> Rows()
+    {
+        var data = new TheoryData<Row>();
+        foreach (var row in AllRows())
+        {
+            data.Add(row);
+        }
+
+        return data;
+    }
+
+    /// <summary>Every leaf command and the options it offers, from the command tree itself.</summary>
+    private static IEnumerable<(string Command, string Option)> OfferedOptions()
+    {
+        var root = CliApp.Root(new CliIo(TextWriter.Null, TextWriter.Null));
+        var pending = new Stack<(Command Command, string Path)>(root.Subcommands.Select(c => (c, c.Name)));
+        while (pending.Count > 0)
+        {
+            var (command, path) = pending.Pop();
+            foreach (var sub in command.Subcommands)
+            {
+                pending.Push((sub, $"{path} {sub.Name}"));
+            }
+
+            foreach (var option in command.Options.Where(o => o is not HelpOption and not VersionOption))
+            {
+                yield return (path, option.Name);
+            }
+        }
+    }
+
+    [Fact]
+    public void EveryOfferedOption_HasARowThatChangesTheOutput()
+    {
+        var changing = AllRows().Where(r => r.RefusedWith is null).Select(r => (r.Command, r.Option)).ToHashSet();
+        var missing = OfferedOptions().Where(o => !changing.Contains(o)).Select(o => $"{o.Command} {o.Option}").ToArray();
+        Assert.True(missing.Length == 0, "options offered with no row showing their effect: " + string.Join(", ", missing));
+    }
+
+    [Fact]
+    public void EveryRow_NamesAnOptionTheCommandOffers()
+    {
+        var offered = OfferedOptions().ToHashSet();
+        var stray = AllRows().Where(r => !offered.Contains((r.Command, r.Option))).Select(r => r.ToString()).ToArray();
+        Assert.True(stray.Length == 0, "rows for options not offered: " + string.Join("; ", stray));
+    }
+
+    [Theory]
+    [MemberData(nameof(Rows))]
+    public void OfferedOption_ChangesTheOutputOrIsRefused(Row row)
+    {
+        if (row.RefusedWith is int code)
+        {
+            using var folder = new TempFolder();
+            var refused = Run(Expand(row.Variant, folder));
+            AssertFailure(refused, code);
+            Assert.Empty(folder.Entries());
+            return;
+        }
+
+        string before = Outcome(row.Baseline);
+        string after = Outcome(row.Variant);
+        Assert.True(before != after, $"{row.Option} on {row.Command} changed nothing: {after}");
+    }
+
+    [Theory]
+    [InlineData("derive", "--units")]
+    [InlineData("fit", "--units")]
+    [InlineData("latent", "--units")]
+    [InlineData("latent", "--volume-shift")]
+    [InlineData("fluids check", "--units")]
+    [InlineData("audit", "--temperature-unit")]
+    [InlineData("audit", "--pressure-unit")]
+    public void OptionACommandCannotHonour_IsNotOffered(string command, string option)
+        => Assert.DoesNotContain((command, option), OfferedOptions());
+
+    [Fact]
+    public void MathiasCopeman_CatalogFluid_RefusalNamesTheFluidAndTheLineToAdd()
+    {
+        var result = Run("coexist", "propane", "-T", "300", "--alpha", "mathias-copeman");
+        AssertFailure(result, ExitCodes.OutOfRange, "no Mathias-Copeman parameters for propane");
+        Assert.Contains("alpha_mathias_copeman_pr", result.Stderr, StringComparison.Ordinal);
+        Assert.Contains("docs/fluid-files.md", result.Stderr, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void MathiasCopeman_FluidFileWithConstants_IsUsedByFluidsCheck()
+    {
+        // The FRC-7 example file with invented Mathias-Copeman constants added (c1 close to the
+        // Soave m of its omega, so the model stays near the default one and converges).
+        string path = _data.File("frc-7-mc.fluid");
+        File.WriteAllText(path, File.ReadAllText(FluidFile) + "alpha_mathias_copeman_pr  0.88 0.05 0.0  | invented for this test\n");
+        var json = RunJson("fluids", "check", path, "--alpha", "mathias-copeman", "--format", "json");
+        Assert.Contains("Mathias", json.GetProperty("model").GetProperty("alpha").GetString(), StringComparison.Ordinal);
+        Assert.True(json.GetProperty("solves_to_critical_point").GetBoolean());
+    }
+
+    [Theory]
+    [InlineData("coexist", "propane", "-T", "300", "--format", "json")]
+    [InlineData("curve", "propane", "--points", "4", "--format", "json")]
+    [InlineData("state", "propane", "-T", "300", "-P", "1MPa", "--format", "json")]
+    [InlineData("derive", "propane", "--of", "V", "--by", "P", "--hold", "T", "-T", "300", "-P", "1MPa", "--format", "json")]
+    [InlineData("fit", "{csv}", "--format", "json")]
+    [InlineData("latent", "{csv}", "--fluid", "{fluid}", "--format", "json")]
+    [InlineData("audit", "--form", "antoine", "--coefficients", LangeWater, "--range", "1,100", "--fluid", "water", "--format", "json")]
+    [InlineData("fluids", "list", "--format", "json")]
+    [InlineData("fluids", "show", "water", "--format", "json")]
+    [InlineData("fluids", "check", "{fluid}", "--format", "json")]
+    public void Json_EveryObject_HasDistinctPropertyNames(params string[] args)
+    {
+        var result = Run([.. args.Select(a => a.Replace("{csv}", Csv, StringComparison.Ordinal).Replace("{fluid}", FluidFile, StringComparison.Ordinal))]);
+        Assert.True(result.ExitCode is 0 or ExitCodes.AuditFailed, result.ToString());
+        AssertStrictJson(result.Stdout);
+    }
+
+    [Fact]
+    public void Latent_Json_CountIsPointCountAndPointsIsTheArray()
+    {
+        var result = Run("latent", Csv, "--fluid", FluidFile, "--points", "4", "--format", "json");
+        AssertStrictJson(result.Stdout);
+        using var document = JsonDocument.Parse(result.Stdout);
+        var root = document.RootElement;
+        Assert.Equal(JsonValueKind.Array, root.GetProperty("points").ValueKind);
+        Assert.Equal(4, root.GetProperty("points").GetArrayLength());
+        // point_count is the number of data points fitted, not of temperatures printed.
+        Assert.Equal(File.ReadLines(Csv).Count(l => l.Length > 0 && char.IsAsciiDigit(l[0])), root.GetProperty("point_count").GetInt32());
+    }
+
+    [Fact]
+    public void StrictJson_RepeatedName_IsCaught()
+        => Assert.ThrowsAny<Exception>(() => AssertStrictJson("{\"a\": 1, \"b\": {\"c\": 2, \"c\": 3}}"));
+
+    /// <summary>Parses <paramref name="json"/> and asserts that no object repeats a property name.</summary>
+    private static void AssertStrictJson(string json)
+    {
+        using var document = JsonDocument.Parse(json);
+        var pending = new Stack<(JsonElement Element, string Path)>([(document.RootElement, "$")]);
+        while (pending.Count > 0)
+        {
+            var (element, path) = pending.Pop();
+            if (element.ValueKind == JsonValueKind.Object)
+            {
+                var names = new HashSet<string>(StringComparer.Ordinal);
+                foreach (var property in element.EnumerateObject())
+                {
+                    Assert.True(names.Add(property.Name), $"{path} repeats the key '{property.Name}'");
+                    pending.Push((property.Value, $"{path}.{property.Name}"));
+                }
+            }
+            else if (element.ValueKind == JsonValueKind.Array)
+            {
+                int i = 0;
+                foreach (var item in element.EnumerateArray())
+                {
+                    pending.Push((item, $"{path}[{i++}]"));
+                }
+            }
+        }
+    }
+
+    private string[] Expand(string[] args, TempFolder folder)
+    {
+        string bare = _data.File("bare.csv");
+        if (!File.Exists(bare))
+        {
+            File.WriteAllText(bare, BareData);
+        }
+
+        return [.. args.Select(a => a.Replace("{dir}", folder.Path, StringComparison.Ordinal).Replace("{bare}", bare, StringComparison.Ordinal))];
+    }
+
+    /// <summary>What a successful run produced: exit code, stdout, stderr without timings, and
+    /// the bytes of every file it wrote.</summary>
+    private string Outcome(string[] args)
+    {
+        using var folder = new TempFolder();
+        var result = Run(Expand(args, folder));
+        Assert.True(result.ExitCode is 0 or ExitCodes.AuditFailed, $"{string.Join(' ', args)}: {result}");
+        var text = new StringBuilder();
+        text.Append(CultureInfo.InvariantCulture, $"exit {result.ExitCode}\n{result.Stdout.Replace(folder.Path, "{dir}", StringComparison.Ordinal)}\n--stderr--\n");
+        text.Append(result.Stderr.Replace(folder.Path, "{dir}", StringComparison.Ordinal));
+        foreach (string name in folder.Entries())
+        {
+            text.Append(CultureInfo.InvariantCulture, $"\n--{name}--\n{Convert.ToBase64String(File.ReadAllBytes(folder.File(name)))}");
+        }
+
+        return text.ToString();
+    }
+
+    public void Dispose() => _data.Dispose();
+}
