@@ -28,7 +28,7 @@ internal static class AuditCommand
         var data = new Option<string>("--data") { Description = "CSV file of measured vapour pressures with units in the headers (see docs/data-files.md)" };
         var fluid = new Option<string>("--fluid") { Description = "Catalog fluid or fluid file: normal boiling point, Tc and the model's vapour pressure to test against" };
         var against = new Option<string>("--against") { Description = "Form of a second correlation to compare with" };
-        var coefficients2 = new Option<string>("--coefficients2") { Description = "Coefficients of the second correlation" };
+        var coefficients2 = new Option<string>("--coefficients2") { Description = "Coefficients of the second correlation, as printed (bare numbers in its own convention: --log-base2, --pressure-unit2, --temperature-unit2)" };
         var logBase2 = new Option<string>("--log-base2") { Description = "Log base of the second correlation (default: the first's)" };
         var pressureUnit2 = new Option<string>("--pressure-unit2") { Description = "Pressure unit of the second correlation (default: the first's)" };
         var temperatureUnit2 = new Option<string>("--temperature-unit2") { Description = "Temperature unit of the second correlation (default: the first's)" };

@@ -46,6 +46,8 @@ public class BareNumberHelpTests
     [InlineData("latent", "--to", "bare number: K")]
     [InlineData("audit", "--range", "bare numbers in --temperature-unit")]
     [InlineData("audit", "--threshold", "bare number: percent")]
+    [InlineData("audit", "--coefficients", "bare numbers in the printed form's own units")]
+    [InlineData("audit", "--coefficients2", "bare numbers in its own convention")]
     [InlineData("plot", "--temperature-unit", "bare numbers in this unit")]
     [InlineData("plot", "--pressure-unit", "bare numbers in this unit")]
     [InlineData("fluids estimate", "--tc", "bare number: K")]
