@@ -8,6 +8,7 @@ using PhaseSlope.Cli.Units;
 using PhaseSlope.Core.Correlations;
 using PhaseSlope.Core.Correlations.Audit;
 using PhaseSlope.Core.Equilibrium;
+using PhaseSlope.Core.Units;
 
 namespace PhaseSlope.Cli.Commands;
 
@@ -19,19 +20,19 @@ internal static class AuditCommand
     public static Command Create(CliIo io)
     {
         var form = new Option<string>("--form") { Description = $"Printed form: {string.Join(", ", PublishedCorrelation.FormIds)}", Required = true };
-        var coefficients = new Option<string>("--coefficients") { Description = "Coefficients as printed, comma-separated (A,B,C for antoine and kirchhoff, A,B for clausius-clapeyron, A,B,C,D for riedel)", Required = true };
+        var coefficients = new Option<string>("--coefficients") { Description = "Coefficients as printed, comma-separated (A,B,C for antoine and kirchhoff, A,B for clausius-clapeyron, A,B,C,D for riedel); bare numbers in the printed form's own units", Required = true };
         var logBase = new Option<string>("--log-base") { Description = "Logarithm of the printed form: 10 or e (omit to detect)" };
-        var pressureUnit = new Option<string>("--correlation-pressure-unit") { Description = "Pressure unit of the printed form: Pa, kPa, MPa, bar, mmHg, atm, psi (omit to detect)" };
+        var pressureUnit = new Option<string>("--correlation-pressure-unit") { Description = "Pressure unit of the printed form: Pa, kPa, MPa, bar, mmHg (conventional, 133.322387415 Pa), torr, atm, psi (omit to detect; detection never picks torr)" };
         var temperatureUnit = new Option<string>("--correlation-temperature-unit") { Description = "Temperature of the printed form: K or degC (degC for antoine only; omit to detect)" };
         var range = new Option<string>("--range") { Description = "Stated range TMIN,TMAX (bare numbers in --correlation-temperature-unit if given, else K; or with units, e.g. \"1 degC,100 degC\")" };
         var data = new Option<string>("--data") { Description = "CSV file of measured vapour pressures with units in the headers (see docs/data-files.md)" };
         var fluid = new Option<string>("--fluid") { Description = "Catalog fluid or fluid file: normal boiling point, Tc and the model's vapour pressure to test against" };
         var against = new Option<string>("--against") { Description = "Form of a second correlation to compare with" };
-        var coefficients2 = new Option<string>("--coefficients2") { Description = "Coefficients of the second correlation" };
+        var coefficients2 = new Option<string>("--coefficients2") { Description = "Coefficients of the second correlation, as printed (bare numbers in its own convention: --log-base2, --correlation-pressure-unit2, --correlation-temperature-unit2)" };
         var logBase2 = new Option<string>("--log-base2") { Description = "Log base of the second correlation (default: the first's)" };
         var pressureUnit2 = new Option<string>("--correlation-pressure-unit2") { Description = "Pressure unit of the second correlation (default: the first's)" };
         var temperatureUnit2 = new Option<string>("--correlation-temperature-unit2") { Description = "Temperature unit of the second correlation (default: the first's)" };
-        var threshold = new Option<string>("--threshold") { Description = "Difference in percent above which the two correlations disagree (default 1)" };
+        var threshold = new Option<string>("--threshold") { Description = "Difference above which the two correlations disagree (bare number: percent; default 1)" };
         var format = new Option<string>("--format") { Description = "Output format: table or json", DefaultValueFactory = _ => "table" };
         var common = new CommonOptions();
         var eos = common.Eos;
@@ -138,13 +139,18 @@ internal static class AuditCommand
         => PublishedConvention.TryParseLogBase(text, out var b) ? b : throw new UsageException($"{option}: unknown log base '{text}' (use 10 or e)");
 
     private static PublishedPressureUnit Pressure(string text, string option)
-        => PublishedConvention.TryParsePressureUnit(text, out var u) ? u : throw new UsageException($"{option}: unknown pressure unit '{text}' (use Pa, kPa, MPa, bar, mmHg, atm or psi)");
+        => PublishedConvention.TryParsePressureUnit(text, out var u) ? u : throw new UsageException(
+            UnitTable.TryFind(text, out _, Dimension.Pressure)
+                ? $"{option}: pressure unit '{DataFileException.OneLine(text.Trim())}' is not offered for published correlations (use Pa, kPa, MPa, bar, mmHg, torr, atm or psi)"
+                : $"{option}: {DataFileException.OneLine(UnitTable.UnknownMessage(text, "pressure", Dimension.Pressure))}");
 
     private static PublishedTemperatureUnit Temperature(string text, string option, PublishedCorrelation correlation)
     {
         if (!PublishedConvention.TryParseTemperatureUnit(text, out var u))
         {
-            throw new UsageException($"{option}: unknown temperature unit '{text}' (use K or degC)");
+            throw new UsageException(UnitTable.TryFind(text, out _, Dimension.Temperature)
+                ? $"{option}: temperature unit '{DataFileException.OneLine(text.Trim())}' is not offered for published correlations (use K or degC)"
+                : $"{option}: {DataFileException.OneLine(UnitTable.UnknownMessage(text, "temperature", Dimension.Temperature))}");
         }
 
         return u == PublishedTemperatureUnit.Celsius && !correlation.AllowsCelsius

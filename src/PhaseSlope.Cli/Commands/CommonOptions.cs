@@ -137,16 +137,7 @@ internal sealed class CommonOptions
                 Core.Models.VolumeShift.RackettCompressibility(fluid.AcentricFactor.Value));
         }
 
-        (string number, double factor) = t switch
-        {
-            _ when t.EndsWith("cm3/mol", StringComparison.OrdinalIgnoreCase) => (t[..^7], 1e-6),
-            _ when t.EndsWith("L/mol", StringComparison.OrdinalIgnoreCase) => (t[..^5], 1e-3),
-            _ when t.EndsWith("m3/mol", StringComparison.OrdinalIgnoreCase) => (t[..^6], 1.0),
-            _ => (t, 1.0),
-        };
-        return double.TryParse(number.Trim(), System.Globalization.NumberStyles.Float, System.Globalization.CultureInfo.InvariantCulture, out double value) && double.IsFinite(value)
-            ? value * factor
-            : throw new UsageException($"--volume-shift: '{text}' is not none, peneloux or a volume in m3/mol, cm3/mol or L/mol");
+        return QuantityParser.ParseVolumeShift(t, "--volume-shift");
     }
 
     /// <summary>The chosen output format.</summary>

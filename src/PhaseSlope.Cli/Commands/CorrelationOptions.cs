@@ -26,16 +26,16 @@ internal sealed class CorrelationOptions
     public Option<string> Fluid { get; } = new("--fluid") { Description = "Catalog fluid or fluid file: gives Tc, Pc and omega for the Wagner and predictive forms, and the model for the eos volume change" };
 
     /// <summary>--tc.</summary>
-    public Option<string> CriticalTemperature { get; } = new("--tc") { Description = "Critical temperature for the Wagner forms when no --fluid is given" };
+    public Option<string> CriticalTemperature { get; } = new("--tc") { Description = "Critical temperature for the Wagner forms when no --fluid is given, e.g. 369.89 K (bare number: K)" };
 
     /// <summary>--pc.</summary>
-    public Option<string> CriticalPressure { get; } = new("--pc") { Description = "Critical pressure for the Wagner forms when no --fluid is given" };
+    public Option<string> CriticalPressure { get; } = new("--pc") { Description = "Critical pressure for the Wagner forms when no --fluid is given, e.g. 4.2512 MPa (bare number: Pa)" };
 
     /// <summary>--temperature-unit.</summary>
-    public Option<string> TemperatureUnit { get; } = new("--temperature-unit") { Description = "Unit of a temperature column whose header gives none (K, degC, degF, degR)" };
+    public Option<string> TemperatureUnit { get; } = new("--temperature-unit") { Description = "Unit of a temperature column whose header gives none: K, degC, degF or degR (data cells are bare numbers in this unit)" };
 
     /// <summary>--pressure-unit.</summary>
-    public Option<string> PressureUnit { get; } = new("--pressure-unit") { Description = "Unit of a pressure column whose header gives none (Pa, kPa, MPa, bar, psi, atm, mmHg, ...)" };
+    public Option<string> PressureUnit { get; } = new("--pressure-unit") { Description = "Unit of a pressure column whose header gives none: Pa, kPa, MPa, bar, psi, atm, mmHg, torr, ... (data cells are bare numbers in this unit)" };
 
     /// <summary>Creates the options with the default form.</summary>
     public CorrelationOptions(string defaultForm)

@@ -15,8 +15,8 @@ internal static class CurveCommand
     public static Command Create(CliIo io)
     {
         var fluid = CommonOptions.FluidArgument();
-        var from = new Option<string>("--from") { Description = "First temperature (default: the lowest valid temperature, 0.3 Tc or the triple point)" };
-        var to = new Option<string>("--to") { Description = "Last temperature (default: the critical temperature; the last state is then the critical point)" };
+        var from = new Option<string>("--from") { Description = "First temperature, e.g. 250 K or -20 degC (bare number: K; default: the lowest valid temperature, 0.3 Tc or the triple point)" };
+        var to = new Option<string>("--to") { Description = "Last temperature (bare number: K; default: the critical temperature; the last state is then the critical point)" };
         var points = new Option<int>("--points", "-n")
         {
             Description = $"Number of states, 2 to {MaxPoints}; spaced evenly in sqrt(Tc - T) so the near-critical region is resolved",

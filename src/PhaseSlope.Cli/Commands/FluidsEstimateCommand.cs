@@ -21,18 +21,18 @@ internal static class FluidsEstimateCommand
         var cas = new Option<string>("--cas") { Description = "CAS registry number" };
         var family = new Option<string>("--family") { Description = "Family, e.g. alkane, ketone" };
         var synonyms = new Option<string>("--synonyms") { Description = "Other names separated by ';'" };
-        var molarMass = new Option<string>("--molar-mass") { Description = "Molar mass with its unit, e.g. '72.15 g/mol' (default: from --formula)" };
+        var molarMass = new Option<string>("--molar-mass") { Description = "Molar mass with its unit, e.g. '72.15 g/mol' (bare number: refused, give g/mol or kg/mol; default: from --formula)" };
         var groups = new Option<string>("--groups")
         {
             Description = "Joback groups as ID:COUNT pairs, e.g. 'CH3:2,CH2:3'; IDs: " + string.Join(", ", Joback.Groups.Select(g => g.Id)),
         };
-        var tc = new Option<string>("--tc") { Description = "Critical temperature, if known (else estimated by Joback)" };
-        var pc = new Option<string>("--pc") { Description = "Critical pressure, if known (else estimated by Joback)" };
-        var tb = new Option<string>("--tb") { Description = "Normal boiling point, if known (else estimated by Joback)" };
-        var omega = new Option<string>("--omega") { Description = "Acentric factor, if known (else estimated from a vapour pressure)" };
+        var tc = new Option<string>("--tc") { Description = "Critical temperature, if known (bare number: K; else estimated by Joback)" };
+        var pc = new Option<string>("--pc") { Description = "Critical pressure, if known (bare number: Pa; else estimated by Joback)" };
+        var tb = new Option<string>("--tb") { Description = "Normal boiling point, if known (bare number: K; else estimated by Joback)" };
+        var omega = new Option<string>("--omega") { Description = "Acentric factor, if known (a bare number, dimensionless; else estimated from a vapour pressure)" };
         var vapourPressure = new Option<string>("--vapour-pressure")
         {
-            Description = "One measured vapour pressure 'T, P' (e.g. '350 K, 45 kPa') for the acentric factor; default: the normal boiling point",
+            Description = "One measured vapour pressure 'T, P' (e.g. '350 K, 45 kPa'; bare numbers: K and Pa) for the acentric factor; default: the normal boiling point",
         };
         var method = new Option<string>("--omega-method")
         {
@@ -151,12 +151,7 @@ internal static class FluidsEstimateCommand
     {
         if (text is not null)
         {
-            string t = text.Trim();
-            (string number, double factor) = t.EndsWith("kg/mol", StringComparison.OrdinalIgnoreCase) ? (t[..^6], 1.0)
-                : t.EndsWith("g/mol", StringComparison.OrdinalIgnoreCase) ? (t[..^5], 1e-3)
-                : throw new UsageException($"--molar-mass: give a unit, g/mol or kg/mol, in '{text}'");
-            double value = Number(number, "--molar-mass") * factor;
-            return value > 0 ? new SourcedValue(value, Given) : throw new UsageException($"--molar-mass: must be above zero, got '{text}'");
+            return new SourcedValue(QuantityParser.ParseMolarMass(text, "--molar-mass"), Given);
         }
 
         if (formula is not null)

@@ -23,9 +23,9 @@ internal static class LatentCommand
             Description = "Volume change: ideal-gas (vapour ideal, liquid neglected), eos (the model's compressibility change for --fluid; the default with --fluid), "
                 + "haggenmacher (corresponding states from Tc and Pc; the default with --tc/--pc only)",
         };
-        var temperature = new Option<string>("--temperature", "-T") { Description = "One temperature" };
-        var from = new Option<string>("--from") { Description = "First temperature of a range (default: the lowest data temperature)" };
-        var to = new Option<string>("--to") { Description = "Last temperature of a range (default: the highest data temperature)" };
+        var temperature = new Option<string>("--temperature", "-T") { Description = "One temperature, e.g. 300 K or 26.85 degC (bare number: K)" };
+        var from = new Option<string>("--from") { Description = "First temperature of a range (bare number: K; default: the lowest data temperature)" };
+        var to = new Option<string>("--to") { Description = "Last temperature of a range (bare number: K; default: the highest data temperature)" };
         var points = new Option<int>("--points", "-n") { Description = $"Temperatures in the range, 2 to 10000 (default {DefaultPoints})", DefaultValueFactory = _ => DefaultPoints };
         var command = new Command("latent", "Enthalpy of vaporization from P-T data via Clapeyron, dH = T dv dP/dT, with a standard uncertainty");
         options.AddTo(command);

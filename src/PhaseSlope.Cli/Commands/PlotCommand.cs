@@ -23,8 +23,8 @@ internal static class PlotCommand
         var data = new Option<string>("--data") { Description = "CSV of measured vapour pressures (as for fit): overlaid on p-t and lnp-invt; on latent, the Clapeyron estimate with its +-u band" };
         var reduced = new Option<bool>("--reduced") { Description = "Reduced coordinates T/Tc, P/Pc, rho/rhoc for corresponding-states comparison (p-t, lnp-invt, t-rho, slope, p-v)" };
         var log = new Option<bool>("--log") { Description = "Logarithmic pressure axis (p-t) or slope axis (slope)" };
-        var temperatureUnit = new Option<string>("--temperature-unit") { Description = "Unit of a data temperature column whose header gives none" };
-        var pressureUnit = new Option<string>("--pressure-unit") { Description = "Unit of a data pressure column whose header gives none" };
+        var temperatureUnit = new Option<string>("--temperature-unit") { Description = "Unit of a data temperature column whose header gives none: K, degC, degF or degR (data cells are bare numbers in this unit)" };
+        var pressureUnit = new Option<string>("--pressure-unit") { Description = "Unit of a data pressure column whose header gives none: Pa, kPa, MPa, bar, psi, atm, mmHg, torr, ... (data cells are bare numbers in this unit)" };
         var units = new Option<string>("--units")
         {
             Description = "Axis units: si (K, kPa, mol/m3, cm3/mol, kJ/mol) or engineering (degC, bar, kg/m3, m3/kg, kJ/kg)",

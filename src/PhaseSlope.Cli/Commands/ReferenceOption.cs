@@ -14,7 +14,7 @@ internal static class ReferenceOption
         Description = "Zero of h and s: ideal-gas (h = s = 0 for the ideal gas at 298.15 K, 1 bar; default), "
             + "nbp (saturated liquid at the normal boiling point, h = s = 0), refrigeration (saturated liquid at 0 degC, "
             + "h = 200 kJ/kg, s = 1 kJ/(kg K)), minus40 (saturated liquid at -40 degC, h = s = 0), or 'T, P, h, s' "
-            + "(h in J/mol and s in J/(mol K) at the stable state T, P; write 'sat' for P to mean the saturated liquid at T)",
+            + "(bare numbers: T in K, P in Pa, h in J/mol, s in J/(mol K), at the stable state T, P; write 'sat' for P to mean the saturated liquid at T)",
         DefaultValueFactory = _ => ReferenceState.IdealGas.Id,
     };
 

@@ -19,7 +19,7 @@ internal sealed class StateOptions
     public Option<string> Pressure { get; } = new("--pressure", "-P") { Description = "Absolute pressure, e.g. 2 MPa, 1.2 bar (bare number: Pa)" };
 
     /// <summary>--density.</summary>
-    public Option<string> Density { get; } = new("--density", "-D") { Description = "Density instead of pressure, e.g. 11000 mol/m3, 500 kg/m3 (bare number: mol/m3)" };
+    public Option<string> Density { get; } = new("--density") { Description = "Density instead of pressure, e.g. 11000 mol/m3, 500 kg/m3 (bare number: mol/m3)" };
 
     /// <summary>--phase.</summary>
     public Option<string> Phase { get; } = new("--phase")

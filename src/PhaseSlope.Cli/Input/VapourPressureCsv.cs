@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Text.RegularExpressions;
 using CsvHelper;
 using PhaseSlope.Cli.Units;
+using PhaseSlope.Core.Units;
 
 namespace PhaseSlope.Cli.Input;
 
@@ -38,9 +39,9 @@ internal static partial class VapourPressureCsv
     /// <summary>A recognised column: where it is, what it holds, and its unit.</summary>
     private sealed record Column(int Index, string Header, Role Role)
     {
-        public DataUnits.TemperatureUnit? TemperatureUnit { get; init; }
+        public Unit? TemperatureUnit { get; init; }
 
-        public DataUnits.PressureUnit? PressureUnit { get; init; }
+        public Unit? PressureUnit { get; init; }
 
         public UncertaintyKind Uncertainty { get; init; }
     }
@@ -76,8 +77,8 @@ internal static partial class VapourPressureCsv
         ArgumentNullException.ThrowIfNull(reader);
         ArgumentNullException.ThrowIfNull(origin);
         ArgumentNullException.ThrowIfNull(options);
-        DataUnits.TemperatureUnit? defaultTemperature = OptionTemperatureUnit(options.TemperatureUnit);
-        DataUnits.PressureUnit? defaultPressure = OptionPressureUnit(options.PressureUnit);
+        Unit? defaultTemperature = OptionTemperatureUnit(options.TemperatureUnit);
+        Unit? defaultPressure = OptionPressureUnit(options.PressureUnit);
 
         var csvOptions = new CsvReaderOptions
         {
@@ -157,7 +158,7 @@ internal static partial class VapourPressureCsv
         return text.IsEmpty || text[0] == (byte)'#';
     }
 
-    private static DataUnits.TemperatureUnit? OptionTemperatureUnit(string? symbol)
+    private static Unit? OptionTemperatureUnit(string? symbol)
     {
         if (symbol is null)
         {
@@ -166,12 +167,12 @@ internal static partial class VapourPressureCsv
         if (!DataUnits.TryTemperature(symbol, out var unit))
         {
             throw new UsageException(
-                $"--temperature-unit: unknown temperature unit '{DataFileException.OneLine(symbol)}' (use {DataUnits.TemperatureChoices})");
+                $"--temperature-unit: {DataFileException.OneLine(DataUnits.UnknownTemperature(symbol))}");
         }
         return unit;
     }
 
-    private static DataUnits.PressureUnit? OptionPressureUnit(string? symbol)
+    private static Unit? OptionPressureUnit(string? symbol)
     {
         if (symbol is null)
         {
@@ -185,13 +186,13 @@ internal static partial class VapourPressureCsv
         if (!DataUnits.TryPressure(symbol, out var unit))
         {
             throw new UsageException(
-                $"--pressure-unit: unknown pressure unit '{DataFileException.OneLine(symbol)}' (use {DataUnits.PressureChoices})");
+                $"--pressure-unit: {DataFileException.OneLine(DataUnits.UnknownPressure(symbol))}");
         }
         return unit;
     }
 
     private static Layout ReadHeader(string[] cells, string origin, int line,
-        DataUnits.TemperatureUnit? defaultTemperature, DataUnits.PressureUnit? defaultPressure)
+        Unit? defaultTemperature, Unit? defaultPressure)
     {
         if (cells.Any(cell => cell.Length > 0) && cells.All(cell => cell.Length == 0 || InvariantNumber().IsMatch(cell)))
         {
@@ -262,7 +263,7 @@ internal static partial class VapourPressureCsv
 
     /// <summary>Recognises one header cell; null for a column this reader ignores.</summary>
     private static Column? ReadHeaderCell(int index, string header, string origin, int line,
-        DataUnits.TemperatureUnit? defaultTemperature, DataUnits.PressureUnit? defaultPressure)
+        Unit? defaultTemperature, Unit? defaultPressure)
     {
         Match match = HeaderCell().Match(header);
         if (!match.Success)
@@ -330,8 +331,8 @@ internal static partial class VapourPressureCsv
     private static bool Is(string name, string[] names)
         => names.Any(candidate => string.Equals(candidate, name, StringComparison.OrdinalIgnoreCase));
 
-    private static DataUnits.TemperatureUnit TemperatureUnitOf(string? unit, string header, string origin, int line,
-        DataUnits.TemperatureUnit? fallback)
+    private static Unit TemperatureUnitOf(string? unit, string header, string origin, int line,
+        Unit? fallback)
     {
         if (unit is null)
         {
@@ -341,13 +342,13 @@ internal static partial class VapourPressureCsv
         if (!DataUnits.TryTemperature(unit, out var found))
         {
             throw new DataFileException(origin, line, header,
-                $"unknown temperature unit '{unit}' (use {DataUnits.TemperatureChoices})");
+                DataUnits.UnknownTemperature(unit));
         }
         return found;
     }
 
-    private static DataUnits.PressureUnit PressureUnitOf(string? unit, string header, string origin, int line,
-        DataUnits.PressureUnit? fallback)
+    private static Unit PressureUnitOf(string? unit, string header, string origin, int line,
+        Unit? fallback)
     {
         if (unit is null)
         {
@@ -362,7 +363,7 @@ internal static partial class VapourPressureCsv
         if (!DataUnits.TryPressure(unit, out var found))
         {
             throw new DataFileException(origin, line, header,
-                $"unknown pressure unit '{unit}' (use {DataUnits.PressureChoices})");
+                DataUnits.UnknownPressure(unit));
         }
         return found;
     }
@@ -381,8 +382,8 @@ internal static partial class VapourPressureCsv
         }
 
         Column t = layout.Temperature;
-        (double tValue, decimal? tExact) = Number(fields, t, origin, line);
-        double temperature = DataUnits.ToKelvin(t.TemperatureUnit!, tValue, tExact);
+        (double tValue, string tExact) = Number(fields, t, origin, line);
+        double temperature = DataUnits.ToSi(t.TemperatureUnit!, tValue, tExact);
         if (!(temperature > 0.0))
         {
             throw new DataFileException(origin, line, t.Header,
@@ -390,8 +391,8 @@ internal static partial class VapourPressureCsv
         }
 
         Column p = layout.Pressure;
-        (double pValue, decimal? pExact) = Number(fields, p, origin, line);
-        double pressure = DataUnits.ToPascal(p.PressureUnit!, pValue, pExact);
+        (double pValue, string pExact) = Number(fields, p, origin, line);
+        double pressure = DataUnits.ToSi(p.PressureUnit!, pValue, pExact);
         if (!(pressure > 0.0) || !double.IsFinite(pressure))
         {
             throw new DataFileException(origin, line, p.Header,
@@ -401,14 +402,14 @@ internal static partial class VapourPressureCsv
         double? uncertainty = null;
         if (layout.Uncertainty is Column u)
         {
-            (double uValue, decimal? uExact) = Number(fields, u, origin, line);
+            (double uValue, string uExact) = Number(fields, u, origin, line);
             if (!(uValue > 0.0))
             {
                 throw new DataFileException(origin, line, u.Header, "the uncertainty must be greater than zero");
             }
             uncertainty = u.Uncertainty switch
             {
-                UncertaintyKind.Absolute => DataUnits.ToPascal(u.PressureUnit!, uValue, uExact),
+                UncertaintyKind.Absolute => DataUnits.ToSi(u.PressureUnit!, uValue, uExact),
                 UncertaintyKind.RelativeFraction => uValue * pressure,
                 _ => uValue / 100.0 * pressure,
             };
@@ -436,8 +437,8 @@ internal static partial class VapourPressureCsv
     private static string Fields(int count) => count == 1 ? "field" : "fields";
 
     /// <summary>Reads a cell as an invariant-culture number: its double value, and its decimal
-    /// value when it fits one (for exact unit conversion).</summary>
-    private static (double Value, decimal? Exact) Number(string[] fields, Column column, string origin, int line)
+    /// text (for exact decimal unit conversion).</summary>
+    private static (double Value, string Text) Number(string[] fields, Column column, string origin, int line)
     {
         string text = fields[column.Index];
         if (text.Length == 0)
@@ -456,8 +457,7 @@ internal static partial class VapourPressureCsv
         {
             throw new DataFileException(origin, line, column.Header, $"'{text}' is too large");
         }
-        decimal? exact = decimal.TryParse(text, style, CultureInfo.InvariantCulture, out decimal parsed) ? parsed : null;
-        return (value, exact);
+        return (value, text);
     }
 
     private static string Format(double value) => value.ToString("G6", CultureInfo.InvariantCulture);

@@ -1,5 +1,6 @@
 using System.Text;
 using System.Text.Json;
+using PhaseSlope.Cli.Units;
 using PhaseSlope.Core.Correlations;
 
 namespace PhaseSlope.Cli.Output;
@@ -226,7 +227,7 @@ internal static class FitWriter
         TextTable.Write(output, ["T [K]", "P [kPa]", "P fit [kPa]", "deviation [%]"], [true, true, true, true], fit.Data.Count, i =>
         {
             var p = fit.Data[i];
-            return [NumberText.Table(p.Temperature), NumberText.Table(p.Pressure / 1e3), NumberText.Table(fit.Pressure(p.Temperature) / 1e3), NumberText.Table(deviations[i])];
+            return [NumberText.Table(p.Temperature), NumberText.Table(UnitFormatter.Pressure(p.Pressure, UnitSystem.Si)), NumberText.Table(UnitFormatter.Pressure(fit.Pressure(p.Temperature), UnitSystem.Si)), NumberText.Table(deviations[i])];
         });
         if (candidates.Count > 1)
         {
@@ -253,7 +254,7 @@ internal static class FitWriter
         var table = new TextTable(["T [K]", "P [kPa]", "dZ", "dH_vap [J/mol]", "u(dH) [J/mol]", ""], [true, true, true, true, true, false]);
         foreach (var p in points)
         {
-            table.Add(NumberText.Table(p.Temperature), NumberText.Table(p.Pressure / 1e3), NumberText.Table(p.CompressibilityChange),
+            table.Add(NumberText.Table(p.Temperature), NumberText.Table(UnitFormatter.Pressure(p.Pressure, UnitSystem.Si)), NumberText.Table(p.CompressibilityChange),
                 NumberText.Table(p.EnthalpyOfVaporization), NumberText.Table(p.StandardUncertainty), p.Extrapolated ? "*" : "");
         }
 

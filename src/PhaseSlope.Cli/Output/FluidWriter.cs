@@ -152,7 +152,7 @@ internal static class FluidWriter
                 .. Fields.Select(f => f.Get(fluid) is SourcedValue v ? NumberText.RoundTrip(v.Value) : "")]));
 
     private static string Display(Field field, double si, UnitSystem units, double molarMass)
-        => field.Quantity is DisplayQuantity q ? NumberText.Table(UnitFormatter.Convert(q, si, units, molarMass)) : NumberText.Table(field.Key == "molar_mass_kg_mol" ? si * 1e3 : si);
+        => field.Quantity is DisplayQuantity q ? NumberText.Table(UnitFormatter.Convert(q, si, units, molarMass)) : NumberText.Table(field.Key == "molar_mass_kg_mol" ? Core.Units.UnitTable.Get("g/mol").FromSi(si) : si);
 
     private static string Unit(Field field, UnitSystem units)
         => field.Quantity is DisplayQuantity q ? UnitFormatter.Label(q, units) : field.Key == "molar_mass_kg_mol" ? "g/mol" : "-";

@@ -69,7 +69,7 @@ internal static class StateWriter
 
     private static string Title(PropertyModel engine, ThermodynamicState state)
         => $"{engine.Fluid.Name}, {ModelText.Describe(engine.Model)}: {state.Phase.ToString().ToLowerInvariant()}{(state.Metastable ? " (metastable)" : "")} at "
-           + $"{NumberText.Table(state.Temperature)} K, {NumberText.Table(state.Pressure / 1e3)} kPa";
+           + $"{NumberText.Table(state.Temperature)} K, {NumberText.Table(UnitFormatter.Pressure(state.Pressure, UnitSystem.Si))} {UnitFormatter.PressureLabel(UnitSystem.Si)}";
 
     private static string StateTable(PropertyModel engine, ThermodynamicState state, UnitSystem units)
     {

@@ -1,105 +1,22 @@
 using System.Globalization;
-using System.Text;
-using System.Text.RegularExpressions;
+using PhaseSlope.Core.Units;
 
 namespace PhaseSlope.Cli.Units;
 
-/// <summary>Parses command-line text for a temperature or an absolute pressure into SI units
-/// (kelvin, pascal).</summary>
+/// <summary>Parses command-line text for a temperature, an absolute pressure or a density into
+/// SI units (kelvin, pascal, mol/m3) through the one unit table of the core
+/// (<see cref="UnitTable"/>, <see cref="QuantityText"/>).</summary>
 /// <remarks>
 /// <para>The text is a number optionally followed by a unit, with or without a space between
-/// them (<c>300</c>, <c>300 K</c>, <c>26.85degC</c>, <c>1.2e5 Pa</c>). The number is always read
-/// with the invariant culture, whatever the machine's locale: a dot is the decimal separator, an
-/// exponent is allowed, a comma is rejected (it is neither a decimal nor a group separator here),
-/// and NaN or infinity are rejected. A bare number is kelvin for a temperature and pascal for a
-/// pressure.</para>
-/// <para>Unit symbols are matched case-insensitively. For pressures this means <c>mpa</c>,
-/// <c>MPA</c> and <c>mPa</c> all mean megapascal (a millipascal is never a sensible pressure for
-/// vapour–liquid coexistence), and <c>MBAR</c> means millibar.</para>
-/// <para>Conversion factors are those of NIST Special Publication 811 (2008 edition), built from
-/// the exact definitions it gives: the standard atmosphere (101 325 Pa), the bar (10^5 Pa), the
-/// international pound (0.453 592 37 kg), the international inch (0.0254 m), standard gravity
-/// (9.806 65 m/s²), and the Celsius, Fahrenheit and Rankine temperature scales.</para>
+/// them (<c>300</c>, <c>300 K</c>, <c>26.85degC</c>, <c>1.2e5 Pa</c>), read with the invariant
+/// culture whatever the machine's locale. A bare number is kelvin for a temperature, pascal for a
+/// pressure and mol/m3 for a density. Units are matched case-sensitively (<c>mPa</c> is the
+/// millipascal, <c>MPa</c> the megapascal); a near miss is refused with the near matches named.
+/// The number is converted in decimal arithmetic where it fits, so <c>40.70 degC</c> is the
+/// double nearest to 313.85 K, as from a data file.</para>
 /// </remarks>
-internal static partial class QuantityParser
+internal static class QuantityParser
 {
-    // --- Exact definitions (NIST SP 811, 2008 edition, Appendix B and section 4.2.1.1) ---
-
-    /// <summary>Offset of the Celsius scale: t/°C = T/K − 273.15 (exact, SP 811 §4.2.1.1).</summary>
-    internal const double CelsiusOffsetK = 273.15;
-
-    /// <summary>Size of the kelvin in degrees Rankine or Fahrenheit: 1 K = 1.8 °R (exact, SP 811 B.9).</summary>
-    internal const double RankinePerKelvin = 1.8;
-
-    /// <summary>Offset of the Fahrenheit scale: t/°F = T/°R − 459.67 (exact, SP 811 B.9).</summary>
-    internal const double FahrenheitOffsetR = 459.67;
-
-    /// <summary>International pound (avoirdupois), kg (exact, SP 811 B.8).</summary>
-    internal const double PoundKg = 0.45359237;
-
-    /// <summary>International inch, m (exact, SP 811 B.8).</summary>
-    internal const double InchM = 0.0254;
-
-    /// <summary>Standard acceleration of gravity, m/s² (exact, SP 811 B.8 note on the
-    /// pound-force and kilogram-force).</summary>
-    internal const double StandardGravity = 9.80665;
-
-    /// <summary>Standard atmosphere, Pa (exact, SP 811 B.8).</summary>
-    internal const double AtmospherePa = 101325.0;
-
-    /// <summary>Bar, Pa (exact, SP 811 B.8).</summary>
-    internal const double BarPa = 1.0e5;
-
-    /// <summary>Pound-force per square inch, Pa: one pound under standard gravity over one square
-    /// inch, 6894.757293168… Pa (SP 811 B.8 lists the rounded 6.894 757 E+03).</summary>
-    internal const double PsiPa = PoundKg * StandardGravity / (InchM * InchM);
-
-    /// <summary>Torr, Pa: exactly 1/760 of a standard atmosphere (SP 811 B.8 lists the rounded
-    /// 1.333 224 E+02).</summary>
-    internal const double TorrPa = AtmospherePa / 760.0;
-
-    /// <summary>Conventional millimetre of mercury, Pa: the pressure of 1 mm of a fluid of density
-    /// 13 595.1 kg/m³ under standard gravity, 133.322 387 415 Pa (SP 811 B.8 lists the rounded
-    /// 1.333 224 E+02 for the conventional mmHg).</summary>
-    internal const double MillimetreOfMercuryPa = 13595.1 * StandardGravity * 1.0e-3;
-
-    private static readonly Dictionary<string, Func<double, double>> TemperatureUnits =
-        new(StringComparer.OrdinalIgnoreCase)
-        {
-            ["K"] = t => t,
-            ["degC"] = t => t + CelsiusOffsetK,
-            ["°C"] = t => t + CelsiusOffsetK,
-            ["degF"] = t => (t + FahrenheitOffsetR) / RankinePerKelvin,
-            ["°F"] = t => (t + FahrenheitOffsetR) / RankinePerKelvin,
-            ["degR"] = t => t / RankinePerKelvin,
-            ["°R"] = t => t / RankinePerKelvin,
-        };
-
-    private static readonly Dictionary<string, double> PressureUnits =
-        new(StringComparer.OrdinalIgnoreCase)
-        {
-            ["Pa"] = 1.0,
-            ["kPa"] = 1.0e3,
-            ["MPa"] = 1.0e6, // case-insensitive: "mPa" is read as megapascal too
-            ["GPa"] = 1.0e9,
-            ["bar"] = BarPa,
-            ["mbar"] = BarPa * 1.0e-3,
-            ["psi"] = PsiPa,
-            ["psia"] = PsiPa,
-            ["atm"] = AtmospherePa,
-            ["mmHg"] = MillimetreOfMercuryPa,
-            ["torr"] = TorrPa,
-        };
-
-    private static readonly HashSet<string> GaugePressureUnits =
-        new(StringComparer.OrdinalIgnoreCase) { "psig", "barg", "kPag", "MPag" };
-
-    /// <summary>A leading number in invariant form: optional sign, digits with an optional dot
-    /// fraction (or a bare fraction), optional exponent. The rest of the text is the unit.</summary>
-    [GeneratedRegex(@"^(?<num>[+-]?(?:[0-9]+(?:\.[0-9]*)?|\.[0-9]+)(?:[eE][+-]?[0-9]+)?)(?<rest>.*)$",
-        RegexOptions.CultureInvariant | RegexOptions.Singleline)]
-    private static partial Regex LeadingNumber();
-
     /// <summary>Parses a temperature and returns it in kelvin.</summary>
     /// <param name="text">The user's text, e.g. <c>300</c>, <c>300 K</c>, <c>26.85 degC</c>,
     /// <c>80 °F</c>, <c>491.67 degR</c>. A bare number is kelvin.</param>
@@ -110,21 +27,7 @@ internal static partial class QuantityParser
     /// not above absolute zero.</exception>
     public static double ParseTemperature(string text, string optionName)
     {
-        ArgumentException.ThrowIfNullOrWhiteSpace(optionName);
-        (double number, string unit) = Split(text, optionName, "temperature");
-
-        Func<double, double> toKelvin;
-        if (unit.Length == 0)
-        {
-            toKelvin = TemperatureUnits["K"];
-        }
-        else if (!TemperatureUnits.TryGetValue(unit, out toKelvin!))
-        {
-            throw Fail(optionName, text,
-                $"unknown temperature unit '{Clean(unit)}'", "(use K, degC, degF or degR)");
-        }
-
-        double kelvin = toKelvin(number);
+        double kelvin = Parse(text, optionName, "temperature", [Dimension.Temperature]).Value;
         if (!double.IsFinite(kelvin))
         {
             throw Fail(optionName, text, "temperature is too large", null);
@@ -148,28 +51,7 @@ internal static partial class QuantityParser
     /// unit, or is not above zero.</exception>
     public static double ParsePressure(string text, string optionName)
     {
-        ArgumentException.ThrowIfNullOrWhiteSpace(optionName);
-        (double number, string unit) = Split(text, optionName, "pressure");
-
-        double factor;
-        if (unit.Length == 0)
-        {
-            factor = 1.0;
-        }
-        else if (GaugePressureUnits.Contains(unit))
-        {
-            throw Fail(optionName, text,
-                $"gauge pressures are not accepted ('{Clean(unit)}')",
-                "(give an absolute pressure, e.g. in Pa, kPa, MPa, bar, psia or atm)");
-        }
-        else if (!PressureUnits.TryGetValue(unit, out factor))
-        {
-            throw Fail(optionName, text,
-                $"unknown pressure unit '{Clean(unit)}'",
-                "(use Pa, kPa, MPa, GPa, bar, mbar, psi, psia, atm, mmHg or torr)");
-        }
-
-        double pascal = number * factor;
+        double pascal = Parse(text, optionName, "pressure", [Dimension.Pressure]).Value;
         if (!double.IsFinite(pascal))
         {
             throw Fail(optionName, text, "pressure is too large", null);
@@ -182,49 +64,17 @@ internal static partial class QuantityParser
         return pascal;
     }
 
-    private static readonly Dictionary<string, double> MolarDensityUnits =
-        new(StringComparer.OrdinalIgnoreCase)
-        {
-            ["mol/m3"] = 1.0,
-            ["mol/L"] = 1.0e3,
-            ["mol/dm3"] = 1.0e3,
-            ["kmol/m3"] = 1.0e3,
-        };
-
     /// <summary>Parses a density and returns it as a molar density in mol/m3.</summary>
-    /// <param name="text">The user's text: a bare number (mol/m3), <c>mol/m3</c>, <c>mol/L</c>,
-    /// <c>mol/dm3</c>, <c>kmol/m3</c>, or a mass density in <c>kg/m3</c> or <c>g/cm3</c>
-    /// (divided by <paramref name="molarMass"/>).</param>
+    /// <param name="text">The user's text: a bare number (mol/m3), a molar density
+    /// (<c>mol/m3</c>, <c>mol/L</c>, <c>mol/dm3</c>, <c>kmol/m3</c>), or a mass density in
+    /// <c>kg/m3</c> or <c>g/cm3</c> (divided by <paramref name="molarMass"/>).</param>
     /// <param name="optionName">The option the text came from; it starts every error message.</param>
     /// <param name="molarMass">Molar mass of the fluid in kg/mol, for mass densities.</param>
     /// <exception cref="UsageException">Empty, malformed, unknown unit, or not above zero.</exception>
     public static double ParseDensity(string text, string optionName, double molarMass)
     {
-        ArgumentException.ThrowIfNullOrWhiteSpace(optionName);
-        (double number, string unit) = Split(text, optionName, "density");
-        double molar;
-        if (unit.Length == 0)
-        {
-            molar = number;
-        }
-        else if (MolarDensityUnits.TryGetValue(unit, out double factor))
-        {
-            molar = number * factor;
-        }
-        else if (string.Equals(unit, "kg/m3", StringComparison.OrdinalIgnoreCase))
-        {
-            molar = number / molarMass;
-        }
-        else if (string.Equals(unit, "g/cm3", StringComparison.OrdinalIgnoreCase))
-        {
-            molar = number * 1.0e3 / molarMass;
-        }
-        else
-        {
-            throw Fail(optionName, text,
-                $"unknown density unit '{Clean(unit)}'", "(use mol/m3, mol/L, mol/dm3, kmol/m3, kg/m3 or g/cm3)");
-        }
-
+        ParsedQuantity parsed = Parse(text, optionName, "density", [Dimension.AmountDensity, Dimension.MassDensity]);
+        double molar = parsed.Unit.Dimension == Dimension.MassDensity ? parsed.Value / molarMass : parsed.Value;
         if (!double.IsFinite(molar))
         {
             throw Fail(optionName, text, "density is too large", null);
@@ -238,58 +88,58 @@ internal static partial class QuantityParser
         return molar;
     }
 
-    /// <summary>Splits the text into its invariant-culture number and its (trimmed) unit.</summary>
-    private static (double Number, string Unit) Split(string? text, string optionName, string quantity)
+    /// <summary>Parses a molar mass, which must carry its unit, and returns it in kg/mol.</summary>
+    /// <param name="text">The user's text, e.g. <c>72.15 g/mol</c> or <c>0.07215 kg/mol</c>; a
+    /// bare number is refused (g/mol and kg/mol are both common, so neither is assumed).</param>
+    /// <param name="optionName">The option the text came from; it starts every error message.</param>
+    /// <returns>The molar mass in kg/mol, finite and greater than zero.</returns>
+    /// <exception cref="UsageException">Empty, malformed, no or unknown unit, or not above zero.</exception>
+    public static double ParseMolarMass(string text, string optionName)
     {
-        if (string.IsNullOrWhiteSpace(text))
+        ParsedQuantity parsed = Parse(text, optionName, "molar mass", [Dimension.MolarMass]);
+        if (!text.Trim().EndsWith("mol", StringComparison.Ordinal))
         {
-            throw new UsageException(
-                $"{optionName}: no {quantity} given in '{Clean(text ?? string.Empty)}' (give a number with an optional unit)");
+            throw Fail(optionName, text, "no molar-mass unit", "(give g/mol or kg/mol, e.g. '72.15 g/mol')");
         }
-
-        // Accept the typographic minus sign (U+2212) as a minus.
-        string trimmed = text.Trim().Replace('\u2212', '-');
-
-        Match match = LeadingNumber().Match(trimmed);
-        if (!match.Success)
+        if (!double.IsFinite(parsed.Value))
         {
-            string unsigned = trimmed.TrimStart('+', '-');
-            bool nonFinite = unsigned.StartsWith("nan", StringComparison.OrdinalIgnoreCase)
-                || unsigned.StartsWith("inf", StringComparison.OrdinalIgnoreCase)
-                || unsigned.StartsWith('\u221E');
-            throw nonFinite
-                ? Fail(optionName, text, "NaN and infinity are not accepted", "(give a finite number)")
-                : Fail(optionName, text, $"expected a {quantity} starting with a number",
-                    "(use a dot as the decimal separator, e.g. '1.5')");
+            throw Fail(optionName, text, "molar mass is too large", null);
         }
-
-        string rest = match.Groups["rest"].Value.TrimStart();
-        if (rest.StartsWith(','))
+        if (parsed.Value <= 0.0)
         {
-            throw Fail(optionName, text, "comma in number",
-                "(use a dot as the decimal separator and no digit grouping, e.g. '1.5')");
+            throw Fail(optionName, text, "molar mass is not above zero", "(a molar mass must be > 0)");
         }
-        if (rest.Length > 0 && (char.IsAsciiDigit(rest[0]) || rest[0] == '.' || rest[0] == '+' || rest[0] == '-'))
-        {
-            throw Fail(optionName, text, "malformed number",
-                "(give one number, with a dot as the decimal separator, then an optional unit)");
-        }
-
-        double number = double.Parse(match.Groups["num"].Value,
-            NumberStyles.AllowLeadingSign | NumberStyles.AllowDecimalPoint | NumberStyles.AllowExponent,
-            CultureInfo.InvariantCulture);
-        if (!double.IsFinite(number))
-        {
-            throw Fail(optionName, text, "number is too large", "(give a finite number)");
-        }
-        return (number, rest.TrimEnd());
+        return parsed.Value;
     }
 
-    /// <summary>Builds the one-line error: "option: problem in 'text' (hint)".</summary>
+    /// <summary>Parses a volume translation, a molar volume of either sign, and returns it in
+    /// m3/mol.</summary>
+    /// <param name="text">The user's text, e.g. <c>-3.2 cm3/mol</c>, <c>0.004 L/mol</c>; a bare
+    /// number is m3/mol.</param>
+    /// <param name="optionName">The option the text came from; it starts every error message.</param>
+    /// <returns>The shift in m3/mol, finite (zero and negative values are allowed).</returns>
+    /// <exception cref="UsageException">Empty, malformed, unknown unit, or too large.</exception>
+    public static double ParseVolumeShift(string text, string optionName)
+    {
+        double shift = Parse(text, optionName, "molar volume", [Dimension.MolarVolume]).Value;
+        return double.IsFinite(shift) ? shift : throw Fail(optionName, text, "molar volume is too large", null);
+    }
+
+    private static ParsedQuantity Parse(string? text, string optionName, string quantity, Dimension[] dimensions)
+    {
+        ArgumentException.ThrowIfNullOrWhiteSpace(optionName);
+        return QuantityText.TryParse(text, quantity, dimensions, out ParsedQuantity parsed, out string problem, out string? hint)
+            ? parsed
+            : throw Fail(optionName, text ?? string.Empty, problem, hint);
+    }
+
+    /// <summary>Builds the one-line error: "option: problem in 'text' (hint)" or
+    /// "option: problem in 'text'; did you mean …?".</summary>
     private static UsageException Fail(string optionName, string text, string problem, string? hint)
     {
-        string message = $"{optionName}: {problem} in '{Clean(text)}'";
-        return new UsageException(hint is null ? message : $"{message} {hint}");
+        string message = $"{optionName}: {Clean(problem)} in '{Clean(text)}'";
+        return new UsageException(hint is null ? message
+            : hint.StartsWith(';') ? $"{message}{Clean(hint)}" : $"{message} {Clean(hint)}");
     }
 
     /// <summary>Makes user text safe to echo on one line (see <see cref="Input.DataFileException.OneLine"/>).</summary>

@@ -1,3 +1,5 @@
+using PhaseSlope.Core.Units;
+
 namespace PhaseSlope.Cli.Units;
 
 /// <summary>The physical quantities that appear in table output.</summary>
@@ -40,60 +42,62 @@ internal enum DisplayQuantity
 /// <summary>Converts SI values (K, Pa, mol/m3, m3/mol, J/mol, J/(mol·K), Pa/K) to the display
 /// units of a <see cref="UnitSystem"/> and gives the matching unit labels.</summary>
 /// <remarks>
-/// <para>All conversions come from one table keyed by quantity and unit system. Mass-based
-/// engineering units need the molar mass of the fluid in kg/mol; in the SI system the molar mass
-/// is not used. The factors are exact: 273.15 K for the Celsius offset (NIST SP 811, 2008
-/// edition, §4.2.1.1), 10^5 Pa for the bar (SP 811 B.8), and powers of ten for the prefixes.
-/// A temperature difference of 1 K equals 1 degC, so a slope in bar/K is also a slope in
-/// bar/degC.</para>
+/// <para>Every display unit is a row of the one unit table of the core
+/// (<see cref="UnitTable"/>), which holds its conversion and its source; this class only chooses
+/// which unit each quantity is shown in. Mass-based engineering units divide (or, for density,
+/// multiply) the molar SI value by the molar mass of the fluid in kg/mol first; in the SI system
+/// the molar mass is not used. A temperature difference of 1 K equals 1 degC, so a slope in
+/// bar/K is also a slope in bar/degC.</para>
 /// </remarks>
 internal static class UnitFormatter
 {
-    /// <summary>One display unit: its label, whether it needs the molar mass, and the conversion
-    /// from the SI value (second argument: molar mass in kg/mol).</summary>
-    private sealed record DisplayUnit(string Label, bool NeedsMolarMass, Func<double, double, double> FromSi);
+    /// <summary>How a molar SI value becomes a mass-based one.</summary>
+    private enum PerMass
+    {
+        /// <summary>Not mass-based: the molar mass is not used.</summary>
+        No,
+
+        /// <summary>Multiply by the molar mass (mol/m3 → kg/m3).</summary>
+        Multiply,
+
+        /// <summary>Divide by the molar mass (per mol → per kg).</summary>
+        Divide,
+    }
+
+    /// <summary>One display unit: the table row and how the molar mass enters.</summary>
+    private sealed record DisplayUnit(Unit Unit, PerMass PerMass)
+    {
+        public string Label => Unit.Symbol;
+
+        public bool NeedsMolarMass => PerMass != PerMass.No;
+    }
+
+    private static DisplayUnit Show(string symbol, PerMass perMass = PerMass.No) => new(UnitTable.Get(symbol), perMass);
 
     private static readonly Dictionary<(DisplayQuantity, UnitSystem), DisplayUnit> Table = new()
     {
-        [(DisplayQuantity.Temperature, UnitSystem.Si)] = new("K", false, (k, _) => k),
-        [(DisplayQuantity.Temperature, UnitSystem.Engineering)] =
-            new("degC", false, (k, _) => k - QuantityParser.CelsiusOffsetK),
-
-        [(DisplayQuantity.Pressure, UnitSystem.Si)] = new("kPa", false, (pa, _) => pa / 1.0e3),
-        [(DisplayQuantity.Pressure, UnitSystem.Engineering)] =
-            new("bar", false, (pa, _) => pa / QuantityParser.BarPa),
-
-        [(DisplayQuantity.Density, UnitSystem.Si)] = new("mol/m3", false, (rho, _) => rho),
-        [(DisplayQuantity.Density, UnitSystem.Engineering)] = new("kg/m3", true, (rho, m) => rho * m),
-
-        [(DisplayQuantity.MolarVolume, UnitSystem.Si)] = new("m3/mol", false, (v, _) => v),
-        [(DisplayQuantity.MolarVolume, UnitSystem.Engineering)] = new("m3/kg", true, (v, m) => v / m),
-
-        [(DisplayQuantity.MolarEnergy, UnitSystem.Si)] = new("J/mol", false, (e, _) => e),
-        [(DisplayQuantity.MolarEnergy, UnitSystem.Engineering)] =
-            new("kJ/kg", true, (e, m) => e / m / 1.0e3),
-
-        [(DisplayQuantity.MolarEntropy, UnitSystem.Si)] = new("J/(mol·K)", false, (s, _) => s),
-        [(DisplayQuantity.MolarEntropy, UnitSystem.Engineering)] =
-            new("kJ/(kg·K)", true, (s, m) => s / m / 1.0e3),
-
-        [(DisplayQuantity.Slope, UnitSystem.Si)] = new("kPa/K", false, (d, _) => d / 1.0e3),
-        [(DisplayQuantity.Slope, UnitSystem.Engineering)] =
-            new("bar/K", false, (d, _) => d / QuantityParser.BarPa),
-
-        [(DisplayQuantity.Speed, UnitSystem.Si)] = new("m/s", false, (w, _) => w),
-        [(DisplayQuantity.Speed, UnitSystem.Engineering)] = new("m/s", false, (w, _) => w),
-
-        [(DisplayQuantity.Expansivity, UnitSystem.Si)] = new("1/K", false, (a, _) => a),
-        [(DisplayQuantity.Expansivity, UnitSystem.Engineering)] = new("1/K", false, (a, _) => a),
-
-        [(DisplayQuantity.Compressibility, UnitSystem.Si)] = new("1/Pa", false, (k, _) => k),
-        [(DisplayQuantity.Compressibility, UnitSystem.Engineering)] =
-            new("1/bar", false, (k, _) => k * QuantityParser.BarPa),
-
-        [(DisplayQuantity.JouleThomson, UnitSystem.Si)] = new("K/Pa", false, (mu, _) => mu),
-        [(DisplayQuantity.JouleThomson, UnitSystem.Engineering)] =
-            new("K/bar", false, (mu, _) => mu * QuantityParser.BarPa),
+        [(DisplayQuantity.Temperature, UnitSystem.Si)] = Show("K"),
+        [(DisplayQuantity.Temperature, UnitSystem.Engineering)] = Show("degC"),
+        [(DisplayQuantity.Pressure, UnitSystem.Si)] = Show("kPa"),
+        [(DisplayQuantity.Pressure, UnitSystem.Engineering)] = Show("bar"),
+        [(DisplayQuantity.Density, UnitSystem.Si)] = Show("mol/m3"),
+        [(DisplayQuantity.Density, UnitSystem.Engineering)] = Show("kg/m3", PerMass.Multiply),
+        [(DisplayQuantity.MolarVolume, UnitSystem.Si)] = Show("m3/mol"),
+        [(DisplayQuantity.MolarVolume, UnitSystem.Engineering)] = Show("m3/kg", PerMass.Divide),
+        [(DisplayQuantity.MolarEnergy, UnitSystem.Si)] = Show("J/mol"),
+        [(DisplayQuantity.MolarEnergy, UnitSystem.Engineering)] = Show("kJ/kg", PerMass.Divide),
+        [(DisplayQuantity.MolarEntropy, UnitSystem.Si)] = Show("J/(mol·K)"),
+        [(DisplayQuantity.MolarEntropy, UnitSystem.Engineering)] = Show("kJ/(kg·K)", PerMass.Divide),
+        [(DisplayQuantity.Slope, UnitSystem.Si)] = Show("kPa/K"),
+        [(DisplayQuantity.Slope, UnitSystem.Engineering)] = Show("bar/K"),
+        [(DisplayQuantity.Speed, UnitSystem.Si)] = Show("m/s"),
+        [(DisplayQuantity.Speed, UnitSystem.Engineering)] = Show("m/s"),
+        [(DisplayQuantity.Expansivity, UnitSystem.Si)] = Show("1/K"),
+        [(DisplayQuantity.Expansivity, UnitSystem.Engineering)] = Show("1/K"),
+        [(DisplayQuantity.Compressibility, UnitSystem.Si)] = Show("1/Pa"),
+        [(DisplayQuantity.Compressibility, UnitSystem.Engineering)] = Show("1/bar"),
+        [(DisplayQuantity.JouleThomson, UnitSystem.Si)] = Show("K/Pa"),
+        [(DisplayQuantity.JouleThomson, UnitSystem.Engineering)] = Show("K/bar"),
     };
 
     /// <summary>Converts an SI value of a quantity to the display unit of a unit system.</summary>
@@ -112,7 +116,13 @@ internal static class UnitFormatter
             throw new ArgumentOutOfRangeException(nameof(molarMass), molarMass,
                 $"{quantity} in {unit.Label} needs a finite molar mass > 0 kg/mol");
         }
-        return unit.FromSi(si, molarMass);
+        double si2 = unit.PerMass switch
+        {
+            PerMass.Multiply => si * molarMass,
+            PerMass.Divide => si / molarMass,
+            _ => si,
+        };
+        return unit.Unit.FromSi(si2);
     }
 
     /// <summary>The label of the display unit of a quantity in a unit system, e.g. "degC".</summary>

@@ -1,6 +1,7 @@
 using System.Globalization;
 using System.Text;
 using PhaseSlope.Core.Errors;
+using PhaseSlope.Core.Units;
 
 namespace PhaseSlope.Core.Fluids;
 
@@ -484,15 +485,15 @@ internal sealed partial class FluidFileParser
 
     private void CheckUnit(int line, string key, Quantity quantity, string? unit)
     {
-        string[] allowed = FluidUnits.Allowed(quantity switch
+        string[] allowed = quantity switch
         {
-            Quantity.Temperature => FluidUnits.Dimension.Temperature,
-            Quantity.Pressure => FluidUnits.Dimension.Pressure,
-            Quantity.MolarMass => FluidUnits.Dimension.MolarMass,
-            Quantity.MolarDensity => FluidUnits.Dimension.MolarDensity,
-            Quantity.MolarVolume => FluidUnits.Dimension.MolarVolume,
-            _ => FluidUnits.Dimension.None,
-        });
+            Quantity.Temperature => FluidUnits.Allowed(Dimension.Temperature),
+            Quantity.Pressure => FluidUnits.Allowed(Dimension.Pressure),
+            Quantity.MolarMass => FluidUnits.Allowed(Dimension.MolarMass),
+            Quantity.MolarDensity => FluidUnits.Allowed(Dimension.AmountDensity),
+            Quantity.MolarVolume => FluidUnits.Allowed(Dimension.MolarVolume),
+            _ => [],
+        };
 
         if (allowed.Length == 0)
         {
@@ -608,26 +609,27 @@ internal sealed partial class FluidFileParser
             return new SourcedValue(raw.Number, raw.Source, raw.Uncertainty);
         }
 
-        FluidUnits.Conversion conversion = FluidUnits.Get(raw.Unit);
+        Unit unit = FluidUnits.Get(raw.Unit);
         double value;
         double? uncertainty;
-        switch (conversion.Kind)
+        switch (unit.Dimension)
         {
-            case FluidUnits.ConversionKind.Scale:
-                value = conversion.Apply(raw.Number);
-                uncertainty = raw.Uncertainty is double us ? conversion.Apply(us) : null;
-                break;
-            case FluidUnits.ConversionKind.MassDensity:
+            case Dimension.MassDensity:
                 // ρ[mol/m³] = ρ[kg/m³] / M[kg/mol]; the molar mass's own uncertainty is not propagated.
                 double m = molarMass ?? throw Fail(raw.Line, key, $"unit '{raw.Unit}' needs the molar mass");
-                value = conversion.Apply(raw.Number) / m;
-                uncertainty = raw.Uncertainty is double um ? conversion.Apply(um) / m : null;
+                value = unit.ToSi(raw.Number) / m;
+                uncertainty = raw.Uncertainty is double um ? unit.ToSi(um) / m : null;
+                break;
+            case Dimension.MolarVolume:
+                // Molar volume V → ρ = 1/V; first-order propagation u(ρ) = u(V)/V².
+                double volume = unit.ToSi(raw.Number);
+                value = 1.0 / volume;
+                uncertainty = raw.Uncertainty is double uv ? unit.ToSi(uv) / (volume * volume) : null;
                 break;
             default:
-                // Molar volume V → ρ = 1/V; first-order propagation u(ρ) = u(V)/V².
-                double volume = conversion.Apply(raw.Number);
-                value = 1.0 / volume;
-                uncertainty = raw.Uncertainty is double uv ? conversion.Apply(uv) / (volume * volume) : null;
+                // A pure factor (CheckUnit takes no offset scale here), so the uncertainty converts like the value.
+                value = unit.ToSi(raw.Number);
+                uncertainty = raw.Uncertainty is double us ? unit.ToSi(us) : null;
                 break;
         }
 

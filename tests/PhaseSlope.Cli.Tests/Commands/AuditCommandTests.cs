@@ -83,6 +83,36 @@ public class AuditCommandTests
         CliHarness.AssertFailure(CliHarness.Run([.. args]), 2);
     }
 
+    [Theory]
+    [InlineData("--correlation-pressure-unit", "MMHG", "--correlation-pressure-unit: unknown pressure unit 'MMHG'; did you mean mmHg?")]
+    [InlineData("--correlation-pressure-unit", "kpa", "--correlation-pressure-unit: unknown pressure unit 'kpa'; did you mean kPa?")]
+    [InlineData("--correlation-pressure-unit", "GPa", "--correlation-pressure-unit: pressure unit 'GPa' is not offered for published correlations")]
+    [InlineData("--correlation-temperature-unit", "C", "--correlation-temperature-unit: unknown temperature unit 'C'; did you mean")]
+    [InlineData("--correlation-temperature-unit", "degF", "--correlation-temperature-unit: temperature unit 'degF' is not offered for published correlations")]
+    public void Units_come_from_the_one_table_case_sensitively(string option, string value, string message)
+    {
+        var args = new List<string> { "audit", "--form", "antoine", "--coefficients", LangeWater, "--range", "1,100", "--log-base", "10", "--correlation-pressure-unit", "mmHg", "--correlation-temperature-unit", "degC" };
+        args[args.IndexOf(option) + 1] = value;
+        CliHarness.AssertFailure(CliHarness.Run([.. args]), 2, message);
+    }
+
+    [Fact]
+    public void Torr_is_its_own_unit_and_differs_from_the_conventional_mmHg()
+    {
+        // One value per unit: mmHg 133.322387415 Pa (conventional), torr 101325/760 Pa; the same
+        // printed constants therefore give pressures 1.43e-7 apart, relative.
+        string[] common = ["audit", "--form", "antoine", "--coefficients", LangeWater, "--range", "1,100", "--log-base", "10", "--correlation-temperature-unit", "degC", "--format", "json"];
+        var mmHg = CliHarness.RunJson([.. common, "--correlation-pressure-unit", "mmHg"]);
+        var torr = CliHarness.RunJson([.. common, "--correlation-pressure-unit", "torr"]);
+        Assert.Equal("torr", torr.GetProperty("detected").GetProperty("pressure_unit").GetString());
+        Assert.Equal("mmHg", mmHg.GetProperty("detected").GetProperty("pressure_unit").GetString());
+        // The SI constant A is A·ln10 + ln(Pa per unit): the two differ by ln(133.322387415 / (101325/760)).
+        double difference = mmHg.GetProperty("si_coefficients")[0].GetDouble() - torr.GetProperty("si_coefficients")[0].GetDouble();
+        double expected = Math.Log(133.322387415 / (101325.0 / 760.0)); // 1.4307e-7
+        // A is about 23.5, so its rounding (2e-15 absolute per value) limits the difference to ~1e-14.
+        Assert.True(Math.Abs(difference - expected) < 1e-13, $"expected {expected:R}, got {difference:R}");
+    }
+
     [Fact]
     public void Audit_AgainstDataFile_ReportsTheDataDeviation()
     {

@@ -96,6 +96,8 @@ public class CoexistCommandTests
     [InlineData("--pressure", "1.2 bar", "120000")]
     [InlineData("--pressure", "2 MPa", "2000000")]
     [InlineData("--pressure", "760 torr", "101325")]
+    [InlineData("--temperature", "40.70 degC", "313.85")] // exact decimal conversion, as in a data file
+    [InlineData("--pressure", "101325000 mPa", "101325")] // case-sensitive: the millipascal
     public void Units_QuantityWithUnit_SameOutputAsBareSiNumber(string option, string withUnit, string bareSi)
     {
         foreach (string format in new[] { "json", "table" })
@@ -104,6 +106,16 @@ public class CoexistCommandTests
             string b = RunText("coexist", "propane", option, bareSi, "--format", format);
             Assert.Equal(b, a);
         }
+    }
+
+    [Theory]
+    [InlineData("1 mpa", "did you mean MPa or mPa?")]
+    [InlineData("1 Mpa", "did you mean MPa or mPa?")]
+    [InlineData("100 KPA", "did you mean kPa?")]
+    public void Units_WrongCase_IsRefusedWithTheNearMatches(string text, string hint)
+    {
+        var result = CliHarness.Run("coexist", "propane", "--pressure", text);
+        CliHarness.AssertFailure(result, ExitCodes.Usage, $"--pressure: unknown pressure unit '{text.Split(' ')[1]}' in '{text}'; {hint}");
     }
 
     [Fact]

@@ -46,7 +46,6 @@ public class VapourPressureCsvTests
     [InlineData("temperature [K]")]
     [InlineData("Temperature [K]")]
     [InlineData("TEMPERATURE[K]")]
-    [InlineData("T [k]")]
     [InlineData("  T  [ K ]  ")]
     public void Read_TemperatureHeaderForms_AreAccepted(string header)
     {
@@ -73,7 +72,6 @@ public class VapourPressureCsvTests
     [Theory]
     [InlineData("K", "300", 300.0)]
     [InlineData("degC", "25", 298.15)]
-    [InlineData("DEGC", "25", 298.15)]
     [InlineData("°C", "-40", 233.15)]
     [InlineData("degC", "26.85", 300.0)]
     [InlineData("degC", "40.70", 313.85)] // 40.70 + 273.15 in double arithmetic is 1 ulp off
@@ -94,20 +92,19 @@ public class VapourPressureCsvTests
     [Theory]
     [InlineData("Pa", "101325", 101325.0)]
     [InlineData("kPa", "101.325", 101325.0)]
-    [InlineData("KPA", "101.325", 101325.0)]
     [InlineData("kPa", "0.12", 120.0)]
     [InlineData("kPa", "8.005", 8005.0)] // 8.005 × 1000 in double arithmetic is 1 ulp off
     [InlineData("bar", "1.2328", 123280.0)] // 1.2328 × 1e5 likewise
     [InlineData("MPa", "0.101325", 101325.0)]
-    [InlineData("mPa", "0.101325", 101325.0)] // case-insensitive, as on the command line: megapascal
+    [InlineData("mPa", "101325", 101.325)] // case-sensitive: the millipascal
     [InlineData("GPa", "0.000101325", 101325.0)]
     [InlineData("bar", "1.01325", 101325.0)]
     [InlineData("mbar", "1013.25", 101325.0)]
     [InlineData("atm", "1", 101325.0)]
     [InlineData("torr", "760", 101325.0)]
     [InlineData("mmHg", "1", 133.322387415)]
-    [InlineData("psi", "1", 6894.757293168361)]
-    [InlineData("psia", "1", 6894.757293168361)]
+    [InlineData("psi", "1", 6894.757293168362)] // nearest double to 6894.75729316836133672…
+    [InlineData("psia", "1", 6894.757293168362)]
     [InlineData("kPa", "1.5e2", 150000.0)]
     public void Read_PressureUnits_ConvertExactly(string unit, string cell, double pascal)
     {
@@ -126,7 +123,8 @@ public class VapourPressureCsvTests
     {
         var points = Read($"T [{unit}],P [Pa]\n{cell},1000\n1e4,2000\n");
 
-        AssertRelative(QuantityParser.ParseTemperature($"{cell} {unit}", "--temperature"), points[0].Temperature, 1e-15, unit);
+        // One table, one conversion path: the same double, not merely a close one.
+        AssertSameDouble(QuantityParser.ParseTemperature($"{cell} {unit}", "--temperature"), points[0].Temperature, unit);
     }
 
     [Theory]
@@ -142,7 +140,7 @@ public class VapourPressureCsvTests
     {
         var points = Read($"T [K],P [{unit}]\n300,{cell}\n310,{cell}\n");
 
-        AssertRelative(QuantityParser.ParsePressure($"{cell} {unit}", "--pressure"), points[0].Pressure, 1e-15, unit);
+        AssertSameDouble(QuantityParser.ParsePressure($"{cell} {unit}", "--pressure"), points[0].Pressure, unit);
     }
 
     [Fact]
@@ -452,6 +450,8 @@ public class VapourPressureCsvTests
     [InlineData("T [C],P [Pa]", "T [C]", "unknown temperature unit 'C'")]
     [InlineData("T [K],P [%]", "P [%]", "unknown pressure unit '%'")]
     [InlineData("T [K],P [hPa]", "P [hPa]", "unknown pressure unit 'hPa'")]
+    [InlineData("T [k],P [Pa]", "T [k]", "unknown temperature unit 'k'; did you mean K?")]
+    [InlineData("T [K],P [KPA]", "P [KPA]", "unknown pressure unit 'KPA'; did you mean kPa?")]
     [InlineData("T [K],P [psig]", "P [psig]", "gauge pressures are not accepted")]
     [InlineData("T [K],P [Pa],u(P) [barg]", "u(P) [barg]", "gauge pressures are not accepted")]
     [InlineData("T [K],P [Pa],u(P) [degC]", "u(P) [degC]", "unknown pressure unit 'degC'")]
@@ -487,6 +487,9 @@ public class VapourPressureCsvTests
     [InlineData("kelvin", null, "--temperature-unit: unknown temperature unit 'kelvin'")]
     [InlineData(null, "hPa", "--pressure-unit: unknown pressure unit 'hPa'")]
     [InlineData(null, "psig", "--pressure-unit: gauge pressures are not accepted")]
+    [InlineData(null, "kpa", "--pressure-unit: unknown pressure unit 'kpa'; did you mean kPa?")]
+    [InlineData(null, "MPA", "--pressure-unit: unknown pressure unit 'MPA'; did you mean MPa or mPa?")]
+    [InlineData("DEGC", null, "--temperature-unit: unknown temperature unit 'DEGC'; did you mean degC?")]
     public void Read_UnknownUnitInTheOptions_IsAUsageError(string? temperatureUnit, string? pressureUnit, string message)
     {
         // Reported even when the file's headers give their own units.

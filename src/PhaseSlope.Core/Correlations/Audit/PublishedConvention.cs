@@ -1,3 +1,5 @@
+using PhaseSlope.Core.Units;
+
 namespace PhaseSlope.Core.Correlations.Audit;
 
 /// <summary>Logarithm base of a published vapour-pressure correlation.</summary>
@@ -25,7 +27,7 @@ public enum PublishedPressureUnit
     /// <summary>Bar, 1e5 Pa.</summary>
     Bar,
 
-    /// <summary>Millimetre of mercury taken as the torr, 101325/760 Pa (see <see cref="PublishedConvention.PascalsPer"/>).</summary>
+    /// <summary>Conventional millimetre of mercury, 133.322387415 Pa (<see cref="UnitTable.MillimetreOfMercury"/>).</summary>
     MmHg,
 
     /// <summary>Standard atmosphere, 101325 Pa.</summary>
@@ -33,6 +35,10 @@ public enum PublishedPressureUnit
 
     /// <summary>Pound-force per square inch, 6894.757293168 Pa.</summary>
     Psi,
+
+    /// <summary>Torr, 101325/760 Pa; given explicitly only (it is not a detection candidate:
+    /// it differs from the mmHg by 1.4e-7 relative, which no correlation can resolve).</summary>
+    Torr,
 }
 
 /// <summary>Temperature scale of a published correlation.</summary>
@@ -49,32 +55,21 @@ public enum PublishedTemperatureUnit
 /// temperature scale.</summary>
 public sealed record PublishedConvention(LogBase LogBase, PublishedPressureUnit PressureUnit, PublishedTemperatureUnit TemperatureUnit)
 {
-    /// <summary>Offset of the Celsius scale, K (exact by definition of the scale).</summary>
-    public const double CelsiusOffset = 273.15;
+    /// <summary>Offset of the Celsius scale, K (from the one unit table, <see cref="UnitTable.CelsiusOffset"/>).</summary>
+    public const double CelsiusOffset = (double)UnitTable.CelsiusOffset;
 
-    /// <summary>Every pressure unit, in the order candidates are listed.</summary>
-    public static IReadOnlyList<PublishedPressureUnit> PressureUnits { get; } = Enum.GetValues<PublishedPressureUnit>();
+    /// <summary>The pressure units tried when the unit is not given, in the order candidates are
+    /// listed (every unit but the torr, which the mmHg stands for).</summary>
+    public static IReadOnlyList<PublishedPressureUnit> PressureUnits { get; } =
+        [.. Enum.GetValues<PublishedPressureUnit>().Where(unit => unit != PublishedPressureUnit.Torr)];
 
-    /// <summary>Pascals per unit, from the exact definitions: bar 1e5 Pa, standard atmosphere
-    /// 101325 Pa (10th CGPM, 1954), psi = 0.45359237 kg × 9.80665 m/s² / (0.0254 m)² =
-    /// 6894.757293168 Pa (international pound and inch, standard gravity). The mmHg of printed
-    /// Antoine tables is taken as the torr, exactly 101325/760 = 133.3223684 Pa, so that 760 mmHg
-    /// is one atmosphere, as those tables assume; the conventional millimetre of mercury
-    /// (13595.1 kg/m³ × 9.80665 m/s² × 1 mm = 133.3223874 Pa) is larger by 1.4e-7 relative, far
-    /// below the precision of any correlation.</summary>
-    public static double PascalsPer(PublishedPressureUnit unit) => unit switch
-    {
-        PublishedPressureUnit.Pa => 1.0,
-        PublishedPressureUnit.KPa => 1.0e3,
-        PublishedPressureUnit.MPa => 1.0e6,
-        PublishedPressureUnit.Bar => 1.0e5,
-        PublishedPressureUnit.MmHg => Constants.StandardAtmosphere / 760.0,
-        PublishedPressureUnit.Atm => Constants.StandardAtmosphere,
-        PublishedPressureUnit.Psi => 0.45359237 * 9.80665 / (0.0254 * 0.0254),
-        _ => throw new ArgumentOutOfRangeException(nameof(unit)),
-    };
+    /// <summary>Pascals per unit, from the one unit table (<see cref="UnitTable"/>): bar 1e5 Pa,
+    /// standard atmosphere 101325 Pa, psi 6894.757293168 Pa, the conventional millimetre of
+    /// mercury 133.322387415 Pa, the torr 101325/760 Pa (sources named in the table).</summary>
+    public static double PascalsPer(PublishedPressureUnit unit) => UnitTable.Get(Symbol(unit)).ToSi(1.0);
 
-    /// <summary>The symbol written in reports: Pa, kPa, MPa, bar, mmHg, atm, psi.</summary>
+    /// <summary>The symbol written in reports: Pa, kPa, MPa, bar, mmHg, atm, psi, torr (the
+    /// unit table's symbols).</summary>
     public static string Symbol(PublishedPressureUnit unit) => unit switch
     {
         PublishedPressureUnit.Pa => "Pa",
@@ -84,6 +79,7 @@ public sealed record PublishedConvention(LogBase LogBase, PublishedPressureUnit 
         PublishedPressureUnit.MmHg => "mmHg",
         PublishedPressureUnit.Atm => "atm",
         PublishedPressureUnit.Psi => "psi",
+        PublishedPressureUnit.Torr => "torr",
         _ => throw new ArgumentOutOfRangeException(nameof(unit)),
     };
 
@@ -93,40 +89,48 @@ public sealed record PublishedConvention(LogBase LogBase, PublishedPressureUnit 
     /// <summary>The symbol written in reports: 10 or e.</summary>
     public static string Symbol(LogBase logBase) => logBase == LogBase.Ten ? "10" : "e";
 
-    /// <summary>Parses a pressure-unit symbol (case-insensitive; "torr" is the same unit as mmHg here).</summary>
+    /// <summary>Parses a pressure unit through the one unit table (case-sensitive; any spelling
+    /// of the table's units, e.g. psia for psi). False for a unit that is not in the table or
+    /// that published correlations here do not use (mPa, GPa, mbar).</summary>
     public static bool TryParsePressureUnit(string text, out PublishedPressureUnit unit)
     {
-        foreach (var u in PressureUnits)
+        unit = PublishedPressureUnit.Pa;
+        if (!UnitTable.TryFind(text, out Unit? found, Dimension.Pressure))
         {
-            if (string.Equals(text.Trim(), Symbol(u), StringComparison.OrdinalIgnoreCase))
+            return false;
+        }
+
+        foreach (var u in Enum.GetValues<PublishedPressureUnit>())
+        {
+            if (Symbol(u) == found!.Symbol)
             {
                 unit = u;
                 return true;
             }
         }
 
-        unit = PublishedPressureUnit.Pa;
-        if (string.Equals(text.Trim(), "torr", StringComparison.OrdinalIgnoreCase))
-        {
-            unit = PublishedPressureUnit.MmHg;
-            return true;
-        }
-
         return false;
     }
 
-    /// <summary>Parses K or degC (also °C, C).</summary>
+    /// <summary>Parses K or degC (also °C) through the one unit table (case-sensitive).</summary>
     public static bool TryParseTemperatureUnit(string text, out PublishedTemperatureUnit unit)
     {
-        string t = text.Trim();
         unit = PublishedTemperatureUnit.Kelvin;
-        if (string.Equals(t, "K", StringComparison.OrdinalIgnoreCase))
+        if (!UnitTable.TryFind(text, out Unit? found, Dimension.Temperature))
         {
-            return true;
+            return false;
         }
 
-        unit = PublishedTemperatureUnit.Celsius;
-        return t is "degC" or "°C" or "C" or "degc" or "DEGC";
+        switch (found!.Symbol)
+        {
+            case "K":
+                return true;
+            case "degC":
+                unit = PublishedTemperatureUnit.Celsius;
+                return true;
+            default:
+                return false;
+        }
     }
 
     /// <summary>Parses 10 or e (also ln, log10).</summary>
