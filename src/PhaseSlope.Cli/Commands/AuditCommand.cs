@@ -35,7 +35,8 @@ internal static class AuditCommand
         var format = new Option<string>("--format") { Description = "Output format: table or json", DefaultValueFactory = _ => "table" };
         var eos = new CommonOptions().Eos;
         var command = new Command("audit", "Audit a published vapour-pressure correlation in its own convention: detect or confirm log base and units, and check it; exit 8 when a check fails");
-        foreach (var o in new Option[] { form, coefficients, logBase, pressureUnit, temperatureUnit, range, data, fluid, against, coefficients2, logBase2, pressureUnit2, temperatureUnit2, threshold, format, eos })
+        var output = new OutputOption();
+        foreach (var o in new Option[] { form, coefficients, logBase, pressureUnit, temperatureUnit, range, data, fluid, against, coefficients2, logBase2, pressureUnit2, temperatureUnit2, threshold, format, eos, output.Option })
         {
             command.Options.Add(o);
         }
@@ -98,7 +99,7 @@ internal static class AuditCommand
                     AgainstTemperatureUnit = parse.GetValue(temperatureUnit2) is string t2 && second is not null ? Temperature(t2, "--temperature-unit2", second) : null,
                     AgainstThreshold = limit,
                 });
-                io.Out.Write(fmt == "json" ? Json(report) : Table(report));
+                output.Emit(io, parse, fmt == "json" ? Json(report) : Table(report), "the audit report");
             });
             return code == ExitCodes.Success && report is { Failed: true } ? ExitCodes.AuditFailed : code;
         });
@@ -169,7 +170,7 @@ internal static class AuditCommand
         IReadOnlyList<VapourPressureRecord> records;
         try
         {
-            using var reader = new StreamReader(path);
+            using var reader = new StreamReader(BoundedInput.Open(path, BoundedInput.DataFileLimit));
             records = VapourPressureCsv.Read(reader, path, new VapourPressureCsvOptions());
         }
         catch (Exception ex) when (ex is FileNotFoundException or DirectoryNotFoundException)
@@ -266,7 +267,7 @@ internal static class AuditCommand
                 w.WriteStartArray("si_coefficients");
                 foreach (double v in si)
                 {
-                    w.WriteNumberValue(v);
+                    w.WriteFiniteValue(v, "si_coefficients");
                 }
 
                 w.WriteEndArray();
@@ -293,7 +294,7 @@ internal static class AuditCommand
     {
         if (double.IsFinite(v))
         {
-            w.WriteNumber(name, v);
+            w.WriteFinite(name, v);
         }
         else
         {

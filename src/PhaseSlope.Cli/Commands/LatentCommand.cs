@@ -35,6 +35,8 @@ internal static class LatentCommand
         command.Options.Add(to);
         command.Options.Add(points);
         common.AddTo(command, withEos: true);
+        var output = new OutputOption();
+        output.AddTo(command);
         command.SetAction(parse => io.Guard(() =>
         {
             var format = common.OutputFormat(parse);
@@ -99,7 +101,7 @@ internal static class LatentCommand
             }
 
             var results = temperatures.Select(estimator.At).ToArray();
-            io.Out.Write(FitWriter.Latent(fit, model, results, fits, format));
+            output.Emit(io, parse, FitWriter.Latent(fit, model, results, fits, format), $"{results.Count()} latent heats");
         }));
         return command;
     }

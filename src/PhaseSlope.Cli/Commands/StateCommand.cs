@@ -12,12 +12,14 @@ internal static class StateCommand
         var options = new StateOptions();
         var command = new Command("state", "Every single-phase property at a temperature and a pressure (or density)");
         options.AddTo(command);
+        var output = new OutputOption();
+        output.AddTo(command);
         command.SetAction(parse => io.Guard(() =>
         {
             var format = options.Common.OutputFormat(parse);
             var units = options.Common.UnitSystem(parse);
             var (engine, state) = options.Resolve(parse);
-            io.Out.Write(StateWriter.State(engine, state, format, units));
+            output.Emit(io, parse, StateWriter.State(engine, state, format, units), "the state");
         }));
         return command;
     }

@@ -20,6 +20,10 @@ internal static partial class VapourPressureCsv
     /// <summary>The fewest data rows a file must have.</summary>
     internal const int MinimumRows = 2;
 
+    /// <summary>The most data rows a file may have: twice the documented 1 000 000-point fit, so
+    /// that memory stays bounded (every row is held for the fit).</summary>
+    internal const int MaximumRows = 2_000_000;
+
     private enum Role
     {
         Temperature,
@@ -117,6 +121,11 @@ internal static partial class VapourPressureCsv
                 {
                     layout = ReadHeader(fields, origin, line, defaultTemperature, defaultPressure);
                     continue;
+                }
+
+                if (records.Count == MaximumRows)
+                {
+                    throw new DataFileException(origin, line, null, $"more than {MaximumRows} data rows (the limit for data files)");
                 }
 
                 VapourPressureRecord record = ReadRow(fields, layout, origin, line);
