@@ -71,11 +71,12 @@ internal static partial class VapourPressureCsv
     /// <param name="reader">The file's text; left open.</param>
     /// <param name="origin">The file path or other name that starts every error message.</param>
     /// <param name="options">Units for columns whose header gives none.</param>
+    /// <param name="maximumRows">The most data rows accepted (<see cref="MaximumRows"/>).</param>
     /// <returns>At least <see cref="MinimumRows"/> points with distinct temperatures, in increasing
     /// temperature.</returns>
     /// <exception cref="DataFileException">The file breaks a rule of the format.</exception>
     /// <exception cref="UsageException">A unit in <paramref name="options"/> is unknown.</exception>
-    public static IReadOnlyList<VapourPressureRecord> Read(TextReader reader, string origin, VapourPressureCsvOptions options)
+    public static IReadOnlyList<VapourPressureRecord> Read(TextReader reader, string origin, VapourPressureCsvOptions options, int maximumRows = MaximumRows)
     {
         ArgumentNullException.ThrowIfNull(reader);
         ArgumentNullException.ThrowIfNull(origin);
@@ -123,9 +124,9 @@ internal static partial class VapourPressureCsv
                     continue;
                 }
 
-                if (records.Count == MaximumRows)
+                if (records.Count == maximumRows)
                 {
-                    throw new DataFileException(origin, line, null, $"more than {MaximumRows} data rows (the limit for data files)");
+                    throw new DataFileException(origin, line, null, $"more than {maximumRows} data rows (the limit for data files)");
                 }
 
                 VapourPressureRecord record = ReadRow(fields, layout, origin, line);
