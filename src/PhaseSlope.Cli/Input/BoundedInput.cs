@@ -26,7 +26,7 @@ internal static class BoundedInput
     /// <exception cref="UnauthorizedAccessException">The file may not be read.</exception>
     public static Stream Open(string path, long limit)
     {
-        var file = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.ReadWrite, bufferSize: 1, FileOptions.SequentialScan);
+        var file = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.ReadWrite, bufferSize: 1 << 16, FileOptions.SequentialScan);
         try
         {
             if (file.CanSeek && file.Length > limit)

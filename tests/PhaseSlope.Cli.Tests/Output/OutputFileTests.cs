@@ -139,6 +139,35 @@ public class OutputFileTests
     }
 
     [Fact]
+    public void Out_SymbolicLinkToDevNull_WrittenThroughAndLinkKept()
+    {
+        using var folder = new TempFolder();
+        string link = folder.File("sink");
+        File.CreateSymbolicLink(link, "/dev/null");
+
+        var result = Run("curve", "propane", "--points", "4", "--format", "csv", "-o", link);
+
+        Assert.True(result.ExitCode == 0, result.ToString());
+        Assert.Equal("/dev/null", new FileInfo(link).LinkTarget);
+        Assert.Equal(FileKind.Special, FileKinds.Of("/dev/null"));
+        Assert.Equal(["sink"], folder.Entries());
+    }
+
+    [Fact]
+    public void Out_SymbolicLinkLoop_ErrorNamesTheUsersPathAndNothingWritten()
+    {
+        using var folder = new TempFolder();
+        File.CreateSymbolicLink(folder.File("a"), folder.File("b"));
+        File.CreateSymbolicLink(folder.File("b"), folder.File("a"));
+        string path = folder.File("a");
+
+        var result = Run("coexist", "propane", "-T", "300", "-o", path);
+
+        AssertFailure(result, ExitCodes.OutputFile, $"cannot write output file '{path}': cannot follow the path");
+        Assert.Equal(["a", "b"], folder.Entries());
+    }
+
+    [Fact]
     public void Out_DanglingSymbolicLink_CreatesItsTarget()
     {
         using var folder = new TempFolder();
