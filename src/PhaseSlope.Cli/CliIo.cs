@@ -34,6 +34,10 @@ internal sealed class CliIo(TextWriter output, TextWriter error)
         {
             return Fail(ex.Message, ExitCodes.OutOfRange);
         }
+        catch (Output.NonFiniteResultException ex)
+        {
+            return Fail(ex.Message, ExitCodes.OutOfRange);
+        }
         catch (ConvergenceException ex)
         {
             return Fail(ex.Message, ExitCodes.NotConverged);
@@ -56,10 +60,17 @@ internal sealed class CliIo(TextWriter output, TextWriter error)
         }
     }
 
-    /// <summary>Writes "phaseslope: message" on one line of standard error and returns the code.</summary>
+    /// <summary>Writes "phaseslope: error: message" on one line of standard error and returns the code.</summary>
     public int Fail(string message, int code)
     {
-        Error.WriteLine($"phaseslope: {message.ReplaceLineEndings(" ")}");
+        Error.WriteLine($"{ErrorPrefix}{message.ReplaceLineEndings(" ")}");
         return code;
     }
+
+    /// <summary>Writes a success or progress message, "phaseslope: message", on one line of
+    /// standard error (never starting with <see cref="ErrorPrefix"/>).</summary>
+    public void Note(string message) => Error.WriteLine($"phaseslope: {message.ReplaceLineEndings(" ")}");
+
+    /// <summary>The start of every error line; success and progress lines lack the "error:".</summary>
+    public const string ErrorPrefix = "phaseslope: error: ";
 }

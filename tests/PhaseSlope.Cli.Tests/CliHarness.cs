@@ -46,13 +46,13 @@ internal static class CliHarness
     }
 
     /// <summary>The error contract: the expected exit code, nothing on standard output, exactly
-    /// one line on standard error that starts with "phaseslope: ", and no stack trace.</summary>
+    /// one line on standard error that starts with "phaseslope: error: ", and no stack trace.</summary>
     public static void AssertFailure(CliResult result, int expectedCode, string? messagePart = null)
     {
         Assert.True(result.ExitCode == expectedCode, $"expected exit {expectedCode}; {result}");
         Assert.True(result.Stdout.Length == 0, $"stdout must be empty; {result}");
         Assert.True(result.StderrLines.Length == 1, $"expected exactly one stderr line; {result}");
-        Assert.StartsWith("phaseslope: ", result.Stderr, StringComparison.Ordinal);
+        Assert.StartsWith("phaseslope: error: ", result.Stderr, StringComparison.Ordinal);
         Assert.EndsWith("\n", result.Stderr, StringComparison.Ordinal);
         Assert.DoesNotContain("   at ", result.Stderr, StringComparison.Ordinal);
         Assert.DoesNotContain("Exception", result.Stderr, StringComparison.Ordinal);

@@ -38,7 +38,8 @@ internal static class AuditCommand
         var eos = common.Eos;
         eos.Description += "; the model whose vapour pressure --fluid's checks use (needs --fluid)";
         var command = new Command("audit", "Audit a published vapour-pressure correlation in its own convention: detect or confirm log base and units, and check it; exit 8 when a check fails");
-        foreach (var o in new Option[] { form, coefficients, logBase, pressureUnit, temperatureUnit, range, data, fluid, against, coefficients2, logBase2, pressureUnit2, temperatureUnit2, threshold, format, eos })
+        var output = new OutputOption();
+        foreach (var o in new Option[] { form, coefficients, logBase, pressureUnit, temperatureUnit, range, data, fluid, against, coefficients2, logBase2, pressureUnit2, temperatureUnit2, threshold, format, eos, output.Option })
         {
             command.Options.Add(o);
         }
@@ -107,7 +108,7 @@ internal static class AuditCommand
                     AgainstTemperatureUnit = parse.GetValue(temperatureUnit2) is string t2 && second is not null ? Temperature(t2, "--correlation-temperature-unit2", second) : null,
                     AgainstThreshold = limit,
                 });
-                io.Out.Write(fmt == "json" ? Json(report) : Table(report));
+                output.Emit(io, parse, fmt == "json" ? Json(report) : Table(report), "the audit report");
             });
             return code == ExitCodes.Success && report is { Failed: true } ? ExitCodes.AuditFailed : code;
         });
@@ -183,7 +184,7 @@ internal static class AuditCommand
         IReadOnlyList<VapourPressureRecord> records;
         try
         {
-            using var reader = new StreamReader(path);
+            using var reader = new StreamReader(BoundedInput.Open(path, BoundedInput.DataFileLimit));
             records = VapourPressureCsv.Read(reader, path, new VapourPressureCsvOptions());
         }
         catch (Exception ex) when (ex is FileNotFoundException or DirectoryNotFoundException)
@@ -280,7 +281,7 @@ internal static class AuditCommand
                 w.WriteStartArray("si_coefficients");
                 foreach (double v in si)
                 {
-                    w.WriteNumberValue(v);
+                    w.WriteFiniteValue(v, "si_coefficients");
                 }
 
                 w.WriteEndArray();
@@ -307,7 +308,7 @@ internal static class AuditCommand
     {
         if (double.IsFinite(v))
         {
-            w.WriteNumber(name, v);
+            w.WriteFinite(name, v);
         }
         else
         {

@@ -24,6 +24,8 @@ internal static class CoexistCommand
         command.Options.Add(pressure);
         command.Options.Add(reference);
         common.AddTo(command, withEos: true);
+        var output = new OutputOption();
+        output.AddTo(command);
         diagnostics.AddTo(command);
         command.SetAction(parse => io.Guard(() =>
         {
@@ -42,7 +44,7 @@ internal static class CoexistCommand
             var data = FluidResolver.Resolve(parse.GetValue(fluid)!);
             var context = CoexistenceContext.Create(data, diagnostics.Begin(parse, model.For(data)), zero);
             var point = t is double tv ? context.Solver.AtTemperature(tv) : context.Solver.AtPressure(p!.Value);
-            io.Out.Write(CoexistenceWriter.Render([context.Row(point)], single: true, format, data, context.Solver.Model, zero, units));
+            output.Emit(io, parse, CoexistenceWriter.Render([context.Row(point)], single: true, format, data, context.Solver.Model, zero, units), "the coexistence state");
             diagnostics.End(io, [point]);
         }));
         return command;

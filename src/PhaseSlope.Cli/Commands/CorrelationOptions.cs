@@ -71,7 +71,7 @@ internal sealed class CorrelationOptions
         IReadOnlyList<VapourPressureRecord> records;
         try
         {
-            using var reader = new StreamReader(path);
+            using var reader = new StreamReader(BoundedInput.Open(path, BoundedInput.DataFileLimit));
             records = VapourPressureCsv.Read(reader, path, options);
         }
         catch (Exception ex) when (ex is FileNotFoundException or DirectoryNotFoundException)

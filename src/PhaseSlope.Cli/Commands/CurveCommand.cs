@@ -98,7 +98,7 @@ internal static class CurveCommand
             else
             {
                 AtomicFile.WriteAllText(outPath, text);
-                io.Error.WriteLine($"phaseslope: wrote {curve.Count} coexistence states to {outPath}");
+                io.Note($"wrote {curve.Count} coexistence states to {outPath}");
             }
 
             diagnostics.End(io, curve);

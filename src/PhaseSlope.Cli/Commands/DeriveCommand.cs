@@ -22,6 +22,8 @@ internal static class DeriveCommand
         command.Options.Add(by);
         command.Options.Add(hold);
         options.AddTo(command, withUnits: false); // one value, always printed in SI
+        var output = new OutputOption();
+        output.AddTo(command);
         command.SetAction(parse => io.Guard(() =>
         {
             var format = options.Common.OutputFormat(parse);
@@ -35,7 +37,7 @@ internal static class DeriveCommand
 
             var (engine, state) = options.Resolve(parse);
             double value = PartialDerivatives.Of(state, x, y, z);
-            io.Out.Write(StateWriter.Derivative(engine, state, x, y, z, value, format));
+            output.Emit(io, parse, StateWriter.Derivative(engine, state, x, y, z, value, format), "the derivative");
         }));
         return command;
     }

@@ -54,20 +54,20 @@ internal sealed class DiagnosticsOption
         string line = JsonText.WriteLine(json =>
         {
             json.WriteStartObject();
-            json.WriteNumber("points", points.Count);
-            json.WriteNumber("eos_evaluations", _counter.Evaluations);
-            json.WriteNumber("density_root_solves", _counter.RootSolves);
-            json.WriteNumber("iterations", points.Sum(p => p.Report.Iterations));
-            json.WriteNumber("max_residual", points.Max(p => p.Report.FugacityResidual));
-            json.WriteNumber("max_density_uncertainty", points.Max(p => p.Report.DensityUncertainty));
+            json.WriteFinite("points", points.Count);
+            json.WriteFinite("eos_evaluations", _counter.Evaluations);
+            json.WriteFinite("density_root_solves", _counter.RootSolves);
+            json.WriteFinite("iterations", points.Sum(p => p.Report.Iterations));
+            json.WriteFinite("max_residual", points.Max(p => p.Report.FugacityResidual));
+            json.WriteFinite("max_density_uncertainty", points.Max(p => p.Report.DensityUncertainty));
             json.WriteStartObject("methods");
             foreach (var group in points.GroupBy(p => p.Report.Method).OrderBy(g => g.Key))
             {
-                json.WriteNumber(CoexistenceWriter.Kebab(group.Key.ToString()), group.Count());
+                json.WriteFinite(CoexistenceWriter.Kebab(group.Key.ToString()), group.Count());
             }
 
             json.WriteEndObject();
-            json.WriteNumber("elapsed_s", elapsed);
+            json.WriteFinite("elapsed_s", elapsed);
             json.WriteEndObject();
         });
         io.Error.WriteLine(line);

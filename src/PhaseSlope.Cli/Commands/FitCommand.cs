@@ -14,6 +14,8 @@ internal static class FitCommand
         var command = new Command("fit", "Fit a vapour-pressure correlation to measured P-T data by weighted least squares in ln P");
         options.AddTo(command);
         common.AddTo(command, withEos: false, withUnits: false); // the table is in K, kPa and %
+        var output = new OutputOption();
+        output.AddTo(command);
         command.SetAction(parse => io.Guard(() =>
         {
             var format = common.OutputFormat(parse);
@@ -22,7 +24,7 @@ internal static class FitCommand
             var forms = options.Forms(parse, fluid, out bool auto);
             var data = options.ReadData(parse);
             var fits = CorrelationOptions.Fit(forms, auto, data);
-            FitWriter.Fit(io.Out, fits[0], fits, format);
+            output.Emit(io, parse, text => FitWriter.Fit(text, fits[0], fits, format), $"the {fits[0].Form.Id} fit to {data.Count} points");
         }));
         return command;
     }

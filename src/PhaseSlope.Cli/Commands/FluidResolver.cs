@@ -40,7 +40,7 @@ internal static class FluidResolver
     {
         try
         {
-            using var stream = File.OpenRead(path);
+            using var stream = Input.BoundedInput.Open(path, Input.BoundedInput.FluidFileLimit);
             return FluidFile.Read(stream, path);
         }
         catch (Exception ex) when (ex is FileNotFoundException or DirectoryNotFoundException)

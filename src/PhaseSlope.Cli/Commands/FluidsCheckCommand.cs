@@ -18,6 +18,8 @@ internal static class FluidsCheckCommand
         var command = new Command("check", "Validate a fluid file (line, field and value checks) and test its data against a model");
         command.Arguments.Add(file);
         common.AddTo(command, withEos: true, withUnits: false);
+        var output = new OutputOption();
+        output.AddTo(command);
         command.SetAction(parse => io.Guard(() =>
         {
             var format = common.OutputFormat(parse);
@@ -25,7 +27,7 @@ internal static class FluidsCheckCommand
             string path = parse.GetValue(file)!;
             var fluid = FluidResolver.ReadFile(path);
             var check = FluidCheck.Run(fluid, model.For(fluid));
-            io.Out.Write(format == OutputFormat.Json ? Json(path, check) : Table(path, check));
+            output.Emit(io, parse, format == OutputFormat.Json ? Json(path, check) : Table(path, check), "the check report");
         }));
         return command;
     }
@@ -78,7 +80,7 @@ internal static class FluidsCheckCommand
             ModelText.WriteJson(json, check.Model);
             if (check.Fluid.NormalBoilingPoint is { } tb)
             {
-                json.WriteNumber("normal_boiling_point_K", tb.Value);
+                json.WriteFinite("normal_boiling_point_K", tb.Value);
             }
             else
             {
@@ -87,8 +89,8 @@ internal static class FluidsCheckCommand
 
             if (check.PredictedBoilingPoint is double p)
             {
-                json.WriteNumber("predicted_normal_boiling_point_K", p);
-                json.WriteNumber("boiling_point_deviation", check.BoilingPointDeviation!.Value);
+                json.WriteFinite("predicted_normal_boiling_point_K", p);
+                json.WriteFinite("boiling_point_deviation", check.BoilingPointDeviation!.Value);
             }
             else
             {

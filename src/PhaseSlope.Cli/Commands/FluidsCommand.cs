@@ -20,6 +20,8 @@ internal static class FluidsCommand
         list.Options.Add(family);
         list.Options.Add(fragment);
         listCommon.AddTo(list, withEos: false);
+        var listOutput = new OutputOption();
+        listOutput.AddTo(list);
         list.SetAction(parse => io.Guard(() =>
         {
             var (format, units) = listCommon.BindOutput(parse);
@@ -35,7 +37,7 @@ internal static class FluidsCommand
                 throw new UsageException($"fluids list: no catalog fluid matches{(familyText is null ? "" : $" family '{familyText}'")}{(nameText is null ? "" : $" name '{nameText}'")} (families: {families})");
             }
 
-            io.Out.Write(FluidWriter.Render(fluids, single: false, format, units));
+            listOutput.Emit(io, parse, FluidWriter.Render(fluids, single: false, format, units), $"{fluids.Length} fluids");
         }));
 
         var showCommon = new CommonOptions();
@@ -43,11 +45,13 @@ internal static class FluidsCommand
         var show = new Command("show", "Show every constant of one fluid with its source and uncertainty");
         show.Arguments.Add(fluid);
         showCommon.AddTo(show, withEos: false);
+        var showOutput = new OutputOption();
+        showOutput.AddTo(show);
         show.SetAction(parse => io.Guard(() =>
         {
             var (format, units) = showCommon.BindOutput(parse);
             var data = FluidResolver.Resolve(parse.GetValue(fluid)!);
-            io.Out.Write(FluidWriter.Render([data], single: true, format, units));
+            showOutput.Emit(io, parse, FluidWriter.Render([data], single: true, format, units), $"the constants of {data.Name}");
         }));
 
         group.Subcommands.Add(list);

@@ -108,8 +108,22 @@ internal static class FluidsEstimateCommand
             };
             string text = FluidFileWriter.Format(fluid, "Written by 'phaseslope fluids estimate'. Estimated values are labelled with their method: check them against measured data.");
             string? path = parse.GetValue(output);
-            // Read the text back: the same validation a user's file gets.
-            FluidFile.Parse(new StringReader(text), path ?? "(estimate)");
+            if (path is not null && string.IsNullOrWhiteSpace(path))
+            {
+                throw new UsageException("--out: the file name is empty");
+            }
+
+            // Read the text back: the same validation a user's file gets. A problem is the fault of
+            // the option that gave the value, not of the output file, so the message names the option.
+            try
+            {
+                FluidFile.Parse(new StringReader(text), "(estimate)");
+            }
+            catch (Core.Errors.FluidDataException ex)
+            {
+                throw new UsageException($"{OptionOf(ex.Field)}: {ex.Problem}");
+            }
+
             if (path is null)
             {
                 io.Out.Write(text);
@@ -117,11 +131,27 @@ internal static class FluidsEstimateCommand
             else
             {
                 AtomicFile.WriteAllText(path, text);
-                io.Error.WriteLine($"phaseslope: wrote fluid file for {fluidName} to {path}");
+                io.Note($"wrote fluid file for {fluidName} to {path}");
             }
         }));
         return command;
     }
+
+    /// <summary>The option that supplied a fluid-file field (the estimated ones come from --groups).</summary>
+    private static string OptionOf(string? field) => field switch
+    {
+        "name" => "--name",
+        "synonyms" => "--synonyms",
+        "formula" => "--formula",
+        "cas" => "--cas",
+        "family" => "--family",
+        "molar_mass" => "--molar-mass",
+        "critical_temperature" => "--tc",
+        "critical_pressure" => "--pc",
+        "acentric_factor" => "--omega",
+        "normal_boiling_point" => "--tb",
+        _ => "--groups",
+    };
 
     private static IReadOnlyList<(JobackGroup, int)> ParseGroups(string text)
     {

@@ -39,6 +39,8 @@ internal static class LatentCommand
         command.Options.Add(common.Eos);
         command.Options.Add(common.Alpha);
         common.AddTo(command, withEos: false, withUnits: false); // the table is in K, kPa and J/mol
+        var output = new OutputOption();
+        output.AddTo(command);
         command.SetAction(parse => io.Guard(() =>
         {
             var format = common.OutputFormat(parse);
@@ -121,7 +123,7 @@ internal static class LatentCommand
             }
 
             var results = temperatures.Select(estimator.At).ToArray();
-            io.Out.Write(FitWriter.Latent(fit, model, results, fits, format));
+            output.Emit(io, parse, FitWriter.Latent(fit, model, results, fits, format), $"{results.Count()} latent heats");
         }));
         return command;
     }

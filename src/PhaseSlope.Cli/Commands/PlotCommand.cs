@@ -56,7 +56,7 @@ internal static class PlotCommand
             }
 
             string path = parse.GetValue(output)!;
-            if (!FigureFormats.TryFromPath(path, out _))
+            if (!FigureFormats.TryFromPath(path, out var figureFormat))
             {
                 throw new UsageException($"--out: '{path}' must end in .png or .svg");
             }
@@ -111,7 +111,10 @@ internal static class PlotCommand
                 DataLabel = dataPath is null ? "data" : Path.GetFileName(dataPath),
             };
             var model = Diagram.Build(kind, fluids, options);
-            FigureExporter.Export(model, path, w, h);
+            // Rendered into memory first: a rendering failure never touches the file system.
+            using var figure = new MemoryStream();
+            FigureExporter.Export(model, figure, figureFormat, w, h);
+            Output.AtomicFile.WriteBytes(path, file => figure.WriteTo(file));
         }));
         return command;
     }

@@ -12,11 +12,13 @@ internal static class StateCommand
         var options = new StateOptions();
         var command = new Command("state", "Every single-phase property at a temperature and a pressure (or density)");
         options.AddTo(command, withUnits: true);
+        var outFile = new OutputOption();
+        outFile.AddTo(command);
         command.SetAction(parse => io.Guard(() =>
         {
             var output = options.Common.BindOutput(parse);
             var (engine, state) = options.Resolve(parse);
-            io.Out.Write(StateWriter.State(engine, state, output.Format, output.Units));
+            outFile.Emit(io, parse, StateWriter.State(engine, state, output.Format, output.Units), "the state");
         }));
         return command;
     }

@@ -21,6 +21,10 @@ internal static partial class VapourPressureCsv
     /// <summary>The fewest data rows a file must have.</summary>
     internal const int MinimumRows = 2;
 
+    /// <summary>The most data rows a file may have: twice the documented 1 000 000-point fit, so
+    /// that memory stays bounded (every row is held for the fit).</summary>
+    internal const int MaximumRows = 2_000_000;
+
     private enum Role
     {
         Temperature,
@@ -68,11 +72,12 @@ internal static partial class VapourPressureCsv
     /// <param name="reader">The file's text; left open.</param>
     /// <param name="origin">The file path or other name that starts every error message.</param>
     /// <param name="options">Units for columns whose header gives none.</param>
+    /// <param name="maximumRows">The most data rows accepted (<see cref="MaximumRows"/>).</param>
     /// <returns>At least <see cref="MinimumRows"/> points with distinct temperatures, in increasing
     /// temperature.</returns>
     /// <exception cref="DataFileException">The file breaks a rule of the format.</exception>
     /// <exception cref="UsageException">A unit in <paramref name="options"/> is unknown.</exception>
-    public static IReadOnlyList<VapourPressureRecord> Read(TextReader reader, string origin, VapourPressureCsvOptions options)
+    public static IReadOnlyList<VapourPressureRecord> Read(TextReader reader, string origin, VapourPressureCsvOptions options, int maximumRows = MaximumRows)
     {
         ArgumentNullException.ThrowIfNull(reader);
         ArgumentNullException.ThrowIfNull(origin);
@@ -118,6 +123,11 @@ internal static partial class VapourPressureCsv
                 {
                     layout = ReadHeader(fields, origin, line, defaultTemperature, defaultPressure);
                     continue;
+                }
+
+                if (records.Count == maximumRows)
+                {
+                    throw new DataFileException(origin, line, null, $"more than {maximumRows} data rows (the limit for data files)");
                 }
 
                 VapourPressureRecord record = ReadRow(fields, layout, origin, line);

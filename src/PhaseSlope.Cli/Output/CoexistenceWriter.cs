@@ -57,7 +57,7 @@ internal static class CoexistenceWriter
             json.WriteString("reference", reference.Id);
         }
 
-        json.WriteNumber("molar_mass_kg_mol", fluid.MolarMass.Value);
+        json.WriteFinite("molar_mass_kg_mol", fluid.MolarMass.Value);
         json.WriteBoolean("critical", point.IsCritical);
         foreach (var column in CoexistenceColumns.Flat)
         {
@@ -66,21 +66,21 @@ internal static class CoexistenceWriter
                 continue;
             }
 
-            json.WriteNumber(column.Key, Finite(column.Value(row), column.Key));
+            json.WriteFinite(column.Key, Finite(column.Value(row), column.Key));
         }
 
-        json.WriteNumber("inverse_slope_K_Pa", Finite(point.InverseSlope, "inverse_slope_K_Pa"));
-        json.WriteNumber("compressibility_factor_change", point.CompressibilityChange);
+        json.WriteFinite("inverse_slope_K_Pa", Finite(point.InverseSlope, "inverse_slope_K_Pa"));
+        json.WriteFinite("compressibility_factor_change", point.CompressibilityChange);
         WritePhase(json, "liquid", point.Liquid, row.Full?.Liquid, fluid.MolarMass.Value);
         WritePhase(json, "vapour", point.Vapour, row.Full?.Vapour, fluid.MolarMass.Value);
         json.WriteStartObject("solver");
         json.WriteString("method", Kebab(point.Report.Method.ToString()));
-        json.WriteNumber("iterations", point.Report.Iterations);
-        json.WriteNumber("fugacity_residual", point.Report.FugacityResidual);
+        json.WriteFinite("iterations", point.Report.Iterations);
+        json.WriteFinite("fugacity_residual", point.Report.FugacityResidual);
         json.WriteString("stop_reason", Kebab(point.Report.StopReason.ToString()));
         json.WriteString("start", Kebab(point.Report.Start.ToString()));
-        json.WriteNumber("model_evaluations", point.Report.ModelEvaluations);
-        json.WriteNumber("density_uncertainty", point.Report.DensityUncertainty);
+        json.WriteFinite("model_evaluations", point.Report.ModelEvaluations);
+        json.WriteFinite("density_uncertainty", point.Report.DensityUncertainty);
         json.WriteEndObject();
         json.WriteEndObject();
     }
@@ -92,38 +92,26 @@ internal static class CoexistenceWriter
         json.WriteStartObject(name);
         if (full is null)
         {
-            json.WriteNumber("density_mol_m3", phase.Density);
-            json.WriteNumber("density_kg_m3", phase.Density * molarMass);
-            json.WriteNumber("molar_volume_m3_mol", phase.MolarVolume);
-            json.WriteNumber("compressibility_factor", phase.CompressibilityFactor);
-            json.WriteNumber("ln_fugacity_coefficient", phase.LnFugacityCoefficient);
-            json.WriteNumber("residual_enthalpy_J_mol", phase.ResidualEnthalpy);
-            json.WriteNumber("residual_entropy_J_molK", phase.ResidualEntropy);
+            json.WriteFinite("density_mol_m3", phase.Density);
+            json.WriteFinite("density_kg_m3", phase.Density * molarMass);
+            json.WriteFinite("molar_volume_m3_mol", phase.MolarVolume);
+            json.WriteFinite("compressibility_factor", phase.CompressibilityFactor);
+            json.WriteFinite("ln_fugacity_coefficient", phase.LnFugacityCoefficient);
+            json.WriteFinite("residual_enthalpy_J_mol", phase.ResidualEnthalpy);
+            json.WriteFinite("residual_entropy_J_molK", phase.ResidualEntropy);
         }
         else
         {
             StateColumns.WriteMembers(json, full.State, PointKeys);
-            WriteOptionalNumber(json, "density_slope_mol_m3K", full.DensitySlope);
-            WriteOptionalNumber(json, "enthalpy_slope_J_molK", full.EnthalpySlope);
-            WriteOptionalNumber(json, "entropy_slope_J_molK2", full.EntropySlope);
-            WriteOptionalNumber(json, "internal_energy_slope_J_molK", full.InternalEnergySlope);
-            WriteOptionalNumber(json, "saturation_heat_capacity_J_molK", full.SaturationHeatCapacity);
+            json.WriteNumberOrNull("density_slope_mol_m3K", full.DensitySlope);
+            json.WriteNumberOrNull("enthalpy_slope_J_molK", full.EnthalpySlope);
+            json.WriteNumberOrNull("entropy_slope_J_molK2", full.EntropySlope);
+            json.WriteNumberOrNull("internal_energy_slope_J_molK", full.InternalEnergySlope);
+            json.WriteNumberOrNull("saturation_heat_capacity_J_molK", full.SaturationHeatCapacity);
         }
 
-        json.WriteNumber("residual_internal_energy_J_mol", phase.ResidualInternalEnergy);
+        json.WriteFinite("residual_internal_energy_J_mol", phase.ResidualInternalEnergy);
         json.WriteEndObject();
-    }
-
-    private static void WriteOptionalNumber(Utf8JsonWriter json, string key, double? value)
-    {
-        if (value is double v && double.IsFinite(v))
-        {
-            json.WriteNumber(key, v);
-        }
-        else
-        {
-            json.WriteNull(key);
-        }
     }
 
     private static string Csv(IReadOnlyList<CoexistenceRow> rows)
@@ -230,6 +218,5 @@ internal static class CoexistenceWriter
         return text.ToString();
     }
 
-    private static double Finite(double? value, string key)
-        => value is double v && double.IsFinite(v) ? v : throw new InvalidOperationException($"internal error: {key} is not finite");
+    private static double Finite(double? value, string key) => FiniteNumbers.Check(value ?? double.NaN, key);
 }

@@ -14,6 +14,7 @@ internal static class FitWriter
     /// million residual rows), rather than being built as one string first.</remarks>
     public static void Fit(TextWriter output, VapourPressureFit fit, IReadOnlyList<VapourPressureFit> candidates, OutputFormat format)
     {
+        CheckFinite(fit);
         using var chunked = new ChunkedTextWriter(output);
         switch (format)
         {
@@ -26,6 +27,25 @@ internal static class FitWriter
             default:
                 FitTable(chunked, fit, candidates);
                 break;
+        }
+    }
+
+    /// <summary>Why a fit has no covariance (see <see cref="VapourPressureFit.CovarianceDefined"/>).</summary>
+    private const string CovarianceUndefined =
+        "the data do not determine the parameters independently to double precision (temperatures too close together for this form)";
+
+    /// <summary>Checks every number the fit output will show, so that an overflow fails before
+    /// anything is written (the output streams).</summary>
+    private static void CheckFinite(VapourPressureFit fit)
+    {
+        for (int i = 0; i < fit.Parameters.Count; i++)
+        {
+            FiniteNumbers.Check(fit.Parameters[i], $"parameter {fit.Form.ParameterNames[i]}");
+        }
+
+        foreach (var point in fit.Data)
+        {
+            FiniteNumbers.Check(fit.Pressure(point.Temperature), $"the fitted pressure at {NumberText.Table(point.Temperature)} K");
         }
     }
 
@@ -42,11 +62,11 @@ internal static class FitWriter
             {
                 var point = fit.Data[i];
                 json.WriteStartObject();
-                json.WriteNumber("temperature_K", point.Temperature);
-                json.WriteNumber("pressure_Pa", point.Pressure);
-                json.WriteNumber("fitted_pressure_Pa", fit.Pressure(point.Temperature));
-                json.WriteNumber("deviation_percent", deviations[i]);
-                json.WriteNumber("ln_pressure_residual", residuals[i]);
+                json.WriteFinite("temperature_K", point.Temperature);
+                json.WriteFinite("pressure_Pa", point.Pressure);
+                json.WriteFinite("fitted_pressure_Pa", fit.Pressure(point.Temperature));
+                json.WriteFinite("deviation_percent", deviations[i]);
+                json.WriteFinite("ln_pressure_residual", residuals[i]);
                 json.WriteEndObject();
             }
 
@@ -81,11 +101,11 @@ internal static class FitWriter
                 foreach (var p in points)
                 {
                     json.WriteStartObject();
-                    json.WriteNumber("temperature_K", p.Temperature);
-                    json.WriteNumber("pressure_Pa", p.Pressure);
-                    json.WriteNumber("enthalpy_of_vaporization_J_mol", p.EnthalpyOfVaporization);
-                    json.WriteNumber("standard_uncertainty_J_mol", p.StandardUncertainty);
-                    json.WriteNumber("compressibility_change", p.CompressibilityChange);
+                    json.WriteFinite("temperature_K", p.Temperature);
+                    json.WriteFinite("pressure_Pa", p.Pressure);
+                    json.WriteFinite("enthalpy_of_vaporization_J_mol", p.EnthalpyOfVaporization);
+                    json.WriteNumberOrNull("standard_uncertainty_J_mol", p.StandardUncertainty);
+                    json.WriteFinite("compressibility_change", p.CompressibilityChange);
                     json.WriteBoolean("extrapolated", p.Extrapolated);
                     json.WriteEndObject();
                 }
@@ -99,7 +119,7 @@ internal static class FitWriter
                 points.Select(p => new[]
                 {
                     NumberText.RoundTrip(p.Temperature), NumberText.RoundTrip(p.Pressure), NumberText.RoundTrip(p.EnthalpyOfVaporization),
-                    NumberText.RoundTrip(p.StandardUncertainty), NumberText.RoundTrip(p.CompressibilityChange), p.Extrapolated ? "true" : "false",
+                    NumberText.RoundTripOrEmpty(p.StandardUncertainty), NumberText.RoundTrip(p.CompressibilityChange), p.Extrapolated ? "true" : "false",
                 })),
             _ => LatentTable(fit, model, points),
         };
@@ -119,36 +139,47 @@ internal static class FitWriter
         json.WriteStartObject("parameters");
         for (int i = 0; i < fit.Parameters.Count; i++)
         {
-            json.WriteNumber(fit.Form.ParameterNames[i], fit.Parameters[i]);
+            json.WriteFinite(fit.Form.ParameterNames[i], fit.Parameters[i]);
         }
 
         json.WriteEndObject();
-        json.WriteStartObject("standard_errors");
-        for (int i = 0; i < fit.Parameters.Count; i++)
+        if (fit.CovarianceDefined)
         {
-            json.WriteNumber(fit.Form.ParameterNames[i], fit.StandardErrors[i]);
-        }
-
-        json.WriteEndObject();
-        json.WriteStartArray("covariance");
-        for (int i = 0; i < fit.Parameters.Count; i++)
-        {
-            json.WriteStartArray();
-            for (int j = 0; j < fit.Parameters.Count; j++)
+            json.WriteStartObject("standard_errors");
+            for (int i = 0; i < fit.Parameters.Count; i++)
             {
-                json.WriteNumberValue(fit.Covariance[i, j]);
+                json.WriteFinite(fit.Form.ParameterNames[i], fit.StandardErrors[i]);
+            }
+
+            json.WriteEndObject();
+            json.WriteStartArray("covariance");
+            for (int i = 0; i < fit.Parameters.Count; i++)
+            {
+                json.WriteStartArray();
+                for (int j = 0; j < fit.Parameters.Count; j++)
+                {
+                    json.WriteFiniteValue(fit.Covariance[i, j], "covariance");
+                }
+
+                json.WriteEndArray();
             }
 
             json.WriteEndArray();
+            json.WriteNull("covariance_undefined_reason");
+        }
+        else
+        {
+            json.WriteNull("standard_errors");
+            json.WriteNull("covariance");
+            json.WriteString("covariance_undefined_reason", CovarianceUndefined);
         }
 
-        json.WriteEndArray();
-        json.WriteNumber("point_count", fit.Data.Count);
-        json.WriteNumber("degrees_of_freedom", fit.DegreesOfFreedom);
-        json.WriteNumber("chi_square", fit.ChiSquare);
+        json.WriteFinite("point_count", fit.Data.Count);
+        json.WriteFinite("degrees_of_freedom", fit.DegreesOfFreedom);
+        json.WriteFinite("chi_square", fit.ChiSquare);
         if (fit.ReducedChiSquare is double r)
         {
-            json.WriteNumber("reduced_chi_square", r);
+            json.WriteFinite("reduced_chi_square", r);
         }
         else
         {
@@ -157,21 +188,21 @@ internal static class FitWriter
 
         if (fit.Aicc is double a)
         {
-            json.WriteNumber("aicc", a);
+            json.WriteFinite("aicc", a);
         }
         else
         {
             json.WriteNull("aicc");
         }
 
-        json.WriteNumber("aad_percent", fit.AadPercent);
-        json.WriteNumber("max_deviation_percent", fit.MaximumDeviationPercent);
+        json.WriteFinite("aad_percent", fit.AadPercent);
+        json.WriteFinite("max_deviation_percent", fit.MaximumDeviationPercent);
         json.WriteStartArray("valid_range_K");
-        json.WriteNumberValue(fit.MinimumTemperature);
-        json.WriteNumberValue(fit.MaximumTemperature);
+        json.WriteFiniteValue(fit.MinimumTemperature, "valid_range_K");
+        json.WriteFiniteValue(fit.MaximumTemperature, "valid_range_K");
         json.WriteEndArray();
         json.WriteBoolean("absolute_uncertainties", fit.AbsoluteUncertainties);
-        json.WriteNumber("iterations", fit.Iterations);
+        json.WriteFinite("iterations", fit.Iterations);
         json.WriteString("stop_reason", fit.StopReason);
     }
 
@@ -187,8 +218,8 @@ internal static class FitWriter
         {
             json.WriteStartObject();
             json.WriteString("form", c.Form.Id);
-            json.WriteNumber("aicc", c.Aicc!.Value);
-            json.WriteNumber("aad_percent", c.AadPercent);
+            json.WriteFinite("aicc", c.Aicc!.Value);
+            json.WriteFinite("aad_percent", c.AadPercent);
             json.WriteEndObject();
         }
 
@@ -207,10 +238,16 @@ internal static class FitWriter
             var parameters = new TextTable(["parameter", "value", "standard error"], [false, true, true]);
             for (int i = 0; i < fit.Parameters.Count; i++)
             {
-                parameters.Add(fit.Form.ParameterNames[i], NumberText.RoundTrip(fit.Parameters[i]), NumberText.Table(fit.StandardErrors[i]));
+                parameters.Add(fit.Form.ParameterNames[i], NumberText.RoundTrip(fit.Parameters[i]),
+                    fit.CovarianceDefined ? NumberText.Table(fit.StandardErrors[i]) : "undefined");
             }
 
             text.Append(parameters.Render());
+            if (!fit.CovarianceDefined)
+            {
+                text.AppendLine($"standard errors undefined: {CovarianceUndefined}");
+            }
+
             text.AppendLine();
         }
 
@@ -255,12 +292,17 @@ internal static class FitWriter
         foreach (var p in points)
         {
             table.Add(NumberText.Table(p.Temperature), NumberText.Table(UnitFormatter.Pressure(p.Pressure, UnitSystem.Si)), NumberText.Table(p.CompressibilityChange),
-                NumberText.Table(p.EnthalpyOfVaporization), NumberText.Table(p.StandardUncertainty), p.Extrapolated ? "*" : "");
+                NumberText.Table(p.EnthalpyOfVaporization), NumberText.TableOrUndefined(p.StandardUncertainty), p.Extrapolated ? "*" : "");
         }
 
         text.Append(table.Render());
         text.AppendLine();
         text.AppendLine("u(dH) is the standard uncertainty from the fit covariance only; the volume model adds its own (see docs/validation.md).");
+        if (!fit.CovarianceDefined)
+        {
+            text.AppendLine($"u(dH) undefined: {CovarianceUndefined}");
+        }
+
         text.AppendLine(CoexistenceWriter.Caution);
         return text.ToString();
     }

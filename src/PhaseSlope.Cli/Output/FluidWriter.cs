@@ -74,7 +74,7 @@ internal static class FluidWriter
         {
             if (field.Get(fluid) is SourcedValue value)
             {
-                json.WriteNumber(field.Key, value.Value);
+                json.WriteFinite(field.Key, value.Value);
             }
             else
             {
@@ -82,7 +82,7 @@ internal static class FluidWriter
             }
         }
 
-        json.WriteNumber("lowest_valid_temperature_K", CoexistenceSolver.LowestValidTemperature(fluid));
+        json.WriteFinite("lowest_valid_temperature_K", CoexistenceSolver.LowestValidTemperature(fluid));
         var line = VapourLineOf(fluid);
         WriteOptional(json, "vapour_line", line?.Class.ToString().ToLowerInvariant());
         if (line is null)
@@ -92,10 +92,10 @@ internal static class FluidWriter
         }
         else
         {
-            json.WriteNumber("vapour_line_reduced_slope", line.ReducedSlope);
+            json.WriteFinite("vapour_line_reduced_slope", line.ReducedSlope);
             if (line.MaximumEntropyTemperature is double tMax)
             {
-                json.WriteNumber("maximum_vapour_entropy_temperature_K", tMax);
+                json.WriteFinite("maximum_vapour_entropy_temperature_K", tMax);
             }
             else
             {
@@ -107,7 +107,7 @@ internal static class FluidWriter
         {
             if (field.Get(fluid)?.StandardUncertainty is double u)
             {
-                json.WriteNumber(field.Key, u);
+                json.WriteFinite(field.Key, u);
             }
         }
 

@@ -25,7 +25,7 @@ internal static class ModelText
         json.WriteString("equation", identity.Equation);
         json.WriteString("title", identity.Title);
         json.WriteString("alpha", identity.Alpha);
-        json.WriteNumber("volume_shift_m3_mol", identity.VolumeShift);
+        json.WriteFinite("volume_shift_m3_mol", identity.VolumeShift);
         json.WriteEndObject();
     }
 }

@@ -50,17 +50,10 @@ internal static class StateColumns
                 continue;
             }
 
-            if (column.Value(state) is double value && double.IsFinite(value))
-            {
-                json.WriteNumber(column.Key, value);
-            }
-            else
-            {
-                json.WriteNull(column.Key);
-            }
+            json.WriteNumberOrNull(column.Key, column.Value(state));
         }
 
-        json.WriteNumber("density_kg_m3", state.Density * state.MolarMass);
+        json.WriteFinite("density_kg_m3", state.Density * state.MolarMass);
         json.WriteBoolean("ideal_gas_extrapolated", state.IdealGasExtrapolated);
     }
 

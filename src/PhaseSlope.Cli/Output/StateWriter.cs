@@ -41,11 +41,11 @@ internal static class StateWriter
                 json.WriteString("of", of.ToString());
                 json.WriteString("by", by.ToString());
                 json.WriteString("hold", hold.ToString());
-                json.WriteNumber("value", value);
+                json.WriteFinite("value", value);
                 json.WriteString("unit", unit);
-                json.WriteNumber("temperature_K", state.Temperature);
-                json.WriteNumber("pressure_Pa", state.Pressure);
-                json.WriteNumber("density_mol_m3", state.Density);
+                json.WriteFinite("temperature_K", state.Temperature);
+                json.WriteFinite("pressure_Pa", state.Pressure);
+                json.WriteFinite("density_mol_m3", state.Density);
                 json.WriteEndObject();
             }),
             OutputFormat.Csv => CsvText.Write(
@@ -64,7 +64,7 @@ internal static class StateWriter
         json.WriteString("reference", engine.Reference.Id);
         json.WriteString("phase", state.Phase.ToString().ToLowerInvariant());
         json.WriteBoolean("metastable", state.Metastable);
-        json.WriteNumber("molar_mass_kg_mol", engine.MolarMass);
+        json.WriteFinite("molar_mass_kg_mol", engine.MolarMass);
     }
 
     private static string Title(PropertyModel engine, ThermodynamicState state)

@@ -17,7 +17,35 @@ public sealed record VapourPressureFit
     /// <summary>Covariance matrix of the parameters (p×p).</summary>
     public required double[,] Covariance { get; init; }
 
-    /// <summary>Standard errors √Σ_jj.</summary>
+    /// <summary>Whether <see cref="Covariance"/> is usable: every entry finite and every variance
+    /// non-negative. It is not when the data cannot separate the parameters to double precision
+    /// (for example temperatures a few nanokelvin apart); the parameters are still the least-squares
+    /// solution, but their standard errors, and every uncertainty derived from them, are undefined.</summary>
+    public bool CovarianceDefined
+    {
+        get
+        {
+            for (int i = 0; i < Parameters.Count; i++)
+            {
+                if (!(Covariance[i, i] >= 0))
+                {
+                    return false;
+                }
+
+                for (int j = 0; j < Parameters.Count; j++)
+                {
+                    if (!double.IsFinite(Covariance[i, j]))
+                    {
+                        return false;
+                    }
+                }
+            }
+
+            return true;
+        }
+    }
+
+    /// <summary>Standard errors √Σ_jj (NaN when <see cref="CovarianceDefined"/> is false).</summary>
     public IReadOnlyList<double> StandardErrors => [.. Enumerable.Range(0, Parameters.Count).Select(j => Math.Sqrt(Covariance[j, j]))];
 
     /// <summary>The data the fit used, sorted by temperature.</summary>

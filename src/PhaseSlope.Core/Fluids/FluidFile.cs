@@ -21,6 +21,15 @@ public static class FluidFile
     /// <summary>File name extension of fluid files, with the dot.</summary>
     public const string Extension = ".fluid";
 
+    /// <summary>Lowest accepted molar mass, kg/mol: 1 g/mol, below the lightest molecule (H2,
+    /// 2.016 g/mol) and no lighter than a hydrogen atom.</summary>
+    public const double MolarMassLowest = 1e-3;
+
+    /// <summary>Highest accepted molar mass, kg/mol: 10 000 g/mol, above the heaviest petroleum
+    /// pseudo-components that cubic equations of state are applied to (about 1 000 to 2 000 g/mol);
+    /// a larger value is a unit slip or a typing error.</summary>
+    public const double MolarMassHighest = 10.0;
+
     /// <summary>Reads a fluid file from a stream of UTF-8 text (a byte-order mark is allowed).</summary>
     /// <param name="stream">The open stream; it is read to the end and left open.</param>
     /// <param name="origin">File path or resource name, used in error messages and stored in
@@ -546,6 +555,12 @@ internal sealed partial class FluidFileParser
         }
 
         SourcedValue molarMass = ToSi(KeyMolarMass, molarMass: null)!;
+        if (molarMass.Value < FluidFile.MolarMassLowest || molarMass.Value > FluidFile.MolarMassHighest)
+        {
+            throw Fail(_lineOfKey[KeyMolarMass], KeyMolarMass,
+                $"implausible value {Show(molarMass.Value * 1e3)} g/mol; expected between {Show(FluidFile.MolarMassLowest * 1e3)} and {Show(FluidFile.MolarMassHighest * 1e3)} g/mol");
+        }
+
         SourcedValue criticalTemperature = ToSi(KeyCriticalTemperature, molarMass.Value)!;
         SourcedValue criticalPressure = ToSi(KeyCriticalPressure, molarMass.Value)!;
         SourcedValue acentricFactor = ToSi(KeyAcentricFactor, molarMass.Value)!;

@@ -58,6 +58,11 @@ public sealed class OfferedOptionTests : IDisposable
         yield return Changes("coexist", "--reference", coexist, "--reference", "nbp");
         yield return Changes("coexist", "--diagnostics", coexist, "--diagnostics");
 
+        foreach (var row in OutRows())
+        {
+            yield return row;
+        }
+
         string[] curve = ["curve", "propane", "--points", "5"];
         yield return Changes("curve", "--from", curve, "--from", "250");
         yield return Changes("curve", "--to", curve, "--to", "350");
@@ -224,6 +229,21 @@ public sealed class OfferedOptionTests : IDisposable
     }
 
     /// <summary>--eos, --alpha, --volume-shift, --format and (where offered) --units.</summary>
+    /// <summary>--out on the commands that print one result: the result goes to the file, so
+    /// standard output changes (to nothing).</summary>
+    private static IEnumerable<Row> OutRows()
+    {
+        yield return Changes("coexist", "--out", ["coexist", "propane", "-T", "300"], "--out", "{dir}/out.txt");
+        yield return Changes("state", "--out", ["state", "propane", "-T", "300", "-P", "1MPa"], "--out", "{dir}/out.txt");
+        yield return Changes("derive", "--out", ["derive", "propane", "--of", "U", "--by", "V", "--hold", "T", "-T", "300", "-P", "1MPa"], "--out", "{dir}/out.txt");
+        yield return Changes("fit", "--out", ["fit", Csv, "--form", "antoine"], "--out", "{dir}/out.txt");
+        yield return Changes("latent", "--out", ["latent", Csv, "--form", "antoine"], "--out", "{dir}/out.txt");
+        yield return Changes("audit", "--out", ["audit", "--form", "antoine", "--coefficients", LangeWater, "--range", "1,100", "--log-base", "10"], "--out", "{dir}/out.txt");
+        yield return Changes("fluids list", "--out", ["fluids", "list"], "--out", "{dir}/out.txt");
+        yield return Changes("fluids show", "--out", ["fluids", "show", "propane"], "--out", "{dir}/out.txt");
+        yield return Changes("fluids check", "--out", ["fluids", "check", FluidFile], "--out", "{dir}/out.txt");
+    }
+
     private static IEnumerable<Row> ModelAndOutputRows(string command, string[] baseline, bool units)
     {
         yield return Changes(command, "--eos", baseline, "--eos", "srk");
