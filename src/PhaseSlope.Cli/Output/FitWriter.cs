@@ -86,6 +86,11 @@ internal static class FitWriter
                     json.WriteNumber("standard_uncertainty_J_mol", p.StandardUncertainty);
                     json.WriteNumber("compressibility_change", p.CompressibilityChange);
                     json.WriteBoolean("extrapolated", p.Extrapolated);
+                    if (p.Finding is string finding)
+                    {
+                        json.WriteString("finding", finding);
+                    }
+
                     json.WriteEndObject();
                 }
 
@@ -258,6 +263,11 @@ internal static class FitWriter
         }
 
         text.Append(table.Render());
+        foreach (var finding in points.Select(p => p.Finding).OfType<string>())
+        {
+            text.AppendLine($"finding: {finding}");
+        }
+
         text.AppendLine();
         text.AppendLine("u(dH) is the standard uncertainty from the fit covariance only; the volume model adds its own (see docs/validation.md).");
         text.AppendLine(CoexistenceWriter.Caution);
