@@ -121,8 +121,8 @@ internal sealed partial class FluidFileParser
         [KeyTriplePointTemperature] = Quantity.Temperature,
     };
 
-    private const double AcentricFactorLowest = -0.5;
-    private const double AcentricFactorHighest = 2.0;
+    internal const double AcentricFactorLowest = -0.5;
+    internal const double AcentricFactorHighest = 2.0;
 
     private readonly string _origin;
     private readonly Dictionary<string, int> _lineOfKey = new(StringComparer.Ordinal);
