@@ -114,4 +114,14 @@ public sealed class InputGuardTests : IDisposable
         var result = Run("curve", "water", "--from", "273.15999 K");
         AssertFailure(result, 4, "273.15999 K is below the lowest valid temperature 273.16 K");
     }
+
+    [Fact]
+    public void FluidFile_NameWithABidiOverride_RefusedAndEscapedInTheError()
+    {
+        // A name is echoed raw in every table title, so it is refused at the file, and the
+        // error line does not carry the raw character either.
+        var result = Run("coexist", Propane("name", "name                      pro\u202Epane"), "-T", "300");
+        AssertFailure(result, 3, "must not contain control or invisible format characters (U+202E at position 4)");
+        Assert.DoesNotContain("\u202E", result.Stderr, StringComparison.Ordinal);
+    }
 }

@@ -68,4 +68,15 @@ public class MessageAndEstimateGuardTests
         var ex = Assert.Throws<InvalidInputException>(() => CorrelationAuditor.Audit(request));
         Assert.Contains("overflow", ex.Message, StringComparison.Ordinal);
     }
+
+    [Theory]
+    [InlineData("pro\u202Epane", "U+202E at position 4")]
+    [InlineData("pro\0pane", "U+0000 at position 4")]
+    public void FluidFile_NameWithControlOrFormatCharacters_Refused(string name, string where)
+    {
+        string text = File.ReadAllText("../../../../../fluids/propane.fluid")
+            .Replace("name                      propane", "name                      " + name, StringComparison.Ordinal);
+        var ex = Assert.Throws<FluidDataException>(() => FluidFile.Parse(new StringReader(text), "test.fluid"));
+        Assert.Contains(where, ex.Message, StringComparison.Ordinal);
+    }
 }
