@@ -63,7 +63,8 @@ internal sealed class CliIo(TextWriter output, TextWriter error)
     /// <summary>Writes "phaseslope: error: message" on one line of standard error and returns the code.</summary>
     public int Fail(string message, int code)
     {
-        Error.WriteLine($"{ErrorPrefix}{message.ReplaceLineEndings(" ")}");
+        // Every error may echo user text (a name, a path, a file's field): escaped here, once.
+        Error.WriteLine($"{ErrorPrefix}{Input.DataFileException.OneLine(message.ReplaceLineEndings(" "))}");
         return code;
     }
 

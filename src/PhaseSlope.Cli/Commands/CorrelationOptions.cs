@@ -110,6 +110,16 @@ internal sealed class CorrelationOptions
     public bool CriticalPointGiven(ParseResult parse)
         => parse.GetValue(Fluid) is not null || parse.GetValue(CriticalTemperature) is not null;
 
+    /// <summary>Refuses data at or above the critical point given by the fluid or by --tc/--pc,
+    /// whichever form is then fitted (the critical constants must be consistent with the data
+    /// even when auto selection settles on a form that does not use them).</summary>
+    public void RequireDataBelowCriticalPoint(ParseResult parse, Fluid? fluid, IReadOnlyList<VapourPressurePoint> data)
+    {
+        double? tc = fluid?.CriticalTemperature.Value ?? (parse.GetValue(CriticalTemperature) is string t ? QuantityParser.ParseTemperature(t, "--tc") : null);
+        double? pc = fluid?.CriticalPressure.Value ?? (parse.GetValue(CriticalPressure) is string p ? QuantityParser.ParsePressure(p, "--pc") : null);
+        VapourPressureFitter.RequireBelowCriticalPoint(data, tc, pc);
+    }
+
     /// <summary>The candidate forms: the one named, or every form for auto.</summary>
     /// <param name="parse">The parsed command line.</param>
     /// <param name="fluid">The --fluid, if given.</param>

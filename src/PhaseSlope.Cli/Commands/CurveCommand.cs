@@ -60,10 +60,13 @@ internal static class CurveCommand
             double tc = solver.CriticalTemperature;
             double start = tFrom ?? solver.MinimumTemperature;
             double end = tTo ?? tc;
-            if (start < solver.MinimumTemperature)
+            // A value below the limit only by rounding (0.01 degC is 273.15999999999997 K, below a
+            // 273.16 K triple point) is accepted, as the solver itself accepts it (1e-12 relative).
+            if (start < solver.MinimumTemperature * (1 - 1e-12))
             {
+                var (given, limit) = Apart(start, solver.MinimumTemperature);
                 throw new Core.Errors.InvalidInputException("from temperature", start,
-                    $"--from: {NumberText.Table(start)} K is below the lowest valid temperature {NumberText.Table(solver.MinimumTemperature)} K of {data.Name}");
+                    $"--from: {given} K is below the lowest valid temperature {limit} K of {data.Name}");
             }
 
             if (start >= tc)
@@ -78,10 +81,11 @@ internal static class CurveCommand
                     $"--to: {NumberText.Table(end)} K is above the critical temperature {NumberText.Table(tc)} K of {data.Name}");
             }
 
-            if (end < solver.MinimumTemperature)
+            if (end < solver.MinimumTemperature * (1 - 1e-12))
             {
+                var (given, limit) = Apart(end, solver.MinimumTemperature);
                 throw new Core.Errors.InvalidInputException("to temperature", end,
-                    $"--to: {NumberText.Table(end)} K is below the lowest valid temperature {NumberText.Table(solver.MinimumTemperature)} K of {data.Name}");
+                    $"--to: {given} K is below the lowest valid temperature {limit} K of {data.Name}");
             }
 
             if (!(start < end))
@@ -112,4 +116,13 @@ internal static class CurveCommand
         ".json" => OutputFormat.Json,
         _ => OutputFormat.Table,
     };
+
+    /// <summary>Two compared values with enough digits to show them different (the table's
+    /// digits when those already do, else round-trip).</summary>
+    private static (string, string) Apart(double first, double second)
+    {
+        string a = NumberText.Table(first), b = NumberText.Table(second);
+        return a != b ? (a, b)
+            : (first.ToString("R", System.Globalization.CultureInfo.InvariantCulture), second.ToString("R", System.Globalization.CultureInfo.InvariantCulture));
+    }
 }

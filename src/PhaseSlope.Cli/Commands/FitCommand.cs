@@ -23,6 +23,7 @@ internal static class FitCommand
             // Options first, then the data file: a bad --form is a usage error whatever the file holds.
             var forms = options.Forms(parse, fluid, out bool auto);
             var data = options.ReadData(parse);
+            options.RequireDataBelowCriticalPoint(parse, fluid, data);
             var fits = CorrelationOptions.Fit(forms, auto, data);
             output.Emit(io, parse, text => FitWriter.Fit(text, fits[0], fits, format), $"the {fits[0].Form.Id} fit to {data.Count} points");
         }));

@@ -20,16 +20,41 @@ internal static class FluidsCheckCommand
         common.AddTo(command, withEos: true, withUnits: false);
         var output = new OutputOption();
         output.AddTo(command);
-        command.SetAction(parse => io.Guard(() =>
+        command.SetAction(parse =>
         {
-            var format = common.OutputFormat(parse);
-            var model = common.BindModel(parse);
+            FluidCheck? check = null;
             string path = parse.GetValue(file)!;
-            var fluid = FluidResolver.ReadFile(path);
-            var check = FluidCheck.Run(fluid, model.For(fluid));
-            output.Emit(io, parse, format == OutputFormat.Json ? Json(path, check) : Table(path, check), "the check report");
-        }));
+            int code = io.Guard(() =>
+            {
+                var format = common.OutputFormat(parse);
+                var model = common.BindModel(parse);
+                var fluid = FluidResolver.ReadFile(path);
+                check = FluidCheck.Run(fluid, model.For(fluid));
+                output.Emit(io, parse, format == OutputFormat.Json ? Json(path, check) : Table(path, check), "the check report");
+            });
+            // The report is the result either way; an inconsistency found in it fails the run
+            // (exit 8, as a failed audit check), named on one stderr line, so a script can gate on it.
+            return code == ExitCodes.Success && check is not null && Inconsistency(check) is string problem
+                ? io.Fail($"{path}: {problem}", ExitCodes.AuditFailed)
+                : code;
+        });
         return command;
+    }
+
+    /// <summary>The first failed check of the report, or null when every check passed.</summary>
+    private static string? Inconsistency(FluidCheck check)
+    {
+        if (!check.SolvesToCriticalPoint)
+        {
+            return $"check failed: coexistence does not converge from the lowest valid temperature to Tc ({check.Failure})";
+        }
+
+        if (check.Fluid.NormalBoilingPoint is { } tb && check.PredictedBoilingPoint is double predicted && !check.BoilingPointConsistent)
+        {
+            return $"check failed: the model's normal boiling point {NumberText.Table(predicted)} K is {NumberText.Table(Math.Abs(check.BoilingPointDeviation!.Value) * 100)} % from the file's {NumberText.Table(tb.Value)} K (more than {NumberText.Table(FluidCheck.BoilingPointTolerance * 100)} %): check Tc, Pc, omega and Tb";
+        }
+
+        return null;
     }
 
     private static string Table(string path, FluidCheck check)

@@ -96,6 +96,7 @@ internal static class LatentCommand
             // Options first, then the data file: a bad --form is a usage error whatever the file holds.
             var forms = options.Forms(parse, fluid, out bool auto, criticalPointUsedElsewhere: model != VolumeChangeModel.IdealGas);
             var data = options.ReadData(parse);
+            options.RequireDataBelowCriticalPoint(parse, fluid, data);
             var fits = CorrelationOptions.Fit(forms, auto, data);
             var fit = fits[0];
             var solver = fluid is not null && model == VolumeChangeModel.EquationOfState

@@ -59,18 +59,13 @@ internal sealed class StateOptions
 
         var model = Common.BindModel(parse); // reject a bad --eos, --alpha or --volume-shift before the fluid is resolved
         var phase = ParsePhase(parse.GetValue(Phase) ?? "stable");
-        if (dText is not null && phase != PhaseChoice.Stable)
-        {
-            throw new UsageException("--phase: a state given by --density has one root; --phase applies to --pressure only");
-        }
-
         var reference = ReferenceOption.Parse(parse.GetValue(Reference) ?? ReferenceState.IdealGas.Id);
         double t = QuantityParser.ParseTemperature(parse.GetValue(Temperature)!, "--temperature");
         double? p = pText is null ? null : QuantityParser.ParsePressure(pText, "--pressure");
         Fluid fluid = FluidResolver.Resolve(parse.GetValue(Fluid)!);
         double? rho = dText is null ? null : QuantityParser.ParseDensity(dText, "--density", fluid.MolarMass.Value);
         var engine = new PropertyModel(fluid, model.For(fluid), reference);
-        var state = p is double pv ? engine.AtPressure(t, pv, phase) : engine.AtDensity(t, rho!.Value);
+        var state = p is double pv ? engine.AtPressure(t, pv, phase) : engine.AtDensity(t, rho!.Value, phase);
         return (engine, state);
     }
 

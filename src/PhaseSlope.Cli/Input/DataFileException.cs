@@ -47,18 +47,20 @@ internal sealed class DataFileException : Exception
         return text.ToString();
     }
 
-    /// <summary>Shows control characters (line breaks, tabs) as \uXXXX escapes, so that text from
-    /// the file cannot break the message over several lines.</summary>
+    /// <summary>Shows control characters (line breaks, tabs, NUL) and invisible format
+    /// characters (bidirectional overrides such as U+202E, zero-width characters) as \uXXXX
+    /// escapes, so that text from the user cannot break a message over several lines or reorder
+    /// what the terminal shows.</summary>
     internal static string OneLine(string text)
     {
-        if (!text.Any(char.IsControl))
+        if (!text.Any(Unprintable))
         {
             return text;
         }
         var builder = new StringBuilder(text.Length + 8);
         foreach (char c in text)
         {
-            if (char.IsControl(c))
+            if (Unprintable(c))
             {
                 builder.Append(CultureInfo.InvariantCulture, $"\\u{(int)c:X4}");
             }
@@ -69,4 +71,7 @@ internal sealed class DataFileException : Exception
         }
         return builder.ToString();
     }
+
+    private static bool Unprintable(char c)
+        => char.IsControl(c) || CharUnicodeInfo.GetUnicodeCategory(c) == UnicodeCategory.Format;
 }

@@ -107,6 +107,11 @@ internal static class FitWriter
                     json.WriteNumberOrNull("standard_uncertainty_J_mol", p.StandardUncertainty);
                     json.WriteFinite("compressibility_change", p.CompressibilityChange);
                     json.WriteBoolean("extrapolated", p.Extrapolated);
+                    if (p.Finding is string finding)
+                    {
+                        json.WriteString("finding", finding);
+                    }
+
                     json.WriteEndObject();
                 }
 
@@ -296,6 +301,11 @@ internal static class FitWriter
         }
 
         text.Append(table.Render());
+        foreach (var finding in points.Select(p => p.Finding).OfType<string>())
+        {
+            text.AppendLine($"finding: {finding}");
+        }
+
         text.AppendLine();
         text.AppendLine("u(dH) is the standard uncertainty from the fit covariance only; the volume model adds its own (see docs/validation.md).");
         if (!fit.CovarianceDefined)

@@ -64,6 +64,12 @@ internal static class StateWriter
         json.WriteString("reference", engine.Reference.Id);
         json.WriteString("phase", state.Phase.ToString().ToLowerInvariant());
         json.WriteBoolean("metastable", state.Metastable);
+        json.WriteBoolean("critical", state.Critical);
+        if (state.UndefinedReason is string reason)
+        {
+            json.WriteString("undefined_reason", reason);
+        }
+
         json.WriteFinite("molar_mass_kg_mol", engine.MolarMass);
     }
 
@@ -89,6 +95,16 @@ internal static class StateWriter
             var cp = engine.Fluid.IdealGasHeatCapacity!;
             text.AppendLine(string.Create(CultureInfo.InvariantCulture,
                 $"note: {state.Temperature:G7} K is outside the ideal-gas heat-capacity range {cp.MinimumTemperature:G6}-{cp.MaximumTemperature:G6} K; caloric values are extrapolated"));
+        }
+
+        if (state.Critical)
+        {
+            text.AppendLine("note: this is the model's critical point; cp, the expansivity and the compressibilities diverge there and are undefined");
+        }
+
+        if (state.UndefinedReason is string reason)
+        {
+            text.AppendLine($"note: {reason}");
         }
 
         text.AppendLine(CoexistenceWriter.Caution);

@@ -49,6 +49,9 @@ public sealed class CorrespondingStatesForm : VapourPressureForm
     /// <inheritdoc />
     public override double UpperLimit => CriticalTemperature;
 
+    /// <inheritdoc/>
+    public override double UpperPressureLimit => CriticalPressure;
+
     /// <inheritdoc />
     public override double LnPressure(double t, IReadOnlyList<double> p) => Math.Log(CriticalPressure) + Reduced(t / CriticalTemperature).Value;
 

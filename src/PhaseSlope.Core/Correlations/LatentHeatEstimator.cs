@@ -16,6 +16,8 @@ public sealed class LatentHeatEstimator
     /// <param name="solver">Coexistence solver of the named fluid (required for <see cref="VolumeChangeModel.EquationOfState"/>).</param>
     /// <param name="criticalTemperature">Tc in K (required for <see cref="VolumeChangeModel.Haggenmacher"/>).</param>
     /// <param name="criticalPressure">Pc in Pa (required for <see cref="VolumeChangeModel.Haggenmacher"/>).</param>
+    /// <exception cref="InvalidInputException">A data point lies at or above the given (or the
+    /// model's) Pc or Tc.</exception>
     public LatentHeatEstimator(VapourPressureFit fit, VolumeChangeModel volumeModel, CoexistenceSolver? solver = null, double? criticalTemperature = null, double? criticalPressure = null)
     {
         ArgumentNullException.ThrowIfNull(fit);
@@ -33,7 +35,20 @@ public sealed class LatentHeatEstimator
         {
             throw new InvalidInputException("volume model", double.NaN, "the Haggenmacher volume model needs Tc and Pc");
         }
+
+        // Whatever the form, a measured vapour pressure lies below Pc and Tc: data beyond them
+        // mean a wrong critical constant (a unit-less Pc read as Pa) or data of another kind.
+        VapourPressureFitter.RequireBelowCriticalPoint(fit.Data, CriticalTemperature, CriticalPressure);
     }
+
+    /// <summary>Upper bound on a plausible entropy of vaporization ΔH/T, J/(mol·K), above which
+    /// a point carries a finding.</summary>
+    /// <remarks>Common practice (Trouton's rule and its corrections): ΔS_vap at the normal boiling
+    /// point is about 85–110 J/(mol·K) for most liquids, up to about 110–125 for hydrogen-bonded
+    /// ones; ΔH/T grows towards the triple point, roughly doubling at T/Tc ≈ 0.3 for associating
+    /// liquids. The bound is deliberately generous, about 3.5 times the normal-boiling-point
+    /// value, so that it flags only results that are wrong by a large factor.</remarks>
+    public const double MaximumEntropyOfVaporization = 350;
 
     /// <summary>The fitted correlation.</summary>
     public VapourPressureFit Fit { get; }
@@ -52,7 +67,7 @@ public sealed class LatentHeatEstimator
 
     /// <summary>ΔH at T with its standard uncertainty.</summary>
     /// <exception cref="InvalidInputException">T not positive, at or above Tc, or outside the
-    /// volume model's range.</exception>
+    /// volume model's range; the fitted vapour pressure falls with T there (ΔH ≤ 0).</exception>
     public LatentHeatPoint At(double temperature)
     {
         Preconditions.Positive(temperature, "temperature");
@@ -70,6 +85,12 @@ public sealed class LatentHeatEstimator
 
         double p = Fit.Pressure(temperature);
         double slope = Fit.Form.Slope(temperature, Fit.Parameters);
+        if (!(slope > 0))
+        {
+            throw new InvalidInputException("temperature", temperature,
+                $"the fitted vapour pressure does not rise with temperature at {Preconditions.Format(temperature)} K (d ln P/dT = {Preconditions.Format(slope)} 1/K): the Clapeyron equation gives no positive latent heat there");
+        }
+
         double dz = VolumeModel switch
         {
             VolumeChangeModel.IdealGas => 1,
@@ -77,11 +98,33 @@ public sealed class LatentHeatEstimator
             // ΔZ_model·RT/P_fit. Taking the model's Δv itself would carry the model's own
             // vapour-pressure error into ΔH (Peng–Robinson's Psat of water is 20 % low at 0 °C).
             VolumeChangeModel.EquationOfState => Solver!.AtTemperature(temperature).CompressibilityChange,
-            _ => Math.Sqrt(Math.Max(0, 1 - p / CriticalPressure!.Value / Math.Pow(temperature / CriticalTemperature!.Value, 3))),
+            _ => HaggenmacherCompressibilityChange(temperature, p),
         };
-        return new LatentHeatPoint(temperature, p,
-            ClapeyronEquation.EnthalpyOfVaporization(temperature, slope, dz),
+        double enthalpy = ClapeyronEquation.EnthalpyOfVaporization(temperature, slope, dz);
+        double entropy = enthalpy / temperature;
+        string? finding = entropy > MaximumEntropyOfVaporization
+            ? $"implausible latent heat: dH/T = {Preconditions.Format(entropy)} J/(mol K) at {Preconditions.Format(temperature)} K exceeds {Preconditions.Format(MaximumEntropyOfVaporization)} J/(mol K) (common practice: about 85-110 at the normal boiling point)"
+            : null;
+        return new LatentHeatPoint(temperature, p, enthalpy,
             ClapeyronEquation.EnthalpyOfVaporization(temperature, Fit.SlopeStandardUncertainty(temperature), dz),
-            dz, !Fit.InRange(temperature));
+            dz, !Fit.InRange(temperature))
+        { Finding = finding };
+    }
+
+    /// <summary>ΔZ = √(1 − Pr/Tr³) (Haggenmacher 1946) at T and the fitted P.</summary>
+    /// <exception cref="InvalidInputException">1 − Pr/Tr³ ≤ 0: the relation has no real value, the
+    /// fitted pressure lies beyond where the relation holds for this Tc and Pc.</exception>
+    private double HaggenmacherCompressibilityChange(double temperature, double pressure)
+    {
+        double pc = CriticalPressure!.Value;
+        double tc = CriticalTemperature!.Value;
+        double radicand = 1 - pressure / pc / Math.Pow(temperature / tc, 3);
+        if (!(radicand > 0))
+        {
+            throw new InvalidInputException("critical pressure", pc,
+                $"the Haggenmacher relation dZ = sqrt(1 - Pr/Tr^3) is undefined at {Preconditions.Format(temperature)} K, {Preconditions.Format(pressure)} Pa with Tc = {Preconditions.Format(tc)} K and Pc = {Preconditions.Format(pc)} Pa (Pr/Tr^3 = {Preconditions.Format(1 - radicand)} >= 1): check Tc and Pc");
+        }
+
+        return Math.Sqrt(radicand);
     }
 }

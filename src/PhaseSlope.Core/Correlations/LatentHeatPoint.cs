@@ -8,4 +8,9 @@ namespace PhaseSlope.Core.Correlations;
 /// (the volume model is taken as exact).</param>
 /// <param name="CompressibilityChange">ΔZ = P·Δv/(RT) used.</param>
 /// <param name="Extrapolated">True when T lies outside the data's temperature range.</param>
-public sealed record LatentHeatPoint(double Temperature, double Pressure, double EnthalpyOfVaporization, double StandardUncertainty, double CompressibilityChange, bool Extrapolated);
+public sealed record LatentHeatPoint(double Temperature, double Pressure, double EnthalpyOfVaporization, double StandardUncertainty, double CompressibilityChange, bool Extrapolated)
+{
+    /// <summary>A named finding when ΔH is implausible though positive (see
+    /// <see cref="LatentHeatEstimator.MaximumEntropyOfVaporization"/>), else null.</summary>
+    public string? Finding { get; init; }
+}

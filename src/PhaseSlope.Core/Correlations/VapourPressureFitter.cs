@@ -19,7 +19,8 @@ public static class VapourPressureFitter
     /// <summary>Fits a form to data.</summary>
     /// <exception cref="InvalidInputException">Too few points for the form (it needs at least one
     /// more point than parameters), a duplicate temperature, or a point at or above the form's
-    /// upper limit (Tc for the Wagner and corresponding-states forms).</exception>
+    /// upper limit (Tc for the Wagner and corresponding-states forms), a pressure at or above the
+    /// form's Pc, or pressures that fall with temperature.</exception>
     public static VapourPressureFit Fit(VapourPressureForm form, IReadOnlyList<VapourPressurePoint> data)
     {
         ArgumentNullException.ThrowIfNull(form);
@@ -42,7 +43,15 @@ public static class VapourPressureFitter
                 throw new InvalidInputException("temperature", point.Temperature,
                     $"the point at {Preconditions.Format(point.Temperature)} K is at or above the {form.Id} form's limit {Preconditions.Format(form.UpperLimit)} K (the critical temperature)");
             }
+
+            if (!(point.Pressure < form.UpperPressureLimit))
+            {
+                throw new InvalidInputException("pressure", point.Pressure,
+                    $"the point at {Preconditions.Format(point.Temperature)} K has pressure {Preconditions.Format(point.Pressure)} Pa, at or above the critical pressure {Preconditions.Format(form.UpperPressureLimit)} Pa of the {form.Id} form: a vapour pressure lies below Pc (is Pc in the right unit? a bare number is Pa)");
+            }
         }
+
+        RequireRisingPressure(points);
 
         for (int i = 1; i < n; i++)
         {
@@ -97,6 +106,51 @@ public static class VapourPressureFitter
             Iterations = iterations,
             StopReason = stop,
         };
+    }
+
+    /// <summary>Refuses data that cannot be vapour pressures of a fluid with critical point
+    /// (<paramref name="criticalTemperature"/> K, <paramref name="criticalPressure"/> Pa), whichever
+    /// form is fitted: every point must lie below both (a saturation line ends at the critical
+    /// point). A null constant is not checked.</summary>
+    /// <exception cref="InvalidInputException">A point at or above Tc or Pc, named with its T and P.</exception>
+    public static void RequireBelowCriticalPoint(IReadOnlyList<VapourPressurePoint> data, double? criticalTemperature, double? criticalPressure)
+    {
+        ArgumentNullException.ThrowIfNull(data);
+        foreach (var point in data)
+        {
+            if (criticalPressure is double pc && !(point.Pressure < pc))
+            {
+                throw new InvalidInputException("critical pressure", pc,
+                    $"the critical pressure {Preconditions.Format(pc)} Pa is not above the data point at {Preconditions.Format(point.Temperature)} K, {Preconditions.Format(point.Pressure)} Pa: a vapour pressure lies below Pc (is Pc in the right unit? a bare number is Pa)");
+            }
+
+            if (criticalTemperature is double tc && !(point.Temperature < tc))
+            {
+                throw new InvalidInputException("critical temperature", tc,
+                    $"the critical temperature {Preconditions.Format(tc)} K is not above the data point at {Preconditions.Format(point.Temperature)} K, {Preconditions.Format(point.Pressure)} Pa: a vapour pressure exists only below Tc");
+            }
+        }
+    }
+
+    /// <summary>Refuses data whose pressure falls with temperature: a vapour pressure rises
+    /// monotonically along the saturation line (dP/dT = Δh/(T·Δv) &gt; 0, Clapeyron), so falling
+    /// data are mislabelled columns or another quantity.</summary>
+    /// <remarks>The test compares the two ends of the range (sorted by T), so a single noisy
+    /// point does not trip it; a least-squares fit to such data would give a negative latent heat.</remarks>
+    private static void RequireRisingPressure(VapourPressurePoint[] points)
+    {
+        if (points.Length < 2)
+        {
+            return;
+        }
+
+        var first = points[0];
+        var last = points[^1];
+        if (!(last.Pressure > first.Pressure))
+        {
+            throw new InvalidInputException("pressure", last.Pressure,
+                $"the vapour pressure falls with temperature, from {Preconditions.Format(first.Pressure)} Pa at {Preconditions.Format(first.Temperature)} K to {Preconditions.Format(last.Pressure)} Pa at {Preconditions.Format(last.Temperature)} K: a saturation pressure rises with T (are the columns swapped?)");
+        }
     }
 
     /// <summary>Fits every candidate form the data support (at least K + 2 points, K = p + 1, so

@@ -22,6 +22,10 @@ public abstract class VapourPressureForm
     /// <summary>Highest temperature at which the form is defined (Tc for forms in τ = 1 − T/Tc), K.</summary>
     public virtual double UpperLimit => double.PositiveInfinity;
 
+    /// <summary>Highest pressure the form can describe (Pc for forms in ln(P/Pc)), Pa; a
+    /// saturation pressure at or above it is not a vapour pressure of this form.</summary>
+    public virtual double UpperPressureLimit => double.PositiveInfinity;
+
     /// <summary>ln(P/Pa) at T.</summary>
     public abstract double LnPressure(double temperature, IReadOnlyList<double> parameters);
 

@@ -57,6 +57,9 @@ public sealed class WagnerForm : VapourPressureForm
     /// <inheritdoc />
     public override double UpperLimit => CriticalTemperature;
 
+    /// <inheritdoc/>
+    public override double UpperPressureLimit => CriticalPressure;
+
     /// <inheritdoc />
     /// <remarks>Linear in the a_i because Tc and Pc are given, not fitted.</remarks>
     public override bool IsLinearInParameters => true;

@@ -90,8 +90,9 @@ public sealed partial class CoexistenceSolver
     private InvalidInputException BelowBottom(double pressure)
     {
         double bottom = BottomPressure();
+        var (given, limit) = Preconditions.Apart(pressure, bottom);
         return new InvalidInputException("pressure", pressure,
-            $"pressure {Preconditions.Format(pressure)} Pa is below the saturation pressure {Preconditions.Format(bottom)} Pa at the lowest valid temperature {Preconditions.Format(MinimumTemperature)} K");
+            $"pressure {given} Pa is below the saturation pressure {limit} Pa at the lowest valid temperature {Preconditions.Format(MinimumTemperature)} K");
     }
 
     private CoexistencePoint? IterateAtPressure(double pressure, CoexistencePoint near, CoexistenceStart start, Work work, ref string? failure)

@@ -127,8 +127,9 @@ public sealed partial class CoexistenceSolver
         // and solved where it is: the limit is physical, not a numerical edge.
         if (temperature < MinimumTemperature * (1 - BoundaryRoundingTolerance))
         {
+            var (given, limit) = Preconditions.Apart(temperature, MinimumTemperature);
             throw new InvalidInputException("temperature", temperature,
-                $"temperature {Preconditions.Format(temperature)} K is below the lowest valid temperature {Preconditions.Format(MinimumTemperature)} K");
+                $"temperature {given} K is below the lowest valid temperature {limit} K");
         }
     }
 

@@ -72,10 +72,41 @@ public static class CorrespondingStates
         return (g, g1, g2);
     }
 
+    /// <summary>Lowest reduced temperature of the vapour-pressure point for the relations other
+    /// than the definition.</summary>
+    /// <remarks>The Lee–Kesler and Ambrose–Walton relations were fitted to vapour pressures of
+    /// normal fluids down to about T/Tc = 0.3 (from memory), and Edmister's relation is the
+    /// straight line in ln P against 1/T through the critical point and the point at T/Tc = 0.7,
+    /// trusted near the normal boiling point (common practice); below 0.3 all three extrapolate
+    /// far beyond their data.</remarks>
+    public const double LowestReducedTemperature = 0.3;
+
     /// <summary>The acentric factor from Tc (K), Pc (Pa) and one vapour pressure (T in K, P in Pa).</summary>
     /// <exception cref="InvalidInputException">A non-positive or non-finite input, T not below Tc,
-    /// P not below Pc, or (for <see cref="AcentricFactorMethod.Definition"/>) T/Tc not 0.7.</exception>
+    /// P not below Pc, (for <see cref="AcentricFactorMethod.Definition"/>) T/Tc not 0.7, T/Tc
+    /// below <see cref="LowestReducedTemperature"/> for the other methods, or a result outside the
+    /// catalog's accepted range −0.5 … 2.</exception>
     public static double AcentricFactor(AcentricFactorMethod method, double criticalTemperature, double criticalPressure, double temperature, double pressure)
+    {
+        double omega = AcentricFactorUnchecked(method, criticalTemperature, criticalPressure, temperature, pressure);
+        if (!(omega >= Fluids.FluidFileParser.AcentricFactorLowest && omega <= Fluids.FluidFileParser.AcentricFactorHighest))
+        {
+            throw new InvalidInputException("acentric factor", omega,
+                $"the {MethodName(method)} estimate of the acentric factor from {Preconditions.Format(pressure)} Pa at {Preconditions.Format(temperature)} K is {Preconditions.Format(omega)}, outside the accepted range {Preconditions.Format(Fluids.FluidFileParser.AcentricFactorLowest)} to {Preconditions.Format(Fluids.FluidFileParser.AcentricFactorHighest)}: check the vapour-pressure point, Tc and Pc");
+        }
+
+        return omega;
+    }
+
+    private static string MethodName(AcentricFactorMethod method) => method switch
+    {
+        AcentricFactorMethod.Definition => "definition",
+        AcentricFactorMethod.Edmister => "Edmister",
+        AcentricFactorMethod.LeeKesler => "Lee-Kesler",
+        _ => "Ambrose-Walton",
+    };
+
+    private static double AcentricFactorUnchecked(AcentricFactorMethod method, double criticalTemperature, double criticalPressure, double temperature, double pressure)
     {
         Preconditions.Positive(criticalTemperature, "critical temperature");
         Preconditions.Positive(criticalPressure, "critical pressure");
@@ -93,6 +124,12 @@ public static class CorrespondingStates
         {
             throw new InvalidInputException("vapour pressure", pressure,
                 $"the vapour pressure {Preconditions.Format(pressure)} Pa is not below the critical pressure {Preconditions.Format(criticalPressure)} Pa");
+        }
+
+        if (method != AcentricFactorMethod.Definition && tr < LowestReducedTemperature)
+        {
+            throw new InvalidInputException("vapour-pressure temperature", temperature,
+                $"the {MethodName(method)} relation for the acentric factor holds for T/Tc from {Preconditions.Format(LowestReducedTemperature)} to 1; the vapour-pressure point at {Preconditions.Format(temperature)} K is at T/Tc = {Preconditions.Format(tr)}: give a point between {Preconditions.Format(LowestReducedTemperature * criticalTemperature)} K and {Preconditions.Format(criticalTemperature)} K");
         }
 
         switch (method)

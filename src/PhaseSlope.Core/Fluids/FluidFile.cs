@@ -131,8 +131,8 @@ internal sealed partial class FluidFileParser
         [KeyTriplePointTemperature] = Quantity.Temperature,
     };
 
-    private const double AcentricFactorLowest = -0.5;
-    private const double AcentricFactorHighest = 2.0;
+    internal const double AcentricFactorLowest = -0.5;
+    internal const double AcentricFactorHighest = 2.0;
 
     private readonly string _origin;
     private readonly Dictionary<string, int> _lineOfKey = new(StringComparer.Ordinal);
@@ -365,6 +365,15 @@ internal sealed partial class FluidFileParser
         if (value.Contains(';') || value.Contains('|'))
         {
             throw Fail(line, key, $"'{value}' must not contain ';' or '|'");
+        }
+
+        // A name is echoed in every table title: a control character (NUL, a line break) or an
+        // invisible format character (a bidirectional override such as U+202E) would corrupt or
+        // reorder what the reader sees.
+        int bad = value.ToList().FindIndex(c => char.IsControl(c) || System.Globalization.CharUnicodeInfo.GetUnicodeCategory(c) == System.Globalization.UnicodeCategory.Format);
+        if (bad >= 0)
+        {
+            throw Fail(line, key, $"the name must not contain control or invisible format characters (U+{(int)value[bad]:X4} at position {bad + 1})");
         }
     }
 

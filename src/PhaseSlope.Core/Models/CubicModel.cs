@@ -36,7 +36,9 @@ public sealed class CubicModel : IResidualModel
     /// <param name="criticalTemperature">Tc in K.</param>
     /// <param name="criticalPressure">Pc in Pa.</param>
     /// <param name="volumeShift">Péneloux volume translation c in m³/mol (v = v_cubic − c),
-    /// finite and below the co-volume b; 0 for the untranslated model.</param>
+    /// finite, with −b &lt; c &lt; b; 0 for the untranslated model.</param>
+    /// <exception cref="InvalidInputException">Tc or Pc not positive, or so large or small that a or b
+    /// overflows; c outside (−b, b).</exception>
     public CubicModel(CubicModelKind kind, CubicForm form, IAlphaFunction alpha, double criticalTemperature, double criticalPressure, double volumeShift = 0)
     {
         ArgumentNullException.ThrowIfNull(form);
@@ -51,10 +53,27 @@ public sealed class CubicModel : IResidualModel
         CriticalPressure = criticalPressure;
         CovolumeB = form.OmegaB * R * criticalTemperature / criticalPressure;
         AttractionA = form.OmegaA * R * R * criticalTemperature * criticalTemperature / criticalPressure;
+        // Tc²/Pc and Tc/Pc must be representable: Tc = 1e300 K passed the positivity check and
+        // then failed in the solver as "too close to the critical temperature".
+        if (!(double.IsFinite(AttractionA) && AttractionA > 0 && double.IsFinite(CovolumeB) && CovolumeB > 0))
+        {
+            throw new InvalidInputException("critical temperature", criticalTemperature,
+                $"critical temperature {Preconditions.Format(criticalTemperature)} K and critical pressure {Preconditions.Format(criticalPressure)} Pa give model constants a = {Preconditions.Format(AttractionA)} and b = {Preconditions.Format(CovolumeB)} outside the range of double precision: check Tc and Pc and their units");
+        }
+
         if (!(volumeShift < CovolumeB))
         {
             throw new InvalidInputException("volume shift", volumeShift,
                 $"volume shift {Preconditions.Format(volumeShift)} m3/mol must be below the co-volume b = {Preconditions.Format(CovolumeB)} m3/mol");
+        }
+
+        // This tool's bound, not a published one: a shift larger in magnitude than the co-volume
+        // moves the liquid molar volume (about 1.1-1.4 b at low T) by more than the liquid's own
+        // volume; published Péneloux shifts are a few tenths of b at most.
+        if (!(volumeShift > -CovolumeB))
+        {
+            throw new InvalidInputException("volume shift", volumeShift,
+                $"volume shift {Preconditions.Format(volumeShift)} m3/mol is below minus the co-volume b = {Preconditions.Format(CovolumeB)} m3/mol: a shift larger than b would move liquid volumes by more than themselves");
         }
 
         VolumeShift = volumeShift;
@@ -83,7 +102,9 @@ public sealed class CubicModel : IResidualModel
     /// <see cref="CubicModelKind.PengRobinson1978"/>, which differs only in its default κ(ω).</param>
     /// <param name="volumeShift">Volume translation c in m³/mol (see <see cref="Models.VolumeShift"/>).</param>
     /// <exception cref="InvalidInputException">The alpha form does not apply to the model, or
-    /// the fluid has no parameters for it.</exception>
+    /// the fluid has no parameters for it; the fluid's own parameters give an α that is not
+    /// positive and decreasing on 0.3 ≤ T/Tc ≤ 1 (<see cref="AlphaGuard"/>); ω outside
+    /// <see cref="GeneralisedTwuAlpha.ValidAcentricFactorRange"/> for the generalised Twu function.</exception>
     public static CubicModel For(CubicModelKind kind, Fluid fluid, AlphaForm alpha = AlphaForm.Default, double volumeShift = 0)
     {
         ArgumentNullException.ThrowIfNull(fluid);
@@ -106,6 +127,16 @@ public sealed class CubicModel : IResidualModel
 
         CubicForm form = entry.Form;
         AlphaParameterSet? set = FindParameters(fluid, kind, alpha);
+        if (alpha == AlphaForm.Twu && set is null && form == CubicForm.PengRobinson)
+        {
+            var (lowest, highest) = GeneralisedTwuAlpha.ValidAcentricFactorRange;
+            if (!(omega >= lowest && omega <= highest))
+            {
+                throw new InvalidInputException("acentric factor", omega,
+                    $"acentric factor {Preconditions.Format(omega)} of {fluid.Name} is outside {Preconditions.Format(lowest)} to {(double.IsPositiveInfinity(highest) ? "any value" : Preconditions.Format(highest))}, where the generalised Twu (1995) alpha function stays positive and decreasing for 0.3 <= T/Tc <= 1");
+            }
+        }
+
         IAlphaFunction function = alpha switch
         {
             AlphaForm.Twu when set is not null => new TwuAlpha(
@@ -121,6 +152,12 @@ public sealed class CubicModel : IResidualModel
                 + "and give the file's path as the fluid (docs/fluid-files.md)"),
             _ => throw new ArgumentOutOfRangeException(nameof(alpha), alpha, "unknown alpha form"),
         };
+        if (set is not null)
+        {
+            AlphaGuard.RequirePositiveDecreasing(function, tc,
+                $"{AlphaName(alpha)} parameters {string.Join(", ", set.Values.Select(Preconditions.Format))} of {fluid.Name} with {kind.Title()}");
+        }
+
         return new CubicModel(kind, form, function, tc, pc, volumeShift);
     }
 

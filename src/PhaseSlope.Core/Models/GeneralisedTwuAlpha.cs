@@ -40,6 +40,49 @@ public sealed class GeneralisedTwuAlpha : IAlphaFunction
     /// <summary>The acentric factor ω.</summary>
     public double AcentricFactor { get; }
 
+    /// <summary>The acentric factors for which α = α0 + ω(α1 − α0) stays positive and decreasing
+    /// in T on 0.3 ≤ T/Tc ≤ 1 (the <see cref="AlphaGuard"/> grid): both conditions are linear in ω
+    /// at each T, so the range is the intersection of half-lines, computed once from the
+    /// constants (lower end about −0.134; no upper end).</summary>
+    public static (double Lowest, double Highest) ValidAcentricFactorRange { get; } = ComputeRange();
+
+    private static (double, double) ComputeRange()
+    {
+        var a0 = new TwuAlpha(0.125283, 0.911807, 1.948150, 1, Source);
+        var a1 = new TwuAlpha(0.511614, 0.784054, 2.812520, 1, Source);
+        double lo = double.NegativeInfinity, hi = double.PositiveInfinity;
+        for (int i = 0; i <= 70; i++)
+        {
+            double tr = AlphaGuard.LowestReducedTemperature + (1 - AlphaGuard.LowestReducedTemperature) * i / 70;
+            var v0 = a0.Evaluate(tr);
+            var v1 = a1.Evaluate(tr);
+            // α0 + ω·(α1 − α0) > 0 and α0' + ω·(α1' − α0') < 0.
+            Bound(v0.Value, v1.Value - v0.Value, positive: true);
+            Bound(v0.FirstDerivative, v1.FirstDerivative - v0.FirstDerivative, positive: false);
+        }
+
+        return (lo, hi);
+
+        void Bound(double c, double d, bool positive)
+        {
+            // c + ω·d > 0 (positive) or c + ω·d < 0 (negative): a half-line in ω.
+            if (d == 0)
+            {
+                return;
+            }
+
+            double root = -c / d;
+            if ((d > 0) == positive)
+            {
+                lo = Math.Max(lo, root);
+            }
+            else
+            {
+                hi = Math.Min(hi, root);
+            }
+        }
+    }
+
     /// <inheritdoc />
     public string Description { get; }
 

@@ -63,9 +63,32 @@ public sealed class PropertyModel
     /// <summary>Molar mass, kg/mol.</summary>
     public double MolarMass => Fluid.MolarMass.Value;
 
+    /// <summary>Relative distance in T and in P (or ρ) from the model's critical point within
+    /// which a state is taken to be the critical point itself.</summary>
+    /// <remarks>1e-9 is the coexistence solver's own floor: it accepts a point whose density
+    /// correction is below 1e-9 and states that uncertainty, so two states closer than that
+    /// cannot be told apart by it. At the critical point (∂P/∂ρ)_T = 0; a density root solved at
+    /// (Tc, Pc) carries the cube root of the rounding (about 1e-5 relative), which left a finite
+    /// (∂P/∂ρ)_T and printed cp = 5e12 J/(mol·K) instead of "undefined".</remarks>
+    public const double CriticalPointTolerance = 1e-9;
+
     /// <summary>The state at temperature (K) and molar density (mol/m³).</summary>
-    /// <exception cref="InvalidInputException">T or ρ not positive, or ρ at or above the model's 1/b.</exception>
-    public ThermodynamicState AtDensity(double temperature, double density)
+    /// <param name="temperature">T, K.</param>
+    /// <param name="density">ρ, mol/m³.</param>
+    /// <param name="phase"><see cref="PhaseChoice.Stable"/> (default): a density between the
+    /// saturated densities at T &lt; Tc is the two-phase state, which is refused (it is not a
+    /// single phase). <see cref="PhaseChoice.Liquid"/> or <see cref="PhaseChoice.Vapour"/>: such a
+    /// density is the single phase of that branch, returned flagged
+    /// <see cref="ThermodynamicState.Metastable"/> (a superheated or stretched liquid, a subcooled
+    /// vapour) as long as it is mechanically stable.</param>
+    /// <remarks>A liquid under tension (P &lt; 0 with (∂P/∂ρ)_T &gt; 0) is a metastable liquid:
+    /// every property defined there is given; ln φ and the residual entropy, which need ln Z, are
+    /// null with <see cref="ThermodynamicState.UndefinedReason"/>. A state within
+    /// <see cref="CriticalPointTolerance"/> of the model's critical point is that point.</remarks>
+    /// <exception cref="InvalidInputException">T or ρ not positive, or ρ at or above the model's
+    /// 1/b; a two-phase density without a chosen phase; a density inside the spinodal or on the
+    /// other branch than the chosen one; a phase chosen at or above Tc.</exception>
+    public ThermodynamicState AtDensity(double temperature, double density, PhaseChoice phase = PhaseChoice.Stable)
     {
         Preconditions.Positive(temperature, "temperature");
         Preconditions.Positive(density, "density");
@@ -76,40 +99,125 @@ public sealed class PropertyModel
                 $"density {Preconditions.Format(density)} mol/m3 is at or above the model's limit 1/b = {Preconditions.Format(bound)} mol/m3");
         }
 
-        var residual = Model.Residual(temperature, density, Composition.Pure);
-        double pressure = residual.Pressure;
-        if (!(pressure > 0))
+        var critical = Model.CriticalPoint(Composition.Pure);
+        if (IsCritical(temperature, density, critical.Density, critical))
         {
-            // A liquid under tension can be mechanically stable ((∂P/∂ρ)_T > 0); only where the
-            // isotherm falls is the state inside the spinodal loop.
-            string where = residual.PressureDRho > 0 ? "a liquid under tension, where ln Z is undefined" : "inside the spinodal loop";
-            throw new InvalidInputException("density", density,
-                $"the model gives a non-positive pressure ({Preconditions.Format(pressure)} Pa) at {Preconditions.Format(temperature)} K and {Preconditions.Format(density)} mol/m3 ({where})");
+            return CriticalState(critical, phase);
         }
 
-        var critical = Model.CriticalPoint(Composition.Pure);
-        PhaseLabel label = temperature >= critical.Temperature ? PhaseLabel.Supercritical
-            : density >= critical.Density ? PhaseLabel.Liquid : PhaseLabel.Vapour;
-        return Build(PhaseState.From(residual, pressure), label, metastable: false);
+        var residual = Model.Residual(temperature, density, Composition.Pure);
+        double pressure = residual.Pressure;
+        if (temperature >= critical.Temperature)
+        {
+            RequireNoPhaseAboveCritical(temperature, phase);
+            return Build(PhaseState.From(residual, pressure), PhaseLabel.Supercritical, metastable: false);
+        }
+
+        var saturation = SaturationAt(temperature);
+        double liquid = saturation.Liquid.Density;
+        double vapour = saturation.Vapour.Density;
+        // The saturated densities carry the solver's stated relative uncertainty (at most 1e-9,
+        // see CriticalPointTolerance); a density equal to one of them within it is that
+        // saturated phase, not a two-phase state.
+        double slack = Math.Max(saturation.Report.DensityUncertainty, CriticalPointTolerance);
+        bool twoPhase = density > vapour * (1 + slack) && density < liquid * (1 - slack);
+        string where = $"{Preconditions.Format(density)} mol/m3 at {Preconditions.Format(temperature)} K";
+        if (!twoPhase)
+        {
+            var label = density >= liquid * (1 - slack) ? PhaseLabel.Liquid : PhaseLabel.Vapour;
+            if (phase != PhaseChoice.Stable && label != Wanted(phase))
+            {
+                throw new InvalidInputException("phase", density,
+                    $"{where} is a stable {Name(label)}, not a {Name(Wanted(phase))}");
+            }
+
+            return Build(PhaseState.From(residual, pressure), label, metastable: false);
+        }
+
+        if (phase == PhaseChoice.Stable)
+        {
+            throw new InvalidInputException("density", density,
+                $"{where} lies between the saturated vapour and liquid densities {Preconditions.Format(vapour)} and {Preconditions.Format(liquid)} mol/m3: at equilibrium that is two phases at {Preconditions.Format(saturation.Pressure)} Pa, which is not computed yet; give --phase liquid or vapour for the metastable single phase");
+        }
+
+        // Between the binodal and the spinodal the state is a metastable single phase on one
+        // branch of the isotherm; between the spinodals ((∂P/∂ρ)_T ≤ 0) it is no phase at all.
+        var metastable = Build(PhaseState.From(residual, pressure), PhaseLabel.Vapour, metastable: true);
+        if (!metastable.MechanicallyStable)
+        {
+            throw new InvalidInputException("density", density,
+                $"{where} is inside the spinodal ((dP/drho)_T = {Preconditions.Format(residual.PressureDRho)} Pa m3/mol <= 0): mechanically unstable, no single phase exists");
+        }
+
+        // The vapour branch of a subcritical isotherm is concave below its inflection, the liquid
+        // branch convex above it (the same test labels a lone density root).
+        var branch = residual.PressureDRhoRho < 0 ? PhaseLabel.Vapour : PhaseLabel.Liquid;
+        if (branch != Wanted(phase))
+        {
+            throw new InvalidInputException("phase", density,
+                $"{where} is on the metastable {Name(branch)} branch, not the {Name(Wanted(phase))} branch");
+        }
+
+        return metastable with { Phase = branch };
+    }
+
+    private static PhaseLabel Wanted(PhaseChoice phase) => phase == PhaseChoice.Liquid ? PhaseLabel.Liquid : PhaseLabel.Vapour;
+
+    private static string Name(PhaseLabel label) => label.ToString().ToLowerInvariant();
+
+    /// <summary>The coexistence point at T, also below the fluid's lowest valid temperature
+    /// (a supercooled state still has a saturation line of the model).</summary>
+    private CoexistencePoint SaturationAt(double temperature)
+        => temperature >= Solver.MinimumTemperature
+            ? Solver.AtTemperature(temperature)
+            : new CoexistenceSolver(Model, temperature).AtTemperature(temperature);
+
+    private bool IsCritical(double temperature, double value, double criticalValue, ModelCriticalPoint critical)
+        => Math.Abs(temperature - critical.Temperature) <= CriticalPointTolerance * critical.Temperature
+            && Math.Abs(value - criticalValue) <= CriticalPointTolerance * criticalValue;
+
+    /// <summary>The model's critical point itself: evaluated at (Tc, ρc) exactly, where
+    /// (∂P/∂ρ)_T vanishes to rounding and the divergent properties are null.</summary>
+    private ThermodynamicState CriticalState(ModelCriticalPoint critical, PhaseChoice phase)
+    {
+        RequireNoPhaseAboveCritical(critical.Temperature, phase);
+        var d = Model.Residual(critical.Temperature, critical.Density, Composition.Pure);
+        return Build(PhaseState.From(d, critical.Pressure), PhaseLabel.Supercritical, metastable: false) with { Critical = true };
+    }
+
+    private void RequireNoPhaseAboveCritical(double temperature, PhaseChoice phase)
+    {
+        if (phase != PhaseChoice.Stable)
+        {
+            throw new InvalidInputException("phase", double.NaN,
+                $"at {Preconditions.Format(temperature)} K, at or above the critical temperature {Preconditions.Format(Solver.CriticalTemperature)} K, there is one fluid phase: do not choose liquid or vapour");
+        }
     }
 
     /// <summary>The state at temperature (K) and pressure (Pa): the stable root, or the chosen
     /// one (which may be metastable).</summary>
+    /// <remarks>A state within <see cref="CriticalPointTolerance"/> of the model's (Tc, Pc) is the
+    /// critical point itself.</remarks>
     /// <exception cref="InvalidInputException">T or P not positive; the chosen phase has no
     /// root there (beyond its spinodal); a phase was chosen at or above Tc.</exception>
     public ThermodynamicState AtPressure(double temperature, double pressure, PhaseChoice phase = PhaseChoice.Stable)
     {
         Preconditions.Positive(temperature, "temperature");
         Preconditions.Positive(pressure, "pressure");
-        var roots = DensityRoots.Find(Model, temperature, pressure);
-        if (roots.Count == 1 && roots[0].Phase == PhaseLabel.Supercritical && phase != PhaseChoice.Stable)
+        var critical = Model.CriticalPoint(Composition.Pure);
+        if (IsCritical(temperature, pressure, critical.Pressure, critical))
         {
-            throw new InvalidInputException("phase", double.NaN,
-                $"at {Preconditions.Format(temperature)} K, at or above the critical temperature {Preconditions.Format(Solver.CriticalTemperature)} K, there is one fluid phase: do not choose liquid or vapour");
+            return CriticalState(critical, phase);
+        }
+
+        var roots = DensityRoots.Find(Model, temperature, pressure);
+        if (roots.Count == 1 && roots[0].Phase == PhaseLabel.Supercritical)
+        {
+            RequireNoPhaseAboveCritical(temperature, phase);
         }
 
         var states = roots.Select(r => Build(PhaseState.From(r.Helmholtz, pressure), r.Phase, metastable: false)).ToList();
-        var stable = states.MinBy(s => s.LnFugacityCoefficient)!;
+        var stable = states.MinBy(s => s.LnFugacityCoefficient ?? double.PositiveInfinity)!;
         if (phase == PhaseChoice.Stable)
         {
             return stable;
@@ -162,8 +270,12 @@ public sealed class PropertyModel
             Enthalpy = u + pressure / density,
             Entropy = _entropyOffset + sig - d.DT,
             ResidualEnthalpy = residual.ResidualEnthalpy,
-            ResidualEntropy = residual.ResidualEntropy,
-            LnFugacityCoefficient = residual.LnFugacityCoefficient,
+            // ln Z is undefined for P ≤ 0 (a liquid under tension): ln φ and s_r, which contain it,
+            // are null with the reason; every other property is finite there.
+            ResidualEntropy = pressure > 0 ? residual.ResidualEntropy : null,
+            LnFugacityCoefficient = pressure > 0 ? residual.LnFugacityCoefficient : null,
+            UndefinedReason = pressure > 0 ? null
+                : $"ln fugacity coefficient and residual entropy are undefined: the pressure {Preconditions.Format(pressure)} Pa is not positive (a liquid under tension), so ln Z is undefined",
             IsochoricHeatCapacity = cp0 - R - t * d.DTT,
             IdealGasHeatCapacity = cp0,
             PressureTemperatureDerivative = d.PressureDT,

@@ -58,11 +58,21 @@ public sealed record ThermodynamicState
     /// <summary>Residual enthalpy h − h_ig(T), J/mol.</summary>
     public required double ResidualEnthalpy { get; init; }
 
-    /// <summary>Residual entropy s − s_ig(T, P), J/(mol·K).</summary>
-    public required double ResidualEntropy { get; init; }
+    /// <summary>Residual entropy s − s_ig(T, P), J/(mol·K); null where P ≤ 0 (ln Z undefined,
+    /// see <see cref="UndefinedReason"/>).</summary>
+    public required double? ResidualEntropy { get; init; }
 
-    /// <summary>Natural logarithm of the fugacity coefficient.</summary>
-    public required double LnFugacityCoefficient { get; init; }
+    /// <summary>Natural logarithm of the fugacity coefficient; null where P ≤ 0 (ln Z undefined,
+    /// see <see cref="UndefinedReason"/>).</summary>
+    public required double? LnFugacityCoefficient { get; init; }
+
+    /// <summary>Why properties that are always defined elsewhere are null at this state (a
+    /// liquid under tension), or null.</summary>
+    public string? UndefinedReason { get; init; }
+
+    /// <summary>True when the state is the model's critical point (recognised within
+    /// <see cref="PropertyModel.CriticalPointTolerance"/>, however it was specified).</summary>
+    public bool Critical { get; init; }
 
     /// <summary>Isochoric molar heat capacity, J/(mol·K).</summary>
     public required double IsochoricHeatCapacity { get; init; }

@@ -71,7 +71,7 @@ public class DeriveCommandTests
         { ["derive", "propane", "--of", "X", "--by", "T", "--hold", "P", "-T", "300", "-P", "1e5"], ExitCodes.Usage, "unknown variable 'X'" },
         { ["derive", "propane", "--of", "2", "--by", "T", "--hold", "P", "-T", "300", "-P", "1e5"], ExitCodes.Usage, "unknown variable '2'" },
         { ["derive", "propane", "--by", "T", "--hold", "P", "-T", "300", "-P", "1e5"], ExitCodes.Usage, "--of" },
-        { ["derive", "propane", "--of", "H", "--by", "T", "--hold", "P", "-T", "300", "--density", "11600", "--phase", "liquid"], ExitCodes.Usage, "--phase" },
+        { ["derive", "propane", "--of", "H", "--by", "T", "--hold", "P", "-T", "300", "--density", "11600", "--phase", "vapour"], ExitCodes.OutOfRange, "is a stable liquid, not a vapour" },
         { ["derive", "propane", "--of", "H", "--by", "T", "--hold", "P", "-T", "300", "-P", "1e5", "--reference", "zero"], ExitCodes.Usage, "--reference" },
         { ["derive", "methane", "--of", "H", "--by", "T", "--hold", "P", "-T", "150", "-P", "1e5", "--reference", "refrigeration"], ExitCodes.OutOfRange, "does not exist for methane" },
         { ["derive", "propane", "--of", "H", "--by", "T", "--hold", "P", "-T", "300", "-P", "1e5", "--alpha", "soave"], ExitCodes.Usage, "--alpha" },

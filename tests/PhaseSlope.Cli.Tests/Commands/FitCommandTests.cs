@@ -420,7 +420,7 @@ public class FitCommandTests
     [Fact]
     public void Fit_DataAboveTheGivenTc_Exit4()
     {
-        AssertFailure(Run("fit", Csv, "--form", "wagner-3-6", "--tc", "470 K", "--pc", "3.1 MPa"), ExitCodes.OutOfRange, "at or above the wagner-3-6 form's limit 470 K");
+        AssertFailure(Run("fit", Csv, "--form", "wagner-3-6", "--tc", "470 K", "--pc", "3.1 MPa"), ExitCodes.OutOfRange, "the critical temperature 470 K is not above the data point at");
     }
 
     [Fact]

@@ -21,16 +21,20 @@ public class FluidsMaintenanceTests
     }
 
     [Fact]
-    public void Check_InconsistentData_ValidButWarned()
+    public void Check_InconsistentData_ValidButWarnedAndExit8()
     {
         using var folder = new TempFolder();
         string path = folder.File("wrong-omega.fluid");
         string text = File.ReadAllText("../../../../../fluids/propane.fluid").Replace("acentric_factor           0.152", "acentric_factor           0.352", StringComparison.Ordinal);
         File.WriteAllText(path, text);
 
-        string table = RunText("fluids", "check", path);
+        var result = Run("fluids", "check", path);
 
-        Assert.Contains("WARNING: more than 1 % apart", table, StringComparison.Ordinal);
+        // The report is printed; the inconsistency fails the run (README: exit 8) on one stderr line.
+        Assert.Equal(8, result.ExitCode);
+        Assert.Contains("WARNING: more than 1 % apart", result.Stdout, StringComparison.Ordinal);
+        Assert.Single(result.StderrLines);
+        Assert.Contains($"{path}: check failed", result.Stderr, StringComparison.Ordinal);
     }
 
     [Fact]

@@ -133,7 +133,7 @@ public class StateCommandTests
 
     public static TheoryData<string[], int, string> Errors => new()
     {
-        { ["state", "propane", "-T", "300", "--density", "11600", "--phase", "liquid"], ExitCodes.Usage, "--phase" },
+        { ["state", "propane", "-T", "300", "--density", "11600", "--phase", "vapour"], ExitCodes.OutOfRange, "is a stable liquid, not a vapour" },
         { ["state", "propane", "-T", "300", "-P", "1e5", "--reference", "bogus"], ExitCodes.Usage, "--reference" },
         { ["state", "methane", "-T", "150", "-P", "1e5", "--reference", "refrigeration"], ExitCodes.OutOfRange, "reference state 'refrigeration'" },
         { ["state", "carbon-dioxide", "-T", "300", "-P", "1e5", "--reference", "nbp"], ExitCodes.OutOfRange, "reference state 'nbp'" },

@@ -126,17 +126,122 @@ public class PhaseChoiceTests
     }
 
     [Theory]
-    [InlineData(11000.0, "a liquid under tension")]
-    [InlineData(7000.0, "inside the spinodal loop")]
-    public void AtDensity_NonPositivePressure_ThrowsSayingWhy(double density, string reason)
+    [MemberData(nameof(Cases))]
+    public void AtDensity_BetweenSaturatedDensities_RefusedAsTwoPhase(string fluid, CubicModelKind kind, double reduced)
     {
-        // Propane PR at 300 K: at 11000 mol/m³ the liquid is stretched to P ≈ −2.5 MPa but its
-        // isotherm still rises ((∂P/∂ρ)_T > 0); at 7000 mol/m³ the isotherm falls (inside the loop).
+        // At T < Tc a density between the saturated ones is, at equilibrium, two phases; the
+        // single-phase answer ("vapour, 1175.6 kPa" for R-134a at 0 degC, 100 kg/m3) was wrong.
+        var (engine, t, point, _) = Setup(fluid, kind, reduced);
+        double rho = Math.Sqrt(point.Liquid.Density * point.Vapour.Density);
+
+        var ex = Assert.Throws<InvalidInputException>(() => engine.AtDensity(t, rho));
+
+        Assert.Contains("between the saturated vapour and liquid densities", ex.Message, StringComparison.Ordinal);
+        Assert.Contains("two phases", ex.Message, StringComparison.Ordinal);
+        Assert.Equal("density", ex.Field);
+    }
+
+    [Theory]
+    [MemberData(nameof(Cases))]
+    public void AtDensity_MetastableRootsWithPhaseChosen_FlaggedAndAgreeWithPressureRoute(string fluid, CubicModelKind kind, double reduced)
+    {
+        var (engine, t, point, window) = Setup(fluid, kind, reduced);
+        double psat = point.Pressure;
+        double above = psat + 0.5 * (window.VapourPressure - psat);
+        double below = psat - 0.5 * (psat - Math.Max(window.LiquidPressure, 0));
+        foreach (var (p, choice, label) in new[] { (above, PhaseChoice.Vapour, PhaseLabel.Vapour), (below, PhaseChoice.Liquid, PhaseLabel.Liquid) })
+        {
+            var byPressure = engine.AtPressure(t, p, choice);
+            Assert.True(byPressure.Metastable, $"{fluid} {label} at {p} Pa");
+
+            var byDensity = engine.AtDensity(t, byPressure.Density, choice);
+
+            Assert.Equal(label, byDensity.Phase);
+            Assert.True(byDensity.Metastable, $"{fluid}: the {label} at {byPressure.Density} mol/m3 is metastable by density too");
+            // P recomputed from the polished root: the terms P is summed from are at most a few
+            // hundred times P here, so 1e-9 relative is far above the rounding.
+            AssertClose.Relative(p, byDensity.Pressure, 1e-9, $"{fluid} {label} pressure");
+            var other = choice == PhaseChoice.Liquid ? PhaseChoice.Vapour : PhaseChoice.Liquid;
+            var ex = Assert.Throws<InvalidInputException>(() => engine.AtDensity(t, byPressure.Density, other));
+            Assert.Contains("branch", ex.Message, StringComparison.Ordinal);
+        }
+    }
+
+    [Theory]
+    [MemberData(nameof(Cases))]
+    public void AtDensity_OutsideTheDome_StableAndNotMetastable(string fluid, CubicModelKind kind, double reduced)
+    {
+        var (engine, t, point, _) = Setup(fluid, kind, reduced);
+
+        var vapour = engine.AtDensity(t, 0.5 * point.Vapour.Density);
+        var liquid = engine.AtDensity(t, 1.01 * point.Liquid.Density);
+        var saturated = engine.AtDensity(t, point.Vapour.Density);
+
+        Assert.Equal((PhaseLabel.Vapour, false), (vapour.Phase, vapour.Metastable));
+        Assert.Equal((PhaseLabel.Liquid, false), (liquid.Phase, liquid.Metastable));
+        Assert.Equal((PhaseLabel.Vapour, false), (saturated.Phase, saturated.Metastable));
+        Assert.Throws<InvalidInputException>(() => engine.AtDensity(t, 1.01 * point.Liquid.Density, PhaseChoice.Vapour));
+    }
+
+    [Fact]
+    public void AtDensity_LiquidUnderTension_EveryDefinedPropertyGivenLnPhiNull()
+    {
+        // Propane PR at 300 K: at 11000 mol/m3 the liquid is stretched to P of about -2.5 MPa
+        // while its isotherm still rises ((dP/drho)_T > 0): a metastable liquid.
         var engine = TestSupport.Engines.For("propane", CubicModelKind.PengRobinson);
 
-        var ex = Assert.Throws<InvalidInputException>(() => engine.AtDensity(300, density));
+        var state = engine.AtDensity(300, 11000, PhaseChoice.Liquid);
 
-        Assert.Contains("non-positive pressure", ex.Message, StringComparison.Ordinal);
-        Assert.Contains(reason, ex.Message, StringComparison.Ordinal);
+        Assert.True(state.Pressure < 0, $"P = {state.Pressure}");
+        Assert.True(state.Metastable);
+        Assert.Equal(PhaseLabel.Liquid, state.Phase);
+        Assert.True(state.MechanicallyStable);
+        Assert.Null(state.LnFugacityCoefficient);
+        Assert.Null(state.ResidualEntropy);
+        Assert.Contains("ln Z is undefined", state.UndefinedReason, StringComparison.Ordinal);
+        foreach (double? value in new double?[] { state.Enthalpy, state.Entropy, state.GibbsEnergy, state.IsobaricHeatCapacity,
+                     state.SpeedOfSound, state.IsothermalCompressibility, state.JouleThomsonCoefficient, state.ResidualEnthalpy })
+        {
+            Assert.True(value is double v && double.IsFinite(v), $"defined property {value}");
+        }
+
+        // Without a chosen phase it is a density inside the dome: refused as two-phase.
+        Assert.Throws<InvalidInputException>(() => engine.AtDensity(300, 11000));
+    }
+
+    [Fact]
+    public void AtDensity_InsideTheSpinodal_RefusedSayingWhy()
+    {
+        // Propane PR at 300 K, 7000 mol/m3: the isotherm falls, no single phase exists.
+        var engine = TestSupport.Engines.For("propane", CubicModelKind.PengRobinson);
+
+        var ex = Assert.Throws<InvalidInputException>(() => engine.AtDensity(300, 7000, PhaseChoice.Liquid));
+
+        Assert.Contains("inside the spinodal", ex.Message, StringComparison.Ordinal);
+    }
+
+    [Theory]
+    [InlineData(0.0, 0.0, true)]
+    [InlineData(1e-10, -1e-10, true)]
+    [InlineData(0.0, 1e-6, false)]
+    public void CriticalPoint_RecognisedByTemperatureAndPressureOrDensity(double dt, double dx, bool critical)
+    {
+        var engine = TestSupport.Engines.For("propane", CubicModelKind.PengRobinson);
+        var c = engine.Model.CriticalPoint(Composition.Pure);
+        double t = c.Temperature * (1 + dt);
+
+        var byPressure = engine.AtPressure(t, c.Pressure * (1 + dx));
+        var byDensity = engine.AtDensity(t, c.Density * (1 + dx));
+
+        foreach (var state in new[] { byPressure, byDensity })
+        {
+            Assert.Equal(critical, state.Critical);
+            if (critical)
+            {
+                // (dP/drho)_T vanishes at the critical point: cp and kT diverge and are null.
+                Assert.Null(state.IsobaricHeatCapacity);
+                Assert.Null(state.IsothermalCompressibility);
+            }
+        }
     }
 }

@@ -1,5 +1,6 @@
 using System.Globalization;
 using PhaseSlope.Core.Equilibrium;
+using PhaseSlope.Core.Errors;
 using PhaseSlope.Core.Fluids;
 
 namespace PhaseSlope.Core.Correlations.Audit;
@@ -97,13 +98,56 @@ public static class CorrelationAuditor
             : (Math.Max(0.5 * tc, lowestValid), 0.7 * tc);
     }
 
+    /// <summary>Largest |ln(P/Pa)| whose exponential is a finite double (ln of double.MaxValue is
+    /// 709.78); a correlation beyond it anywhere on the range cannot give a pressure.</summary>
+    private const double MaximumAbsoluteLnPressure = 709.78;
+
+    /// <summary>Refuses coefficients that overflow: in no candidate convention does any point of
+    /// the audit range give a representable pressure (finite SI coefficients and |ln P| within
+    /// double precision). Such a correlation would otherwise pass checks made of NaN and infinity
+    /// comparisons. A single pole inside the range (an Antoine T = −C) is not an overflow: the
+    /// pole check reports it.</summary>
+    private static void RequireRepresentable(PublishedCorrelation correlation, IEnumerable<PublishedConvention> conventions, double[] grid, string what)
+    {
+        var form = correlation.Form();
+        (PublishedConvention Convention, double T, double LnP)? first = null;
+        foreach (var convention in conventions)
+        {
+            double[] si = correlation.SiCoefficients(convention);
+            foreach (double t in grid)
+            {
+                double lnP = si.All(double.IsFinite) ? form.LnPressure(t, si) : double.NaN;
+                if (Math.Abs(lnP) <= MaximumAbsoluteLnPressure)
+                {
+                    return;
+                }
+
+                first ??= (convention, t, lnP);
+            }
+        }
+
+        if (first is var (c, at, value))
+        {
+            string coefficients = string.Join(", ", correlation.Coefficients.Select(Preconditions.Format));
+            throw new InvalidInputException("coefficients", value,
+                $"the {what}'s {correlation.FormId} coefficients {coefficients} overflow: no pressure on the range is representable (read as {c} they give ln(P/Pa) = {Preconditions.Format(value)} at {Preconditions.Format(at)} K; double precision needs |ln P| <= 709.78)");
+        }
+    }
+
     /// <summary>Runs the audit.</summary>
     /// <exception cref="ArgumentException">No range can be set (no range, data or fluid), or a bad range.</exception>
+    /// <exception cref="InvalidInputException">Coefficients that overflow (no finite pressure on the range).</exception>
     public static AuditReport Audit(AuditRequest request)
     {
         ArgumentNullException.ThrowIfNull(request);
         var (tMin, tMax) = ResolveRange(request);
         double[] grid = [.. Enumerable.Range(0, GridPoints).Select(i => i == GridPoints - 1 ? tMax : tMin + (tMax - tMin) * i / (GridPoints - 1))];
+        RequireRepresentable(request.Correlation, Candidates(request), grid, "correlation");
+        if (request.Against is PublishedCorrelation against)
+        {
+            RequireRepresentable(against, Candidates(request), grid, "second correlation");
+        }
+
         var model = ModelPoints(request.Solver, grid);
         double? tb = request.Fluid?.NormalBoilingPoint?.Value;
         double? tc = request.Fluid?.CriticalTemperature.Value;
