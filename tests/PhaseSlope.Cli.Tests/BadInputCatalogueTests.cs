@@ -1,0 +1,129 @@
+namespace PhaseSlope.Cli.Tests;
+
+/// <summary>The bad-input catalogue: inputs a new user gives by mistake (wrong-case units, values
+/// out of range, conflicting options, files that are not what they claim), each refused with the
+/// documented exit code, one "phaseslope: error:" line on standard error naming the problem and
+/// where, nothing on standard output, no stack trace, and the --out file left exactly as it was
+/// (no temporary file left beside it). Together with <see cref="CliIoTests"/> (58 cases) over 130.</summary>
+public class BadInputCatalogueTests
+{
+    public static TheoryData<string[], int, string> Cases => new()
+    {
+        { ["coexist", "propane", "-T", "300 k"], ExitCodes.Usage, "--temperature: unknown temperature unit 'k' in '300 k'; did" },
+        { ["coexist", "propane", "-P", "1 mpa"], ExitCodes.Usage, "--pressure: unknown pressure unit 'mpa' in '1 mpa'; did you" },
+        { ["coexist", "propane", "-P", "1 MPA"], ExitCodes.Usage, "--pressure: unknown pressure unit 'MPA' in '1 MPA'; did you" },
+        { ["coexist", "propane", "-T", "25 DEGC"], ExitCodes.Usage, "--temperature: unknown temperature unit 'DEGC' in '25 DEGC';" },
+        { ["coexist", "propane", "-T", "300 furlong"], ExitCodes.Usage, "--temperature: unknown temperature unit 'furlong' in '300 fu" },
+        { ["coexist", "propane", "-T", "-5"], ExitCodes.Usage, "--temperature: temperature is -5 K, not above absolute zero" },
+        { ["coexist", "propane", "-T", "NaN"], ExitCodes.Usage, "--temperature: NaN and infinity are not accepted in 'NaN' (g" },
+        { ["coexist", "propane", "-T", "1e400"], ExitCodes.Usage, "--temperature: number is too large in '1e400' (give a finite" },
+        { ["coexist", "propane", "-P", "-1 bar"], ExitCodes.Usage, "--pressure: pressure is not above zero in '-1 bar' (an absol" },
+        { ["coexist", "propane", "-P", "50 bar"], ExitCodes.OutOfRange, "pressure 5000000 Pa is at or above the critical pressure 425" },
+        { ["coexist", "propane", "-T", "369.89"], ExitCodes.OutOfRange, "temperature 369.89 K is at or above the critical temperature" },
+        { ["coexist", "propane", "-T", "50"], ExitCodes.OutOfRange, "temperature 50 K is below the lowest valid temperature 110.9" },
+        { ["coexist", "propane", "-P", "1e-30 Pa"], ExitCodes.OutOfRange, "pressure 1E-30 Pa is below the saturation pressure 0.6279265" },
+        { ["coexist", "propane", "-T", "300", "--eos", "xyz"], ExitCodes.Usage, "--eos: unknown model 'xyz' (use pr, pr78, srk, rk, vdw)" },
+        { ["coexist", "propane", "-T", "300", "--alpha", "bogus"], ExitCodes.Usage, "--alpha: unknown alpha function 'bogus' (use default, twu or" },
+        { ["coexist", "propane", "-T", "300", "--alpha", "mathias-copeman"], ExitCodes.OutOfRange, "no Mathias-Copeman parameters for propane with Peng-Robinson" },
+        { ["coexist", "propane", "-T", "300", "--volume-shift", "1 m3/mol"], ExitCodes.OutOfRange, "volume shift 1 m3/mol must be below the co-volume b = 5.6279" },
+        { ["coexist", "propane", "-T", "300", "--volume-shift", "abc"], ExitCodes.Usage, "--volume-shift: expected a molar volume starting with a numb" },
+        { ["coexist", "propane", "-T", "300", "--reference", "nowhere"], ExitCodes.Usage, "--reference: unknown reference 'nowhere' (use ideal-gas, nbp" },
+        { ["coexist", "methane", "-T", "150", "--reference", "refrigeration"], ExitCodes.OutOfRange, "reference state 'refrigeration' (saturated liquid at 0 degC:" },
+        { ["coexist", "propane", "-T", "300", "--format", "xml"], ExitCodes.Usage, "--format: unknown format 'xml' (use table, csv or json)" },
+        { ["coexist", "propane", "-T", "300", "--format", "json", "--units", "engineering"], ExitCodes.Usage, "--units: applies to tables only; json output is always in SI" },
+        { ["coexist", "/dev/zero", "-T", "300"], ExitCodes.Fluid, "cannot read fluid file: a line is longer than the limit of 6" },
+        { ["coexist", "{dir}/no-such.fluid", "-T", "300"], ExitCodes.Fluid, "fluid file not found" },
+        { ["coexist", "{dir}/hugemass.fluid", "-T", "300"], ExitCodes.Fluid, "field 'molar_mass': implausible value 1E+308 g/mol; expected" },
+        { ["coexist", "{dir}/lowomega.fluid", "-T", "300", "--alpha", "twu"], ExitCodes.OutOfRange, "acentric factor -0.5 of lowomega is outside -0.1344178 to an" },
+        { ["curve", "propane", "--points", "1"], ExitCodes.Usage, "--points: must be between 2 and 100000, got 1" },
+        { ["curve", "propane", "--points", "200000"], ExitCodes.Usage, "--points: must be between 2 and 100000, got 200000" },
+        { ["curve", "propane", "--from", "400"], ExitCodes.OutOfRange, "--from: 400 K is at or above the critical temperature 369.89" },
+        { ["curve", "propane", "--to", "50"], ExitCodes.OutOfRange, "--to: 50 K is below the lowest valid temperature 110.967 K o" },
+        { ["curve", "propane", "--from", "300", "--to", "250"], ExitCodes.Usage, "--from (300 K) must be below --to (250 K)" },
+        { ["state", "propane", "-T", "300"], ExitCodes.Usage, "give exactly one of --pressure and --density with --temperat" },
+        { ["state", "propane", "-T", "300", "-P", "1e6", "--density", "100"], ExitCodes.Usage, "give exactly one of --pressure and --density with --temperat" },
+        { ["state", "r-134a", "-T", "0 degC", "--density", "100 kg/m3"], ExitCodes.OutOfRange, "980.0952 mol/m3 at 273.15 K lies between the saturated vapou" },
+        { ["state", "propane", "-T", "300", "-D", "100"], ExitCodes.Usage, "Unrecognized command or argument '-D'." },
+        { ["state", "propane", "-T", "300", "-P", "1e6", "--phase", "gas"], ExitCodes.Usage, "--phase: unknown phase 'gas' (use stable, liquid or vapour)" },
+        { ["state", "propane", "-T", "400", "-P", "1e6", "--phase", "liquid"], ExitCodes.OutOfRange, "at 400 K, at or above the critical temperature 369.89 K, the" },
+        { ["state", "propane", "-T", "300", "--density", "1e9 mol/m3"], ExitCodes.OutOfRange, "density 1E+09 mol/m3 is at or above the model's limit 1/b =" },
+        { ["state", "propane", "-T", "300", "--density", "-5"], ExitCodes.Usage, "--density: density is not above zero in '-5' (a density must" },
+        { ["derive", "propane", "--of", "V", "--by", "P", "--hold", "T", "-T", "369.89", "-P", "4.2512MPa"], ExitCodes.OutOfRange, "(dV/dP) at constant T is undefined at this state: P cannot v" },
+        { ["derive", "propane", "--of", "H", "--by", "T", "--hold", "T", "-T", "300", "-P", "1e6"], ExitCodes.Usage, "--hold: the variable held constant (T) must differ from --by" },
+        { ["derive", "propane", "--of", "X", "--by", "T", "--hold", "P", "-T", "300", "-P", "1e6"], ExitCodes.Usage, "--of: unknown variable 'X' (use T, P, V, U, H, S, A or G)" },
+        { ["derive", "propane", "--of", "H", "--by", "T", "-T", "300", "-P", "1e6"], ExitCodes.Usage, "Option '--hold' is required." },
+        { ["fit", "{dir}/ok.csv", "--form", "antoine", "--tc", "540"], ExitCodes.Usage, "--tc: needs --pc too (the critical point is both)" },
+        { ["fit", "{dir}/ok.csv", "--fluid", "propane", "--tc", "540", "--pc", "31"], ExitCodes.Usage, "--tc: conflicts with --fluid, which gives the critical point" },
+        { ["fit", "{dir}/ok.csv", "--tc", "540", "--pc", "31"], ExitCodes.OutOfRange, "the critical pressure 31 Pa is not above the data point at 2" },
+        { ["fit", "{dir}/falling.csv", "--form", "antoine"], ExitCodes.OutOfRange, "the vapour pressure falls with temperature, from 1802700 Pa" },
+        { ["fit", "{dir}/dup.csv", "--form", "antoine"], ExitCodes.DataFile, "column 'T [K]': temperature 250 K is the same as on line 2 (" },
+        { ["fit", "{dir}/badnum.csv", "--form", "antoine"], ExitCodes.DataFile, "column 'P [kPa]': 'abc' is not a number (use a dot as the de" },
+        { ["fit", "{dir}/nounits.csv", "--form", "antoine"], ExitCodes.DataFile, "column 'T': no temperature unit: write it in brackets (e.g." },
+        { ["fit", "/dev/zero", "--form", "antoine"], ExitCodes.DataFile, "cannot read data file: a line is longer than the limit of 64" },
+        { ["fit", "{dir}/no-such.csv", "--form", "antoine"], ExitCodes.DataFile, "data file not found" },
+        { ["fit", "{dir}/ok.csv", "--form", "nonsense"], ExitCodes.Usage, "--form: unknown form 'nonsense' (use clausius-clapeyron, ant" },
+        { ["fit", "{dir}/ok.csv", "--form", "wagner-3-6"], ExitCodes.Usage, "--form wagner-3-6: needs Tc and Pc: give --fluid, or --tc an" },
+        { ["latent", "{dir}/ok.csv", "--tc", "540", "--pc", "31"], ExitCodes.OutOfRange, "the critical pressure 31 Pa is not above the data point at 2" },
+        { ["latent", "{dir}/falling.csv", "--form", "antoine"], ExitCodes.OutOfRange, "the vapour pressure falls with temperature, from 1802700 Pa" },
+        { ["latent", "{dir}/ok.csv", "--fluid", "propane", "--form", "antoine", "--temperature", "600"], ExitCodes.OutOfRange, "temperature 600 K is at or above the critical temperature 36" },
+        { ["audit", "--form", "antoine", "--coefficients", "1,2"], ExitCodes.Usage, "--coefficients: the antoine form takes 3 coefficients, got 2" },
+        { ["audit", "--form", "antoine", "--coefficients", "9.1,1872,-25", "--log-base", "7"], ExitCodes.Usage, "--log-base: unknown log base '7' (use 10 or e)" },
+        { ["audit", "--form", "antoine", "--coefficients", "9.1,1872,-25", "--correlation-pressure-unit", "mmhg"], ExitCodes.Usage, "--correlation-pressure-unit: unknown pressure unit 'mmhg'; d" },
+        { ["audit", "--form", "antoine", "--coefficients", "9.1,1872,-25", "--eos", "pr"], ExitCodes.Usage, "--eos: needs --fluid (the model's vapour pressure is compute" },
+        { ["audit", "--form", "nonsense", "--coefficients", "9.1,1872,-25"], ExitCodes.Usage, "--form: unknown form 'nonsense' (use antoine, clausius-clape" },
+        { ["fluids", "show", "nosuchfluid"], ExitCodes.Fluid, "unknown fluid 'nosuchfluid'; 'phaseslope fluids list' shows" },
+        { ["fluids", "show", "propanne"], ExitCodes.Fluid, "unknown fluid 'propanne'; did you mean 'propane', 'acetone'," },
+        { ["fluids", "check", "{dir}/lowomega.fluid", "--alpha", "twu"], ExitCodes.OutOfRange, "acentric factor -0.5 of lowomega is outside -0.1344178 to an" },
+        { ["fluids", "estimate", "--name", "x", "--molar-mass", "100 g/mol", "--tc", "500", "--pc", "3MPa", "--vapour-pressure", "1 K, 1 Pa"], ExitCodes.OutOfRange, "the Ambrose-Walton relation for the acentric factor holds fo" },
+        { ["fluids", "estimate", "--name", "Bad Name", "--molar-mass", "100 g/mol", "--tc", "500", "--pc", "3MPa", "--omega", "0.2"], ExitCodes.Usage, "--name: the canonical name must be lower case ('bad name')" },
+        { ["fluids", "estimate", "--name", "x", "--molar-mass", "100 g/mol", "--tc", "500", "--pc", "3MPa", "--omega", "0.2", "--vapour-pressure", "400 K, 1 bar"], ExitCodes.Usage, "--vapour-pressure: conflicts with --omega (it estimates the" },
+        { ["plot", "propane", "--diagram", "nonsense"], ExitCodes.Usage, "--diagram: unknown diagram 'nonsense' (use p-t, lnp-invt, t-" },
+        { ["plot", "propane", "--diagram", "p-t", "--width", "5"], ExitCodes.Usage, "--width: must be 300 to 8000 pixels, got 5" },
+        { ["audit", "--form", "antoine", "--coefficients", "1e300,1e300,1", "--log-base", "10", "--range", "250,330"], ExitCodes.OutOfRange, "the correlation's antoine coefficients 1E+300, 1E+300, 1 ove" },
+        { ["coexist", "propane", "-T", "300", "--eos", "srk", "--alpha", "twu"], ExitCodes.OutOfRange, "no Twu parameters for propane with Soave-Redlich-Kwong (1972" },
+        { ["coexist", "propane"], ExitCodes.Usage, "coexist: give exactly one of --temperature and --pressure" },
+        { ["coexist", "propane", "-T", "300", "-P", "1e5"], ExitCodes.Usage, "coexist: give exactly one of --temperature and --pressure" },
+        { ["curve", "propane", "--points", "abc"], ExitCodes.Usage, "Cannot parse argument 'abc' for option '--points' as expecte" },
+        { ["state", "propane", "-P", "1e6", "--density", "100"], ExitCodes.Usage, "Option '--temperature' is required." },
+        { ["derive", "propane", "--of", "H", "--by", "T", "--hold", "P", "-T", "300", "-P", "1e6", "--units", "engineering"], ExitCodes.Usage, "Unrecognized command or argument '--units'." },
+        { ["fit", "{dir}/ok.csv", "--form", "antoine", "--units", "engineering"], ExitCodes.Usage, "Unrecognized command or argument '--units'." },
+        { ["latent", "{dir}/ok.csv", "--form", "antoine", "--volume-model", "eos"], ExitCodes.Usage, "--volume-model eos: needs --fluid (the coexisting volumes co" },
+        { ["fluids", "list", "--units", "furlongs"], ExitCodes.Usage, "--units: unknown unit system 'furlongs' (use si or engineeri" },
+        { ["coexist", "propane", "-T", "300", "--diagnostics", "yes"], ExitCodes.Usage, "Unrecognized command or argument 'yes'." },    };
+
+    [Theory]
+    [MemberData(nameof(Cases))]
+    public void BadInput_RefusedCleanly_OutputFileUntouched(string[] args, int expectedCode, string messagePart)
+    {
+        using var folder = new TempFolder();
+        WriteFixtures(folder);
+        string output = folder.File(args[0] == "plot" ? "out.png" : "out.txt");
+        const string sentinel = "sentinel: a failed run must leave this file as it was\n";
+        File.WriteAllText(output, sentinel);
+        string[] before = folder.Entries();
+        string[] resolved = [.. args.Select(a => a.Replace("{dir}", folder.Path, StringComparison.Ordinal)), "--out", output];
+
+        var result = CliHarness.Run(resolved);
+
+        CliHarness.AssertFailure(result, expectedCode, messagePart);
+        Assert.Equal(sentinel, File.ReadAllText(output));
+        Assert.Equal(before, folder.Entries());
+    }
+
+    /// <summary>Small data and fluid files, each with one thing wrong (invented values, for tests only).</summary>
+    private static void WriteFixtures(TempFolder folder)
+    {
+        File.WriteAllText(folder.File("ok.csv"), "T [K],P [kPa]\n250,218.4\n270,415.6\n290,722.4\n310,1172.6\n330,1802.7\n");
+        File.WriteAllText(folder.File("falling.csv"), "T [K],P [kPa]\n250,1802.7\n270,1172.6\n290,722.4\n310,415.6\n330,218.4\n");
+        File.WriteAllText(folder.File("dup.csv"), "T [K],P [kPa]\n250,218.4\n250,300\n290,722.4\n310,1172.6\n330,1802.7\n");
+        File.WriteAllText(folder.File("badnum.csv"), "T [K],P [kPa]\n250,abc\n");
+        File.WriteAllText(folder.File("nounits.csv"), "T,P\n250,218.4\n");
+        string propane = CliHarness.CatalogFileText("propane.fluid");
+        File.WriteAllText(folder.File("hugemass.fluid"), ReplaceLine(propane, "molar_mass", "molar_mass 1e308 g/mol | invented for a test"));
+        File.WriteAllText(folder.File("lowomega.fluid"), ReplaceLine(ReplaceLine(ReplaceLine(propane, "acentric_factor", "acentric_factor -0.5 | invented for a test"),
+            "name", "name lowomega"), "synonyms", ""));
+    }
+
+    private static string ReplaceLine(string text, string key, string line)
+        => string.Join('\n', text.Split('\n').Select(l => l.StartsWith(key + " ", StringComparison.Ordinal) ? line : l));
+}
