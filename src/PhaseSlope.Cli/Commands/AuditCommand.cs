@@ -108,7 +108,7 @@ internal static class AuditCommand
                     AgainstTemperatureUnit = parse.GetValue(temperatureUnit2) is string t2 && second is not null ? Temperature(t2, "--correlation-temperature-unit2", second) : null,
                     AgainstThreshold = limit,
                 });
-                output.Emit(io, parse, fmt == "json" ? Json(report) : Table(report), "the audit report");
+                output.Emit(io, parse, fmt == "json" ? Json(report, solver?.Model.Identity) : Table(report), "the audit report");
             });
             return code == ExitCodes.Success && report is { Failed: true } ? ExitCodes.AuditFailed : code;
         });
@@ -224,11 +224,17 @@ internal static class AuditCommand
         return text.ToString();
     }
 
-    private static string Json(AuditReport report)
+    private static string Json(AuditReport report, Core.Models.ModelIdentity? model)
     {
         return JsonText.Write(w =>
         {
             w.WriteStartObject();
+            if (model is not null)
+            {
+                // The model whose vapour pressure the --fluid checks used, named in full.
+                ModelText.WriteJson(w, model);
+            }
+
             w.WritePropertyName("detected");
             if (report.Convention is PublishedConvention c)
             {

@@ -124,7 +124,7 @@ internal static class LatentCommand
             }
 
             var results = temperatures.Select(estimator.At).ToArray();
-            output.Emit(io, parse, FitWriter.Latent(fit, model, results, fits, format), $"{results.Count()} latent heats");
+            output.Emit(io, parse, FitWriter.Latent(fit, model, results, fits, format, solver?.Model.Identity), $"{results.Count()} latent heats");
         }));
         return command;
     }

@@ -89,7 +89,7 @@ internal static class FitWriter
     }
 
     /// <summary>Renders latent heats.</summary>
-    public static string Latent(VapourPressureFit fit, VolumeChangeModel model, IReadOnlyList<LatentHeatPoint> points, IReadOnlyList<VapourPressureFit> candidates, OutputFormat format)
+    public static string Latent(VapourPressureFit fit, VolumeChangeModel model, IReadOnlyList<LatentHeatPoint> points, IReadOnlyList<VapourPressureFit> candidates, OutputFormat format, Core.Models.ModelIdentity? equationOfState = null)
         => format switch
         {
             OutputFormat.Json => JsonText.Write(json =>
@@ -97,6 +97,12 @@ internal static class FitWriter
                 json.WriteStartObject();
                 WriteFit(json, fit);
                 json.WriteString("volume_model", VolumeModelId(model));
+                if (equationOfState is not null)
+                {
+                    // The model behind the coexisting volumes, named in full.
+                    ModelText.WriteJson(json, equationOfState);
+                }
+
                 json.WriteStartArray("points");
                 foreach (var p in points)
                 {
