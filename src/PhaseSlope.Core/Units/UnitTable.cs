@@ -167,7 +167,7 @@ public static class UnitTable
             return same;
         }
 
-        return [.. candidates.Where(c => EditDistance(c.text.ToLowerInvariant(), s.ToLowerInvariant()) == 1)
+        return [.. candidates.Where(c => Fluids.FluidNames.EditDistance(c.text.ToLowerInvariant(), s.ToLowerInvariant()) == 1)
             .Select(c => c.Symbol).Distinct()];
     }
 
@@ -194,27 +194,4 @@ public static class UnitTable
         _ => $"{string.Join(", ", items.Take(items.Count - 1))} or {items[^1]}",
     };
 
-    private static int EditDistance(string a, string b)
-    {
-        var previous = new int[b.Length + 1];
-        var current = new int[b.Length + 1];
-        for (int j = 0; j <= b.Length; j++)
-        {
-            previous[j] = j;
-        }
-
-        for (int i = 1; i <= a.Length; i++)
-        {
-            current[0] = i;
-            for (int j = 1; j <= b.Length; j++)
-            {
-                int cost = a[i - 1] == b[j - 1] ? 0 : 1;
-                current[j] = Math.Min(Math.Min(current[j - 1] + 1, previous[j] + 1), previous[j - 1] + cost);
-            }
-
-            (previous, current) = (current, previous);
-        }
-
-        return previous[b.Length];
-    }
 }

@@ -30,18 +30,7 @@ public class PhaseslopeProcessTests
             start.ArgumentList.Add(arg);
         }
 
-        using var process = Process.Start(start) ?? throw new InvalidOperationException("dotnet did not start");
-        process.StandardInput.Close();
-        var stdout = process.StandardOutput.ReadToEndAsync();
-        var stderr = process.StandardError.ReadToEndAsync();
-        if (!process.WaitForExit(Timeout))
-        {
-            process.Kill(entireProcessTree: true);
-            Assert.Fail($"phaseslope {string.Join(' ', args)} did not exit within {Timeout.TotalSeconds} s");
-        }
-
-        process.WaitForExit();
-        return new CliResult(process.ExitCode, stdout.Result, stderr.Result);
+        return ProcessRunner.Run(start, Timeout, $"phaseslope {string.Join(' ', args)}");
     }
 
     [Fact]

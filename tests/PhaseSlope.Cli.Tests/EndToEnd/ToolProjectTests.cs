@@ -60,19 +60,9 @@ public class ToolProjectTests
             start.ArgumentList.Add($"-p:{property}");
         }
 
-        using var process = Process.Start(start) ?? throw new InvalidOperationException("dotnet did not start");
-        process.StandardInput.Close();
-        var stdout = process.StandardOutput.ReadToEndAsync();
-        var stderr = process.StandardError.ReadToEndAsync();
-        if (!process.WaitForExit(Timeout))
-        {
-            process.Kill(entireProcessTree: true);
-            Assert.Fail($"dotnet msbuild did not exit within {Timeout.TotalSeconds} s");
-        }
-
-        process.WaitForExit();
-        Assert.True(process.ExitCode == 0, $"dotnet msbuild exit {process.ExitCode}: {stdout.Result} {stderr.Result}");
-        using var document = JsonDocument.Parse(stdout.Result);
+        var result = ProcessRunner.Run(start, Timeout, "dotnet msbuild");
+        Assert.True(result.ExitCode == 0, $"dotnet msbuild exit {result.ExitCode}: {result.Stdout} {result.Stderr}");
+        using var document = JsonDocument.Parse(result.Stdout);
         return document.RootElement.GetProperty("Properties").EnumerateObject()
             .ToDictionary(p => p.Name, p => p.Value.GetString() ?? "", StringComparer.Ordinal);
     }
