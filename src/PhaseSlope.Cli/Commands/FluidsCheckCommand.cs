@@ -70,7 +70,7 @@ internal static class FluidsCheckCommand
             ? $"present, {NumberText.Table(cp.MinimumTemperature)}-{NumberText.Table(cp.MaximumTemperature)} K; cp0(298.15 K) = {NumberText.Table(cp.HeatCapacity(298.15))} J/(mol K)"
             : "absent: state and derive need it; coexist and curve work without it");
         var text = new StringBuilder();
-        text.AppendLine(path);
+        text.AppendLine(Input.DataFileException.OneLine(path)); // user text: control and bidi characters escaped
         text.AppendLine();
         text.Append(table.Render());
         return text.ToString();

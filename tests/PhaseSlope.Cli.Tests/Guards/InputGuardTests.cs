@@ -124,4 +124,18 @@ public sealed class InputGuardTests : IDisposable
         AssertFailure(result, 3, "must not contain control or invisible format characters (U+202E at position 4)");
         Assert.DoesNotContain("\u202E", result.Stderr, StringComparison.Ordinal);
     }
+
+    [Fact]
+    public void FluidsCheck_PathWithABidiOverride_EchoedEscapedOnStdout()
+    {
+        // A right-to-left override in a file name would reverse what follows it on a terminal.
+        string path = Path.Combine(_directory, "a\u202Eb.fluid");
+        File.WriteAllText(path, CatalogFileText("propane.fluid"));
+
+        var result = Run("fluids", "check", path);
+
+        Assert.Equal(0, result.ExitCode);
+        Assert.DoesNotContain("\u202E", result.Stdout, StringComparison.Ordinal);
+        Assert.Contains("a\\u202Eb.fluid", result.Stdout, StringComparison.Ordinal);
+    }
 }
