@@ -89,7 +89,9 @@ public class BadInputCatalogueTests
         { ["fit", "{dir}/ok.csv", "--form", "antoine", "--units", "engineering"], ExitCodes.Usage, "Unrecognized command or argument '--units'." },
         { ["latent", "{dir}/ok.csv", "--form", "antoine", "--volume-model", "eos"], ExitCodes.Usage, "--volume-model eos: needs --fluid (the coexisting volumes co" },
         { ["fluids", "list", "--units", "furlongs"], ExitCodes.Usage, "--units: unknown unit system 'furlongs' (use si or engineeri" },
-        { ["coexist", "propane", "-T", "300", "--diagnostics", "yes"], ExitCodes.Usage, "Unrecognized command or argument 'yes'." },    };
+        { ["coexist", "propane", "-T", "300", "--diagnostics", "yes"], ExitCodes.Usage, "Unrecognized command or argument 'yes'." },        { ["fit", "{dir}/ok.csv", "--form", "antoine", "--temperature-unit", "degC"], ExitCodes.DataFile, "the header gives the unit 'K' but --temperature-unit says 'degC'" },
+        { ["fit", "{dir}/ok.csv", "--form", "antoine", "--pressure-unit", "bar"], ExitCodes.DataFile, "the header gives the unit 'kPa' but --pressure-unit says 'bar'" },
+    };
 
     [Theory]
     [MemberData(nameof(Cases))]

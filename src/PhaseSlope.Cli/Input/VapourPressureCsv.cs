@@ -354,7 +354,20 @@ internal static partial class VapourPressureCsv
             throw new DataFileException(origin, line, header,
                 DataUnits.UnknownTemperature(unit));
         }
+
+        RequireAgreement(found, fallback, "--temperature-unit", header, origin, line);
         return found;
+    }
+
+    /// <summary>An option that names a column's unit and a header that names another one
+    /// contradict each other: refused, not silently resolved in favour of either.</summary>
+    private static void RequireAgreement(Unit header, Unit? option, string optionName, string column, string origin, int line)
+    {
+        if (option is not null && option != header)
+        {
+            throw new DataFileException(origin, line, column,
+                $"the header gives the unit '{header.Symbol}' but {optionName} says '{option.Symbol}': give the unit in one place");
+        }
     }
 
     private static Unit PressureUnitOf(string? unit, string header, string origin, int line,
@@ -375,6 +388,8 @@ internal static partial class VapourPressureCsv
             throw new DataFileException(origin, line, header,
                 DataUnits.UnknownPressure(unit));
         }
+
+        RequireAgreement(found, fallback, "--pressure-unit", header, origin, line);
         return found;
     }
 

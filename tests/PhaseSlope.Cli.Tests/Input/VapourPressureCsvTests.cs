@@ -156,11 +156,15 @@ public class VapourPressureCsvTests
     }
 
     [Fact]
-    public void Read_UnitInTheHeader_WinsOverTheOptions()
+    public void Read_UnitInTheHeaderContradictingAnOption_Refused()
     {
-        var options = new VapourPressureCsvOptions(TemperatureUnit: "degF", PressureUnit: "psi");
+        // One unit, one place: a header that says K and an option that says degF contradict each
+        // other, and neither silently wins (a header that agrees with the option is accepted).
+        var ex = Assert.Throws<DataFileException>(() => Read("T [K],P [Pa]\n300,1000\n310,2000\n", new VapourPressureCsvOptions(TemperatureUnit: "degF")));
+        Assert.Contains("the header gives the unit 'K' but --temperature-unit says 'degF'", ex.Message, StringComparison.Ordinal);
+        Assert.Throws<DataFileException>(() => Read("T [K],P [Pa]\n300,1000\n310,2000\n", new VapourPressureCsvOptions(PressureUnit: "psi")));
 
-        var points = Read("T [K],P [Pa]\n300,1000\n310,2000\n", options);
+        var points = Read("T [K],P [Pa]\n300,1000\n310,2000\n", new VapourPressureCsvOptions(TemperatureUnit: "K", PressureUnit: "Pa"));
 
         Assert.Equal(300.0, points[0].Temperature);
         Assert.Equal(1000.0, points[0].Pressure);
