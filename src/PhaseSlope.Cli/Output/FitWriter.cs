@@ -126,11 +126,12 @@ internal static class FitWriter
                 json.WriteEndObject();
             }),
             OutputFormat.Csv => CsvText.Write(
-                ["temperature_K", "pressure_Pa", "enthalpy_of_vaporization_J_mol", "standard_uncertainty_J_mol", "compressibility_change", "extrapolated"],
+                ["temperature_K", "pressure_Pa", "enthalpy_of_vaporization_J_mol", "standard_uncertainty_J_mol", "compressibility_change", "extrapolated", "finding"],
                 points.Select(p => new[]
                 {
                     NumberText.RoundTrip(p.Temperature), NumberText.RoundTrip(p.Pressure), NumberText.RoundTrip(p.EnthalpyOfVaporization),
                     NumberText.RoundTripOrEmpty(p.StandardUncertainty), NumberText.RoundTrip(p.CompressibilityChange), p.Extrapolated ? "true" : "false",
+                    p.Finding ?? "",
                 })),
             _ => LatentTable(fit, model, points),
         };

@@ -68,4 +68,20 @@ public sealed class CorrelationGuardTests : IDisposable
             Assert.False(point.TryGetProperty("finding", out _));
         }
     }
+
+    [Fact]
+    public void Latent_ImplausibleLatentHeat_FindingInEveryFormat()
+    {
+        // Invented data on ln P = A − 30 000 K/T: the Clausius–Clapeyron ΔH = R·30 000 K ≈ 249 kJ/mol,
+        // ΔH/T ≈ 800 J/(mol K), above the 350 J/(mol K) bound (common practice): each row carries
+        // the finding, in JSON and as the CSV's last column.
+        string data = Write("steep.csv", "T [K],P [Pa]\n300,1000\n305,5151.79\n310,25173.9\n315,116969\n320,518013\n325,2.19143e+06\n");
+        var json = RunJson("latent", data, "--form", "clausius-clapeyron", "--format", "json");
+        Assert.All(json.GetProperty("points").EnumerateArray(),
+            point => Assert.Contains("implausible latent heat", point.GetProperty("finding").GetString(), StringComparison.Ordinal));
+
+        string[] csv = RunText("latent", data, "--form", "clausius-clapeyron", "--format", "csv").TrimEnd('\n').Split('\n');
+        Assert.EndsWith(",finding", csv[0], StringComparison.Ordinal);
+        Assert.All(csv.Skip(1), row => Assert.Contains("implausible latent heat", row, StringComparison.Ordinal));
+    }
 }
