@@ -1,8 +1,8 @@
 using System.CommandLine;
 using PhaseSlope.Cli.Output;
 using PhaseSlope.Cli.Units;
-using PhaseSlope.Core.Equilibrium;
-using PhaseSlope.Core.Models;
+using PhaseSlope.Core.Fluids;
+using PhaseSlope.Core.Properties;
 
 namespace PhaseSlope.Cli.Commands;
 
@@ -12,41 +12,85 @@ internal static class CoexistCommand
     /// <summary>Builds the command; its action writes to <paramref name="io"/>.</summary>
     public static Command Create(CliIo io)
     {
-        var fluid = CommonOptions.FluidArgument();
-        var temperature = new Option<string>("--temperature", "-T") { Description = "Saturation temperature, e.g. 300 K, 26.85 degC, 80 degF (bare number: K)" };
-        var pressure = new Option<string>("--pressure", "-P") { Description = "Saturation pressure, e.g. 101.325 kPa, 1.2 bar, 14.7 psi, 1 atm (bare number: Pa)" };
-        var reference = ReferenceOption.Create();
-        var common = new CommonOptions();
-        var diagnostics = new DiagnosticsOption();
+        var options = new CoexistOptions();
         var command = new Command("coexist", "One liquid-vapour coexistence state at a given temperature or pressure");
-        command.Arguments.Add(fluid);
-        command.Options.Add(temperature);
-        command.Options.Add(pressure);
-        command.Options.Add(reference);
-        common.AddTo(command, withEos: true);
-        var output = new OutputOption();
-        output.AddTo(command);
-        diagnostics.AddTo(command);
+        options.AddTo(command);
         command.SetAction(parse => io.Guard(() =>
         {
-            string? tText = parse.GetValue(temperature);
-            string? pText = parse.GetValue(pressure);
-            if ((tText is null) == (pText is null))
-            {
-                throw new UsageException("coexist: give exactly one of --temperature and --pressure");
-            }
-
-            var model = common.BindModel(parse); // reject a bad --eos, --alpha or --volume-shift before the fluid is resolved
-            var (format, units) = common.BindOutput(parse);
-            double? t = tText is null ? null : QuantityParser.ParseTemperature(tText, "--temperature");
-            double? p = pText is null ? null : QuantityParser.ParsePressure(pText, "--pressure");
-            var zero = ReferenceOption.Parse(parse.GetValue(reference)!);
-            var data = FluidResolver.Resolve(parse.GetValue(fluid)!);
-            var context = CoexistenceContext.Create(data, diagnostics.Begin(parse, model.For(data)), zero);
-            var point = t is double tv ? context.Solver.AtTemperature(tv) : context.Solver.AtPressure(p!.Value);
-            output.Emit(io, parse, CoexistenceWriter.Render([context.Row(point)], single: true, format, data, context.Solver.Model, zero, units), "the coexistence state");
-            diagnostics.End(io, [point]);
+            var request = options.Bind(parse);
+            var context = CoexistenceContext.Create(request.Fluid, options.Diagnostics.Begin(request.Diagnostics, request.Model.For(request.Fluid)), request.Reference);
+            var point = request.Temperature is double t ? context.Solver.AtTemperature(t) : context.Solver.AtPressure(request.Pressure!.Value);
+            options.Out.Emit(io, parse, CoexistenceWriter.Render([context.Row(point)], single: true, request.Output.Format, request.Fluid,
+                context.Solver.Model, request.Reference, request.Output.Units), "the coexistence state");
+            options.Diagnostics.End(io, [point]);
         }));
         return command;
+    }
+}
+
+/// <summary>The checked inputs of <c>coexist</c>.</summary>
+/// <param name="Fluid">The resolved fluid.</param>
+/// <param name="Temperature">The saturation temperature in K, or null when a pressure is given.</param>
+/// <param name="Pressure">The saturation pressure in Pa, or null when a temperature is given.</param>
+/// <param name="Reference">The zero of h and s.</param>
+/// <param name="Model">The model choice.</param>
+/// <param name="Output">The output format and units.</param>
+/// <param name="Diagnostics">Whether --diagnostics was given.</param>
+internal sealed record CoexistRequest(Fluid Fluid, double? Temperature, double? Pressure, ReferenceState Reference,
+    ModelChoice Model, OutputChoice Output, bool Diagnostics);
+
+/// <summary>The options of <c>coexist</c>, bound to a <see cref="CoexistRequest"/>.</summary>
+internal sealed class CoexistOptions
+{
+    /// <summary>FLUID.</summary>
+    public Argument<string> Fluid { get; } = CommonOptions.FluidArgument();
+
+    /// <summary>--temperature.</summary>
+    public Option<string> Temperature { get; } = new("--temperature", "-T") { Description = "Saturation temperature, e.g. 300 K, 26.85 degC, 80 degF (bare number: K)" };
+
+    /// <summary>--pressure.</summary>
+    public Option<string> Pressure { get; } = new("--pressure", "-P") { Description = "Saturation pressure, e.g. 101.325 kPa, 1.2 bar, 14.7 psi, 1 atm (bare number: Pa)" };
+
+    /// <summary>--reference.</summary>
+    public Option<string> Reference { get; } = ReferenceOption.Create();
+
+    /// <summary>--eos, --alpha, --volume-shift, --format, --units.</summary>
+    public CommonOptions Common { get; } = new();
+
+    /// <summary>--out.</summary>
+    public OutputOption Out { get; } = new();
+
+    /// <summary>--diagnostics.</summary>
+    public DiagnosticsOption Diagnostics { get; } = new();
+
+    /// <summary>Adds every option to the command.</summary>
+    public void AddTo(Command command)
+    {
+        command.Arguments.Add(Fluid);
+        command.Options.Add(Temperature);
+        command.Options.Add(Pressure);
+        command.Options.Add(Reference);
+        Common.AddTo(command, withEos: true);
+        Out.AddTo(command);
+        Diagnostics.AddTo(command);
+    }
+
+    /// <summary>Parses and checks every option, then resolves the fluid.</summary>
+    public CoexistRequest Bind(ParseResult parse)
+    {
+        string? tText = parse.GetValue(Temperature);
+        string? pText = parse.GetValue(Pressure);
+        if ((tText is null) == (pText is null))
+        {
+            throw new UsageException("coexist: give exactly one of --temperature and --pressure");
+        }
+
+        var model = Common.BindModel(parse); // reject a bad --eos, --alpha or --volume-shift before the fluid is resolved
+        var output = Common.BindOutput(parse);
+        double? t = tText is null ? null : QuantityParser.ParseTemperature(tText, "--temperature");
+        double? p = pText is null ? null : QuantityParser.ParsePressure(pText, "--pressure");
+        var reference = ReferenceOption.Parse(parse.GetValue(Reference)!);
+        var fluid = FluidResolver.Resolve(parse.GetValue(Fluid)!);
+        return new CoexistRequest(fluid, t, p, reference, model, output, Diagnostics.Given(parse));
     }
 }

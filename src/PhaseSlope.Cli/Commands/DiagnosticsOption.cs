@@ -30,9 +30,16 @@ internal sealed class DiagnosticsOption
 
     /// <summary>Starts the clock and wraps the model in a counter when the option is given;
     /// returns the model every later call must use.</summary>
-    public IResidualModel Begin(ParseResult parse, IResidualModel model)
+    public IResidualModel Begin(ParseResult parse, IResidualModel model) => Begin(Given(parse), model);
+
+    /// <summary>Whether --diagnostics was given.</summary>
+    public bool Given(ParseResult parse) => parse.GetValue(_option);
+
+    /// <summary>Starts the clock and wraps the model in a counter when <paramref name="enabled"/>;
+    /// returns the model every later call must use.</summary>
+    public IResidualModel Begin(bool enabled, IResidualModel model)
     {
-        if (!parse.GetValue(_option))
+        if (!enabled)
         {
             return model;
         }
