@@ -2,6 +2,8 @@ using System.CommandLine;
 using PhaseSlope.Cli.Output;
 using PhaseSlope.Cli.Units;
 using PhaseSlope.Core.Equilibrium;
+using PhaseSlope.Core.Fluids;
+using PhaseSlope.Core.Properties;
 
 namespace PhaseSlope.Cli.Commands;
 
@@ -14,52 +16,18 @@ internal static class CurveCommand
     /// <summary>Builds the command; its action writes to <paramref name="io"/>.</summary>
     public static Command Create(CliIo io)
     {
-        var fluid = CommonOptions.FluidArgument();
-        var from = new Option<string>("--from") { Description = "First temperature, e.g. 250 K or -20 degC (bare number: K; default: the lowest valid temperature, 0.3 Tc or the triple point)" };
-        var to = new Option<string>("--to") { Description = "Last temperature (bare number: K; default: the critical temperature; the last state is then the critical point)" };
-        var points = new Option<int>("--points", "-n")
-        {
-            Description = $"Number of states, 2 to {MaxPoints}; spaced evenly in sqrt(Tc - T) so the near-critical region is resolved",
-            DefaultValueFactory = _ => CoexistenceCurve.DefaultPoints,
-        };
-        var output = new Option<string>("--out", "-o") { Description = "Write to this file instead of the terminal (format from --format, else from the extension .csv/.json, else table)" };
-        var reference = ReferenceOption.Create();
-        var common = new CommonOptions();
-        var diagnostics = new DiagnosticsOption();
+        var options = new CurveOptions();
         var command = new Command("curve", "The saturation curve as a table of coexistence states");
-        command.Arguments.Add(fluid);
-        command.Options.Add(from);
-        command.Options.Add(to);
-        command.Options.Add(points);
-        command.Options.Add(output);
-        command.Options.Add(reference);
-        common.AddTo(command, withEos: true);
-        diagnostics.AddTo(command);
+        options.AddTo(command);
         command.SetAction(parse => io.Guard(() =>
         {
-            var model = common.BindModel(parse); // reject a bad --eos, --alpha or --volume-shift before the fluid is resolved
-            string? outPath = parse.GetValue(output);
-            var (format, units) = common.BindOutput(parse, common.FormatGiven(parse) || outPath is null ? common.OutputFormat(parse) : FormatFromExtension(outPath));
-            int n = parse.GetValue(points);
-            if (n < 2 || n > MaxPoints)
-            {
-                throw new UsageException($"--points: must be between 2 and {MaxPoints}, got {n}");
-            }
-
-            double? tFrom = parse.GetValue(from) is string f ? QuantityParser.ParseTemperature(f, "--from") : null;
-            double? tTo = parse.GetValue(to) is string tt ? QuantityParser.ParseTemperature(tt, "--to") : null;
-            if (outPath is not null && string.IsNullOrWhiteSpace(outPath))
-            {
-                throw new UsageException("--out: the file name is empty");
-            }
-
-            var zero = ReferenceOption.Parse(parse.GetValue(reference)!);
-            var data = FluidResolver.Resolve(parse.GetValue(fluid)!);
-            var context = CoexistenceContext.Create(data, diagnostics.Begin(parse, model.For(data)), zero);
+            var request = options.Bind(parse);
+            var (data, zero, outPath) = (request.Fluid, request.Reference, request.OutPath);
+            var context = CoexistenceContext.Create(data, options.Diagnostics.Begin(request.Diagnostics, request.Model.For(data)), zero);
             var solver = context.Solver;
             double tc = solver.CriticalTemperature;
-            double start = tFrom ?? solver.MinimumTemperature;
-            double end = tTo ?? tc;
+            double start = request.From ?? solver.MinimumTemperature;
+            double end = request.To ?? tc;
             // A value below the limit only by rounding (0.01 degC is 273.15999999999997 K, below a
             // 273.16 K triple point) is accepted, as the solver itself accepts it (1e-12 relative).
             if (start < solver.MinimumTemperature * (1 - 1e-12))
@@ -93,8 +61,8 @@ internal static class CurveCommand
                 throw new UsageException($"--from ({NumberText.Table(start)} K) must be below --to ({NumberText.Table(end)} K)");
             }
 
-            var curve = CoexistenceCurve.Trace(solver, start, end, n);
-            string text = CoexistenceWriter.Render(curve.Select(context.Row).ToArray(), single: false, format, data, solver.Model, zero, units);
+            var curve = CoexistenceCurve.Trace(solver, start, end, request.Points);
+            string text = CoexistenceWriter.Render(curve.Select(context.Row).ToArray(), single: false, request.Output.Format, data, solver.Model, zero, request.Output.Units);
             if (outPath is null)
             {
                 io.Out.Write(text);
@@ -105,12 +73,13 @@ internal static class CurveCommand
                 io.Note($"wrote {curve.Count} coexistence states to {outPath}");
             }
 
-            diagnostics.End(io, curve);
+            options.Diagnostics.End(io, curve);
         }));
         return command;
     }
 
-    private static OutputFormat FormatFromExtension(string path) => Path.GetExtension(path).ToLowerInvariant() switch
+    /// <summary>The format implied by the extension of an --out path.</summary>
+    internal static OutputFormat FormatFromExtension(string path) => Path.GetExtension(path).ToLowerInvariant() switch
     {
         ".csv" => OutputFormat.Csv,
         ".json" => OutputFormat.Json,
@@ -124,5 +93,88 @@ internal static class CurveCommand
         string a = NumberText.Table(first), b = NumberText.Table(second);
         return a != b ? (a, b)
             : (first.ToString("R", System.Globalization.CultureInfo.InvariantCulture), second.ToString("R", System.Globalization.CultureInfo.InvariantCulture));
+    }
+}
+
+/// <summary>The checked inputs of <c>curve</c>.</summary>
+/// <param name="Fluid">The resolved fluid.</param>
+/// <param name="From">The first temperature in K, or null for the lowest valid temperature.</param>
+/// <param name="To">The last temperature in K, or null for the critical temperature.</param>
+/// <param name="Points">The number of states.</param>
+/// <param name="OutPath">The --out file, or null for standard output.</param>
+/// <param name="Reference">The zero of h and s.</param>
+/// <param name="Model">The model choice.</param>
+/// <param name="Output">The output format and units.</param>
+/// <param name="Diagnostics">Whether --diagnostics was given.</param>
+internal sealed record CurveRequest(Fluid Fluid, double? From, double? To, int Points, string? OutPath, ReferenceState Reference,
+    ModelChoice Model, OutputChoice Output, bool Diagnostics);
+
+/// <summary>The options of <c>curve</c>, bound to a <see cref="CurveRequest"/>.</summary>
+internal sealed class CurveOptions
+{
+    /// <summary>FLUID.</summary>
+    public Argument<string> Fluid { get; } = CommonOptions.FluidArgument();
+
+    /// <summary>--from.</summary>
+    public Option<string> From { get; } = new("--from") { Description = "First temperature, e.g. 250 K or -20 degC (bare number: K; default: the lowest valid temperature, 0.3 Tc or the triple point)" };
+
+    /// <summary>--to.</summary>
+    public Option<string> To { get; } = new("--to") { Description = "Last temperature (bare number: K; default: the critical temperature; the last state is then the critical point)" };
+
+    /// <summary>--points.</summary>
+    public Option<int> Points { get; } = new("--points", "-n")
+    {
+        Description = $"Number of states, 2 to {CurveCommand.MaxPoints}; spaced evenly in sqrt(Tc - T) so the near-critical region is resolved",
+        DefaultValueFactory = _ => CoexistenceCurve.DefaultPoints,
+    };
+
+    /// <summary>--out (its format follows the extension when --format is not given).</summary>
+    public Option<string> Out { get; } = new("--out", "-o") { Description = "Write to this file instead of the terminal (format from --format, else from the extension .csv/.json, else table)" };
+
+    /// <summary>--reference.</summary>
+    public Option<string> Reference { get; } = ReferenceOption.Create();
+
+    /// <summary>--eos, --alpha, --volume-shift, --format, --units.</summary>
+    public CommonOptions Common { get; } = new();
+
+    /// <summary>--diagnostics.</summary>
+    public DiagnosticsOption Diagnostics { get; } = new();
+
+    /// <summary>Adds every option to the command.</summary>
+    public void AddTo(Command command)
+    {
+        command.Arguments.Add(Fluid);
+        command.Options.Add(From);
+        command.Options.Add(To);
+        command.Options.Add(Points);
+        command.Options.Add(Out);
+        command.Options.Add(Reference);
+        Common.AddTo(command, withEos: true);
+        Diagnostics.AddTo(command);
+    }
+
+    /// <summary>Parses and checks every option, then resolves the fluid; the temperature range is
+    /// checked against the fluid's limits by the command.</summary>
+    public CurveRequest Bind(ParseResult parse)
+    {
+        var model = Common.BindModel(parse); // reject a bad --eos, --alpha or --volume-shift before the fluid is resolved
+        string? outPath = parse.GetValue(Out);
+        var output = Common.BindOutput(parse, Common.FormatGiven(parse) || outPath is null ? Common.OutputFormat(parse) : CurveCommand.FormatFromExtension(outPath));
+        int n = parse.GetValue(Points);
+        if (n < 2 || n > CurveCommand.MaxPoints)
+        {
+            throw new UsageException($"--points: must be between 2 and {CurveCommand.MaxPoints}, got {n}");
+        }
+
+        double? tFrom = parse.GetValue(From) is string f ? QuantityParser.ParseTemperature(f, "--from") : null;
+        double? tTo = parse.GetValue(To) is string tt ? QuantityParser.ParseTemperature(tt, "--to") : null;
+        if (outPath is not null && string.IsNullOrWhiteSpace(outPath))
+        {
+            throw new UsageException("--out: the file name is empty");
+        }
+
+        var reference = ReferenceOption.Parse(parse.GetValue(Reference)!);
+        var fluid = FluidResolver.Resolve(parse.GetValue(Fluid)!);
+        return new CurveRequest(fluid, tFrom, tTo, n, outPath, reference, model, output, Diagnostics.Given(parse));
     }
 }
