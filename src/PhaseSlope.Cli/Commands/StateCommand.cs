@@ -16,9 +16,9 @@ internal static class StateCommand
         outFile.AddTo(command);
         command.SetAction(parse => io.Guard(() =>
         {
-            var output = options.Common.BindOutput(parse);
-            var (engine, state) = options.Resolve(parse);
-            outFile.Emit(io, parse, StateWriter.State(engine, state, output.Format, output.Units), "the state");
+            var request = options.Bind(parse);
+            var (engine, state) = request.Point.Evaluate();
+            outFile.Emit(io, parse, StateWriter.State(engine, state, request.Output.Format, request.Output.Units), "the state");
         }));
         return command;
     }

@@ -47,8 +47,16 @@ internal sealed class StateOptions
         Common.AddTo(command, withEos: true, withUnits);
     }
 
-    /// <summary>Parses the options, builds the engine and evaluates the state.</summary>
-    public (PropertyModel Engine, ThermodynamicState State) Resolve(ParseResult parse)
+    /// <summary>Binds --format and --units, then the state (see <see cref="BindPoint"/>).</summary>
+    public StateRequest Bind(ParseResult parse)
+    {
+        var output = Common.BindOutput(parse);
+        return new StateRequest(BindPoint(parse), output);
+    }
+
+    /// <summary>Parses and checks the options that pick the state, then resolves the fluid (a
+    /// density may be given in kg/m³, which needs its molar mass).</summary>
+    public StatePoint BindPoint(ParseResult parse)
     {
         string? pText = parse.GetValue(Pressure);
         string? dText = parse.GetValue(Density);
@@ -64,9 +72,7 @@ internal sealed class StateOptions
         double? p = pText is null ? null : QuantityParser.ParsePressure(pText, "--pressure");
         Fluid fluid = FluidResolver.Resolve(parse.GetValue(Fluid)!);
         double? rho = dText is null ? null : QuantityParser.ParseDensity(dText, "--density", fluid.MolarMass.Value);
-        var engine = new PropertyModel(fluid, model.For(fluid), reference);
-        var state = p is double pv ? engine.AtPressure(t, pv, phase) : engine.AtDensity(t, rho!.Value, phase);
-        return (engine, state);
+        return new StatePoint(fluid, t, p, rho, phase, reference, model);
     }
 
     private static PhaseChoice ParsePhase(string text) => text.ToLowerInvariant() switch
@@ -77,3 +83,28 @@ internal sealed class StateOptions
         _ => throw new UsageException($"--phase: unknown phase '{text}' (use stable, liquid or vapour)"),
     };
 }
+
+/// <summary>The checked inputs that pick one single-phase state.</summary>
+/// <param name="Fluid">The resolved fluid.</param>
+/// <param name="Temperature">The temperature in K.</param>
+/// <param name="Pressure">The pressure in Pa, or null when a density is given.</param>
+/// <param name="Density">The molar density in mol/m³, or null when a pressure is given.</param>
+/// <param name="Phase">The root chosen at a given pressure.</param>
+/// <param name="Reference">The zero of h and s.</param>
+/// <param name="Model">The model choice.</param>
+internal sealed record StatePoint(Fluid Fluid, double Temperature, double? Pressure, double? Density, PhaseChoice Phase,
+    ReferenceState Reference, ModelChoice Model)
+{
+    /// <summary>Builds the engine and evaluates the state.</summary>
+    public (PropertyModel Engine, ThermodynamicState State) Evaluate()
+    {
+        var engine = new PropertyModel(Fluid, Model.For(Fluid), Reference);
+        var state = Pressure is double p ? engine.AtPressure(Temperature, p, Phase) : engine.AtDensity(Temperature, Density!.Value, Phase);
+        return (engine, state);
+    }
+}
+
+/// <summary>The checked inputs of <c>state</c>.</summary>
+/// <param name="Point">The state.</param>
+/// <param name="Output">The output format and units.</param>
+internal sealed record StateRequest(StatePoint Point, OutputChoice Output);
