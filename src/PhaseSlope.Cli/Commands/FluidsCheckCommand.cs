@@ -13,24 +13,18 @@ internal static class FluidsCheckCommand
     /// <summary>Builds the command; its action writes to <paramref name="io"/>.</summary>
     public static Command Create(CliIo io)
     {
-        var file = new Argument<string>("FILE") { Description = "Path of the .fluid file to check" };
-        var common = new CommonOptions();
+        var options = new FluidsCheckOptions();
         var command = new Command("check", "Validate a fluid file (line, field and value checks) and test its data against a model");
-        command.Arguments.Add(file);
-        common.AddTo(command, withEos: true, withUnits: false);
-        var output = new OutputOption();
-        output.AddTo(command);
+        options.AddTo(command);
         command.SetAction(parse =>
         {
             FluidCheck? check = null;
-            string path = parse.GetValue(file)!;
+            string path = options.PathOf(parse);
             int code = io.Guard(() =>
             {
-                var format = common.OutputFormat(parse);
-                var model = common.BindModel(parse);
-                var fluid = FluidResolver.ReadFile(path);
-                check = FluidCheck.Run(fluid, model.For(fluid));
-                output.Emit(io, parse, format == OutputFormat.Json ? Json(path, check) : Table(path, check), "the check report");
+                var request = options.Bind(parse);
+                check = FluidCheck.Run(request.Fluid, request.Model.For(request.Fluid));
+                options.Out.Emit(io, parse, request.Format == OutputFormat.Json ? Json(request.Path, check) : Table(request.Path, check), "the check report");
             });
             // The report is the result either way; an inconsistency found in it fails the run
             // (exit 8, as a failed audit check), named on one stderr line, so a script can gate on it.
@@ -128,5 +122,45 @@ internal static class FluidsCheckCommand
             json.WriteBoolean("has_ideal_gas_heat_capacity", check.Fluid.IdealGasHeatCapacity is not null);
             json.WriteEndObject();
         });
+    }
+}
+
+/// <summary>The checked inputs of <c>fluids check</c>.</summary>
+/// <param name="Path">The fluid file as given.</param>
+/// <param name="Fluid">The fluid read from it (validated).</param>
+/// <param name="Model">The model the data is checked against.</param>
+/// <param name="Format">The report format (table or JSON; CSV gives the table).</param>
+internal sealed record FluidsCheckRequest(string Path, Fluid Fluid, ModelChoice Model, OutputFormat Format);
+
+/// <summary>The options of <c>fluids check</c>, bound to a <see cref="FluidsCheckRequest"/>.</summary>
+internal sealed class FluidsCheckOptions
+{
+    /// <summary>FILE.</summary>
+    public Argument<string> File { get; } = new("FILE") { Description = "Path of the .fluid file to check" };
+
+    /// <summary>--eos, --alpha, --volume-shift, --format.</summary>
+    public CommonOptions Common { get; } = new();
+
+    /// <summary>--out.</summary>
+    public OutputOption Out { get; } = new();
+
+    /// <summary>Adds every option to the command.</summary>
+    public void AddTo(Command command)
+    {
+        command.Arguments.Add(File);
+        Common.AddTo(command, withEos: true, withUnits: false);
+        Out.AddTo(command);
+    }
+
+    /// <summary>The FILE argument as given (named in the failure line even when binding fails).</summary>
+    public string PathOf(ParseResult parse) => parse.GetValue(File)!;
+
+    /// <summary>Parses the options, then reads and validates the file.</summary>
+    public FluidsCheckRequest Bind(ParseResult parse)
+    {
+        var format = Common.OutputFormat(parse);
+        var model = Common.BindModel(parse);
+        string path = PathOf(parse);
+        return new FluidsCheckRequest(path, FluidResolver.ReadFile(path), model, format);
     }
 }
