@@ -28,10 +28,6 @@ internal sealed class DiagnosticsOption
     /// <summary>Adds the option to a command.</summary>
     public void AddTo(Command command) => command.Options.Add(_option);
 
-    /// <summary>Starts the clock and wraps the model in a counter when the option is given;
-    /// returns the model every later call must use.</summary>
-    public IResidualModel Begin(ParseResult parse, IResidualModel model) => Begin(Given(parse), model);
-
     /// <summary>Whether --diagnostics was given.</summary>
     public bool Given(ParseResult parse) => parse.GetValue(_option);
 
