@@ -127,6 +127,9 @@ public static class HouseStyle
     public static void FitTo(PlotModel model, int width, int height)
     {
         ArgumentNullException.ThrowIfNull(model);
+        // A layout bound, not a value correction: the accepted sizes (300–8000 px, checked by the
+        // plot command) would scale text by about 0.25–10 against 1200×800; between 0.6 and 2.5
+        // times the default it stays legible without crowding the data.
         double scale = Math.Clamp(Math.Min(width / (double)DefaultWidth, height / (double)DefaultHeight), 0.6, 2.5);
         model.DefaultFontSize = BaseFontSize * scale;
         model.TitleFontSize = FitText(model.Title, BaseTitleFontSize * scale, width);

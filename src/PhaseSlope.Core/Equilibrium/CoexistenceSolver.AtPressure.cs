@@ -64,9 +64,10 @@ public sealed partial class CoexistenceSolver
 
         if (point is null)
         {
-            if (pressure < BottomPressure())
+            double bottom = BottomPressure();
+            if (pressure < bottom)
             {
-                throw BelowBottom(pressure);
+                throw BelowBottom(pressure, bottom);
             }
 
             throw new ConvergenceException(
@@ -75,7 +76,7 @@ public sealed partial class CoexistenceSolver
 
         if (point.Temperature < MinimumTemperature * (1 - BoundaryRoundingTolerance))
         {
-            throw BelowBottom(pressure);
+            throw BelowBottom(pressure, BottomPressure());
         }
 
         return point;
@@ -87,9 +88,10 @@ public sealed partial class CoexistenceSolver
 
     private double BottomPressure() => AtTemperature(MinimumTemperature).Pressure;
 
-    private InvalidInputException BelowBottom(double pressure)
+    /// <summary>The refusal of a pressure below <paramref name="bottom"/>, the saturation
+    /// pressure at the lowest valid temperature (solved once by the caller).</summary>
+    private InvalidInputException BelowBottom(double pressure, double bottom)
     {
-        double bottom = BottomPressure();
         var (given, limit) = Preconditions.Apart(pressure, bottom);
         return new InvalidInputException("pressure", pressure,
             $"pressure {given} Pa is below the saturation pressure {limit} Pa at the lowest valid temperature {Preconditions.Format(MinimumTemperature)} K");

@@ -148,6 +148,8 @@ internal static class CubicRoots
         {
             // Three real roots: y = 2√(−p/3)·cos(θ/3 − 2πk/3).
             double m = Math.Sqrt(-p3);
+            // disc < 0 means q2² < (−p/3)³, so |q2|/m³ < 1 exactly; the clamp only absorbs the
+            // last-bit rounding of that ratio next to a double root, never a wrong input.
             double cos = Math.Clamp(-q2 / (m * m * m), -1, 1);
             double theta = Math.Acos(cos) / 3;
             double y0 = 2 * m * Math.Cos(theta);
