@@ -32,7 +32,7 @@ internal static class CliHarness
         var result = Run(args);
         Assert.True(result.ExitCode == 0, result.ToString());
         Assert.True(result.Stderr.Length == 0, result.ToString());
-        using var document = JsonDocument.Parse(result.Stdout);
+        using var document = StrictJson.Parse(result.Stdout);
         return document.RootElement.Clone();
     }
 

@@ -19,103 +19,24 @@ internal static class AuditCommand
     /// <summary>Builds the command; its action writes to <paramref name="io"/>.</summary>
     public static Command Create(CliIo io)
     {
-        var form = new Option<string>("--form") { Description = $"Printed form: {string.Join(", ", PublishedCorrelation.FormIds)}", Required = true };
-        var coefficients = new Option<string>("--coefficients") { Description = "Coefficients as printed, comma-separated (A,B,C for antoine and kirchhoff, A,B for clausius-clapeyron, A,B,C,D for riedel); bare numbers in the printed form's own units", Required = true };
-        var logBase = new Option<string>("--log-base") { Description = "Logarithm of the printed form: 10 or e (omit to detect)" };
-        var pressureUnit = new Option<string>("--correlation-pressure-unit") { Description = "Pressure unit of the printed form: Pa, kPa, MPa, bar, mmHg (conventional, 133.322387415 Pa), torr, atm, psi (omit to detect; detection never picks torr)" };
-        var temperatureUnit = new Option<string>("--correlation-temperature-unit") { Description = "Temperature of the printed form: K or degC (degC for antoine only; omit to detect)" };
-        var range = new Option<string>("--range") { Description = "Stated range TMIN,TMAX (bare numbers in --correlation-temperature-unit if given, else K; or with units, e.g. \"1 degC,100 degC\")" };
-        var data = new Option<string>("--data") { Description = "CSV file of measured vapour pressures with units in the headers (see docs/data-files.md)" };
-        var fluid = new Option<string>("--fluid") { Description = "Catalog fluid or fluid file: normal boiling point, Tc and the model's vapour pressure to test against" };
-        var against = new Option<string>("--against") { Description = "Form of a second correlation to compare with" };
-        var coefficients2 = new Option<string>("--coefficients2") { Description = "Coefficients of the second correlation, as printed (bare numbers in its own convention: --log-base2, --correlation-pressure-unit2, --correlation-temperature-unit2)" };
-        var logBase2 = new Option<string>("--log-base2") { Description = "Log base of the second correlation (default: the first's)" };
-        var pressureUnit2 = new Option<string>("--correlation-pressure-unit2") { Description = "Pressure unit of the second correlation (default: the first's)" };
-        var temperatureUnit2 = new Option<string>("--correlation-temperature-unit2") { Description = "Temperature unit of the second correlation (default: the first's)" };
-        var threshold = new Option<string>("--threshold") { Description = "Difference above which the two correlations disagree (bare number: percent; default 1)" };
-        var format = new Option<string>("--format") { Description = "Output format: table or json", DefaultValueFactory = _ => "table" };
-        var common = new CommonOptions();
-        var eos = common.Eos;
-        eos.Description += "; the model whose vapour pressure --fluid's checks use (needs --fluid)";
+        var options = new AuditOptions();
         var command = new Command("audit", "Audit a published vapour-pressure correlation in its own convention: detect or confirm log base and units, and check it; exit 8 when a check fails");
-        var output = new OutputOption();
-        foreach (var o in new Option[] { form, coefficients, logBase, pressureUnit, temperatureUnit, range, data, fluid, against, coefficients2, logBase2, pressureUnit2, temperatureUnit2, threshold, format, eos, output.Option })
-        {
-            command.Options.Add(o);
-        }
-
+        options.AddTo(command);
         command.SetAction(parse =>
         {
             AuditReport? report = null;
             int code = io.Guard(() =>
             {
-                string fmt = (parse.GetValue(format) ?? "table").ToLowerInvariant();
-                if (fmt is not ("table" or "json"))
-                {
-                    throw new UsageException($"--format: unknown format '{fmt}' (use table or json)");
-                }
-
-                var correlation = Correlation(parse.GetValue(form)!, parse.GetValue(coefficients)!, "--form", "--coefficients");
-                var lb = parse.GetValue(logBase) is string b ? Base(b, "--log-base") : (LogBase?)null;
-                var pu = parse.GetValue(pressureUnit) is string p ? Pressure(p, "--correlation-pressure-unit") : (PublishedPressureUnit?)null;
-                var tu = parse.GetValue(temperatureUnit) is string t ? Temperature(t, "--correlation-temperature-unit", correlation) : (PublishedTemperatureUnit?)null;
-                (double, double)? tRange = parse.GetValue(range) is string r ? Range(r, tu) : null;
-                PublishedCorrelation? second = null;
-                if (parse.GetValue(against) is string a)
-                {
-                    second = Correlation(a, parse.GetValue(coefficients2) ?? throw new UsageException("--against: needs --coefficients2"), "--against", "--coefficients2");
-                }
-                else if (parse.GetValue(coefficients2) is not null || parse.GetValue(logBase2) is not null || parse.GetValue(pressureUnit2) is not null || parse.GetValue(temperatureUnit2) is not null || parse.GetValue(threshold) is not null)
-                {
-                    throw new UsageException("--coefficients2, --log-base2, --correlation-pressure-unit2, --correlation-temperature-unit2 and --threshold need --against");
-                }
-
-                double limit = 0.01;
-                if (parse.GetValue(threshold) is string th)
-                {
-                    limit = double.TryParse(th, NumberStyles.Float, CultureInfo.InvariantCulture, out double v) && double.IsFinite(v) && v > 0 && v < 100
-                        ? v / 100 : throw new UsageException($"--threshold: '{th}' is not a percentage between 0 and 100");
-                }
-
-                // --eos is read (and checked) before the fluid; it chooses the model the fluid's checks use.
-                var kind = common.ModelKind(parse);
-                if (CommonOptions.Given(parse, eos) && parse.GetValue(fluid) is null)
-                {
-                    throw new UsageException("--eos: needs --fluid (the model's vapour pressure is computed for that fluid)");
-                }
-
-                var theFluid = parse.GetValue(fluid) is string f ? FluidResolver.Resolve(f) : null;
-                var dataPoints = parse.GetValue(data) is string path ? ReadData(path) : null;
-                if (tRange is null && dataPoints is null && theFluid is null)
-                {
-                    throw new UsageException("audit: give --range, --data or --fluid (there is no temperature range to audit)");
-                }
-
-                var solver = theFluid is null ? null : new CoexistenceSolver(Core.Models.CubicModel.For(kind, theFluid), CoexistenceSolver.LowestValidTemperature(theFluid));
-                report = CorrelationAuditor.Audit(new AuditRequest
-                {
-                    Correlation = correlation,
-                    LogBase = lb,
-                    PressureUnit = pu,
-                    TemperatureUnit = tu,
-                    Range = tRange,
-                    Data = dataPoints,
-                    Fluid = theFluid,
-                    Solver = solver,
-                    Against = second,
-                    AgainstLogBase = parse.GetValue(logBase2) is string b2 ? Base(b2, "--log-base2") : null,
-                    AgainstPressureUnit = parse.GetValue(pressureUnit2) is string p2 ? Pressure(p2, "--correlation-pressure-unit2") : null,
-                    AgainstTemperatureUnit = parse.GetValue(temperatureUnit2) is string t2 && second is not null ? Temperature(t2, "--correlation-temperature-unit2", second) : null,
-                    AgainstThreshold = limit,
-                });
-                output.Emit(io, parse, fmt == "json" ? Json(report, solver?.Model.Identity) : Table(report), "the audit report");
+                var run = options.Bind(parse);
+                report = CorrelationAuditor.Audit(run.Request);
+                options.Out.Emit(io, parse, run.Format == OutputFormat.Json ? Json(report, run.Request.Solver?.Model.Identity) : Table(report), "the audit report");
             });
             return code == ExitCodes.Success && report is { Failed: true } ? ExitCodes.AuditFailed : code;
         });
         return command;
     }
 
-    private static PublishedCorrelation Correlation(string formText, string coefficientText, string formOption, string coefficientOption)
+    internal static PublishedCorrelation Correlation(string formText, string coefficientText, string formOption, string coefficientOption)
     {
         string id = formText.Trim().ToLowerInvariant();
         if (!PublishedCorrelation.FormIds.Contains(id))
@@ -136,16 +57,16 @@ internal static class AuditCommand
             : throw new UsageException($"{coefficientOption}: the {id} form takes {expected} coefficients, got {values.Count}");
     }
 
-    private static LogBase Base(string text, string option)
+    internal static LogBase Base(string text, string option)
         => PublishedConvention.TryParseLogBase(text, out var b) ? b : throw new UsageException($"{option}: unknown log base '{text}' (use 10 or e)");
 
-    private static PublishedPressureUnit Pressure(string text, string option)
+    internal static PublishedPressureUnit Pressure(string text, string option)
         => PublishedConvention.TryParsePressureUnit(text, out var u) ? u : throw new UsageException(
             UnitTable.TryFind(text, out _, Dimension.Pressure)
                 ? $"{option}: pressure unit '{DataFileException.OneLine(text.Trim())}' is not offered for published correlations (use Pa, kPa, MPa, bar, mmHg, torr, atm or psi)"
                 : $"{option}: {DataFileException.OneLine(UnitTable.UnknownMessage(text, "pressure", Dimension.Pressure))}");
 
-    private static PublishedTemperatureUnit Temperature(string text, string option, PublishedCorrelation correlation)
+    internal static PublishedTemperatureUnit Temperature(string text, string option, PublishedCorrelation correlation)
     {
         if (!PublishedConvention.TryParseTemperatureUnit(text, out var u))
         {
@@ -159,7 +80,7 @@ internal static class AuditCommand
             : u;
     }
 
-    private static (double, double) Range(string text, PublishedTemperatureUnit? unit)
+    internal static (double, double) Range(string text, PublishedTemperatureUnit? unit)
     {
         string[] parts = text.Split(',');
         if (parts.Length != 2)
@@ -177,26 +98,6 @@ internal static class AuditCommand
         double lo = Parse(parts[0]);
         double hi = Parse(parts[1]);
         return hi > lo ? (lo, hi) : throw new UsageException($"--range: TMIN ({NumberText.Table(lo)} K) must be below TMAX ({NumberText.Table(hi)} K)");
-    }
-
-    private static List<VapourPressurePoint> ReadData(string path)
-    {
-        IReadOnlyList<VapourPressureRecord> records;
-        try
-        {
-            using var reader = new StreamReader(BoundedInput.Open(path, BoundedInput.DataFileLimit));
-            records = VapourPressureCsv.Read(reader, path, new VapourPressureCsvOptions());
-        }
-        catch (Exception ex) when (ex is FileNotFoundException or DirectoryNotFoundException)
-        {
-            throw new DataFileException(path, null, null, "data file not found", ex);
-        }
-        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException)
-        {
-            throw new DataFileException(path, null, null, $"cannot read data file: {ex.Message}", ex);
-        }
-
-        return [.. records.Select(r => new VapourPressurePoint(r.Temperature, r.Pressure, r.StandardUncertainty, r.Weight))];
     }
 
     private static string Severity(AuditSeverity s) => s switch { AuditSeverity.Pass => "pass", AuditSeverity.Warn => "warn", _ => "fail" };
@@ -329,5 +230,146 @@ internal static class AuditCommand
         w.WriteString("pressure_unit", PublishedConvention.Symbol(c.PressureUnit));
         w.WriteString("temperature_unit", PublishedConvention.Symbol(c.TemperatureUnit));
         w.WriteEndObject();
+    }
+}
+
+/// <summary>The checked inputs of <c>audit</c>: the core's request and the output format.</summary>
+/// <param name="Request">What to audit and against what.</param>
+/// <param name="Format">Table or JSON.</param>
+internal sealed record AuditRun(AuditRequest Request, OutputFormat Format);
+
+/// <summary>The options of <c>audit</c>, bound to an <see cref="AuditRun"/>.</summary>
+internal sealed class AuditOptions
+{
+    /// <summary>--form.</summary>
+    public Option<string> Form { get; } = new("--form") { Description = $"Printed form: {string.Join(", ", PublishedCorrelation.FormIds)}", Required = true };
+
+    /// <summary>--coefficients.</summary>
+    public Option<string> Coefficients { get; } = new("--coefficients") { Description = "Coefficients as printed, comma-separated (A,B,C for antoine and kirchhoff, A,B for clausius-clapeyron, A,B,C,D for riedel); bare numbers in the printed form's own units", Required = true };
+
+    /// <summary>--log-base.</summary>
+    public Option<string> LogBase { get; } = new("--log-base") { Description = "Logarithm of the printed form: 10 or e (omit to detect)" };
+
+    /// <summary>--correlation-pressure-unit.</summary>
+    public Option<string> PressureUnit { get; } = new("--correlation-pressure-unit") { Description = "Pressure unit of the printed form: Pa, kPa, MPa, bar, mmHg (conventional, 133.322387415 Pa), torr, atm, psi (omit to detect; detection never picks torr)" };
+
+    /// <summary>--correlation-temperature-unit.</summary>
+    public Option<string> TemperatureUnit { get; } = new("--correlation-temperature-unit") { Description = "Temperature of the printed form: K or degC (degC for antoine only; omit to detect)" };
+
+    /// <summary>--range.</summary>
+    public Option<string> Range { get; } = new("--range") { Description = "Stated range TMIN,TMAX (bare numbers in --correlation-temperature-unit if given, else K; or with units, e.g. \"1 degC,100 degC\")" };
+
+    /// <summary>--data.</summary>
+    public Option<string> Data { get; } = new("--data") { Description = "CSV file of measured vapour pressures with units in the headers (see docs/data-files.md)" };
+
+    /// <summary>--fluid.</summary>
+    public Option<string> Fluid { get; } = new("--fluid") { Description = "Catalog fluid or fluid file: normal boiling point, Tc and the model's vapour pressure to test against" };
+
+    /// <summary>--against.</summary>
+    public Option<string> Against { get; } = new("--against") { Description = "Form of a second correlation to compare with" };
+
+    /// <summary>--coefficients2.</summary>
+    public Option<string> Coefficients2 { get; } = new("--coefficients2") { Description = "Coefficients of the second correlation, as printed (bare numbers in its own convention: --log-base2, --correlation-pressure-unit2, --correlation-temperature-unit2)" };
+
+    /// <summary>--log-base2.</summary>
+    public Option<string> LogBase2 { get; } = new("--log-base2") { Description = "Log base of the second correlation (default: the first's)" };
+
+    /// <summary>--correlation-pressure-unit2.</summary>
+    public Option<string> PressureUnit2 { get; } = new("--correlation-pressure-unit2") { Description = "Pressure unit of the second correlation (default: the first's)" };
+
+    /// <summary>--correlation-temperature-unit2.</summary>
+    public Option<string> TemperatureUnit2 { get; } = new("--correlation-temperature-unit2") { Description = "Temperature unit of the second correlation (default: the first's)" };
+
+    /// <summary>--threshold.</summary>
+    public Option<string> Threshold { get; } = new("--threshold") { Description = "Difference above which the two correlations disagree (bare number: percent; default 1)" };
+
+    /// <summary>--format (table or json; there is no audit CSV).</summary>
+    public Option<string> Format { get; } = new("--format") { Description = "Output format: table or json", DefaultValueFactory = _ => "table" };
+
+    /// <summary>--eos.</summary>
+    public CommonOptions Common { get; } = new();
+
+    /// <summary>--out.</summary>
+    public OutputOption Out { get; } = new();
+
+    /// <summary>Adds every option to the command.</summary>
+    public void AddTo(Command command)
+    {
+        Common.Eos.Description += "; the model whose vapour pressure --fluid's checks use (needs --fluid)";
+        foreach (var o in new Option[] { Form, Coefficients, LogBase, PressureUnit, TemperatureUnit, Range, Data, Fluid, Against, Coefficients2, LogBase2, PressureUnit2, TemperatureUnit2, Threshold, Format, Common.Eos, Out.Option })
+        {
+            command.Options.Add(o);
+        }
+    }
+
+    /// <summary>Parses and checks every option, then reads the fluid and the data file.</summary>
+    public AuditRun Bind(ParseResult parse)
+    {
+        string fmt = (parse.GetValue(Format) ?? "table").Trim().ToLowerInvariant();
+        var format = fmt switch
+        {
+            "table" => OutputFormat.Table,
+            "json" => OutputFormat.Json,
+            _ => throw new UsageException($"--format: unknown format '{fmt}' (use table or json)"),
+        };
+
+        var correlation = AuditCommand.Correlation(parse.GetValue(Form)!, parse.GetValue(Coefficients)!, "--form", "--coefficients");
+        var logBase = parse.GetValue(LogBase) is string b ? AuditCommand.Base(b, "--log-base") : (LogBase?)null;
+        var pressureUnit = parse.GetValue(PressureUnit) is string p ? AuditCommand.Pressure(p, "--correlation-pressure-unit") : (PublishedPressureUnit?)null;
+        var temperatureUnit = parse.GetValue(TemperatureUnit) is string t ? AuditCommand.Temperature(t, "--correlation-temperature-unit", correlation) : (PublishedTemperatureUnit?)null;
+        (double, double)? range = parse.GetValue(Range) is string r ? AuditCommand.Range(r, temperatureUnit) : null;
+        PublishedCorrelation? second = null;
+        if (parse.GetValue(Against) is string a)
+        {
+            second = AuditCommand.Correlation(a, parse.GetValue(Coefficients2) ?? throw new UsageException("--against: needs --coefficients2"), "--against", "--coefficients2");
+        }
+        else if (new[] { Coefficients2, LogBase2, PressureUnit2, TemperatureUnit2, Threshold }.Any(o => parse.GetValue(o) is not null))
+        {
+            throw new UsageException("--coefficients2, --log-base2, --correlation-pressure-unit2, --correlation-temperature-unit2 and --threshold need --against");
+        }
+
+        double limit = 0.01;
+        if (parse.GetValue(Threshold) is string th)
+        {
+            limit = double.TryParse(th, NumberStyles.Float, CultureInfo.InvariantCulture, out double v) && double.IsFinite(v) && v > 0 && v < 100
+                ? v / 100 : throw new UsageException($"--threshold: '{th}' is not a percentage between 0 and 100");
+        }
+
+        var againstLogBase = parse.GetValue(LogBase2) is string b2 ? AuditCommand.Base(b2, "--log-base2") : (LogBase?)null;
+        var againstPressureUnit = parse.GetValue(PressureUnit2) is string p2 ? AuditCommand.Pressure(p2, "--correlation-pressure-unit2") : (PublishedPressureUnit?)null;
+        var againstTemperatureUnit = parse.GetValue(TemperatureUnit2) is string t2 && second is not null ? AuditCommand.Temperature(t2, "--correlation-temperature-unit2", second) : (PublishedTemperatureUnit?)null;
+
+        // --eos is read (and checked) before the fluid; it chooses the model the fluid's checks use.
+        var kind = Common.ModelKind(parse);
+        if (CommonOptions.Given(parse, Common.Eos) && parse.GetValue(Fluid) is null)
+        {
+            throw new UsageException("--eos: needs --fluid (the model's vapour pressure is computed for that fluid)");
+        }
+
+        if (range is null && parse.GetValue(Data) is null && parse.GetValue(Fluid) is null)
+        {
+            throw new UsageException("audit: give --range, --data or --fluid (there is no temperature range to audit)");
+        }
+
+        _ = Out.Path(parse);
+        var fluid = parse.GetValue(Fluid) is string f ? FluidResolver.Resolve(f) : null;
+        var data = parse.GetValue(Data) is string path ? CorrelationOptions.ReadDataFile(path, null, null) : null;
+        var solver = fluid is null ? null : new CoexistenceSolver(Core.Models.CubicModel.For(kind, fluid), CoexistenceSolver.LowestValidTemperature(fluid));
+        return new AuditRun(new AuditRequest
+        {
+            Correlation = correlation,
+            LogBase = logBase,
+            PressureUnit = pressureUnit,
+            TemperatureUnit = temperatureUnit,
+            Range = range,
+            Data = data,
+            Fluid = fluid,
+            Solver = solver,
+            Against = second,
+            AgainstLogBase = againstLogBase,
+            AgainstPressureUnit = againstPressureUnit,
+            AgainstTemperatureUnit = againstTemperatureUnit,
+            AgainstThreshold = limit,
+        }, format);
     }
 }

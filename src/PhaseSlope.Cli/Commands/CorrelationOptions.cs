@@ -115,10 +115,14 @@ internal sealed class CorrelationOptions
     /// even when auto selection settles on a form that does not use them).</summary>
     public void RequireDataBelowCriticalPoint(ParseResult parse, Fluid? fluid, IReadOnlyList<VapourPressurePoint> data)
     {
-        double? tc = fluid?.CriticalTemperature.Value ?? (parse.GetValue(CriticalTemperature) is string t ? QuantityParser.ParseTemperature(t, "--tc") : null);
-        double? pc = fluid?.CriticalPressure.Value ?? (parse.GetValue(CriticalPressure) is string p ? QuantityParser.ParsePressure(p, "--pc") : null);
+        var (tc, pc) = CriticalPoint(parse, fluid);
         VapourPressureFitter.RequireBelowCriticalPoint(data, tc, pc);
     }
+
+    /// <summary>Tc in K and Pc in Pa from the fluid, or from --tc and --pc; null where neither gives one.</summary>
+    public (double? Temperature, double? Pressure) CriticalPoint(ParseResult parse, Fluid? fluid)
+        => (fluid?.CriticalTemperature.Value ?? (parse.GetValue(CriticalTemperature) is string t ? QuantityParser.ParseTemperature(t, "--tc") : null),
+            fluid?.CriticalPressure.Value ?? (parse.GetValue(CriticalPressure) is string p ? QuantityParser.ParsePressure(p, "--pc") : null));
 
     /// <summary>The candidate forms: the one named, or every form for auto.</summary>
     /// <param name="parse">The parsed command line.</param>
@@ -141,8 +145,7 @@ internal sealed class CorrelationOptions
             throw new UsageException($"{(parse.GetValue(Fluid) is null ? "--tc" : "--fluid")}: the {id} form does not use a critical point; leave it out, or choose a form that does ({string.Join(", ", CriticalForms)})");
         }
 
-        double? tc = fluid?.CriticalTemperature.Value ?? (parse.GetValue(CriticalTemperature) is string t ? QuantityParser.ParseTemperature(t, "--tc") : null);
-        double? pc = fluid?.CriticalPressure.Value ?? (parse.GetValue(CriticalPressure) is string p ? QuantityParser.ParsePressure(p, "--pc") : null);
+        var (tc, pc) = CriticalPoint(parse, fluid);
         double? omega = fluid?.AcentricFactor.Value;
         var forms = new List<VapourPressureForm>();
         foreach (string candidate in auto ? FormIds : [id])

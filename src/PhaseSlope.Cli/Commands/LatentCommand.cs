@@ -10,122 +10,207 @@ namespace PhaseSlope.Cli.Commands;
 /// Clapeyron equation, with its uncertainty from the fit.</summary>
 internal static class LatentCommand
 {
-    /// <summary>Default number of temperatures when a range is given.</summary>
-    public const int DefaultPoints = 11;
-
     /// <summary>Builds the command; its action writes to <paramref name="io"/>.</summary>
     public static Command Create(CliIo io)
     {
-        var options = new CorrelationOptions("auto");
-        var common = new CommonOptions();
-        var volume = new Option<string>("--volume-model")
-        {
-            Description = "Volume change: ideal-gas (vapour ideal, liquid neglected), eos (the model's compressibility change for --fluid; the default with --fluid), "
-                + "haggenmacher (corresponding states from Tc and Pc; the default with --tc/--pc only)",
-        };
-        var temperature = new Option<string>("--temperature", "-T") { Description = "One temperature, e.g. 300 K or 26.85 degC (bare number: K)" };
-        var from = new Option<string>("--from") { Description = "First temperature of a range (bare number: K; default: the lowest data temperature)" };
-        var to = new Option<string>("--to") { Description = "Last temperature of a range (bare number: K; default: the highest data temperature)" };
-        var points = new Option<int>("--points", "-n") { Description = $"Temperatures in the range, 2 to 10000 (default {DefaultPoints})", DefaultValueFactory = _ => DefaultPoints };
+        var options = new LatentOptions();
         var command = new Command("latent", "Enthalpy of vaporization from P-T data via Clapeyron, dH = T dv dP/dT, with a standard uncertainty");
         options.AddTo(command);
-        command.Options.Add(volume);
-        command.Options.Add(temperature);
-        command.Options.Add(from);
-        command.Options.Add(to);
-        command.Options.Add(points);
-        // --eos and --alpha choose the model behind --volume-model eos; a volume shift moves both
-        // coexisting volumes alike and cannot change a latent heat, so it is not offered.
-        command.Options.Add(common.Eos);
-        command.Options.Add(common.Alpha);
-        common.AddTo(command, withEos: false, withUnits: false); // the table is in K, kPa and J/mol
-        var output = new OutputOption();
-        output.AddTo(command);
         command.SetAction(parse => io.Guard(() =>
         {
-            var format = common.OutputFormat(parse);
-            var fluid = options.FluidOf(parse);
-            int n = parse.GetValue(points);
-            if (n < 2 || n > 10_000)
-            {
-                throw new UsageException($"--points: must be between 2 and 10000, got {n}");
-            }
-
-            if (parse.GetValue(temperature) is not null && (parse.GetValue(from) is not null || parse.GetValue(to) is not null))
-            {
-                throw new UsageException("latent: give --temperature or --from/--to, not both");
-            }
-
-            if (parse.GetValue(temperature) is not null && CommonOptions.Given(parse, points))
-            {
-                throw new UsageException("--points: applies to a range (--from/--to or the data range), not to one --temperature");
-            }
-
-            var modelChoice = common.BindModel(parse);
-
-            bool criticalGiven = parse.GetValue(options.CriticalTemperature) is not null && parse.GetValue(options.CriticalPressure) is not null;
-            string volumeText = parse.GetValue(volume) ?? (fluid is not null ? "eos" : criticalGiven ? "haggenmacher" : "ideal-gas");
-            var model = volumeText.ToLowerInvariant() switch
-            {
-                "ideal-gas" => VolumeChangeModel.IdealGas,
-                "eos" => VolumeChangeModel.EquationOfState,
-                "haggenmacher" => VolumeChangeModel.Haggenmacher,
-                _ => throw new UsageException($"--volume-model: unknown model '{volumeText}' (use ideal-gas, eos or haggenmacher)"),
-            };
-            if (model == VolumeChangeModel.EquationOfState && fluid is null)
-            {
-                throw new UsageException("--volume-model eos: needs --fluid (the coexisting volumes come from its model)");
-            }
-
-            if (model == VolumeChangeModel.Haggenmacher && fluid is null && !criticalGiven)
-            {
-                throw new UsageException("--volume-model haggenmacher: needs --fluid, or --tc and --pc");
-            }
-
-            if (model != VolumeChangeModel.EquationOfState)
-            {
-                foreach (var option in new Option[] { common.Eos, common.Alpha })
-                {
-                    if (CommonOptions.Given(parse, option))
-                    {
-                        throw new UsageException($"{option.Name}: chooses the model of --volume-model eos only (the volume model here is {FitWriter.VolumeModelId(model)})");
-                    }
-                }
-            }
-
-            // Options first, then the data file: a bad --form is a usage error whatever the file holds.
-            var forms = options.Forms(parse, fluid, out bool auto, criticalPointUsedElsewhere: model != VolumeChangeModel.IdealGas);
-            var data = options.ReadData(parse);
-            options.RequireDataBelowCriticalPoint(parse, fluid, data);
-            var fits = CorrelationOptions.Fit(forms, auto, data);
+            var request = options.Bind(parse);
+            var fits = CorrelationOptions.Fit(request.Forms, request.Auto, request.Data);
             var fit = fits[0];
-            var solver = fluid is not null && model == VolumeChangeModel.EquationOfState
-                ? new CoexistenceSolver(modelChoice.For(fluid), CoexistenceSolver.LowestValidTemperature(fluid))
-                : null;
-            double? tc = fluid?.CriticalTemperature.Value ?? (criticalGiven ? QuantityParser.ParseTemperature(parse.GetValue(options.CriticalTemperature)!, "--tc") : null);
-            double? pc = fluid?.CriticalPressure.Value ?? (criticalGiven ? QuantityParser.ParsePressure(parse.GetValue(options.CriticalPressure)!, "--pc") : null);
-            var estimator = new LatentHeatEstimator(fit, model, solver, tc, pc);
-
-            double[] temperatures;
-            if (parse.GetValue(temperature) is string tText)
-            {
-                temperatures = [QuantityParser.ParseTemperature(tText, "--temperature")];
-            }
-            else
-            {
-                double start = parse.GetValue(from) is string f ? QuantityParser.ParseTemperature(f, "--from") : fit.MinimumTemperature;
-                double end = parse.GetValue(to) is string e ? QuantityParser.ParseTemperature(e, "--to") : fit.MaximumTemperature;
-                if (!(start < end))
-                {
-                    throw new UsageException($"--from ({NumberText.Table(start)} K) must be below --to ({NumberText.Table(end)} K)");
-                }
-
-                temperatures = [.. Enumerable.Range(0, n).Select(i => i == n - 1 ? end : start + (end - start) * i / (n - 1))];
-            }
-
-            var results = temperatures.Select(estimator.At).ToArray();
-            output.Emit(io, parse, FitWriter.Latent(fit, model, results, fits, format, solver?.Model.Identity), $"{results.Count()} latent heats");
+            var estimator = new LatentHeatEstimator(fit, request.VolumeModel, request.Solver, request.CriticalTemperature, request.CriticalPressure);
+            var results = request.Temperatures.Resolve(fit.MinimumTemperature, fit.MaximumTemperature).Select(estimator.At).ToArray();
+            options.Out.Emit(io, parse, FitWriter.Latent(fit, request.VolumeModel, results, fits, request.Format, request.Solver?.Model.Identity), $"{results.Length} latent heats");
         }));
         return command;
+    }
+}
+
+/// <summary>The temperatures <c>latent</c> reports at: one, or <see cref="Count"/> evenly spaced
+/// from <see cref="From"/> to <see cref="To"/>, either end defaulting to the data's.</summary>
+/// <param name="Single">The one temperature in K (--temperature), or null for a range.</param>
+/// <param name="From">The first temperature in K (--from), or null for the lowest data temperature.</param>
+/// <param name="To">The last temperature in K (--to), or null for the highest data temperature.</param>
+/// <param name="Count">How many temperatures in the range.</param>
+internal sealed record LatentTemperatures(double? Single, double? From, double? To, int Count)
+{
+    /// <summary>The temperatures in K, the range's open ends taken from the data.</summary>
+    /// <exception cref="UsageException">The range is empty.</exception>
+    public double[] Resolve(double dataMinimum, double dataMaximum)
+    {
+        if (Single is double t)
+        {
+            return [t];
+        }
+
+        double start = From ?? dataMinimum;
+        double end = To ?? dataMaximum;
+        if (!(start < end))
+        {
+            throw new UsageException($"{(From is null ? "the lowest data temperature" : "--from")} ({NumberText.Table(start)} K) must be below "
+                + $"{(To is null ? "the highest data temperature" : "--to")} ({NumberText.Table(end)} K)");
+        }
+
+        return [.. Enumerable.Range(0, Count).Select(i => i == Count - 1 ? end : start + (end - start) * i / (Count - 1))];
+    }
+}
+
+/// <summary>The checked inputs of <c>latent</c>.</summary>
+/// <param name="Forms">The candidate forms (one, or every form the inputs support for auto).</param>
+/// <param name="Auto">Whether --form is auto.</param>
+/// <param name="Data">The measured points, below the critical point when one is given.</param>
+/// <param name="VolumeModel">Where the volume change comes from.</param>
+/// <param name="Solver">The fluid's coexistence solver for the eos volume change, else null.</param>
+/// <param name="CriticalTemperature">Tc in K from the fluid or --tc, else null.</param>
+/// <param name="CriticalPressure">Pc in Pa from the fluid or --pc, else null.</param>
+/// <param name="Temperatures">Where to report.</param>
+/// <param name="Format">The output format (the table is in K, kPa and J/mol).</param>
+internal sealed record LatentRequest(
+    IReadOnlyList<VapourPressureForm> Forms,
+    bool Auto,
+    IReadOnlyList<VapourPressurePoint> Data,
+    VolumeChangeModel VolumeModel,
+    CoexistenceSolver? Solver,
+    double? CriticalTemperature,
+    double? CriticalPressure,
+    LatentTemperatures Temperatures,
+    OutputFormat Format);
+
+/// <summary>The options of <c>latent</c>, bound to a <see cref="LatentRequest"/>.</summary>
+internal sealed class LatentOptions
+{
+    /// <summary>Default number of temperatures when a range is given.</summary>
+    public const int DefaultPoints = 11;
+
+    /// <summary>DATA, --form, --fluid, --tc, --pc and the data units.</summary>
+    public CorrelationOptions Correlation { get; } = new("auto");
+
+    /// <summary>--eos, --alpha and --format.</summary>
+    public CommonOptions Common { get; } = new();
+
+    /// <summary>--out.</summary>
+    public OutputOption Out { get; } = new();
+
+    /// <summary>--volume-model.</summary>
+    public Option<string> Volume { get; } = new("--volume-model")
+    {
+        Description = "Volume change: ideal-gas (vapour ideal, liquid neglected), eos (the model's compressibility change for --fluid; the default with --fluid), "
+            + "haggenmacher (corresponding states from Tc and Pc; the default with --tc/--pc only)",
+    };
+
+    /// <summary>--temperature.</summary>
+    public Option<string> Temperature { get; } = new("--temperature", "-T") { Description = "One temperature, e.g. 300 K or 26.85 degC (bare number: K)" };
+
+    /// <summary>--from.</summary>
+    public Option<string> From { get; } = new("--from") { Description = "First temperature of a range (bare number: K; default: the lowest data temperature)" };
+
+    /// <summary>--to.</summary>
+    public Option<string> To { get; } = new("--to") { Description = "Last temperature of a range (bare number: K; default: the highest data temperature)" };
+
+    /// <summary>--points.</summary>
+    public Option<int> Points { get; } = new("--points", "-n") { Description = $"Temperatures in the range, 2 to 10000 (default {DefaultPoints})", DefaultValueFactory = _ => DefaultPoints };
+
+    /// <summary>Adds every option to the command.</summary>
+    public void AddTo(Command command)
+    {
+        Correlation.AddTo(command);
+        command.Options.Add(Volume);
+        command.Options.Add(Temperature);
+        command.Options.Add(From);
+        command.Options.Add(To);
+        command.Options.Add(Points);
+        // --eos and --alpha choose the model behind --volume-model eos; a volume shift moves both
+        // coexisting volumes alike and cannot change a latent heat, so it is not offered.
+        command.Options.Add(Common.Eos);
+        command.Options.Add(Common.Alpha);
+        Common.AddTo(command, withEos: false, withUnits: false); // the table is in K, kPa and J/mol
+        Out.AddTo(command);
+    }
+
+    /// <summary>Parses and checks every option (the temperatures included), then reads the data
+    /// file and checks it against the critical point.</summary>
+    public LatentRequest Bind(ParseResult parse)
+    {
+        var format = Common.OutputFormat(parse);
+        var fluid = Correlation.FluidOf(parse);
+        var temperatures = BindTemperatures(parse);
+        var modelChoice = Common.BindModel(parse);
+
+        bool criticalGiven = parse.GetValue(Correlation.CriticalTemperature) is not null && parse.GetValue(Correlation.CriticalPressure) is not null;
+        string volumeText = parse.GetValue(Volume) ?? (fluid is not null ? "eos" : criticalGiven ? "haggenmacher" : "ideal-gas");
+        var model = volumeText.Trim().ToLowerInvariant() switch
+        {
+            "ideal-gas" => VolumeChangeModel.IdealGas,
+            "eos" => VolumeChangeModel.EquationOfState,
+            "haggenmacher" => VolumeChangeModel.Haggenmacher,
+            _ => throw new UsageException($"--volume-model: unknown model '{volumeText}' (use ideal-gas, eos or haggenmacher)"),
+        };
+        if (model == VolumeChangeModel.EquationOfState && fluid is null)
+        {
+            throw new UsageException("--volume-model eos: needs --fluid (the coexisting volumes come from its model)");
+        }
+
+        if (model == VolumeChangeModel.Haggenmacher && fluid is null && !criticalGiven)
+        {
+            throw new UsageException("--volume-model haggenmacher: needs --fluid, or --tc and --pc");
+        }
+
+        if (model != VolumeChangeModel.EquationOfState)
+        {
+            foreach (var option in new Option[] { Common.Eos, Common.Alpha })
+            {
+                if (CommonOptions.Given(parse, option))
+                {
+                    throw new UsageException($"{option.Name}: chooses the model of --volume-model eos only (the volume model here is {FitWriter.VolumeModelId(model)})");
+                }
+            }
+        }
+
+        // Options first, then the data file: a bad --form is a usage error whatever the file holds.
+        var forms = Correlation.Forms(parse, fluid, out bool auto, criticalPointUsedElsewhere: model != VolumeChangeModel.IdealGas);
+        var data = Correlation.ReadData(parse);
+        Correlation.RequireDataBelowCriticalPoint(parse, fluid, data);
+        var solver = fluid is not null && model == VolumeChangeModel.EquationOfState
+            ? new CoexistenceSolver(modelChoice.For(fluid), CoexistenceSolver.LowestValidTemperature(fluid))
+            : null;
+        var (tc, pc) = Correlation.CriticalPoint(parse, fluid);
+        return new LatentRequest(forms, auto, data, model, solver, tc, pc, temperatures, format);
+    }
+
+    private LatentTemperatures BindTemperatures(ParseResult parse)
+    {
+        int n = parse.GetValue(Points);
+        if (n < 2 || n > 10_000)
+        {
+            throw new UsageException($"--points: must be between 2 and 10000, got {n}");
+        }
+
+        string? single = parse.GetValue(Temperature);
+        string? from = parse.GetValue(From);
+        string? to = parse.GetValue(To);
+        if (single is not null && (from is not null || to is not null))
+        {
+            throw new UsageException("latent: give --temperature or --from/--to, not both");
+        }
+
+        if (single is not null && CommonOptions.Given(parse, Points))
+        {
+            throw new UsageException("--points: applies to a range (--from/--to or the data range), not to one --temperature");
+        }
+
+        var temperatures = new LatentTemperatures(
+            single is null ? null : QuantityParser.ParseTemperature(single, "--temperature"),
+            from is null ? null : QuantityParser.ParseTemperature(from, "--from"),
+            to is null ? null : QuantityParser.ParseTemperature(to, "--to"),
+            n);
+        if (temperatures is { From: double f, To: double t } && !(f < t))
+        {
+            throw new UsageException($"--from ({NumberText.Table(f)} K) must be below --to ({NumberText.Table(t)} K)");
+        }
+
+        return temperatures;
     }
 }

@@ -45,7 +45,7 @@ public class AuditCommandTests
         var json = CliHarness.Run("audit", "--form", "antoine", "--coefficients", LangeWater, "--log-base", "10", "--correlation-pressure-unit", "mmHg", "--correlation-temperature-unit", "degC",
             "--range", "1,100", "--fluid", "water", "--against", "antoine", "--coefficients2", BridgemanWater, "--log-base2", "10", "--correlation-pressure-unit2", "bar", "--correlation-temperature-unit2", "K", "--format", "json");
         Assert.Equal(0, json.ExitCode);
-        using var doc = JsonDocument.Parse(json.Stdout);
+        using var doc = StrictJson.Parse(json.Stdout);
         var against = doc.RootElement.GetProperty("findings").EnumerateArray().Single(f => f.GetProperty("check").GetString() == "against");
         // The Bridgeman–Aldrich set is fitted over 304–333 K; extrapolated to 100 °C it drifts
         // 2.5 % from the Lange set, so the band of > 1 % disagreement lies at the hot end.
@@ -129,7 +129,7 @@ public class AuditCommandTests
         double shifted = 20.987605815602315 + Math.Log(1.1);
         var bad = CliHarness.Run(["audit", "--form", "antoine", "--coefficients", $"{shifted.ToString("R", System.Globalization.CultureInfo.InvariantCulture)},2931.3062947977137,-57.81410056619607", .. common]);
         Assert.Equal(8, bad.ExitCode);
-        using var doc = System.Text.Json.JsonDocument.Parse(bad.Stdout);
+        using var doc = StrictJson.Parse(bad.Stdout);
         var failed = doc.RootElement.GetProperty("findings").EnumerateArray().Single(f => f.GetProperty("check").GetString() == "data-deviation");
         Assert.Equal("fail", failed.GetProperty("severity").GetString());
     }

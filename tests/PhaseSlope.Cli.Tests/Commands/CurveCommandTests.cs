@@ -186,7 +186,7 @@ public class CurveCommandTests
 
         Assert.Equal(0, Run("curve", "ethane", "--points", "5", "--out", path).ExitCode);
 
-        using var document = JsonDocument.Parse(File.ReadAllText(path));
+        using var document = StrictJson.Parse(File.ReadAllText(path));
         Assert.Equal(5, document.RootElement.GetArrayLength());
         Assert.True(document.RootElement[4].GetProperty("critical").GetBoolean());
     }

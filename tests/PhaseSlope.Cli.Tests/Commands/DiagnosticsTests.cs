@@ -21,7 +21,7 @@ public class DiagnosticsTests
         Assert.Equal(0, diagnosed.ExitCode);
         Assert.Equal(plain.Stdout, diagnosed.Stdout);
         Assert.Single(diagnosed.StderrLines);
-        using var line = JsonDocument.Parse(diagnosed.StderrLines[0]);
+        using var line = StrictJson.Parse(diagnosed.StderrLines[0]);
         var root = line.RootElement;
         foreach (string key in Keys)
         {

@@ -52,7 +52,7 @@ public class LatentCommandTests
         Assert.Equal(["a", "b", "c", "d"], FitData.Names(json.GetProperty("parameters")));
         Assert.Equal("eos", json.GetProperty("volume_model").GetString());
         var points = Points(json);
-        Assert.Equal(LatentCommand.DefaultPoints, points.Length);
+        Assert.Equal(LatentOptions.DefaultPoints, points.Length);
         foreach (var point in points)
         {
             foreach (string key in PointKeys)

@@ -96,7 +96,7 @@ public class PhaseslopeProcessTests
 
         Assert.True(result.ExitCode == 0, result.ToString());
         Assert.Equal("", result.Stderr);
-        using var document = JsonDocument.Parse(result.Stdout);
+        using var document = StrictJson.Parse(result.Stdout);
         Assert.Equal("water", document.RootElement.GetProperty("fluid").GetString());
         Assert.Equal(CliHarness.RunText(args), result.Stdout);
     }

@@ -62,7 +62,7 @@ public class ToolProjectTests
 
         var result = ProcessRunner.Run(start, Timeout, "dotnet msbuild");
         Assert.True(result.ExitCode == 0, $"dotnet msbuild exit {result.ExitCode}: {result.Stdout} {result.Stderr}");
-        using var document = JsonDocument.Parse(result.Stdout);
+        using var document = StrictJson.Parse(result.Stdout);
         return document.RootElement.GetProperty("Properties").EnumerateObject()
             .ToDictionary(p => p.Name, p => p.Value.GetString() ?? "", StringComparer.Ordinal);
     }

@@ -71,7 +71,7 @@ public class NumberTextTests
     public void Render_GermanCulture_DotDecimalsAndInputsReadWithDot()
     {
         var json = RunIn("de-DE", ["coexist", "propane", "--temperature", "300.5", "--format", "json"]);
-        using var document = JsonDocument.Parse(json.Stdout);
+        using var document = StrictJson.Parse(json.Stdout);
         Assert.Equal(300.5, document.RootElement.GetProperty("temperature_K").GetDouble());
 
         var csv = RunIn("de-DE", ["curve", "propane", "--points", "3", "--format", "csv"]);

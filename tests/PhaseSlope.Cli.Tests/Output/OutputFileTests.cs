@@ -50,7 +50,7 @@ public class OutputFileTests
         Assert.Equal(["propane.fluid", "result.out"], folder.Entries());
         if (json)
         {
-            using var document = JsonDocument.Parse(File.ReadAllText(path));
+            using var document = StrictJson.Parse(File.ReadAllText(path));
         }
     }
 
@@ -72,7 +72,7 @@ public class OutputFileTests
             Assert.True(result.ExitCode is 0 or ExitCodes.AuditFailed, result.ToString());
             Assert.Equal("", result.Stdout);
             Assert.StartsWith("phaseslope: wrote ", Assert.Single(result.StderrLines), StringComparison.Ordinal);
-            using var document = JsonDocument.Parse(File.ReadAllText(path));
+            using var document = StrictJson.Parse(File.ReadAllText(path));
         }
     }
 
@@ -133,7 +133,7 @@ public class OutputFileTests
         Assert.NotNull(new FileInfo(folder.File("outer")).LinkTarget);
         Assert.NotNull(new FileInfo(folder.File("inner")).LinkTarget);
         Assert.Null(new FileInfo(target).LinkTarget);
-        using var document = JsonDocument.Parse(File.ReadAllText(target));
+        using var document = StrictJson.Parse(File.ReadAllText(target));
         Assert.Equal(300, document.RootElement.GetProperty("temperature_K").GetDouble());
         Assert.Equal(["inner", "outer", "target.json"], folder.Entries());
     }
