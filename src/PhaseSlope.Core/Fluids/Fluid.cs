@@ -1,3 +1,5 @@
+using PhaseSlope.Core.Models;
+
 namespace PhaseSlope.Core.Fluids;
 
 /// <summary>An immutable pure fluid: identity, critical point, acentric factor, molar mass and
@@ -50,6 +52,15 @@ public sealed record Fluid
     /// <summary>Fluid-specific alpha-function parameters from the literature (for example
     /// Twu or Mathias–Copeman constants fitted for one cubic model); empty when none are given.</summary>
     public IReadOnlyList<AlphaParameterSet> AlphaParameters { get; init; } = [];
+
+    /// <summary>The alpha function the model uses when none is chosen (<see cref="AlphaForm.Default"/>):
+    /// a tuned fluid names its tuned form here, so that its parameters are used wherever the fluid
+    /// is given; <see cref="AlphaForm.Default"/> (the model's own correlation in ω) when not set.</summary>
+    public AlphaForm PreferredAlpha { get; init; } = AlphaForm.Default;
+
+    /// <summary>How the fluid's tuned values were obtained (data file and checksum, date, method,
+    /// fit statistics), or null for a fluid that was not tuned.</summary>
+    public string? Provenance { get; init; }
 
     /// <summary>Free-text remarks from the fluid file, or null.</summary>
     public string? Remarks { get; init; }

@@ -1,3 +1,4 @@
+using PhaseSlope.Core.Models;
 using System.Globalization;
 using System.Text;
 using PhaseSlope.Core.Errors;
@@ -103,6 +104,17 @@ internal sealed partial class FluidFileParser
     private const string KeyAlphaTwuSrk = "alpha_twu_srk";
     private const string KeyAlphaMathiasCopemanPr = "alpha_mathias_copeman_pr";
     private const string KeyAlphaMathiasCopemanSrk = "alpha_mathias_copeman_srk";
+    private const string KeyAlphaSoavePr = "alpha_soave_pr";
+    private const string KeyAlphaSoaveSrk = "alpha_soave_srk";
+    private const string CovarianceSuffix = "_covariance";
+    private const string KeyAlphaDefault = "alpha_default";
+    private const string KeyProvenance = "provenance";
+
+    /// <summary>The keys of fluid-specific alpha parameters.</summary>
+    private static readonly string[] AlphaKeys =
+    [
+        KeyAlphaSoavePr, KeyAlphaSoaveSrk, KeyAlphaTwuPr, KeyAlphaTwuSrk, KeyAlphaMathiasCopemanPr, KeyAlphaMathiasCopemanSrk,
+    ];
 
     internal static readonly string[] AllKeys =
     [
@@ -110,8 +122,8 @@ internal sealed partial class FluidFileParser
         KeyMolarMass, KeyCriticalTemperature, KeyCriticalPressure, KeyAcentricFactor,
         KeyCriticalDensity, KeyCriticalMolarVolume, KeyNormalBoilingPoint,
         KeyTriplePointTemperature, KeyIdealGasCp,
-        KeyAlphaTwuPr, KeyAlphaTwuSrk, KeyAlphaMathiasCopemanPr, KeyAlphaMathiasCopemanSrk,
-        KeyRemarks,
+        .. AlphaKeys, .. AlphaKeys.Select(k => k + CovarianceSuffix), KeyAlphaDefault,
+        KeyProvenance, KeyRemarks,
     ];
 
     private static readonly string[] RequiredKeys =
@@ -141,6 +153,8 @@ internal sealed partial class FluidFileParser
     private List<string> _synonyms = [];
     private IdealGasHeatCapacity? _idealGasCp;
     private readonly List<AlphaParameterSet> _alphaParameters = [];
+    private readonly Dictionary<string, (int Line, double[] UpperTriangle)> _alphaCovariances = new(StringComparer.Ordinal);
+    private AlphaForm _preferredAlpha = AlphaForm.Default;
 
     internal FluidFileParser(string origin) => _origin = origin;
 
@@ -325,8 +339,14 @@ internal sealed partial class FluidFileParser
             case KeyIdealGasCp:
                 _idealGasCp = ReadIdealGasCp(line, rest);
                 break;
-            case KeyAlphaTwuPr or KeyAlphaTwuSrk or KeyAlphaMathiasCopemanPr or KeyAlphaMathiasCopemanSrk:
+            case KeyAlphaSoavePr or KeyAlphaSoaveSrk or KeyAlphaTwuPr or KeyAlphaTwuSrk or KeyAlphaMathiasCopemanPr or KeyAlphaMathiasCopemanSrk:
                 _alphaParameters.Add(ReadAlphaParameters(line, key, rest));
+                break;
+            case KeyAlphaDefault:
+                _preferredAlpha = ReadAlphaDefault(line, key, rest);
+                break;
+            case var covariance when covariance.EndsWith(CovarianceSuffix, StringComparison.Ordinal):
+                _alphaCovariances[key[..^CovarianceSuffix.Length]] = (line, ReadCovariance(line, key, rest));
                 break;
             default:
                 _text[key] = rest;
@@ -614,7 +634,9 @@ internal sealed partial class FluidFileParser
             NormalBoilingPoint = normalBoilingPoint,
             TriplePointTemperature = triplePoint,
             IdealGasHeatCapacity = _idealGasCp,
-            AlphaParameters = _alphaParameters.AsReadOnly(),
+            AlphaParameters = AlphaParametersWithCovariances(),
+            PreferredAlpha = _preferredAlpha,
+            Provenance = _text.GetValueOrDefault(KeyProvenance),
             Remarks = _text.GetValueOrDefault(KeyRemarks),
             Origin = _origin,
         };

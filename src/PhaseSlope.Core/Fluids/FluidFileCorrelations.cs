@@ -214,31 +214,126 @@ internal sealed partial class FluidFileParser
         return (low, high);
     }
 
-    /// <summary>Reads <c>p1 p2 p3 | source</c> of an alpha-parameter key.</summary>
+    /// <summary>The form and model an alpha-parameter key names.</summary>
+    private static (AlphaForm Form, CubicModelKind Model) AlphaKeyMeaning(string key) => key switch
+    {
+        KeyAlphaSoavePr => (AlphaForm.Soave, CubicModelKind.PengRobinson),
+        KeyAlphaSoaveSrk => (AlphaForm.Soave, CubicModelKind.SoaveRedlichKwong),
+        KeyAlphaTwuPr => (AlphaForm.Twu, CubicModelKind.PengRobinson),
+        KeyAlphaTwuSrk => (AlphaForm.Twu, CubicModelKind.SoaveRedlichKwong),
+        KeyAlphaMathiasCopemanPr => (AlphaForm.MathiasCopeman, CubicModelKind.PengRobinson),
+        _ => (AlphaForm.MathiasCopeman, CubicModelKind.SoaveRedlichKwong),
+    };
+
+    /// <summary>Reads <c>p1 [p2 p3] | source</c> of an alpha-parameter key.</summary>
     private AlphaParameterSet ReadAlphaParameters(int line, string key, string rest)
     {
-        (AlphaForm form, CubicModelKind model, string names) = key switch
-        {
-            KeyAlphaTwuPr => (AlphaForm.Twu, CubicModelKind.PengRobinson, "L M N"),
-            KeyAlphaTwuSrk => (AlphaForm.Twu, CubicModelKind.SoaveRedlichKwong, "L M N"),
-            KeyAlphaMathiasCopemanPr => (AlphaForm.MathiasCopeman, CubicModelKind.PengRobinson, "c1 c2 c3"),
-            _ => (AlphaForm.MathiasCopeman, CubicModelKind.SoaveRedlichKwong, "c1 c2 c3"),
-        };
-
+        var (form, model) = AlphaKeyMeaning(key);
+        var names = CubicModel.AlphaParameterNames(form);
         string source = ReadSource(line, key, rest, out string body);
         string[] tokens = body.Split((char[]?)null, StringSplitOptions.RemoveEmptyEntries);
-        if (tokens.Length != 3)
+        if (tokens.Length != names.Count)
         {
-            throw Fail(line, key, $"expected three numbers '{names} | source', found {tokens.Length}");
+            throw Fail(line, key, $"expected {(names.Count == 1 ? "one number" : $"{names.Count} numbers")} '{string.Join(' ', names)} | source', found {tokens.Length}");
         }
 
-        var values = new double[3];
-        for (int i = 0; i < 3; i++)
+        var values = new double[names.Count];
+        for (int i = 0; i < values.Length; i++)
         {
-            values[i] = ParseNumber(line, key, tokens[i], $"parameter {names.Split(' ')[i]}");
+            values[i] = ParseNumber(line, key, tokens[i], $"parameter {names[i]}");
         }
 
         return new AlphaParameterSet(form, model, values, source);
+    }
+
+    /// <summary>Reads the upper triangle (row by row) of an alpha-parameter covariance matrix.</summary>
+    private double[] ReadCovariance(int line, string key, string rest)
+    {
+        string stem = key[..^CovarianceSuffix.Length];
+        if (Array.IndexOf(AlphaKeys, stem) < 0)
+        {
+            throw Fail(line, key, "unknown key");
+        }
+
+        int p = CubicModel.AlphaParameterNames(AlphaKeyMeaning(stem).Form).Count;
+        int count = p * (p + 1) / 2;
+        _ = ReadSource(line, key, rest, out string body);
+        string[] tokens = body.Split((char[]?)null, StringSplitOptions.RemoveEmptyEntries);
+        if (tokens.Length != count)
+        {
+            throw Fail(line, key, $"expected the {count} numbers of the upper triangle of a {p}x{p} covariance matrix, row by row, found {tokens.Length}");
+        }
+
+        var values = new double[count];
+        for (int i = 0; i < count; i++)
+        {
+            values[i] = ParseNumber(line, key, tokens[i], $"covariance element {i + 1}");
+        }
+
+        return values;
+    }
+
+    /// <summary>Reads <c>alpha_default soave|twu|mathias-copeman</c>.</summary>
+    private AlphaForm ReadAlphaDefault(int line, string key, string rest) => rest switch
+    {
+        "soave" => AlphaForm.Soave,
+        "twu" => AlphaForm.Twu,
+        "mathias-copeman" => AlphaForm.MathiasCopeman,
+        _ => throw Fail(line, key, $"unknown alpha function '{rest}'; use soave, twu or mathias-copeman (the parameters are given by an alpha_... key)"),
+    };
+
+    /// <summary>The alpha parameter sets with their covariance matrices attached; a covariance
+    /// without its parameters, or one that is not a covariance (negative variance, correlation
+    /// beyond ±1), is refused.</summary>
+    private IReadOnlyList<AlphaParameterSet> AlphaParametersWithCovariances()
+    {
+        var sets = new List<AlphaParameterSet>(_alphaParameters);
+        foreach (var (stem, (line, upper)) in _alphaCovariances)
+        {
+            var (form, model) = AlphaKeyMeaning(stem);
+            int index = sets.FindIndex(s => s.Form == form && s.Model == model);
+            if (index < 0)
+            {
+                throw Fail(line, stem + CovarianceSuffix, $"a covariance without its parameters: '{stem}' is not given");
+            }
+
+            int p = sets[index].Values.Count;
+            var matrix = new double[p, p];
+            int k = 0;
+            for (int i = 0; i < p; i++)
+            {
+                for (int j = i; j < p; j++)
+                {
+                    matrix[i, j] = matrix[j, i] = upper[k++];
+                }
+            }
+
+            for (int i = 0; i < p; i++)
+            {
+                if (!(matrix[i, i] >= 0))
+                {
+                    throw Fail(line, stem + CovarianceSuffix, $"variance {i + 1} is negative ({Show(matrix[i, i])})");
+                }
+
+                for (int j = i + 1; j < p; j++)
+                {
+                    // |cov| ≤ σi·σj, with a rounding allowance for values written to 17 digits.
+                    if (Math.Abs(matrix[i, j]) > Math.Sqrt(matrix[i, i] * matrix[j, j]) * (1 + 1e-12))
+                    {
+                        throw Fail(line, stem + CovarianceSuffix, $"element ({i + 1},{j + 1}) implies a correlation beyond ±1");
+                    }
+                }
+            }
+
+            sets[index] = sets[index] with { Covariance = matrix };
+        }
+
+        if (_preferredAlpha != AlphaForm.Default && !sets.Any(s => s.Form == _preferredAlpha))
+        {
+            throw Fail(_lineOfKey[KeyAlphaDefault], KeyAlphaDefault, $"no {CubicModel.AlphaKeyStem(_preferredAlpha)}_... parameters are given for it");
+        }
+
+        return sets.AsReadOnly();
     }
 
     /// <summary>Splits <c>body | source</c>; the source must be present and not empty.</summary>

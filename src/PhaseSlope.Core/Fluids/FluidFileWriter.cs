@@ -76,6 +76,31 @@ public static class FluidFileWriter
             Line(text, "ideal_gas_cp", $"{reduce}{value}  range {Number(cp.MinimumTemperature)}-{Number(cp.MaximumTemperature)} K | {cp.Source}");
         }
 
+        foreach (var set in fluid.AlphaParameters)
+        {
+            string key = $"{Models.CubicModel.AlphaKeyStem(set.Form)}_{(set.Model == Models.CubicModelKind.SoaveRedlichKwong ? "srk" : "pr")}";
+            Line(text, key, $"{string.Join(' ', set.Values.Select(Number))} | {set.Source}");
+            if (set.Covariance is { } cov)
+            {
+                var upper = new List<string>();
+                for (int i = 0; i < set.Values.Count; i++)
+                {
+                    for (int j = i; j < set.Values.Count; j++)
+                    {
+                        upper.Add(Number(cov[i, j]));
+                    }
+                }
+
+                Line(text, key + "_covariance", $"{string.Join(' ', upper)} | {set.Source}");
+            }
+        }
+
+        if (fluid.PreferredAlpha != Models.AlphaForm.Default)
+        {
+            Line(text, "alpha_default", fluid.PreferredAlpha == Models.AlphaForm.MathiasCopeman ? "mathias-copeman" : fluid.PreferredAlpha.ToString().ToLowerInvariant());
+        }
+
+        Optional(text, "provenance", fluid.Provenance);
         Optional(text, "remarks", fluid.Remarks);
         return text.ToString();
     }
@@ -96,7 +121,7 @@ public static class FluidFileWriter
     }
 
     private static void Line(StringBuilder text, string key, string value)
-        => text.Append(key.PadRight(26)).Append(value).Append('\n');
+        => text.Append(key.PadRight(25)).Append(' ').Append(value).Append('\n');
 
     private static string Number(double value) => value.ToString("R", CultureInfo.InvariantCulture);
 }

@@ -10,6 +10,10 @@ public enum AlphaForm
     /// <summary>Twu, Bluck, Cunningham &amp; Coon (1991): α = Tr^(N(M−1))·exp[L(1 − Tr^(NM))].</summary>
     Twu,
 
+    /// <summary>Soave (1972) form α = [1 + m(1 − √Tr)]² with the fluid's own fitted slope m (for
+    /// example from <c>phaseslope tune</c>) in place of the model's κ(ω) correlation.</summary>
+    Soave,
+
     /// <summary>Mathias &amp; Copeman (1983): α = [1 + c1(1 − √Tr) + c2(1 − √Tr)² + c3(1 − √Tr)³]² below Tc.</summary>
     MathiasCopeman,
 }

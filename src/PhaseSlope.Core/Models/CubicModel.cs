@@ -113,6 +113,12 @@ public sealed class CubicModel : IResidualModel
         double omega = fluid.AcentricFactor.Value;
         if (alpha == AlphaForm.Default)
         {
+            // A tuned fluid prefers its tuned alpha function, where it has one for this model.
+            if (fluid.PreferredAlpha != AlphaForm.Default && kind.Entry().AcceptsAlphaChoice && FindParameters(fluid, kind, fluid.PreferredAlpha) is not null)
+            {
+                return For(kind, fluid, fluid.PreferredAlpha, volumeShift);
+            }
+
             return For(kind, tc, pc, omega, volumeShift);
         }
 
@@ -139,16 +145,13 @@ public sealed class CubicModel : IResidualModel
 
         IAlphaFunction function = alpha switch
         {
-            AlphaForm.Twu when set is not null => new TwuAlpha(
-                Parameter(set, fluid, 0), Parameter(set, fluid, 1), Parameter(set, fluid, 2), tc, set.Source),
+            _ when set is not null => FromParameters(set, fluid, tc),
             AlphaForm.Twu when form == CubicForm.PengRobinson => new GeneralisedTwuAlpha(omega, tc),
             AlphaForm.Twu => throw new InvalidInputException("alpha form", double.NaN,
                 $"no Twu parameters for {fluid.Name} with {kind.Title()}, and the generalised Twu (1995) alpha function is implemented for Peng-Robinson only"),
-            AlphaForm.MathiasCopeman when set is not null => new MathiasCopemanAlpha(
-                Parameter(set, fluid, 0), Parameter(set, fluid, 1), Parameter(set, fluid, 2), tc, set.Source),
-            AlphaForm.MathiasCopeman => throw new InvalidInputException("alpha form", double.NaN,
-                $"no Mathias-Copeman parameters for {fluid.Name} with {kind.Title()}: add a line "
-                + $"'alpha_mathias_copeman_{(form == CubicForm.PengRobinson ? "pr" : "srk")}  c1 c2 c3  | source' to a fluid file for it "
+            AlphaForm.MathiasCopeman or AlphaForm.Soave => throw new InvalidInputException("alpha form", double.NaN,
+                $"no {AlphaName(alpha)} parameters for {fluid.Name} with {kind.Title()}: tune them to measured vapour pressures (phaseslope tune), or add a line "
+                + $"'{AlphaKeyStem(alpha)}_{(form == CubicForm.PengRobinson ? "pr" : "srk")}  {string.Join(' ', AlphaParameterNames(alpha))}  | source' to a fluid file for it "
                 + "and give the file's path as the fluid (docs/fluid-files.md)"),
             _ => throw new ArgumentOutOfRangeException(nameof(alpha), alpha, "unknown alpha form"),
         };
@@ -160,6 +163,57 @@ public sealed class CubicModel : IResidualModel
 
         return new CubicModel(kind, form, function, tc, pc, volumeShift);
     }
+
+    /// <summary>The alpha function of a fluid-specific parameter set.</summary>
+    private static IAlphaFunction FromParameters(AlphaParameterSet set, Fluid fluid, double tc)
+    {
+        int expected = AlphaParameterSet.ParameterCount(set.Form);
+        if (set.Values.Count != expected)
+        {
+            throw new InvalidInputException("alpha parameters", set.Values.Count,
+                $"{AlphaName(set.Form)} parameters for {fluid.Name} with {set.Model.Title()} must be {expected} numbers, got {set.Values.Count}");
+        }
+
+        var v = set.Values;
+        return set.Form switch
+        {
+            AlphaForm.Soave => new SoaveAlpha(v[0], tc, set.Source),
+            AlphaForm.Twu => new TwuAlpha(v[0], v[1], v[2], tc, set.Source),
+            _ => new MathiasCopemanAlpha(v[0], v[1], v[2], tc, set.Source),
+        };
+    }
+
+    /// <summary>The readable name of an alpha form with fluid-specific parameters.</summary>
+    public static string AlphaName(AlphaForm alpha) => alpha switch
+    {
+        AlphaForm.Twu => "Twu",
+        AlphaForm.Soave => "Soave",
+        AlphaForm.MathiasCopeman => "Mathias-Copeman",
+        _ => "default",
+    };
+
+    /// <summary>The fluid-file key stem of an alpha form's parameters (alpha_soave, alpha_twu, alpha_mathias_copeman).</summary>
+    public static string AlphaKeyStem(AlphaForm alpha) => alpha switch
+    {
+        AlphaForm.Twu => "alpha_twu",
+        AlphaForm.Soave => "alpha_soave",
+        AlphaForm.MathiasCopeman => "alpha_mathias_copeman",
+        _ => throw new ArgumentOutOfRangeException(nameof(alpha), alpha, "the model's own alpha function has no parameter key"),
+    };
+
+    /// <summary>The parameter names of an alpha form, in order.</summary>
+    public static IReadOnlyList<string> AlphaParameterNames(AlphaForm alpha) => alpha switch
+    {
+        AlphaForm.Twu => ["L", "M", "N"],
+        AlphaForm.Soave => ["m"],
+        AlphaForm.MathiasCopeman => ["c1", "c2", "c3"],
+        _ => [],
+    };
+
+    /// <summary>The same model with volume shift <paramref name="volumeShift"/> (m³/mol) in
+    /// place of the present one: form, alpha and critical constants are kept.</summary>
+    public CubicModel WithVolumeShift(double volumeShift)
+        => new(Kind, Form, Alpha, CriticalTemperature, CriticalPressure, volumeShift);
 
     /// <summary>Builds the chosen published model from Tc (K), Pc (Pa) and the acentric factor,
     /// with its default alpha function.</summary>
@@ -175,12 +229,6 @@ public sealed class CubicModel : IResidualModel
         return new CubicModel(kind, entry.Form, entry.OwnAlpha(acentricFactor, criticalTemperature), criticalTemperature, criticalPressure, volumeShift);
     }
 
-    /// <summary>The same model with volume shift <paramref name="volumeShift"/> (m³/mol) in
-    /// place of the present one: form, alpha and critical constants are kept.</summary>
-    public CubicModel WithVolumeShift(double volumeShift)
-        => new(Kind, Form, Alpha, CriticalTemperature, CriticalPressure, volumeShift);
-
-    private static string AlphaName(AlphaForm alpha) => alpha == AlphaForm.Twu ? "Twu" : "Mathias-Copeman";
 
     /// <summary>The fluid's parameter set of the form for this model; for Peng–Robinson 1978 a
     /// set given for Peng–Robinson when there is none of its own.</summary>
@@ -193,17 +241,6 @@ public sealed class CubicModel : IResidualModel
         }
 
         return own;
-    }
-
-    private static double Parameter(AlphaParameterSet set, Fluid fluid, int index)
-    {
-        if (set.Values.Count != 3)
-        {
-            throw new InvalidInputException("alpha parameters", set.Values.Count,
-                $"{AlphaName(set.Form)} parameters for {fluid.Name} with {set.Model.Title()} must be 3 numbers, got {set.Values.Count}");
-        }
-
-        return set.Values[index];
     }
 
     /// <summary>Which published model this is.</summary>
@@ -333,4 +370,18 @@ public sealed class CubicModel : IResidualModel
 
     /// <summary>Pressure P(T, ρ) in Pa.</summary>
     public double Pressure(double temperature, double density) => Residual(temperature, density).Pressure;
+
+    /// <summary>∂a_r/∂α at fixed T and ρ, in J/mol: the molar residual Helmholtz energy is
+    /// a_r = −RT·ln(1 − b′ρ) − (a·α/b)·f(bρ), linear in the value of α, so this is −(a/b)·f(bρ)
+    /// with f the attractive integral of <see cref="Residual(double, double)"/>. With it a change
+    /// of the alpha function's parameters moves Psat exactly (see the tuning).</summary>
+    /// <param name="density">ρ in mol/m³, in (0, 1/(b − c)).</param>
+    public double ResidualHelmholtzPerAlpha(double density)
+    {
+        double eta = CovolumeB * density;
+        double d1 = 1 + _delta1 * eta;
+        double d2 = 1 + _delta2 * eta;
+        double f = _delta1 == _delta2 ? eta / d1 : Math.Log(d1 / d2) / (_delta1 - _delta2);
+        return -AttractionA / CovolumeB * f;
+    }
 }

@@ -198,8 +198,8 @@ public class FluidFileCorrelationTests
         { "negative Einstein term below monatomic", "ideal_gas_cp power 3^0 einstein -1@100 range 50-1000 K | s", "monatomic minimum" },
         // A pole at T = 0 is outside any range, but a negative power can still dive: 4 − 1000/T at 60 K.
         { "negative power term below monatomic at the cold end", "ideal_gas_cp power 4^0 -1000^-1 range 60-1000 K | s", "monatomic minimum" },
-        { "alpha with two numbers", $"alpha_twu_pr 0.2 0.9 | {NotPublished}", "expected three numbers 'L M N | source', found 2" },
-        { "alpha with four numbers", $"alpha_mathias_copeman_srk 0.7 -0.3 0.2 0.1 | {NotPublished}", "expected three numbers 'c1 c2 c3 | source', found 4" },
+        { "alpha with two numbers", $"alpha_twu_pr 0.2 0.9 | {NotPublished}", "expected 3 numbers 'L M N | source', found 2" },
+        { "alpha with four numbers", $"alpha_mathias_copeman_srk 0.7 -0.3 0.2 0.1 | {NotPublished}", "expected 3 numbers 'c1 c2 c3 | source', found 4" },
         { "alpha malformed number", $"alpha_twu_srk 0.2 x 2.1 | {NotPublished}", "malformed parameter M 'x'" },
         { "alpha infinite number", $"alpha_mathias_copeman_pr 0.2 0.3 Infinity | {NotPublished}", "malformed parameter c3" },
         { "alpha missing source", "alpha_twu_pr 0.2 0.9 2.1", "missing source" },

@@ -110,7 +110,7 @@ public class AlphaSelectionTests
             var ex = Assert.Throws<InvalidInputException>(() => CubicModel.For(kind, Propane, AlphaForm.MathiasCopeman));
 
             // The message names the fluid and model, and how to supply the constants.
-            Assert.StartsWith($"no Mathias-Copeman parameters for propane with {kind.Title()}: add a line '{line}  c1 c2 c3  | source'", ex.Message, StringComparison.Ordinal);
+            Assert.StartsWith($"no Mathias-Copeman parameters for propane with {kind.Title()}: tune them to measured vapour pressures (phaseslope tune), or add a line '{line}  c1 c2 c3  | source'", ex.Message, StringComparison.Ordinal);
             Assert.EndsWith("(docs/fluid-files.md)", ex.Message, StringComparison.Ordinal);
         }
     }

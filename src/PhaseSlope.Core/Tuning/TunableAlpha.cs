@@ -1,0 +1,112 @@
+using PhaseSlope.Core.Models;
+
+namespace PhaseSlope.Core.Tuning;
+
+/// <summary>An alpha family whose parameters can be tuned to data: it builds the alpha function
+/// from a parameter vector, gives the exact derivatives ∂α/∂θ that move Psat, and a start.</summary>
+public abstract class TunableAlpha
+{
+    /// <summary>The family.</summary>
+    public abstract AlphaForm Form { get; }
+
+    /// <summary>The parameter names, in order.</summary>
+    public IReadOnlyList<string> ParameterNames => CubicModel.AlphaParameterNames(Form);
+
+    /// <summary>Whether the published form asks for a convex α (d²α/dT² &gt; 0) as well as a
+    /// positive, decreasing one: the Twu (1991) function's parameters are constrained so in the
+    /// consistency analysis of the form (Le Guennec, Privat &amp; Jaubert, Fluid Phase Equilib. 429,
+    /// 301 (2016); from memory). For the polynomial forms convexity is reported, not required.</summary>
+    public abstract bool RequiresConvexity { get; }
+
+    /// <summary>The alpha function with parameters <paramref name="parameters"/>.</summary>
+    public abstract IAlphaFunction Create(IReadOnlyList<double> parameters, double criticalTemperature, string source);
+
+    /// <summary>∂α/∂θ_j at <paramref name="temperature"/>, written into <paramref name="gradient"/>.</summary>
+    public abstract void Gradient(double temperature, double criticalTemperature, IReadOnlyList<double> parameters, Span<double> gradient);
+
+    /// <summary>Starting parameters equivalent (or close) to the model's own alpha function for ω.</summary>
+    public abstract double[] Start(CubicModelKind kind, double acentricFactor, double criticalTemperature);
+
+    /// <summary>The family of <paramref name="form"/>.</summary>
+    public static TunableAlpha Of(AlphaForm form) => form switch
+    {
+        AlphaForm.Soave => new SoaveFamily(),
+        AlphaForm.MathiasCopeman => new MathiasCopemanFamily(),
+        AlphaForm.Twu => new TwuFamily(),
+        _ => throw new ArgumentOutOfRangeException(nameof(form), form, "the model's own alpha function has no parameters to tune"),
+    };
+
+    /// <summary>The model's own Soave slope m = κ(ω) (Peng–Robinson 1976 or 1978, or Soave 1972).</summary>
+    private static double OwnSlope(CubicModelKind kind, double omega, double tc)
+        => kind.Entry().OwnAlpha(omega, tc) is SoaveAlpha soave
+            ? soave.Slope
+            : throw new ArgumentOutOfRangeException(nameof(kind), kind, "the model's own alpha function is not of the Soave form");
+
+    private sealed class SoaveFamily : TunableAlpha
+    {
+        public override AlphaForm Form => AlphaForm.Soave;
+
+        public override bool RequiresConvexity => false;
+
+        public override IAlphaFunction Create(IReadOnlyList<double> p, double tc, string source) => new SoaveAlpha(p[0], tc, source);
+
+        public override void Gradient(double temperature, double tc, IReadOnlyList<double> p, Span<double> gradient)
+        {
+            // α = g², g = 1 + m·x, x = 1 − √Tr: ∂α/∂m = 2g·x.
+            double x = 1 - Math.Sqrt(temperature / tc);
+            gradient[0] = 2 * (1 + p[0] * x) * x;
+        }
+
+        public override double[] Start(CubicModelKind kind, double omega, double tc) => [OwnSlope(kind, omega, tc)];
+    }
+
+    private sealed class MathiasCopemanFamily : TunableAlpha
+    {
+        public override AlphaForm Form => AlphaForm.MathiasCopeman;
+
+        public override bool RequiresConvexity => false;
+
+        public override IAlphaFunction Create(IReadOnlyList<double> p, double tc, string source) => new MathiasCopemanAlpha(p[0], p[1], p[2], tc, source);
+
+        public override void Gradient(double temperature, double tc, IReadOnlyList<double> p, Span<double> gradient)
+        {
+            // Below Tc α = g², g = 1 + c1x + c2x² + c3x³: ∂α/∂ck = 2g·x^k. Above Tc only c1 acts
+            // (MathiasCopemanAlpha uses the Soave form there).
+            double x = 1 - Math.Sqrt(temperature / tc);
+            bool subcritical = temperature <= tc;
+            double g = subcritical ? 1 + x * (p[0] + x * (p[1] + x * p[2])) : 1 + p[0] * x;
+            gradient[0] = 2 * g * x;
+            gradient[1] = subcritical ? 2 * g * x * x : 0;
+            gradient[2] = subcritical ? 2 * g * x * x * x : 0;
+        }
+
+        // With c2 = c3 = 0 the Mathias–Copeman function is the Soave form with m = c1.
+        public override double[] Start(CubicModelKind kind, double omega, double tc) => [OwnSlope(kind, omega, tc), 0, 0];
+    }
+
+    private sealed class TwuFamily : TunableAlpha
+    {
+        public override AlphaForm Form => AlphaForm.Twu;
+
+        public override bool RequiresConvexity => true;
+
+        public override IAlphaFunction Create(IReadOnlyList<double> p, double tc, string source) => new TwuAlpha(p[0], p[1], p[2], tc, source);
+
+        public override void Gradient(double temperature, double tc, IReadOnlyList<double> p, Span<double> gradient)
+        {
+            // ln α = N(M − 1)·ln Tr + L(1 − Tr^(NM)), ∂α/∂θ = α·∂ln α/∂θ.
+            double l = p[0], m = p[1], n = p[2];
+            double lnTr = Math.Log(temperature / tc);
+            double power = Math.Exp(n * m * lnTr);
+            double alpha = Math.Exp(n * (m - 1) * lnTr + l * (1 - power));
+            gradient[0] = alpha * (1 - power);
+            gradient[1] = alpha * (n * lnTr - l * power * n * lnTr);
+            gradient[2] = alpha * ((m - 1) * lnTr - l * power * m * lnTr);
+        }
+
+        // The generalised Twu (1995) constants for Peng–Robinson below Tc, interpolated in ω as
+        // the generalised function interpolates α (a start, not a model: the fit moves it).
+        public override double[] Start(CubicModelKind kind, double omega, double tc)
+            => [0.125283 + omega * (0.511614 - 0.125283), 0.911807 + omega * (0.784054 - 0.911807), 1.948150 + omega * (2.812520 - 1.948150)];
+    }
+}
