@@ -40,6 +40,7 @@ internal static class CliApp
         root.Subcommands.Add(DeriveCommand.Create(io));
         root.Subcommands.Add(FitCommand.Create(io));
         root.Subcommands.Add(LatentCommand.Create(io));
+        root.Subcommands.Add(TuneCommand.Create(io));
         root.Subcommands.Add(AuditCommand.Create(io));
         root.Subcommands.Add(PlotCommand.Create(io));
         root.Subcommands.Add(FluidsCommand.Create(io));

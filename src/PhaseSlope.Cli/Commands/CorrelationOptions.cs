@@ -32,10 +32,16 @@ internal sealed class CorrelationOptions
     public Option<string> CriticalPressure { get; } = new("--pc") { Description = "Critical pressure for the Wagner forms when no --fluid is given, e.g. 4.2512 MPa (bare number: Pa)" };
 
     /// <summary>--temperature-unit.</summary>
-    public Option<string> TemperatureUnit { get; } = new("--temperature-unit") { Description = "Unit of a temperature column whose header gives none: K, degC, degF or degR (data cells are bare numbers in this unit)" };
+    public Option<string> TemperatureUnit { get; } = DataTemperatureUnit();
 
     /// <summary>--pressure-unit.</summary>
-    public Option<string> PressureUnit { get; } = new("--pressure-unit") { Description = "Unit of a pressure column whose header gives none: Pa, kPa, MPa, bar, psi, atm, mmHg, torr, ... (data cells are bare numbers in this unit)" };
+    public Option<string> PressureUnit { get; } = DataPressureUnit();
+
+    /// <summary>A new --temperature-unit option: the unit of a data file's temperature column.</summary>
+    public static Option<string> DataTemperatureUnit() => new("--temperature-unit") { Description = "Unit of a temperature column whose header gives none: K, degC, degF or degR (data cells are bare numbers in this unit)" };
+
+    /// <summary>A new --pressure-unit option: the unit of a data file's pressure column.</summary>
+    public static Option<string> DataPressureUnit() => new("--pressure-unit") { Description = "Unit of a pressure column whose header gives none: Pa, kPa, MPa, bar, psi, atm, mmHg, torr, ... (data cells are bare numbers in this unit)" };
 
     /// <summary>Creates the options with the default form.</summary>
     public CorrelationOptions(string defaultForm)
@@ -65,9 +71,9 @@ internal sealed class CorrelationOptions
 
     /// <summary>Reads and converts a data file of measured vapour pressures (also used by <c>plot --data</c>).</summary>
     /// <exception cref="DataFileException">The file is missing, unreadable or invalid.</exception>
-    public static IReadOnlyList<VapourPressurePoint> ReadDataFile(string path, string? temperatureUnit, string? pressureUnit)
+    public static IReadOnlyList<VapourPressurePoint> ReadDataFile(string path, string? temperatureUnit, string? pressureUnit, int minimumRows = VapourPressureCsv.MinimumRows)
     {
-        var options = new VapourPressureCsvOptions(temperatureUnit, pressureUnit);
+        var options = new VapourPressureCsvOptions(temperatureUnit, pressureUnit, minimumRows);
         IReadOnlyList<VapourPressureRecord> records;
         try
         {

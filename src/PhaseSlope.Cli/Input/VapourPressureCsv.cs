@@ -151,10 +151,10 @@ internal static partial class VapourPressureCsv
             throw new DataFileException(origin, null, null,
                 "no header row: the file holds only comments and blank lines (the first other line must name the columns, e.g. 'T [K],P [kPa]')");
         }
-        if (records.Count < MinimumRows)
+        if (records.Count < options.MinimumRows)
         {
             throw new DataFileException(origin, layout.HeaderLine, null,
-                $"{records.Count} data {(records.Count == 1 ? "row" : "rows")} after the header; at least {MinimumRows} are needed");
+                $"{records.Count} data {(records.Count == 1 ? "row" : "rows")} after the header; at least {options.MinimumRows} {(options.MinimumRows == 1 ? "is" : "are")} needed");
         }
 
         records.Sort((a, b) => a.Temperature.CompareTo(b.Temperature));

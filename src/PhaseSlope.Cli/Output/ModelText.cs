@@ -11,7 +11,7 @@ internal static class ModelText
     public static string Describe(IResidualModel model)
     {
         var inner = model is CountingModel counting ? counting.Inner : model;
-        bool chosenAlpha = inner is CubicModel cubic && cubic.Alpha is TwuAlpha or GeneralisedTwuAlpha or MathiasCopemanAlpha;
+        bool chosenAlpha = inner is CubicModel cubic && cubic.Alpha is TwuAlpha or GeneralisedTwuAlpha or MathiasCopemanAlpha or SoaveAlpha { FluidSpecific: true };
         return model.Identity.Describe(withAlpha: chosenAlpha);
     }
 

@@ -177,7 +177,7 @@ public sealed class CubicModel : IResidualModel
         var v = set.Values;
         return set.Form switch
         {
-            AlphaForm.Soave => new SoaveAlpha(v[0], tc, set.Source),
+            AlphaForm.Soave => new SoaveAlpha(v[0], tc, set.Source) { FluidSpecific = true },
             AlphaForm.Twu => new TwuAlpha(v[0], v[1], v[2], tc, set.Source),
             _ => new MathiasCopemanAlpha(v[0], v[1], v[2], tc, set.Source),
         };

@@ -16,6 +16,10 @@ public sealed class SoaveAlpha : IAlphaFunction
         Description = $"alpha = [1 + m(1 - sqrt(Tr))]^2, m = {slope.ToString("R", System.Globalization.CultureInfo.InvariantCulture)} ({correlation})";
     }
 
+    /// <summary>Whether m is the fluid's own (tuned or published for the fluid) rather than the
+    /// model's κ(ω) correlation; reports then name the alpha function.</summary>
+    public bool FluidSpecific { get; init; }
+
     /// <summary>The slope m (κ in the Peng–Robinson papers).</summary>
     public double Slope { get; }
 

@@ -3,8 +3,9 @@ using PhaseSlope.Core.Models;
 
 namespace PhaseSlope.Core.Tuning;
 
-/// <summary>The shape a tuned alpha function must keep over 0 &lt; T ≤ T_max: positive, decreasing
-/// and, where the published form requires it, convex.</summary>
+/// <summary>The shape a tuned alpha function must keep over 0 &lt; T ≤ T_max (the tuner uses Tc,
+/// since a tuned fluid is used on the whole saturation line, not only where the data are):
+/// positive, decreasing and, where the published form requires it, convex.</summary>
 /// <remarks>Checked on 400 temperatures spaced evenly in ln T from 1e-3·Tc to T_max. The
 /// functions tuned are smooth in √Tr or Tr^q with at most two turning points of α′ or α″ (a cubic
 /// polynomial in √Tr, or a power times an exponential of a power); a grid step of 1.7 % in T

@@ -80,7 +80,7 @@ public sealed record TuningResult
     /// <summary>Each data point before and after.</summary>
     public required IReadOnlyList<TuningComparison> Comparisons { get; init; }
 
-    /// <summary>Whether α is convex over 0 &lt; T ≤ the highest data temperature (reported; required for Twu).</summary>
+    /// <summary>Whether α is convex over 0 &lt; T ≤ Tc (reported; required for Twu).</summary>
     public required bool Convex { get; init; }
 
     /// <summary>Mean |deviation| of P before tuning, %.</summary>
@@ -182,29 +182,47 @@ public static class AlphaTuner
         }
         else
         {
-            var family = TunableAlpha.Of(form);
-            var start = family.Start(request.Kind, fluid.AcentricFactor.Value, tc);
-            var tunedForm = new TunedVapourPressureForm(request.Kind, family, tc, pc, minimum, start);
-            fit = VapourPressureFitter.Fit(tunedForm, data);
-            var alpha = family.Create(fit.Parameters, tc, label);
-            var (violation, isConvex) = AlphaShape.Check(alpha, tc, highestData, family.RequiresConvexity);
-            if (violation is not null)
+            // Auto: Mathias–Copeman first; if its best fit bends α the wrong way somewhere below
+            // the data (a cubic in √Tr can turn up at low T), Twu, then Soave's one parameter.
+            AlphaForm[] candidates = request.Form != AlphaForm.Default ? [form]
+                : form == AlphaForm.MathiasCopeman ? [AlphaForm.MathiasCopeman, AlphaForm.Twu, AlphaForm.Soave] : [form];
+            var refused = new List<string>();
+            TunableAlpha? family = null;
+            convex = false;
+            foreach (var candidate in candidates)
             {
-                throw new InvalidInputException("alpha parameters", double.NaN,
-                    $"the tuned {CubicModel.AlphaName(form)} parameters {string.Join(", ", fit.Parameters.Select(Preconditions.Format))} are refused: {violation} (0 < T <= {Preconditions.Format(highestData)} K); try another alpha function or check the data");
+                var trial = TunableAlpha.Of(candidate);
+                var tunedForm = new TunedVapourPressureForm(request.Kind, trial, tc, pc, minimum, trial.Start(request.Kind, fluid.AcentricFactor.Value, tc));
+                var trialFit = VapourPressureFitter.Fit(tunedForm, data);
+                // Checked up to Tc, not only to the data: the tuned fluid is used on the whole line.
+                var (violation, isConvex) = AlphaShape.Check(trial.Create(trialFit.Parameters, tc, label), tc, tc, trial.RequiresConvexity);
+                if (violation is null)
+                {
+                    (form, family, fit, convex) = (candidate, trial, trialFit, isConvex);
+                    break;
+                }
+
+                refused.Add($"the tuned {CubicModel.AlphaName(candidate)} parameters {string.Join(", ", trialFit.Parameters.Select(Preconditions.Format))} are refused: {violation} (0 < T <= Tc)");
             }
 
-            convex = isConvex;
+            if (family is null || fit is null)
+            {
+                throw new InvalidInputException("alpha parameters", double.NaN,
+                    $"{string.Join("; ", refused)}; {(candidates.Length > 1 ? "no alpha function fits these data with a physical shape; check the data and Tc, Pc" : "try another alpha function or check the data")}");
+            }
+
             var modelKind = request.Kind == CubicModelKind.SoaveRedlichKwong ? CubicModelKind.SoaveRedlichKwong : CubicModelKind.PengRobinson;
-            var set = new AlphaParameterSet(form, modelKind, [.. fit.Parameters], label) { Covariance = fit.Covariance };
+            var set = new AlphaParameterSet(form, modelKind, [.. fit.Parameters], label) { Covariance = fit.CovarianceDefined ? fit.Covariance : null };
             tuned = fluid with
             {
                 AlphaParameters = [.. fluid.AlphaParameters.Where(s => !(s.Form == form && s.Model == modelKind)), set],
                 PreferredAlpha = form,
             };
             method = $"{CubicModel.AlphaName(form)} alpha parameters {string.Join(", ", family.ParameterNames)} of {request.Kind.Title()} by weighted least squares in ln P "
-                + $"(Levenberg-Marquardt, exact parameter gradient, coexistence solved at every point), {fit.Iterations} iterations";
-            parameters = [.. family.ParameterNames.Select((n, j) => (n, fit.Parameters[j], fit.CovarianceDefined ? (double?)Math.Sqrt(fit.Covariance[j, j]) : null))];
+                + $"(Levenberg-Marquardt, exact parameter gradient, coexistence solved at every point), {fit.Iterations} iterations"
+                + (refused.Count > 0 ? $" (chosen after {string.Join("; ", refused)})" : "");
+            var chosen = fit;
+            parameters = [.. family.ParameterNames.Select((n, j) => (n, chosen.Parameters[j], chosen.CovarianceDefined ? (double?)Math.Sqrt(chosen.Covariance[j, j]) : null))];
         }
 
         var tunedModel = CubicModel.For(request.Kind, tuned);

@@ -144,6 +144,24 @@ public sealed class OfferedOptionTests : IDisposable
         yield return Refused("latent", "--alpha", [.. latent, "--tc", "540", "--pc", "3.1MPa", "--alpha", "twu"]);
         yield return Changes("latent", "--format", latent, "--format", "json");
 
+        string[] tune = ["tune", Csv, "--fluid", FluidFile, "--out", "{dir}/tuned.fluid"];
+        string[] tuneBare = ["tune", Csv, "--tc", "540", "--pc", "3.1MPa", "--molar-mass", "100g/mol", "--name", "frc-x", "--out", "{dir}/tuned.fluid"];
+        string[] tuneUnits = ["tune", "{bare}", "--tc", "700", "--pc", "4MPa", "--molar-mass", "100g/mol", "--name", "bare", "--out", "{dir}/tuned.fluid", "--temperature-unit", "K", "--pressure-unit", "kPa"];
+        yield return Differs("tune", "--fluid", tuneBare, tune);
+        yield return Refused("tune", "--fluid", [.. tune, "--tc", "540"]);
+        yield return Differs("tune", "--tc", tuneBare, Replace(tuneBare, "540", "545"));
+        yield return Differs("tune", "--pc", tuneBare, Replace(tuneBare, "3.1MPa", "3.2MPa"));
+        yield return Changes("tune", "--omega", tuneBare, "--omega", "0.3");
+        yield return Differs("tune", "--molar-mass", tuneBare, Replace(tuneBare, "100g/mol", "120g/mol"));
+        yield return Changes("tune", "--name", tune, "--name", "frc-y");
+        yield return Changes("tune", "--alpha", tune, "--alpha", "twu");
+        yield return Changes("tune", "--eos", tune, "--eos", "srk");
+        yield return Refused("tune", "--eos", [.. tune, "--eos", "vdw"]);
+        yield return Differs("tune", "--temperature-unit", tuneUnits, Replace(tuneUnits, "K", "degF"));
+        yield return Differs("tune", "--pressure-unit", tuneUnits, Replace(tuneUnits, "kPa", "mbar"));
+        yield return Changes("tune", "--format", tune, "--format", "json");
+        yield return Differs("tune", "--out", tune, Replace(tune, "{dir}/tuned.fluid", "{dir}/other.fluid"));
+
         string[] audit = ["audit", "--form", "antoine", "--coefficients", LangeWater, "--range", "1,100", "--log-base", "10",
             "--correlation-pressure-unit", "mmHg", "--correlation-temperature-unit", "degC"];
         string[] auditFluid = [.. audit, "--fluid", "water"];

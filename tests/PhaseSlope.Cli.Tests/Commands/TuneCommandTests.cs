@@ -1,0 +1,97 @@
+using System.Globalization;
+using System.Text.Json;
+using PhaseSlope.Core.Fluids;
+using static PhaseSlope.Cli.Tests.CliHarness;
+
+namespace PhaseSlope.Cli.Tests.Commands;
+
+/// <summary><c>phaseslope tune</c>: the three-command job of a user with Tc, Pc and their own vapour
+/// pressures (invented FRC-7 example data), and its refusals.</summary>
+public sealed class TuneCommandTests : IDisposable
+{
+    private readonly TempFolder _folder = new();
+
+    public void Dispose() => _folder.Dispose();
+
+    [Fact]
+    public void BareCriticalPoint_TunesWritesAFluidAndTheFluidIsUsedEverywhere()
+    {
+        string fluid = _folder.File("frc-x.fluid");
+        var result = Run("tune", FitData.ExampleCsv, "--tc", "540", "--pc", "3.1MPa", "--molar-mass", "100g/mol", "--name", "frc-x", "--out", fluid, "--format", "json");
+        Assert.True(result.ExitCode == 0, result.ToString());
+        Assert.Equal($"phaseslope: wrote the tuned fluid frc-x to {fluid}\n", result.Stderr);
+        using var report = StrictJson.Parse(result.Stdout);
+        var root = report.RootElement;
+        Assert.Equal("alpha_mathias_copeman", root.GetProperty("tuned").GetString());
+        double before = root.GetProperty("aad_before_percent").GetDouble();
+        double after = root.GetProperty("aad_after_percent").GetDouble();
+        // The invented data carry 0.3 % noise in ln P (docs/examples/make-frc7-data.py): a tuned
+        // three-parameter alpha cannot beat the noise by much, and must beat the untuned model.
+        Assert.InRange(after, 0.05, 0.4);
+        Assert.True(before > 3 * after, $"before {before} %, after {after} %");
+
+        // The file is a valid fluid file whose model is the tuned one: coexist reproduces the
+        // report's tuned pressure at the first data temperature.
+        var tuned = FluidFile.Parse(new StringReader(File.ReadAllText(fluid)), fluid);
+        Assert.Equal("frc-x", tuned.Name);
+        Assert.Contains("sha256 ", tuned.Provenance, StringComparison.Ordinal);
+        var first = root.GetProperty("points")[0];
+        var coexist = RunJson("coexist", fluid, "-T", first.GetProperty("temperature_K").GetDouble().ToString("R", CultureInfo.InvariantCulture), "--format", "json");
+        AssertRelative(first.GetProperty("pressure_after_Pa").GetDouble(), coexist.GetProperty("pressure_Pa").GetDouble(), 1e-12, "coexist with the tuned fluid");
+        Assert.Contains("Mathias & Copeman", coexist.GetProperty("model").GetProperty("alpha").GetString(), StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void OnePoint_TunesTheAcentricFactorOnly()
+    {
+        string data = _folder.File("one.csv");
+        // Propane's normal boiling point, 231.036 K at 101.325 kPa (Lemmon, McLinden & Wagner 2009, from memory).
+        File.WriteAllText(data, "T [K],P [kPa]\n231.036,101.325\n");
+        string fluid = _folder.File("p.fluid");
+        var result = Run("tune", data, "--fluid", "propane", "--out", fluid, "--format", "json");
+        Assert.True(result.ExitCode == 0, result.ToString());
+        using var document = StrictJson.Parse(result.Stdout);
+        var json = document.RootElement;
+        Assert.Equal("acentric_factor", json.GetProperty("tuned").GetString());
+        double omega = json.GetProperty("parameters")[0].GetProperty("value").GetDouble();
+        // Peng–Robinson through the measured Tb: within 0.01 of the tabulated 0.152 (Poling et al., from memory).
+        Assert.InRange(omega, 0.142, 0.162);
+        AssertRelative(101325, json.GetProperty("points")[0].GetProperty("pressure_after_Pa").GetDouble(), 1e-10, "tuned Psat at Tb");
+    }
+
+    [Theory]
+    [InlineData(new[] { "--tc", "540" }, "--tc: conflicts with --fluid")]
+    [InlineData(new[] { "--alpha", "cubic-spline" }, "--alpha: unknown alpha function 'cubic-spline'")]
+    [InlineData(new[] { "--eos", "vdw" }, "--eos: van der Waals (1873) has no alpha function to tune")]
+    [InlineData(new[] { "--format", "csv" }, "--format: unknown format 'csv' (use table or json)")]
+    public void BadOption_IsAUsageError_AndWritesNothing(string[] extra, string message)
+    {
+        string fluid = _folder.File("t.fluid");
+        AssertFailure(Run(["tune", FitData.ExampleCsv, "--fluid", FitData.ExampleFluid, "--out", fluid, .. extra]), ExitCodes.Usage, message);
+        Assert.False(File.Exists(fluid));
+    }
+
+    [Fact]
+    public void BareCriticalPointWithoutName_IsRefused()
+        => AssertFailure(Run("tune", FitData.ExampleCsv, "--tc", "540", "--pc", "3.1MPa", "--molar-mass", "100g/mol", "--out", _folder.File("t.fluid")),
+            ExitCodes.Usage, "--name: needed with --tc and --pc");
+
+    [Fact]
+    public void CriticalPressureBelowTheData_IsOutOfRange()
+    {
+        // 31 Pa, a unit-less Pc read as pascals, lies below every data point.
+        string fluid = _folder.File("t.fluid");
+        AssertFailure(Run("tune", FitData.ExampleCsv, "--tc", "540", "--pc", "31", "--molar-mass", "100g/mol", "--name", "x", "--out", fluid),
+            ExitCodes.OutOfRange, "the critical pressure 31 Pa is not above the data point");
+        Assert.False(File.Exists(fluid));
+    }
+
+    [Fact]
+    public void ExistingOutputFile_IsLeftUntouchedOnFailure()
+    {
+        string fluid = _folder.File("keep.fluid");
+        File.WriteAllText(fluid, "keep me");
+        AssertFailure(Run("tune", FitData.ExampleCsv, "--fluid", FitData.ExampleFluid, "--out", fluid, "--alpha", "nonesuch"), ExitCodes.Usage);
+        Assert.Equal("keep me", File.ReadAllText(fluid));
+    }
+}
