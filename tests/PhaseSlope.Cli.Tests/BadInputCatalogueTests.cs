@@ -24,7 +24,7 @@ public class BadInputCatalogueTests
         { ["coexist", "propane", "-P", "1e-30 Pa"], ExitCodes.OutOfRange, "pressure 1E-30 Pa is below the saturation pressure 0.6279265" },
         { ["coexist", "propane", "-T", "300", "--eos", "xyz"], ExitCodes.Usage, "--eos: unknown model 'xyz' (use pr, pr78, srk, rk, vdw)" },
         { ["coexist", "propane", "-T", "300", "--alpha", "bogus"], ExitCodes.Usage, "--alpha: unknown alpha function 'bogus' (use default, twu or" },
-        { ["coexist", "propane", "-T", "300", "--alpha", "mathias-copeman"], ExitCodes.OutOfRange, "no Mathias-Copeman parameters for propane with Peng-Robinson" },
+        { ["coexist", "n-butane", "-T", "300", "--alpha", "mathias-copeman"], ExitCodes.OutOfRange, "no Mathias-Copeman parameters for n-butane with Peng-Robinson" },
         { ["coexist", "propane", "-T", "300", "--volume-shift", "1 m3/mol"], ExitCodes.OutOfRange, "volume shift 1 m3/mol must be below the co-volume b = 5.6279" },
         { ["coexist", "propane", "-T", "300", "--volume-shift", "abc"], ExitCodes.Usage, "--volume-shift: expected a molar volume starting with a numb" },
         { ["coexist", "propane", "-T", "300", "--reference", "nowhere"], ExitCodes.Usage, "--reference: unknown reference 'nowhere' (use ideal-gas, nbp" },

@@ -32,6 +32,14 @@ public sealed class WagnerForm : VapourPressureForm
     public static WagnerForm TwoHalfFive(double criticalTemperature, double criticalPressure)
         => new("wagner-2.5-5", "Wagner 2.5-5 form", [1, 1.5, 2.5, 5], criticalTemperature, criticalPressure);
 
+    /// <summary>A published equation of the Wagner type with its own exponents, ln(P/Pc) =
+    /// (Tc/T)·Σ a_i·τ^t_i (the ancillary equations of the reference equations of state).</summary>
+    public static WagnerForm WithExponents(IReadOnlyList<double> exponents, double criticalTemperature, double criticalPressure)
+    {
+        ArgumentNullException.ThrowIfNull(exponents);
+        return new("wagner-published", "published Wagner-type equation", [.. exponents], criticalTemperature, criticalPressure);
+    }
+
     /// <summary>The six-term form of the IAPWS saturation-pressure equation.</summary>
     public static WagnerForm SixTerm(double criticalTemperature, double criticalPressure)
         => new("wagner-6", "six-term form of Wagner & Pruss 1993", [1, 1.5, 3, 3.5, 4, 7.5], criticalTemperature, criticalPressure);

@@ -53,6 +53,9 @@ public sealed record Fluid
     /// Twu or Mathias–Copeman constants fitted for one cubic model); empty when none are given.</summary>
     public IReadOnlyList<AlphaParameterSet> AlphaParameters { get; init; } = [];
 
+    /// <summary>The fluid's published vapour-pressure equation, or null when the file gives none.</summary>
+    public PublishedVapourPressure? VapourPressureEquation { get; init; }
+
     /// <summary>The alpha function the model uses when none is chosen (<see cref="AlphaForm.Default"/>):
     /// a tuned fluid names its tuned form here, so that its parameters are used wherever the fluid
     /// is given; <see cref="AlphaForm.Default"/> (the model's own correlation in ω) when not set.</summary>

@@ -109,6 +109,7 @@ internal sealed partial class FluidFileParser
     private const string CovarianceSuffix = "_covariance";
     private const string KeyAlphaDefault = "alpha_default";
     private const string KeyProvenance = "provenance";
+    private const string KeyVapourPressureEquation = "vapour_pressure_equation";
 
     /// <summary>The keys of fluid-specific alpha parameters.</summary>
     private static readonly string[] AlphaKeys =
@@ -121,7 +122,7 @@ internal sealed partial class FluidFileParser
         KeyFormat, KeyName, KeySynonyms, KeyFormula, KeyCas, KeyFamily,
         KeyMolarMass, KeyCriticalTemperature, KeyCriticalPressure, KeyAcentricFactor,
         KeyCriticalDensity, KeyCriticalMolarVolume, KeyNormalBoilingPoint,
-        KeyTriplePointTemperature, KeyIdealGasCp,
+        KeyTriplePointTemperature, KeyIdealGasCp, KeyVapourPressureEquation,
         .. AlphaKeys, .. AlphaKeys.Select(k => k + CovarianceSuffix), KeyAlphaDefault,
         KeyProvenance, KeyRemarks,
     ];
@@ -155,6 +156,7 @@ internal sealed partial class FluidFileParser
     private readonly List<AlphaParameterSet> _alphaParameters = [];
     private readonly Dictionary<string, (int Line, double[] UpperTriangle)> _alphaCovariances = new(StringComparer.Ordinal);
     private AlphaForm _preferredAlpha = AlphaForm.Default;
+    private PublishedVapourPressure? _vapourPressureEquation;
 
     internal FluidFileParser(string origin) => _origin = origin;
 
@@ -341,6 +343,9 @@ internal sealed partial class FluidFileParser
                 break;
             case KeyAlphaSoavePr or KeyAlphaSoaveSrk or KeyAlphaTwuPr or KeyAlphaTwuSrk or KeyAlphaMathiasCopemanPr or KeyAlphaMathiasCopemanSrk:
                 _alphaParameters.Add(ReadAlphaParameters(line, key, rest));
+                break;
+            case KeyVapourPressureEquation:
+                _vapourPressureEquation = ReadVapourPressureEquation(line, rest);
                 break;
             case KeyAlphaDefault:
                 _preferredAlpha = ReadAlphaDefault(line, key, rest);
@@ -636,6 +641,7 @@ internal sealed partial class FluidFileParser
             IdealGasHeatCapacity = _idealGasCp,
             AlphaParameters = AlphaParametersWithCovariances(),
             PreferredAlpha = _preferredAlpha,
+            VapourPressureEquation = _vapourPressureEquation,
             Provenance = _text.GetValueOrDefault(KeyProvenance),
             Remarks = _text.GetValueOrDefault(KeyRemarks),
             Origin = _origin,

@@ -1,3 +1,4 @@
+using PhaseSlope.Core.Correlations;
 using System.Globalization;
 using PhaseSlope.Core.Models;
 
@@ -334,6 +335,48 @@ internal sealed partial class FluidFileParser
         }
 
         return sets.AsReadOnly();
+    }
+
+    /// <summary>Reads <c>reduce TC K PC UNIT terms N1^t1 N2^t2 … | source</c>: a Wagner-type
+    /// equation ln(P/Pc) = (Tc/T)·Σ N_i·τ^t_i with its own Tc and Pc.</summary>
+    private PublishedVapourPressure ReadVapourPressureEquation(int line, string rest)
+    {
+        const string key = KeyVapourPressureEquation;
+        const string example = "reduce 647.096 K 22.064 MPa terms -7.85951783^1 1.84408259^1.5 ...";
+        string source = ReadSource(line, key, rest, out string body);
+        string[] tokens = body.Split((char[]?)null, StringSplitOptions.RemoveEmptyEntries);
+        if (tokens.Length < 7 || tokens[0] != "reduce" || tokens[5] != "terms")
+        {
+            throw Fail(line, key, $"malformed equation; write {example}");
+        }
+
+        double tc = ReadKelvin(line, key, "reduce", [tokens[1], tokens[2]], example);
+        if (!TryNumber(tokens[3], out double pcNumber) || !(pcNumber > 0))
+        {
+            throw Fail(line, key, $"'{tokens[3]}' is not a positive critical pressure");
+        }
+
+        if (!Units.UnitTable.TryFind(tokens[4], out var unit, Units.Dimension.Pressure) || unit is null)
+        {
+            throw Fail(line, key, $"'{tokens[4]}' is not a pressure unit");
+        }
+
+        double pc = unit.ToSi(pcNumber);
+        var coefficients = new List<double>();
+        var exponents = new List<double>();
+        foreach (string term in tokens[6..])
+        {
+            int caret = term.IndexOf('^', StringComparison.Ordinal);
+            if (caret <= 0 || !TryNumber(term[..caret], out double n) || !TryNumber(term[(caret + 1)..], out double t) || !(t > 0))
+            {
+                throw Fail(line, key, $"malformed term '{term}'; write N^t with a positive exponent t");
+            }
+
+            coefficients.Add(n);
+            exponents.Add(t);
+        }
+
+        return new PublishedVapourPressure(WagnerForm.WithExponents(exponents, tc, pc), coefficients, source);
     }
 
     /// <summary>Splits <c>body | source</c>; the source must be present and not empty.</summary>

@@ -76,6 +76,12 @@ public static class FluidFileWriter
             Line(text, "ideal_gas_cp", $"{reduce}{value}  range {Number(cp.MinimumTemperature)}-{Number(cp.MaximumTemperature)} K | {cp.Source}");
         }
 
+        if (fluid.VapourPressureEquation is { } vp)
+        {
+            string terms = string.Join(' ', vp.Coefficients.Select((n, i) => $"{Number(n)}^{Number(vp.Form.Exponents[i])}"));
+            Line(text, "vapour_pressure_equation", $"reduce {Number(vp.Form.CriticalTemperature)} K {Number(vp.Form.CriticalPressure)} Pa terms {terms} | {vp.Source}");
+        }
+
         foreach (var set in fluid.AlphaParameters)
         {
             string key = $"{Models.CubicModel.AlphaKeyStem(set.Form)}_{(set.Model == Models.CubicModelKind.SoaveRedlichKwong ? "srk" : "pr")}";

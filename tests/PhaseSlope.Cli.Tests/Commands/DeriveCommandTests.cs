@@ -75,7 +75,7 @@ public class DeriveCommandTests
         { ["derive", "propane", "--of", "H", "--by", "T", "--hold", "P", "-T", "300", "-P", "1e5", "--reference", "zero"], ExitCodes.Usage, "--reference" },
         { ["derive", "methane", "--of", "H", "--by", "T", "--hold", "P", "-T", "150", "-P", "1e5", "--reference", "refrigeration"], ExitCodes.OutOfRange, "does not exist for methane" },
         { ["derive", "propane", "--of", "H", "--by", "T", "--hold", "P", "-T", "300", "-P", "1e5", "--alpha", "soave"], ExitCodes.Usage, "--alpha" },
-        { ["derive", "propane", "--of", "H", "--by", "T", "--hold", "P", "-T", "300", "-P", "1e5", "--alpha", "mathias-copeman"], ExitCodes.OutOfRange, "Mathias-Copeman" },
+        { ["derive", "n-butane", "--of", "H", "--by", "T", "--hold", "P", "-T", "300", "-P", "1e5", "--alpha", "mathias-copeman"], ExitCodes.OutOfRange, "Mathias-Copeman" },
         { ["derive", "propane", "--of", "H", "--by", "T", "--hold", "P", "-T", "300", "-P", "1e5", "--volume-shift", "3 furlongs"], ExitCodes.Usage, "--volume-shift" },
     };
 

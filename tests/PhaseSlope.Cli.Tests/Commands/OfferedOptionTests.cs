@@ -267,8 +267,9 @@ public sealed class OfferedOptionTests : IDisposable
         yield return Changes(command, "--eos", baseline, "--eos", "srk");
         yield return Refused(command, "--eos", [.. baseline, "--eos", "nonesuch"]);
         yield return Changes(command, "--alpha", baseline, "--alpha", "twu");
-        // No catalog fluid has Mathias-Copeman constants: refused, exit 4 (see MathiasCopeman_* below).
-        yield return Refused(command, "--alpha", [.. baseline, "--alpha", "mathias-copeman"], ExitCodes.OutOfRange);
+        // Propane carries tuned Mathias-Copeman constants (derived from its published vapour-pressure
+        // equation); a fluid without them is refused, exit 4 (see MathiasCopeman_* below).
+        yield return Changes(command, "--alpha", baseline, "--alpha", "mathias-copeman");
         yield return Changes(command, "--volume-shift", baseline, "--volume-shift", "peneloux");
         yield return Changes(command, "--format", baseline, "--format", "json");
         if (units)
@@ -385,10 +386,11 @@ public sealed class OfferedOptionTests : IDisposable
         => Assert.DoesNotContain((command, option), OfferedOptions());
 
     [Fact]
-    public void MathiasCopeman_CatalogFluid_RefusalNamesTheFluidAndTheLineToAdd()
+    public void MathiasCopeman_CatalogFluidWithoutConstants_RefusalNamesTheFluidAndTheLineToAdd()
     {
-        var result = Run("coexist", "propane", "-T", "300", "--alpha", "mathias-copeman");
-        AssertFailure(result, ExitCodes.OutOfRange, "no Mathias-Copeman parameters for propane");
+        // n-butane has no published vapour-pressure equation in the catalog, hence no constants.
+        var result = Run("coexist", "n-butane", "-T", "300", "--alpha", "mathias-copeman");
+        AssertFailure(result, ExitCodes.OutOfRange, "no Mathias-Copeman parameters for n-butane");
         Assert.Contains("alpha_mathias_copeman_pr", result.Stderr, StringComparison.Ordinal);
         Assert.Contains("docs/fluid-files.md", result.Stderr, StringComparison.Ordinal);
     }

@@ -138,7 +138,7 @@ public class StateCommandTests
         { ["state", "methane", "-T", "150", "-P", "1e5", "--reference", "refrigeration"], ExitCodes.OutOfRange, "reference state 'refrigeration'" },
         { ["state", "carbon-dioxide", "-T", "300", "-P", "1e5", "--reference", "nbp"], ExitCodes.OutOfRange, "reference state 'nbp'" },
         { ["state", "propane", "-T", "300", "-P", "1e5", "--alpha", "cubic"], ExitCodes.Usage, "--alpha" },
-        { ["state", "propane", "-T", "300", "-P", "1e5", "--alpha", "mathias-copeman"], ExitCodes.OutOfRange, "Mathias-Copeman" },
+        { ["state", "n-butane", "-T", "300", "-P", "1e5", "--alpha", "mathias-copeman"], ExitCodes.OutOfRange, "Mathias-Copeman" },
         { ["state", "propane", "-T", "300", "-P", "1e5", "--volume-shift", "abc"], ExitCodes.Usage, "--volume-shift" },
         { ["state", "propane", "-T", "300"], ExitCodes.Usage, "--pressure" },
         { ["state", "propane", "-T", "300", "-P", "1e5", "--density", "10"], ExitCodes.Usage, "exactly one" },
