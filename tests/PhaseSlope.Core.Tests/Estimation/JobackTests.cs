@@ -24,6 +24,37 @@ public class JobackTests
         Assert.All(Joback.Groups, g => Assert.True(g.Id.Length > 0 && !g.Id.Contains(',') && !g.Id.Contains(':') && g.Id.Trim() == g.Id, g.Id));
     }
 
+    [Fact]
+    public void Groups_Documentation_ListsEveryGroupWithItsAtomsAndValues()
+    {
+        // docs/estimation.md is where the identifiers are documented: one row per group, in the
+        // table's order, with the atoms, tc, pc, vc and tb the code uses (a blank as "blank").
+        string root = AppContext.BaseDirectory;
+        while (!File.Exists(Path.Combine(root, "PhaseSlope.sln")))
+        {
+            root = Path.GetDirectoryName(root.TrimEnd(Path.DirectorySeparatorChar)) ?? throw new DirectoryNotFoundException("no PhaseSlope.sln above the test binaries");
+        }
+
+        var rows = File.ReadAllLines(Path.Combine(root, "docs", "estimation.md"))
+            .Where(l => l.StartsWith("| `", StringComparison.Ordinal))
+            .Select(l => l.Split('|', StringSplitOptions.TrimEntries)[1..^1])
+            .ToList();
+        Assert.Equal(Joback.Groups.Count, rows.Count);
+        string Cell(double? v) => v is double x ? x.ToString(System.Globalization.CultureInfo.InvariantCulture) : "blank";
+        double? Number(string cell) => cell == "blank" ? null : double.Parse(cell, System.Globalization.CultureInfo.InvariantCulture);
+        for (int i = 0; i < rows.Count; i++)
+        {
+            var g = Joback.Groups[i];
+            string[] r = rows[i];
+            Assert.Equal($"`{g.Id}`", r[0]);
+            Assert.Equal(g.Formula, r[2]);
+            Assert.True(Number(r[3]) == g.Tc && Number(r[4]) == g.Pc && Number(r[5]) == g.Vc && Number(r[6]) == g.Tb,
+                $"{g.Id}: docs {string.Join(" ", r[3..7])}, code {Cell(g.Tc)} {Cell(g.Pc)} {Cell(g.Vc)} {Cell(g.Tb)}");
+            Assert.Equal(g.HeatCapacity is null ? "blank" : "yes", r[7]);
+            Assert.Equal(Lydersen.Increments.ContainsKey(g.Id) ? "yes" : "no", r[8]);
+        }
+    }
+
     [Theory]
     // Atoms of each group including its hydrogens (the structure drawn in the table).
     [InlineData("CH3", "CH3", 4)]
