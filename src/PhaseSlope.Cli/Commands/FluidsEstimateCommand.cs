@@ -17,7 +17,7 @@ internal static class FluidsEstimateCommand
     public static Command Create(CliIo io)
     {
         var options = new FluidsEstimateOptions();
-        var command = new Command("estimate", "Estimate missing constants (Joback; acentric factor from one vapour pressure) and write a fluid file");
+        var command = new Command("estimate", "Estimate missing constants (Joback groups, cross-checked by Lydersen's method; acentric factor from one vapour pressure) and write a fluid file or a report");
         options.AddTo(command);
         command.SetAction(parse => io.Guard(() =>
         {
@@ -376,9 +376,13 @@ internal static class FluidsEstimateCommand
             return head + $"none ({item.Unavailable})";
         }
 
-        string joback = item.Quantity == "acentric_factor" ? "from Joback's Tc and Pc" : "Joback's";
-        string line = head + $"{check.WithUnit(item.CrossCheck!.Value)} against {check.WithUnit(item.Joback!.Value)} {joback} ({check.DifferenceText}, threshold {check.ThresholdText})";
-        return check.Finding is string finding ? line + ". FINDING: " + finding : line;
+        string compared = item.Quantity == "acentric_factor"
+            ? $"{check.WithUnit(item.CrossCheck!.Value)} from Lydersen's Tc and Pc against {check.WithUnit(item.Joback!.Value)} from the file's"
+            : $"{check.WithUnit(item.CrossCheck!.Value)} against Joback's {check.WithUnit(item.Joback!.Value)}";
+        string line = head + $"{compared} ({check.DifferenceText}, threshold {check.ThresholdText})";
+        return check.Finding is string finding ? line + ". FINDING: " + finding
+            : check.Used ? line
+            : line + "; the file takes the value given by the user";
     }
 
     private static SourcedValue EstimateOmega(AcentricFactorMethod method, (double T, double P)? point, double tc, double pc, SourcedValue? tb)

@@ -8,11 +8,16 @@ namespace PhaseSlope.Cli.Output;
 /// with its source, and the Lydersen cross-check of the Joback values.</summary>
 internal static class EstimateReport
 {
+    /// <summary>The caution of every report: estimated constants carry the methods' errors.</summary>
+    public const string Caution = "Estimated constants carry the errors of their methods (a few percent in Tc and Pc, more for small polar molecules): "
+        + "do not size pressure equipment or relief devices, or judge flammability or toxicity hazards, on them without measured data; local codes and licensed practice govern.";
+
     /// <summary>The report as text: identity lines, the values, the cross-check and its findings.</summary>
     public static string Table(Fluid fluid, FluidsEstimateRequest request, IReadOnlyList<EstimateCheck>? checks)
     {
         var text = new StringBuilder();
         text.AppendLine($"fluid: {fluid.Name}");
+        text.AppendLine($"caution: {Caution}");
         text.AppendLine($"formula: {fluid.Formula ?? "not given"}{FormulaNote(request)}");
         if (request.Joback is { } joback)
         {
@@ -60,6 +65,7 @@ internal static class EstimateReport
         {
             json.WriteStartObject();
             json.WriteString("name", fluid.Name);
+            json.WriteString("caution", Caution);
             if (fluid.Formula is null)
             {
                 json.WriteNull("formula");
