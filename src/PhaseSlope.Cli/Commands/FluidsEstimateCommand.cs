@@ -8,7 +8,8 @@ using PhaseSlope.Core.Fluids;
 namespace PhaseSlope.Cli.Commands;
 
 /// <summary><c>phaseslope fluids estimate ...</c>: fill the gaps of a new fluid with published
-/// estimation methods and write a fluid file in our schema.</summary>
+/// estimation methods and write a fluid file in our schema (or, with --format table|json, the
+/// estimate report with the Lydersen cross-check).</summary>
 internal static class FluidsEstimateCommand
 {
     private const string Given = "given by the user";
@@ -103,7 +104,7 @@ internal static class FluidsEstimateCommand
         var groups = parse.GetValue(o.Groups) is string g ? ParseGroups(g) : null;
         double? tbGiven = Temperature(parse.GetValue(o.Tb), "--tb");
         // The method's authors recommend the measured Tb in the Tc relation.
-        var joback = groups is null ? null : Jobacked(groups, tbGiven);
+        var joback = groups is null ? null : JobackOf(groups, tbGiven);
         string jobackSource = joback?.Source ?? "";
         SourcedValue Pick(double? given, Func<JobackEstimate, double?> estimate, Func<JobackGroup, object?> contribution, string option, string what)
         {
@@ -159,7 +160,7 @@ internal static class FluidsEstimateCommand
     }
 
     // The Joback estimate; its refusals (sums outside the relations' domain) are the fault of --groups.
-    private static JobackEstimate Jobacked(IReadOnlyList<(JobackGroup, int)> groups, double? tbGiven)
+    private static JobackEstimate JobackOf(IReadOnlyList<(JobackGroup, int)> groups, double? tbGiven)
     {
         try
         {
