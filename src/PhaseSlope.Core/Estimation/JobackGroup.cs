@@ -1,15 +1,25 @@
+using PhaseSlope.Core.Fluids;
+
 namespace PhaseSlope.Core.Estimation;
 
-/// <summary>One structural group of the Joback method with its contributions.</summary>
-/// <param name="Id">Short identifier used in group lists (for example "CH3", "ring=CH", "OH").</param>
+/// <summary>One structural group of the Joback method with its contributions and the atoms it
+/// stands for.</summary>
+/// <param name="Id">Short identifier used in group lists (for example "CH3", "ring=CH", "OH");
+/// the identifiers are ours and listed in docs/estimation.md.</param>
 /// <param name="Description">The group as drawn, for reports.</param>
-/// <param name="Tc">Contribution to Tc.</param>
-/// <param name="Pc">Contribution to Pc.</param>
-/// <param name="Vc">Contribution to Vc, cm³/mol.</param>
+/// <param name="Formula">The atoms of the group including its hydrogens, as a formula (for example
+/// "CH3" for −CH3, "CHO" for the aldehyde group O=CH−, "N" for >N−).</param>
+/// <param name="Tc">Contribution to Tc, or null where the published table has none.</param>
+/// <param name="Pc">Contribution to Pc, or null where the published table has none.</param>
+/// <param name="Vc">Contribution to Vc, cm³/mol, or null where the published table has none.</param>
 /// <param name="Tb">Contribution to Tb, K.</param>
-/// <param name="A">Ideal-gas heat-capacity contribution a, J/(mol·K).</param>
-/// <param name="B">b, J/(mol·K²).</param>
-/// <param name="C">c, J/(mol·K³).</param>
-/// <param name="D">d, J/(mol·K⁴).</param>
-/// <param name="Atoms">Atoms in the group including its hydrogens (for nA in the Pc relation).</param>
-public sealed record JobackGroup(string Id, string Description, double Tc, double Pc, double Vc, double Tb, double A, double B, double C, double D, int Atoms);
+/// <param name="HeatCapacity">Ideal-gas heat-capacity contributions a, b, c, d, or null where the
+/// published table has none.</param>
+public sealed record JobackGroup(string Id, string Description, string Formula, double? Tc, double? Pc, double? Vc, double Tb, JobackHeatCapacityTerms? HeatCapacity)
+{
+    /// <summary>Element counts of the group (from <see cref="Formula"/>).</summary>
+    public IReadOnlyDictionary<string, int> Composition { get; } = ChemicalFormula.Parse(Formula);
+
+    /// <summary>Atoms in the group including its hydrogens (for nA in the Pc relation).</summary>
+    public int Atoms => Composition.Values.Sum();
+}

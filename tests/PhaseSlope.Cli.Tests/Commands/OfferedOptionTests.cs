@@ -243,6 +243,9 @@ public sealed class OfferedOptionTests : IDisposable
         yield return Refused("fluids estimate", "--vapour-pressure", [.. estimate, "--omega", "0.3", "--vapour-pressure", "400 K, 300 kPa"]);
         yield return Changes("fluids estimate", "--omega-method", estimate, "--omega-method", "edmister");
         yield return Refused("fluids estimate", "--omega-method", [.. estimate, "--omega", "0.3", "--omega-method", "edmister"]);
+        yield return Changes("fluids estimate", "--format", estimate, "--format", "table");
+        yield return Changes("fluids estimate", "--format", estimate, "--format", "json");
+        yield return Refused("fluids estimate", "--format", [.. estimate, "--format", "xml"]);
         yield return Changes("fluids estimate", "--out", estimate, "--out", "{dir}/out.fluid");
     }
 

@@ -5,7 +5,8 @@ using PhaseSlope.Core.Tests.TestSupport;
 
 namespace PhaseSlope.Core.Tests.Estimation;
 
-/// <summary>Acentric factor from one vapour pressure, and the Joback group-contribution method.</summary>
+/// <summary>Acentric factor from one vapour pressure, and chemical formulas (the group methods
+/// are tested in <see cref="JobackTests"/> and <see cref="LydersenTests"/>).</summary>
 public class EstimationTests
 {
     [Theory]
@@ -54,66 +55,6 @@ public class EstimationTests
         Assert.Throws<InvalidInputException>(() => CorrespondingStates.AcentricFactor(AcentricFactorMethod.LeeKesler, 500, 4e6, 400, 5e6));
     }
 
-    private static IReadOnlyList<(JobackGroup, int)> Groups(params (string Id, int Count)[] groups)
-        => groups.Select(g => (Joback.Groups.Single(x => x.Id == g.Id), g.Count)).ToArray();
-
-    [Fact]
-    public void Joback_Toluene_HandCalculationOfThePublishedFormulas()
-    {
-        // Toluene = 5 ring =CH-, 1 ring =C<, 1 -CH3 (15 atoms). With the group values of the
-        // method: Σtb = 188.24 → Tb = 386.24 K; Σtc = 0.0694 → Tc = 386.24/(0.584 + 0.965·0.0694 −
-        // 0.0694²) = 597.75 K; Σpc = 0.0051 → Pc = (0.113 + 0.0032·15 − 0.0051)⁻² bar = 41.14 bar;
-        // Vc = 17.5 + 5·41 + 32 + 65 = 319.5 cm³/mol.
-        var estimate = Joback.Estimate(Groups(("ring=CH", 5), ("ring=C", 1), ("CH3", 1)));
-
-        AssertClose.Relative(386.24, estimate.NormalBoilingPoint, 1e-12, "Tb");
-        AssertClose.Relative(386.24 / (0.584 + 0.965 * 0.0694 - 0.0694 * 0.0694), estimate.CriticalTemperature, 1e-12, "Tc");
-        AssertClose.Relative(1e5 / Math.Pow(0.113 + 0.0032 * 15 - 0.0051, 2), estimate.CriticalPressure, 1e-12, "Pc");
-        AssertClose.Relative(319.5e-6, estimate.CriticalVolume, 1e-12, "Vc");
-        Assert.Equal(15, estimate.Atoms);
-    }
-
-    public static TheoryData<string, (string, int)[], double> MeasuredComparisons => new()
-    {
-        // fluid, groups, and the catalog (measured) Tb that the Tc relation may use
-        { "toluene", [("ring=CH", 5), ("ring=C", 1), ("CH3", 1)], 383.8 },
-        { "acetone", [("CH3", 2), ("C=O", 1)], 329.2 },
-        { "n-hexane", [("CH3", 2), ("CH2", 4)], 341.9 },
-        { "cyclohexane", [("ring-CH2", 6)], 353.9 },
-        { "n-octane", [("CH3", 2), ("CH2", 6)], 398.8 },
-        // Known outliers of the method are left out rather than hidden behind a wide tolerance:
-        // isobutane (Tb 29 K high) and methanol (Pc 17 % low), measured with these groups.
-    };
-
-    [Theory]
-    [MemberData(nameof(MeasuredComparisons))]
-    public void Joback_AgainstTheCatalog_WithinTheMethodsTypicalErrors(string name, (string, int)[] groups, double tb)
-    {
-        // Errors quoted for the method (Joback & Reid 1987; Poling et al. 5th ed. ch. 2; from
-        // memory, common practice): Tb within about 12 K on average (up to ~25 K for small polar
-        // molecules), Tc within about 2 % with a measured Tb, Pc within about 8 %.
-        Fluid fluid = FluidCatalog.Embedded.Find(name);
-        var estimate = Joback.Estimate(Groups(groups), tb);
-
-        AssertClose.Absolute(fluid.NormalBoilingPoint!.Value, estimate.NormalBoilingPoint, 25, $"{name} Joback Tb");
-        AssertClose.Relative(fluid.CriticalTemperature.Value, estimate.CriticalTemperature, 0.02, $"{name} Joback Tc");
-        AssertClose.Relative(fluid.CriticalPressure.Value, estimate.CriticalPressure, 0.08, $"{name} Joback Pc");
-        Assert.True(estimate.UsedMeasuredBoilingPoint);
-        Assert.Contains("estimated by the Joback", estimate.IdealGasHeatCapacity.Source, StringComparison.Ordinal);
-        // cp° within 5 % of the catalog correlation at 298.15 K (group contributions are that close).
-        AssertClose.Relative(fluid.IdealGasHeatCapacity!.HeatCapacity(298.15), estimate.IdealGasHeatCapacity.HeatCapacity(298.15), 0.05, $"{name} Joback cp°");
-    }
-
-    [Fact]
-    public void Joback_BadGroups_AreRefused()
-    {
-        Assert.Throws<InvalidInputException>(() => Joback.Estimate([]));
-        Assert.Throws<InvalidInputException>(() => Joback.Estimate([(Joback.Groups[0], 0)]));
-        Assert.False(Joback.TryFindGroup("CH5", out _));
-        Assert.True(Joback.TryFindGroup("ring=ch", out var g));
-        Assert.Equal("ring=CH", g!.Id);
-    }
-
     [Fact]
     public void ChemicalFormula_MolarMass_FromIupacWeights()
     {
@@ -124,5 +65,33 @@ public class EstimationTests
         Assert.Throws<InvalidInputException>(() => ChemicalFormula.MolarMass("C7H8x"));
         Assert.Throws<InvalidInputException>(() => ChemicalFormula.MolarMass("Zz2"));
         Assert.Throws<InvalidInputException>(() => ChemicalFormula.MolarMass(""));
+        Assert.Throws<InvalidInputException>(() => ChemicalFormula.MolarMass("C0H4"));
+        Assert.Throws<InvalidInputException>(() => ChemicalFormula.MolarMass("C99999999999"));
+    }
+
+    [Theory]
+    // Element counts: repeated symbols add up (ethanol written by its structure is C2H6O).
+    [InlineData("CH3CH2OH", "C2H6O")]
+    [InlineData("C7H8", "C7H8")]
+    [InlineData("ClCH2Cl", "CH2Cl2")]
+    // Hill order (Hill, J. Am. Chem. Soc. 22, 478 (1900)): C, H, then alphabetical; without carbon
+    // all alphabetical (from memory, the convention of formula indexes).
+    [InlineData("OSCCl2", "CCl2OS")]
+    [InlineData("H2O", "H2O")]
+    [InlineData("NH3", "H3N")]
+    [InlineData("ClH", "ClH")]
+    public void ChemicalFormula_ParseAndHill_CountsEachElementOnce(string formula, string hill)
+    {
+        var counts = ChemicalFormula.Parse(formula);
+        Assert.Equal(hill, ChemicalFormula.Hill(counts));
+        AssertClose.Relative(ChemicalFormula.MolarMass(hill), ChemicalFormula.MolarMass(counts), 1e-15, $"{formula} molar mass from the counts");
+    }
+
+    [Fact]
+    public void ChemicalFormula_Difference_NamesTheElementsThatDiffer()
+    {
+        Assert.Null(ChemicalFormula.Difference(ChemicalFormula.Parse("C2H6O"), ChemicalFormula.Parse("CH3CH2OH")));
+        Assert.Equal("C 3 vs 4, H 8 vs 10", ChemicalFormula.Difference(ChemicalFormula.Parse("C3H8"), ChemicalFormula.Parse("C4H10")));
+        Assert.Equal("H 6 vs 5, Cl 0 vs 1", ChemicalFormula.Difference(ChemicalFormula.Parse("C6H6"), ChemicalFormula.Parse("C6H5Cl")));
     }
 }
