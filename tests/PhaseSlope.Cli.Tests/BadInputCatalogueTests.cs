@@ -67,7 +67,7 @@ public class BadInputCatalogueTests
         { ["latent", "{dir}/falling.csv", "--form", "antoine"], ExitCodes.OutOfRange, "the vapour pressure falls with temperature, from 1802700 Pa" },
         { ["latent", "{dir}/ok.csv", "--fluid", "propane", "--form", "antoine", "--temperature", "600"], ExitCodes.OutOfRange, "temperature 600 K is at or above the critical temperature 36" },
         { ["latent", "{dir}/no-such.csv", "--from", "300", "--to", "200"], ExitCodes.Usage, "--from (300 K) must be below --to (200 K)" },
-        { ["audit", "--form", "antoine", "--coefficients", "1,2"], ExitCodes.Usage, "--coefficients: the antoine form takes 3 coefficients, got 2" },
+        { ["audit", "--form", "antoine", "--coefficients", "1,2"], ExitCodes.Usage, "--coefficients: the antoine form takes 3 coefficients (A,B,C), got 2" },
         { ["audit", "--form", "antoine", "--coefficients", "9.1,1872,-25", "--log-base", "7"], ExitCodes.Usage, "--log-base: unknown log base '7' (use 10 or e)" },
         { ["audit", "--form", "antoine", "--coefficients", "9.1,1872,-25", "--correlation-pressure-unit", "mmhg"], ExitCodes.Usage, "--correlation-pressure-unit: unknown pressure unit 'mmhg'; d" },
         { ["audit", "--form", "antoine", "--coefficients", "9.1,1872,-25", "--eos", "pr"], ExitCodes.Usage, "--eos: needs --fluid (the model's vapour pressure is compute" },

@@ -88,7 +88,7 @@ public class AuditCommandTests
     [InlineData("--correlation-pressure-unit", "kpa", "--correlation-pressure-unit: unknown pressure unit 'kpa'; did you mean kPa?")]
     [InlineData("--correlation-pressure-unit", "GPa", "--correlation-pressure-unit: pressure unit 'GPa' is not offered for published correlations")]
     [InlineData("--correlation-temperature-unit", "C", "--correlation-temperature-unit: unknown temperature unit 'C'; did you mean")]
-    [InlineData("--correlation-temperature-unit", "degF", "--correlation-temperature-unit: temperature unit 'degF' is not offered for published correlations")]
+    [InlineData("--correlation-temperature-unit", "degf", "--correlation-temperature-unit: unknown temperature unit 'degf'; did you mean degF?")]
     public void Units_come_from_the_one_table_case_sensitively(string option, string value, string message)
     {
         var args = new List<string> { "audit", "--form", "antoine", "--coefficients", LangeWater, "--range", "1,100", "--log-base", "10", "--correlation-pressure-unit", "mmHg", "--correlation-temperature-unit", "degC" };

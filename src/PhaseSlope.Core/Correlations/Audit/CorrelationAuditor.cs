@@ -303,7 +303,7 @@ public static class CorrelationAuditor
         PublishedPressureUnit[] units = request.PressureUnit is PublishedPressureUnit u ? [u] : [.. PublishedConvention.PressureUnits];
         PublishedTemperatureUnit[] scales = request.TemperatureUnit is PublishedTemperatureUnit t ? [t] : [.. PublishedConvention.DetectedTemperatureUnits];
         var candidates = new List<PublishedConvention>();
-        string? invalid = null;
+        InvalidInputException? invalid = null;
         foreach (var lb in bases)
         {
             foreach (var pu in units)
@@ -321,9 +321,9 @@ public static class CorrelationAuditor
                         _ = correlation.ToSi(convention);
                         candidates.Add(convention);
                     }
-                    catch (ArgumentException ex)
+                    catch (InvalidInputException ex)
                     {
-                        invalid ??= ex.Message; // a Wagner Tc or Pc that is not positive in this reading
+                        invalid ??= ex; // a Wagner Tc or Pc that is not positive in this reading
                     }
                 }
             }
@@ -331,7 +331,7 @@ public static class CorrelationAuditor
 
         return candidates.Count > 0
             ? candidates
-            : throw new InvalidInputException("coefficients", double.NaN, invalid ?? $"no convention can be read for the {correlation.FormId} form");
+            : throw invalid ?? new InvalidInputException("coefficients", double.NaN, $"no convention can be read for the {correlation.FormId} form");
     }
 
     private sealed record ModelPoint(double Temperature, double LnPressure, double CompressibilityChange);

@@ -1,4 +1,5 @@
 using System.Globalization;
+using PhaseSlope.Core.Errors;
 
 namespace PhaseSlope.Core.Correlations.Audit;
 
@@ -33,8 +34,7 @@ public sealed record PublishedCorrelation
     public static IReadOnlyList<string> FormIds { get; } = ["antoine", "clausius-clapeyron", "kirchhoff", "riedel", "antoine-extended", "wagner-3-6", "wagner-2.5-5", "wagner-6"];
 
     /// <summary>Creates a correlation; the coefficient count must match the form.</summary>
-    /// <exception cref="ArgumentException">Unknown form, wrong number of coefficients, or a Wagner
-    /// Tc or Pc that is not positive.</exception>
+    /// <exception cref="ArgumentException">Unknown form or wrong number of coefficients.</exception>
     public PublishedCorrelation(string formId, IReadOnlyList<double> coefficients)
     {
         ArgumentNullException.ThrowIfNull(formId);
@@ -109,8 +109,8 @@ public sealed record PublishedCorrelation
 
     /// <summary>The SI natural-log form this correlation converts to in the convention (for a
     /// Wagner form, with its Tc and Pc converted to K and Pa).</summary>
-    /// <exception cref="ArgumentException">A convention the form does not admit, or a Wagner Tc or Pc
-    /// that is not positive in SI.</exception>
+    /// <exception cref="ArgumentException">A convention the form does not admit.</exception>
+    /// <exception cref="InvalidInputException">A Wagner Tc or Pc that is not positive in SI.</exception>
     public VapourPressureForm Form(PublishedConvention convention) => ToSi(convention).Form;
 
     /// <summary>The coefficients converted exactly to ln(P/Pa) with T in K.</summary>
@@ -118,8 +118,8 @@ public sealed record PublishedCorrelation
     public double[] SiCoefficients(PublishedConvention convention) => ToSi(convention).Parameters;
 
     /// <summary>The SI form and its parameters (ln(P/Pa), T in K).</summary>
-    /// <exception cref="ArgumentException">A convention the form does not admit, or a Wagner Tc or Pc
-    /// that is not positive in SI.</exception>
+    /// <exception cref="ArgumentException">A convention the form does not admit.</exception>
+    /// <exception cref="InvalidInputException">A Wagner Tc or Pc that is not positive in SI.</exception>
     public (VapourPressureForm Form, double[] Parameters) ToSi(PublishedConvention convention)
     {
         ArgumentNullException.ThrowIfNull(convention);
@@ -151,7 +151,8 @@ public sealed record PublishedCorrelation
                 double pc = c[n + 1] * PublishedConvention.PascalsPer(convention.PressureUnit);
                 if (!(tc > 0) || !(pc > 0))
                 {
-                    throw new ArgumentException($"the {FormId} form needs Tc > 0 K and Pc > 0 Pa; read as {convention} they are {Preconditions.Format(tc)} K and {Preconditions.Format(pc)} Pa", nameof(convention));
+                    throw new InvalidInputException(!(tc > 0) ? "critical temperature" : "critical pressure", !(tc > 0) ? tc : pc,
+                        $"the {FormId} form needs Tc > 0 K and Pc > 0 Pa; read as {convention} its Tc and Pc are {Preconditions.Format(tc)} K and {Preconditions.Format(pc)} Pa");
                 }
 
                 var form = FormId switch
