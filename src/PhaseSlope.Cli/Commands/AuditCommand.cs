@@ -168,6 +168,7 @@ internal static class AuditCommand
                 w.WritePropertyName("convention");
                 WriteConvention(w, candidate.Convention);
                 Number(w, "score", candidate.Score);
+                Number(w, "separation", candidate.Separation);
                 w.WriteStartArray("anchors");
                 foreach (var e in candidate.Evidence)
                 {

@@ -52,7 +52,8 @@ public sealed record AuditReport
     /// <summary>The most plausible candidate (null when nothing was detected).</summary>
     public required ConventionCandidate? Best { get; init; }
 
-    /// <summary>The runner-up candidate (null when there was only one candidate or nothing to detect).</summary>
+    /// <summary>The runner-up candidate: the second-best score, or, when detection refused as
+    /// ambiguous, the candidate it could not exclude (null when there was only one candidate).</summary>
     public required ConventionCandidate? RunnerUp { get; init; }
 
     /// <summary>The SI natural-log coefficients (ln(P/Pa), T in K), or null without a convention.</summary>
