@@ -12,13 +12,14 @@ public sealed record AuditRequest
     /// <summary>The correlation as printed.</summary>
     public required PublishedCorrelation Correlation { get; init; }
 
-    /// <summary>The stated log base, or null to detect it.</summary>
+    /// <summary>The stated log base, or null to detect it (e only for the Wagner forms).</summary>
     public LogBase? LogBase { get; init; }
 
     /// <summary>The stated pressure unit, or null to detect it.</summary>
     public PublishedPressureUnit? PressureUnit { get; init; }
 
-    /// <summary>The stated temperature scale, or null to detect it (kelvin only for forms other than Antoine).</summary>
+    /// <summary>The stated temperature scale, or null to detect it (K or degC); only an absolute
+    /// scale (K, degR) for the forms with 1/T or log T terms (<see cref="PublishedCorrelation.Refusal"/>).</summary>
     public PublishedTemperatureUnit? TemperatureUnit { get; init; }
 
     /// <summary>The stated range of validity (K), or null for the data's range, else the default range for the fluid.</summary>
@@ -164,8 +165,10 @@ public static class CorrelationAuditor
     }
 
     /// <summary>Runs the audit.</summary>
-    /// <exception cref="ArgumentException">No range can be set (no range, data or fluid), or a bad range.</exception>
-    /// <exception cref="InvalidInputException">Coefficients that overflow (no finite pressure on the range).</exception>
+    /// <exception cref="ArgumentException">No range can be set (no range, data or fluid), a bad range,
+    /// or a stated log base or scale the form (or the second correlation's) does not admit.</exception>
+    /// <exception cref="InvalidInputException">Coefficients that overflow (no finite pressure on the
+    /// range), or a Wagner Tc or Pc that is not positive in any candidate reading.</exception>
     public static AuditReport Audit(AuditRequest request)
     {
         ArgumentNullException.ThrowIfNull(request);

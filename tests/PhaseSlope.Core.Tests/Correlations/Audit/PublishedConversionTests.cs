@@ -93,8 +93,10 @@ public class PublishedConversionTests
     public void Perry_water_set_in_the_extended_form_follows_the_IAPWS_curve()
     {
         // The extended form evaluated independently: the Perry set against the IAPWS equation
-        // (Wagner & Pruss 1993, from memory). Perry's table states fits within about 1 % over
-        // the liquid range (from memory); 1 % from 280 K to 600 K is that claim.
+        // (Wagner & Pruss 1993, from memory). A five-constant set fitted over the whole liquid
+        // range is expected to stay within about 1 % of the reference curve well below Tc
+        // (common practice for such compilations); a wrong evaluation of any term (T², ln T,
+        // the pole) would be off by orders of magnitude.
         var form = new ExtendedAntoineForm();
         foreach (double t in SyntheticSaturationData.Temperatures(280, 600, 17))
         {
