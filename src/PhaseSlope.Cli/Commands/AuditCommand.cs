@@ -80,10 +80,10 @@ internal static class AuditCommand
                 ? $"{option}: pressure unit '{DataFileException.OneLine(text.Trim())}' is not offered for published correlations (use Pa, kPa, MPa, bar, mmHg, torr, atm or psi)"
                 : $"{option}: {DataFileException.OneLine(UnitTable.UnknownMessage(text, "pressure", Dimension.Pressure))}");
 
+    /// <summary>K, degC, degF or degR: every temperature unit of the one table is offered.</summary>
     internal static PublishedTemperatureUnit Temperature(string text, string option)
-        => PublishedConvention.TryParseTemperatureUnit(text, out var u) ? u : throw new UsageException(UnitTable.TryFind(text, out _, Dimension.Temperature)
-            ? $"{option}: temperature unit '{DataFileException.OneLine(text.Trim())}' is not offered for published correlations (use K, degC, degF or degR)"
-            : $"{option}: {DataFileException.OneLine(UnitTable.UnknownMessage(text, "temperature", Dimension.Temperature))}");
+        => PublishedConvention.TryParseTemperatureUnit(text, out var u) ? u
+            : throw new UsageException($"{option}: {DataFileException.OneLine(UnitTable.UnknownMessage(text, "temperature", Dimension.Temperature))}");
 
     internal static (double, double) Range(string text, PublishedTemperatureUnit? unit)
     {

@@ -59,6 +59,18 @@ internal static class FitWriter
                 {
                     FiniteNumbers.Check(v, $"the covariance in {convention}");
                 }
+
+                // J·Σ·Jᵀ is positive semi-definite, but where Σ is nearly singular its rounding can
+                // leave a variance below zero: then the printed standard errors are undefined, as
+                // the fit's are when its own covariance is (never a square root of a negative number).
+                for (int i = 0; i < covariance.GetLength(0); i++)
+                {
+                    if (!(covariance[i, i] >= 0))
+                    {
+                        covariance = null;
+                        break;
+                    }
+                }
             }
 
             return new Printed(convention, correlation, covariance);
