@@ -52,7 +52,7 @@ internal sealed class FitOptions
     public OutputOption Out { get; } = new();
 
     /// <summary>--log-base: as audit's, the logarithm of the printed correlation.</summary>
-    public Option<string> LogBase { get; } = new("--log-base") { Description = "Print the coefficients also for log base 10 or e (with the correlation units below; unset parts stay e, Pa, K); e only for the Wagner forms" };
+    public Option<string> LogBase { get; } = new("--log-base") { Description = "Print the coefficients also for log base 10 or e, as audit reads them (with --correlation-pressure-unit and --correlation-temperature-unit; parts not given stay e, Pa, K); e only for the Wagner forms" };
 
     /// <summary>--correlation-pressure-unit: as audit's, the printed correlation's pressure unit.</summary>
     public Option<string> PressureUnit { get; } = new("--correlation-pressure-unit") { Description = "Print the coefficients also for P in Pa, kPa, MPa, bar, mmHg (conventional), torr, atm or psi (the Wagner forms: Pc in it)" };
