@@ -51,10 +51,24 @@ internal static class AuditCommand
                 ? v : throw new UsageException($"{coefficientOption}: '{part.Trim()}' is not a number (comma-separated, dot as decimal separator)"));
         }
 
-        int expected = PublishedCorrelation.CoefficientCount(id);
-        return values.Count == expected
+        var names = PublishedCorrelation.CoefficientNames(id);
+        return values.Count == names.Count
             ? new PublishedCorrelation(id, values)
-            : throw new UsageException($"{coefficientOption}: the {id} form takes {expected} coefficients, got {values.Count}");
+            : throw new UsageException($"{coefficientOption}: the {id} form takes {names.Count} coefficients ({string.Join(",", names)}), got {values.Count}");
+    }
+
+    /// <summary>Refuses a stated log base or temperature scale the form cannot be printed in.</summary>
+    internal static void RequireAdmitted(string formId, LogBase? logBase, string logBaseOption, PublishedTemperatureUnit? temperatureUnit, string temperatureOption)
+    {
+        if (PublishedCorrelation.Refusal(formId, logBase, null) is string baseWhy)
+        {
+            throw new UsageException($"{logBaseOption}: {baseWhy}");
+        }
+
+        if (PublishedCorrelation.Refusal(formId, null, temperatureUnit) is string scaleWhy)
+        {
+            throw new UsageException($"{temperatureOption}: {scaleWhy}");
+        }
     }
 
     internal static LogBase Base(string text, string option)
@@ -66,19 +80,10 @@ internal static class AuditCommand
                 ? $"{option}: pressure unit '{DataFileException.OneLine(text.Trim())}' is not offered for published correlations (use Pa, kPa, MPa, bar, mmHg, torr, atm or psi)"
                 : $"{option}: {DataFileException.OneLine(UnitTable.UnknownMessage(text, "pressure", Dimension.Pressure))}");
 
-    internal static PublishedTemperatureUnit Temperature(string text, string option, PublishedCorrelation correlation)
-    {
-        if (!PublishedConvention.TryParseTemperatureUnit(text, out var u))
-        {
-            throw new UsageException(UnitTable.TryFind(text, out _, Dimension.Temperature)
-                ? $"{option}: temperature unit '{DataFileException.OneLine(text.Trim())}' is not offered for published correlations (use K or degC)"
-                : $"{option}: {DataFileException.OneLine(UnitTable.UnknownMessage(text, "temperature", Dimension.Temperature))}");
-        }
-
-        return u == PublishedTemperatureUnit.Celsius && !correlation.AllowsCelsius
-            ? throw new UsageException($"{option}: the {correlation.FormId} form takes T in K only")
-            : u;
-    }
+    /// <summary>K, degC, degF or degR: every temperature unit of the one table is offered.</summary>
+    internal static PublishedTemperatureUnit Temperature(string text, string option)
+        => PublishedConvention.TryParseTemperatureUnit(text, out var u) ? u
+            : throw new UsageException($"{option}: {DataFileException.OneLine(UnitTable.UnknownMessage(text, "temperature", Dimension.Temperature))}");
 
     internal static (double, double) Range(string text, PublishedTemperatureUnit? unit)
     {
@@ -92,7 +97,7 @@ internal static class AuditCommand
         {
             string v = s.Trim();
             bool bare = double.TryParse(v, NumberStyles.Float, CultureInfo.InvariantCulture, out _);
-            return QuantityParser.ParseTemperature(bare && unit == PublishedTemperatureUnit.Celsius ? v + " degC" : v, "--range");
+            return QuantityParser.ParseTemperature(bare && unit is PublishedTemperatureUnit u ? $"{v} {PublishedConvention.Symbol(u)}" : v, "--range");
         }
 
         double lo = Parse(parts[0]);
@@ -163,6 +168,7 @@ internal static class AuditCommand
                 w.WritePropertyName("convention");
                 WriteConvention(w, candidate.Convention);
                 Number(w, "score", candidate.Score);
+                Number(w, "separation", candidate.Separation);
                 w.WriteStartArray("anchors");
                 foreach (var e in candidate.Evidence)
                 {
@@ -245,16 +251,16 @@ internal sealed class AuditOptions
     public Option<string> Form { get; } = new("--form") { Description = $"Printed form: {string.Join(", ", PublishedCorrelation.FormIds)}", Required = true };
 
     /// <summary>--coefficients.</summary>
-    public Option<string> Coefficients { get; } = new("--coefficients") { Description = "Coefficients as printed, comma-separated (A,B,C for antoine and kirchhoff, A,B for clausius-clapeyron, A,B,C,D for riedel); bare numbers in the printed form's own units", Required = true };
+    public Option<string> Coefficients { get; } = new("--coefficients") { Description = "Coefficients as printed, comma-separated (A,B,C for antoine and kirchhoff, A,B for clausius-clapeyron, A,B,C,D for riedel, A,B,C,D,E,F,G for antoine-extended, a,b,c,d,Tc,Pc for wagner-3-6 and wagner-2.5-5, a,b,c,d,e,f,Tc,Pc for wagner-6); bare numbers in the printed form's own units (Tc and Pc in the correlation's temperature and pressure units)", Required = true };
 
     /// <summary>--log-base.</summary>
-    public Option<string> LogBase { get; } = new("--log-base") { Description = "Logarithm of the printed form: 10 or e (omit to detect)" };
+    public Option<string> LogBase { get; } = new("--log-base") { Description = "Logarithm of the printed form: 10 or e (e only for the Wagner forms; omit to detect)" };
 
     /// <summary>--correlation-pressure-unit.</summary>
     public Option<string> PressureUnit { get; } = new("--correlation-pressure-unit") { Description = "Pressure unit of the printed form: Pa, kPa, MPa, bar, mmHg (conventional, 133.322387415 Pa), torr, atm, psi (omit to detect; detection never picks torr)" };
 
     /// <summary>--correlation-temperature-unit.</summary>
-    public Option<string> TemperatureUnit { get; } = new("--correlation-temperature-unit") { Description = "Temperature of the printed form: K or degC (degC for antoine only; omit to detect)" };
+    public Option<string> TemperatureUnit { get; } = new("--correlation-temperature-unit") { Description = "Temperature of the printed form: K, degC, degF or degR (degC and degF for antoine, and for the Wagner forms' Tc; omit to detect, which tries K and degC)" };
 
     /// <summary>--range.</summary>
     public Option<string> Range { get; } = new("--range") { Description = "Stated range TMIN,TMAX (bare numbers in --correlation-temperature-unit if given, else K; or with units, e.g. \"1 degC,100 degC\")" };
@@ -316,7 +322,8 @@ internal sealed class AuditOptions
         var correlation = AuditCommand.Correlation(parse.GetValue(Form)!, parse.GetValue(Coefficients)!, "--form", "--coefficients");
         var logBase = parse.GetValue(LogBase) is string b ? AuditCommand.Base(b, "--log-base") : (LogBase?)null;
         var pressureUnit = parse.GetValue(PressureUnit) is string p ? AuditCommand.Pressure(p, "--correlation-pressure-unit") : (PublishedPressureUnit?)null;
-        var temperatureUnit = parse.GetValue(TemperatureUnit) is string t ? AuditCommand.Temperature(t, "--correlation-temperature-unit", correlation) : (PublishedTemperatureUnit?)null;
+        var temperatureUnit = parse.GetValue(TemperatureUnit) is string t ? AuditCommand.Temperature(t, "--correlation-temperature-unit") : (PublishedTemperatureUnit?)null;
+        AuditCommand.RequireAdmitted(correlation.FormId, logBase, "--log-base", temperatureUnit, "--correlation-temperature-unit");
         (double, double)? range = parse.GetValue(Range) is string r ? AuditCommand.Range(r, temperatureUnit) : null;
         PublishedCorrelation? second = null;
         if (parse.GetValue(Against) is string a)
@@ -337,7 +344,11 @@ internal sealed class AuditOptions
 
         var againstLogBase = parse.GetValue(LogBase2) is string b2 ? AuditCommand.Base(b2, "--log-base2") : (LogBase?)null;
         var againstPressureUnit = parse.GetValue(PressureUnit2) is string p2 ? AuditCommand.Pressure(p2, "--correlation-pressure-unit2") : (PublishedPressureUnit?)null;
-        var againstTemperatureUnit = parse.GetValue(TemperatureUnit2) is string t2 && second is not null ? AuditCommand.Temperature(t2, "--correlation-temperature-unit2", second) : (PublishedTemperatureUnit?)null;
+        var againstTemperatureUnit = parse.GetValue(TemperatureUnit2) is string t2 && second is not null ? AuditCommand.Temperature(t2, "--correlation-temperature-unit2") : (PublishedTemperatureUnit?)null;
+        if (second is not null)
+        {
+            AuditCommand.RequireAdmitted(second.FormId, againstLogBase, "--log-base2", againstTemperatureUnit, "--correlation-temperature-unit2");
+        }
 
         // --eos is read (and checked) before the fluid; it chooses the model the fluid's checks use.
         var kind = Common.ModelKind(parse);

@@ -2,6 +2,7 @@ using System.Text;
 using System.Text.Json;
 using PhaseSlope.Cli.Units;
 using PhaseSlope.Core.Correlations;
+using PhaseSlope.Core.Correlations.Audit;
 
 namespace PhaseSlope.Cli.Output;
 
@@ -12,22 +13,80 @@ internal static class FitWriter
     /// other forms tried by auto.</summary>
     /// <remarks>The text streams out in chunks as it is made (a fit to a million points has a
     /// million residual rows), rather than being built as one string first.</remarks>
-    public static void Fit(TextWriter output, VapourPressureFit fit, IReadOnlyList<VapourPressureFit> candidates, OutputFormat format)
+    /// <param name="output">Where the text goes.</param>
+    /// <param name="fit">The fit reported.</param>
+    /// <param name="candidates">The forms auto tried (one element otherwise).</param>
+    /// <param name="format">Table, CSV or JSON.</param>
+    /// <param name="convention">A published convention to print the coefficients in as well (table
+    /// and JSON), or null.</param>
+    public static void Fit(TextWriter output, VapourPressureFit fit, IReadOnlyList<VapourPressureFit> candidates, OutputFormat format, PublishedConvention? convention = null)
     {
         CheckFinite(fit);
+        var printed = convention is null ? null : Printed.Of(fit, convention);
         using var chunked = new ChunkedTextWriter(output);
         switch (format)
         {
             case OutputFormat.Json:
-                FitJson(chunked, fit, candidates);
+                FitJson(chunked, fit, candidates, printed);
                 break;
             case OutputFormat.Csv:
                 FitCsv(chunked, fit);
                 break;
             default:
-                FitTable(chunked, fit, candidates);
+                FitTable(chunked, fit, candidates, printed);
                 break;
         }
+    }
+
+    /// <summary>A fit's coefficients in a published convention, with their covariance (J·Σ·Jᵀ) when
+    /// the fit's is defined; every number checked finite before anything is written.</summary>
+    private sealed record Printed(PublishedConvention Convention, PublishedCorrelation Correlation, double[,]? Covariance)
+    {
+        public static Printed Of(VapourPressureFit fit, PublishedConvention convention)
+        {
+            var correlation = PublishedCorrelation.FromSi(fit.Form, fit.Parameters, convention);
+            var names = PublishedCorrelation.CoefficientNames(correlation.FormId);
+            for (int i = 0; i < correlation.Coefficients.Count; i++)
+            {
+                FiniteNumbers.Check(correlation.Coefficients[i], $"coefficient {names[i]} in {convention}");
+            }
+
+            double[,]? covariance = null;
+            if (fit.CovarianceDefined)
+            {
+                covariance = PublishedCorrelation.Covariance(fit.Form, fit.Parameters, fit.Covariance, convention);
+                foreach (double v in covariance)
+                {
+                    FiniteNumbers.Check(v, $"the covariance in {convention}");
+                }
+
+                // J·Σ·Jᵀ is positive semi-definite, but where Σ is nearly singular its rounding can
+                // leave a variance below zero: then the printed standard errors are undefined, as
+                // the fit's are when its own covariance is (never a square root of a negative number).
+                for (int i = 0; i < covariance.GetLength(0); i++)
+                {
+                    if (!(covariance[i, i] >= 0))
+                    {
+                        covariance = null;
+                        break;
+                    }
+                }
+            }
+
+            return new Printed(convention, correlation, covariance);
+        }
+
+        public IReadOnlyList<string> Names => PublishedCorrelation.CoefficientNames(Correlation.FormId);
+
+        /// <summary>Standard error of printed coefficient i, or null for a given (not fitted) Tc or Pc
+        /// or without a covariance.</summary>
+        public double? StandardError(int i) => Covariance is not null && i < Covariance.GetLength(0) ? Math.Sqrt(Covariance[i, i]) : null;
+
+        /// <summary>The audit command line that reads these coefficients back.</summary>
+        public string AuditArguments
+            => $"--form {Correlation.FormId} --coefficients {string.Join(",", Correlation.Coefficients.Select(NumberText.RoundTrip))} "
+            + $"--log-base {PublishedConvention.Symbol(Convention.LogBase)} --correlation-pressure-unit {PublishedConvention.Symbol(Convention.PressureUnit)} "
+            + $"--correlation-temperature-unit {PublishedConvention.Symbol(Convention.TemperatureUnit)}";
     }
 
     /// <summary>Why a fit has no covariance (see <see cref="VapourPressureFit.CovarianceDefined"/>).</summary>
@@ -49,11 +108,16 @@ internal static class FitWriter
         }
     }
 
-    private static void FitJson(TextWriter output, VapourPressureFit fit, IReadOnlyList<VapourPressureFit> candidates)
+    private static void FitJson(TextWriter output, VapourPressureFit fit, IReadOnlyList<VapourPressureFit> candidates, Printed? printed)
         => JsonText.Write(output, json =>
         {
             json.WriteStartObject();
             WriteFit(json, fit);
+            if (printed is not null)
+            {
+                WritePrinted(json, printed);
+            }
+
             json.WriteStartArray("residuals");
             // Each list is computed once (the properties compute it on every access).
             var deviations = fit.DeviationsPercent;
@@ -218,6 +282,57 @@ internal static class FitWriter
         json.WriteString("stop_reason", fit.StopReason);
     }
 
+    private static void WritePrinted(Utf8JsonWriter json, Printed printed)
+    {
+        var names = printed.Names;
+        var c = printed.Correlation;
+        json.WriteStartObject("published");
+        json.WriteString("form", c.FormId);
+        json.WriteString("log_base", PublishedConvention.Symbol(printed.Convention.LogBase));
+        json.WriteString("pressure_unit", PublishedConvention.Symbol(printed.Convention.PressureUnit));
+        json.WriteString("temperature_unit", PublishedConvention.Symbol(printed.Convention.TemperatureUnit));
+        json.WriteString("equation", c.Equation(printed.Convention));
+        json.WriteStartObject("coefficients");
+        for (int i = 0; i < c.Coefficients.Count; i++)
+        {
+            json.WriteFinite(names[i], c.Coefficients[i]);
+        }
+
+        json.WriteEndObject();
+        if (printed.Covariance is double[,] covariance)
+        {
+            int p = covariance.GetLength(0);
+            json.WriteStartObject("standard_errors");
+            for (int i = 0; i < p; i++)
+            {
+                json.WriteFinite(names[i], printed.StandardError(i)!.Value);
+            }
+
+            json.WriteEndObject();
+            json.WriteStartArray("covariance");
+            for (int i = 0; i < p; i++)
+            {
+                json.WriteStartArray();
+                for (int j = 0; j < p; j++)
+                {
+                    json.WriteFiniteValue(covariance[i, j], "covariance");
+                }
+
+                json.WriteEndArray();
+            }
+
+            json.WriteEndArray();
+        }
+        else
+        {
+            json.WriteNull("standard_errors");
+            json.WriteNull("covariance");
+        }
+
+        json.WriteString("audit_arguments", printed.AuditArguments);
+        json.WriteEndObject();
+    }
+
     private static void WriteCandidates(Utf8JsonWriter json, IReadOnlyList<VapourPressureFit> candidates)
     {
         if (candidates.Count <= 1)
@@ -238,7 +353,7 @@ internal static class FitWriter
         json.WriteEndArray();
     }
 
-    private static void FitTable(TextWriter output, VapourPressureFit fit, IReadOnlyList<VapourPressureFit> candidates)
+    private static void FitTable(TextWriter output, VapourPressureFit fit, IReadOnlyList<VapourPressureFit> candidates, Printed? printed)
     {
         var text = new StringBuilder();
         text.AppendLine($"form: {fit.Form.Id}");
@@ -260,6 +375,25 @@ internal static class FitWriter
                 text.AppendLine($"standard errors undefined: {CovarianceUndefined}");
             }
 
+            text.AppendLine();
+        }
+
+        if (printed is not null)
+        {
+            var c = printed.Correlation;
+            var names = printed.Names;
+            text.AppendLine($"printed as {printed.Convention} (exact conversion of the parameters above, not a refit):");
+            text.AppendLine($"equation: {c.Equation(printed.Convention)}");
+            var table = new TextTable(["coefficient", "value", "standard error"], [false, true, true]);
+            for (int i = 0; i < c.Coefficients.Count; i++)
+            {
+                bool given = i >= fit.Parameters.Count; // a Wagner form's Tc and Pc
+                table.Add(names[i], NumberText.RoundTrip(c.Coefficients[i]),
+                    given ? "given" : printed.StandardError(i) is double se ? NumberText.Table(se) : "undefined");
+            }
+
+            text.Append(table.Render());
+            text.AppendLine($"read back with: phaseslope audit {printed.AuditArguments}");
             text.AppendLine();
         }
 

@@ -50,6 +50,20 @@ public sealed class LatentHeatEstimator
     /// value, so that it flags only results that are wrong by a large factor.</remarks>
     public const double MaximumEntropyOfVaporization = 350;
 
+    /// <summary>The finding for a latent heat whose ΔH/T exceeds
+    /// <see cref="MaximumEntropyOfVaporization"/> (a Trouton-type magnitude bound, common
+    /// practice), or null when it does not; the one place the bound is applied (the estimator's
+    /// points and the audit's latent-heat check both call it).</summary>
+    /// <param name="temperature">T in K.</param>
+    /// <param name="enthalpy">ΔH in J/mol.</param>
+    public static string? ImplausibilityFinding(double temperature, double enthalpy)
+    {
+        double entropy = enthalpy / temperature;
+        return entropy > MaximumEntropyOfVaporization
+            ? $"implausible latent heat: dH/T = {Preconditions.Format(entropy)} J/(mol K) at {Preconditions.Format(temperature)} K exceeds {Preconditions.Format(MaximumEntropyOfVaporization)} J/(mol K) (common practice: about 85-110 at the normal boiling point)"
+            : null;
+    }
+
     /// <summary>The fitted correlation.</summary>
     public VapourPressureFit Fit { get; }
 
@@ -101,10 +115,7 @@ public sealed class LatentHeatEstimator
             _ => HaggenmacherCompressibilityChange(temperature, p),
         };
         double enthalpy = ClapeyronEquation.EnthalpyOfVaporization(temperature, slope, dz);
-        double entropy = enthalpy / temperature;
-        string? finding = entropy > MaximumEntropyOfVaporization
-            ? $"implausible latent heat: dH/T = {Preconditions.Format(entropy)} J/(mol K) at {Preconditions.Format(temperature)} K exceeds {Preconditions.Format(MaximumEntropyOfVaporization)} J/(mol K) (common practice: about 85-110 at the normal boiling point)"
-            : null;
+        string? finding = ImplausibilityFinding(temperature, enthalpy);
         return new LatentHeatPoint(temperature, p, enthalpy,
             ClapeyronEquation.EnthalpyOfVaporization(temperature, Fit.SlopeStandardUncertainty(temperature), dz),
             dz, !Fit.InRange(temperature))

@@ -26,11 +26,11 @@ public sealed class WagnerForm : VapourPressureForm
 
     /// <summary>The 3-6 form.</summary>
     public static WagnerForm ThreeSix(double criticalTemperature, double criticalPressure)
-        => new("wagner-3-6", "Wagner 1973, 3-6 form", [1, 1.5, 3, 6], criticalTemperature, criticalPressure);
+        => new("wagner-3-6", "Wagner 1973, 3-6 form", ExponentsOf("wagner-3-6"), criticalTemperature, criticalPressure);
 
     /// <summary>The 2.5-5 form.</summary>
     public static WagnerForm TwoHalfFive(double criticalTemperature, double criticalPressure)
-        => new("wagner-2.5-5", "Wagner 2.5-5 form", [1, 1.5, 2.5, 5], criticalTemperature, criticalPressure);
+        => new("wagner-2.5-5", "Wagner 2.5-5 form", ExponentsOf("wagner-2.5-5"), criticalTemperature, criticalPressure);
 
     /// <summary>A published equation of the Wagner type with its own exponents, ln(P/Pc) =
     /// (Tc/T)·Σ a_i·τ^t_i (the ancillary equations of the reference equations of state).</summary>
@@ -42,7 +42,17 @@ public sealed class WagnerForm : VapourPressureForm
 
     /// <summary>The six-term form of the IAPWS saturation-pressure equation.</summary>
     public static WagnerForm SixTerm(double criticalTemperature, double criticalPressure)
-        => new("wagner-6", "six-term form of Wagner & Pruss 1993", [1, 1.5, 3, 3.5, 4, 7.5], criticalTemperature, criticalPressure);
+        => new("wagner-6", "six-term form of Wagner & Pruss 1993", ExponentsOf("wagner-6"), criticalTemperature, criticalPressure);
+
+    /// <summary>The exponents e_i of a Wagner form by its identifier (wagner-3-6, wagner-2.5-5, wagner-6).</summary>
+    /// <exception cref="ArgumentException">Not a Wagner form.</exception>
+    public static double[] ExponentsOf(string id) => id switch
+    {
+        "wagner-3-6" => [1, 1.5, 3, 6],
+        "wagner-2.5-5" => [1, 1.5, 2.5, 5],
+        "wagner-6" => [1, 1.5, 3, 3.5, 4, 7.5],
+        _ => throw new ArgumentException($"'{id}' is not a Wagner form", nameof(id)),
+    };
 
     /// <inheritdoc />
     public override string Id { get; }

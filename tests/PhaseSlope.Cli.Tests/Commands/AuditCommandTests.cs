@@ -88,7 +88,7 @@ public class AuditCommandTests
     [InlineData("--correlation-pressure-unit", "kpa", "--correlation-pressure-unit: unknown pressure unit 'kpa'; did you mean kPa?")]
     [InlineData("--correlation-pressure-unit", "GPa", "--correlation-pressure-unit: pressure unit 'GPa' is not offered for published correlations")]
     [InlineData("--correlation-temperature-unit", "C", "--correlation-temperature-unit: unknown temperature unit 'C'; did you mean")]
-    [InlineData("--correlation-temperature-unit", "degF", "--correlation-temperature-unit: temperature unit 'degF' is not offered for published correlations")]
+    [InlineData("--correlation-temperature-unit", "degf", "--correlation-temperature-unit: unknown temperature unit 'degf'; did you mean degF?")]
     public void Units_come_from_the_one_table_case_sensitively(string option, string value, string message)
     {
         var args = new List<string> { "audit", "--form", "antoine", "--coefficients", LangeWater, "--range", "1,100", "--log-base", "10", "--correlation-pressure-unit", "mmHg", "--correlation-temperature-unit", "degC" };
@@ -132,5 +132,44 @@ public class AuditCommandTests
         using var doc = StrictJson.Parse(bad.Stdout);
         var failed = doc.RootElement.GetProperty("findings").EnumerateArray().Single(f => f.GetProperty("check").GetString() == "data-deviation");
         Assert.Equal("fail", failed.GetProperty("severity").GetString());
+    }
+
+    [Fact]
+    public void Lange_water_set_agrees_with_the_IAPWS_equation_read_as_a_wagner_6_set()
+    {
+        // IAPWS saturation equation, Wagner & Pruss, J. Phys. Chem. Ref. Data 22, 783 (1993),
+        // coefficients, Tc = 647.096 K and Pc = 22.064 MPa from memory. The first set's log base
+        // 10 is not a Wagner convention, so the second takes e (and its own stated units). The
+        // Lange set is a handbook fit, within 1 % of the reference over 1-100 degC: pass.
+        var json = CliHarness.RunJson("audit", "--form", "antoine", "--coefficients", LangeWater, "--log-base", "10", "--correlation-pressure-unit", "mmHg", "--correlation-temperature-unit", "degC",
+            "--range", "1,100", "--fluid", "water", "--against", "wagner-6", "--coefficients2", "-7.85951783,1.84408259,-11.7866497,22.6807411,-15.9618719,1.80122502,647.096,22.064",
+            "--correlation-pressure-unit2", "MPa", "--correlation-temperature-unit2", "K", "--format", "json");
+        var against = json.GetProperty("findings").EnumerateArray().Single(f => f.GetProperty("check").GetString() == "against");
+        Assert.Equal("pass", against.GetProperty("severity").GetString());
+        Assert.Contains("(wagner-6, ln, MPa, K)", against.GetProperty("message").GetString(), StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Benzene_bar_set_is_read_as_bar_by_the_anchor_uncertainty()
+    {
+        // ln(P/bar) = 9.2806 − 2788.51/(T/K − 52.36), Reid, Prausnitz & Poling, The Properties of
+        // Gases and Liquids, 4th ed. (1987), Appendix A (from memory): at Tb −0.04 % as bar,
+        // +1.28 % as atm; the boiling point known to 0.05 K (0.15 % in ln P) tells them apart.
+        var json = CliHarness.RunJson("audit", "--form", "antoine", "--coefficients", "9.2806,2788.51,-52.36", "--log-base", "e", "--correlation-temperature-unit", "K", "--fluid", "benzene", "--format", "json");
+        Assert.Equal("bar", json.GetProperty("detected").GetProperty("pressure_unit").GetString());
+        var evidence = json.GetProperty("evidence").EnumerateArray().ToArray();
+        Assert.Equal("atm", evidence[1].GetProperty("convention").GetProperty("pressure_unit").GetString());
+        // The rule: the runner-up's separation at least 5 times the best's (docs/audit.md).
+        Assert.True(evidence[1].GetProperty("separation").GetDouble() >= 5 * evidence[0].GetProperty("separation").GetDouble());
+    }
+
+    [Fact]
+    public void Positive_but_absurd_latent_heat_exits_8()
+    {
+        // ln(P/Pa) = 25 − 13000 K/T: ΔH/T = R·13000/300 = 360 J/(mol K) at 300 K with ΔZ = 1,
+        // above the Trouton-type bound of 350 (common practice).
+        var result = CliHarness.Run("audit", "--form", "clausius-clapeyron", "--coefficients", "25,13000", "--log-base", "e", "--correlation-pressure-unit", "Pa", "--correlation-temperature-unit", "K", "--range", "300,350");
+        Assert.Equal(8, result.ExitCode);
+        Assert.Contains("latent-heat-magnitude  fail      implausible latent heat: dH/T = 360.29", result.Stdout, StringComparison.Ordinal);
     }
 }

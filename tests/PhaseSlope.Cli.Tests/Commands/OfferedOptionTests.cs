@@ -118,6 +118,18 @@ public sealed class OfferedOptionTests : IDisposable
         yield return Differs("fit", "--temperature-unit", fitBare, [.. fitBare[..4], "--temperature-unit", "degC", "--pressure-unit", "kPa"]);
         yield return Differs("fit", "--pressure-unit", fitBare, [.. fitBare[..4], "--temperature-unit", "K", "--pressure-unit", "bar"]);
         yield return Changes("fit", "--format", fit, "--format", "json");
+        // The printed convention: each part shows in the coefficients printed for it, and the
+        // algebra's limits (no degC for Kirchhoff, e only for Wagner, no CSV) are refused.
+        string[] fitPrinted = [.. fit, "--log-base", "10"];
+        yield return Changes("fit", "--log-base", fit, "--log-base", "10");
+        yield return Differs("fit", "--log-base", fitPrinted, Replace(fitPrinted, "10", "e"));
+        yield return Refused("fit", "--log-base", [.. fitAuto, "--form", "wagner-3-6", "--tc", "540", "--pc", "3.1MPa", "--log-base", "10"]);
+        yield return Refused("fit", "--log-base", [.. fitPrinted, "--format", "csv"]);
+        yield return Changes("fit", "--correlation-pressure-unit", fit, "--correlation-pressure-unit", "mmHg");
+        yield return Differs("fit", "--correlation-pressure-unit", [.. fitPrinted, "--correlation-pressure-unit", "bar"], [.. fitPrinted, "--correlation-pressure-unit", "atm"]);
+        yield return Changes("fit", "--correlation-temperature-unit", fit, "--correlation-temperature-unit", "degF");
+        yield return Differs("fit", "--correlation-temperature-unit", [.. fitPrinted, "--correlation-temperature-unit", "degC"], [.. fitPrinted, "--correlation-temperature-unit", "degR"]);
+        yield return Refused("fit", "--correlation-temperature-unit", ["fit", Csv, "--form", "kirchhoff", "--correlation-temperature-unit", "degC"]);
 
         string[] latent = ["latent", Csv, "--form", "antoine"];
         string[] latentFluid = [.. latent, "--fluid", FluidFile];
@@ -173,6 +185,9 @@ public sealed class OfferedOptionTests : IDisposable
         yield return Differs("audit", "--log-base", audit, Replace(audit, "10", "e"));
         yield return Differs("audit", "--correlation-pressure-unit", audit, Replace(audit, "mmHg", "kPa"));
         yield return Differs("audit", "--correlation-temperature-unit", audit, Replace(audit, "degC", "K"));
+        yield return Differs("audit", "--correlation-temperature-unit", audit, Replace(audit, "degC", "degF"));
+        yield return Refused("audit", "--correlation-temperature-unit", ["audit", "--form", "kirchhoff", "--coefficients", "60,-6000,-20", "--range", "250,350", "--correlation-temperature-unit", "degF"]);
+        yield return Refused("audit", "--log-base", ["audit", "--form", "wagner-3-6", "--coefficients", "-7.6,1.6,-3,-3.4,540,31", "--range", "300,400", "--log-base", "10"]);
         yield return Differs("audit", "--range", audit, Replace(audit, "1,100", "10,90"));
         yield return Changes("audit", "--data", audit, "--data", Csv);
         yield return Changes("audit", "--fluid", audit, "--fluid", "water");

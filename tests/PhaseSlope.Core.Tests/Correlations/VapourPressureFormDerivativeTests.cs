@@ -18,7 +18,7 @@ public class VapourPressureFormDerivativeTests
     public static TheoryData<string, double> FormsAndTemperatures()
     {
         var data = new TheoryData<string, double>();
-        string[] ids = ["clausius-clapeyron", "antoine", "kirchhoff", "riedel", "wagner-3-6", "wagner-2.5-5", "wagner-6", "lee-kesler", "ambrose-walton"];
+        string[] ids = ["clausius-clapeyron", "antoine", "kirchhoff", "riedel", "antoine-extended", "wagner-3-6", "wagner-2.5-5", "wagner-6", "lee-kesler", "ambrose-walton"];
         foreach (string id in ids)
         {
             // Low, middle and near-critical (τ ≈ 0.04, where the τ^1.5 term's curvature is large).
@@ -35,6 +35,10 @@ public class VapourPressureFormDerivativeTests
     {
         "lee-kesler" => (CorrespondingStatesForm.LeeKesler(WaterTc, WaterPc, WaterOmega), []),
         "ambrose-walton" => (CorrespondingStatesForm.AmbroseWalton(WaterTc, WaterPc, WaterOmega), []),
+        // Perry's Chemical Engineers' Handbook, 7th ed., Table 2-6 water set (ln(P/Pa) = 73.649 −
+        // 7258.2/T − 7.3037 ln T + 4.1653e-6 T², from memory) with C = −5 K and D = 1e-4 1/K
+        // (invented) so that every parameter is non-zero and every gradient entry is exercised.
+        "antoine-extended" => (new ExtendedAntoineForm(), [73.649, -7258.2, -5, 1e-4, -7.3037, 4.1653e-6, 2]),
         _ => Fits.Value.Single(f => f.Form.Id == id) is var fit ? (fit.Form, [.. fit.Parameters]) : default,
     };
 

@@ -22,15 +22,23 @@ public sealed record AuditFinding(string Check, AuditSeverity Severity, string M
 /// <summary>The deviation of one candidate convention at one anchor.</summary>
 /// <param name="Anchor">"normal boiling point", "model" or "data".</param>
 /// <param name="LnDeviation">ln(P_correlation/P_anchor) (RMS over points for model and data).</param>
-/// <param name="Sigma">The ln P spread the anchor is trusted to (the score's scale).</param>
-public sealed record AnchorDeviation(string Anchor, double LnDeviation, double Sigma)
+/// <param name="Sigma">The ln P spread a right reading may show at the anchor (the anchor's
+/// uncertainty and the correlation's own error together: the scale of the consistency score).</param>
+/// <param name="Uncertainty">The anchor's own standard uncertainty in ln P (the scale of the
+/// separation between candidates: two readings within it are a tie).</param>
+public sealed record AnchorDeviation(string Anchor, double LnDeviation, double Sigma, double Uncertainty)
 {
     /// <summary>The deviation as a percentage of the anchor pressure.</summary>
     public double Percent => 100 * (Math.Exp(LnDeviation) - 1);
 }
 
-/// <summary>A candidate convention with its score (lower is more plausible) and the evidence.</summary>
-public sealed record ConventionCandidate(PublishedConvention Convention, double Score, IReadOnlyList<AnchorDeviation> Evidence);
+/// <summary>A candidate convention with its scores and the evidence.</summary>
+/// <param name="Convention">The candidate.</param>
+/// <param name="Score">Consistency score, RMS of deviation/σ over the anchors (lower is more plausible).</param>
+/// <param name="Evidence">The deviation at each anchor.</param>
+/// <param name="Separation">Separation score, RMS over the anchors of max(|deviation|, u)/u with u
+/// the anchor's own uncertainty: 1 when the candidate is within every anchor's uncertainty.</param>
+public sealed record ConventionCandidate(PublishedConvention Convention, double Score, IReadOnlyList<AnchorDeviation> Evidence, double Separation);
 
 /// <summary>What an audit found.</summary>
 public sealed record AuditReport
@@ -44,7 +52,8 @@ public sealed record AuditReport
     /// <summary>The most plausible candidate (null when nothing was detected).</summary>
     public required ConventionCandidate? Best { get; init; }
 
-    /// <summary>The runner-up candidate (null when there was only one candidate or nothing to detect).</summary>
+    /// <summary>The runner-up candidate: the second-best score, or, when detection refused as
+    /// ambiguous, the candidate it could not exclude (null when there was only one candidate).</summary>
     public required ConventionCandidate? RunnerUp { get; init; }
 
     /// <summary>The SI natural-log coefficients (ln(P/Pa), T in K), or null without a convention.</summary>

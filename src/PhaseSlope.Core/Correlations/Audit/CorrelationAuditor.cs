@@ -12,13 +12,14 @@ public sealed record AuditRequest
     /// <summary>The correlation as printed.</summary>
     public required PublishedCorrelation Correlation { get; init; }
 
-    /// <summary>The stated log base, or null to detect it.</summary>
+    /// <summary>The stated log base, or null to detect it (e only for the Wagner forms).</summary>
     public LogBase? LogBase { get; init; }
 
     /// <summary>The stated pressure unit, or null to detect it.</summary>
     public PublishedPressureUnit? PressureUnit { get; init; }
 
-    /// <summary>The stated temperature scale, or null to detect it (kelvin only for forms other than Antoine).</summary>
+    /// <summary>The stated temperature scale, or null to detect it (K or degC); only an absolute
+    /// scale (K, degR) for the forms with 1/T or log T terms (<see cref="PublishedCorrelation.Refusal"/>).</summary>
     public PublishedTemperatureUnit? TemperatureUnit { get; init; }
 
     /// <summary>The stated range of validity (K), or null for the data's range, else the default range for the fluid.</summary>
@@ -53,17 +54,32 @@ public sealed record AuditRequest
 /// converts it exactly to SI, and checks it against data, the model, the Clapeyron latent heat,
 /// the Waring criterion, its behaviour at the edges of its range and a second correlation.</summary>
 /// <remarks>
-/// <para><b>Detection.</b> Every convention the request leaves open is a candidate. Each is
-/// scored against the anchors that are known: the normal boiling point (P = 101325 Pa at Tb,
-/// trusted to σ = 0.01 in ln P: a handbook correlation reproduces its fluid's Tb to a fraction of
-/// a percent inside its range and to about 1 % when modestly extrapolated), the model's vapour
-/// pressure over the range (RMS in ln P, σ = 0.25: a generalised cubic equation errs by a few
-/// percent for non-polar fluids and by about 25 % for water near its triple point) and the
-/// data (RMS in ln P, σ = 0.01, a typical measurement and fit scatter). The score is the RMS of
-/// deviation/σ over the anchors. The best candidate is accepted only when the runner-up scores at
-/// least twice as badly and worse than 1 (a runner-up within one σ of every anchor is as
-/// plausible as the best); and only when the best scores below 5 (otherwise no candidate is
-/// consistent with what is known). With no anchor at all there is nothing to decide on.</para>
+/// <para><b>Detection.</b> Every convention the request leaves open is a candidate (degF and
+/// degR only when stated). Each is scored against the anchors that are known: the normal boiling
+/// point (P = 101325 Pa at Tb), the model's vapour pressure over the range (RMS in ln P) and the
+/// data (RMS in ln P), on two scales (docs/audit.md gives the reasoning):</para>
+/// <list type="bullet">
+/// <item>the <b>score</b>, RMS of deviation/σ, with σ the spread a right reading may show, the
+/// correlation's own error included: 0.01 in ln P at Tb (a handbook correlation reproduces its
+/// fluid's Tb to a fraction of a percent inside its range and to about 1 % when modestly
+/// extrapolated), 0.25 for the model (a generalised cubic equation errs by a few percent for
+/// non-polar fluids and by about 25 % for water near its triple point) and 0.01 for data;</item>
+/// <item>the <b>separation</b>, RMS of max(|deviation|, u)/u, with u the anchor's own standard
+/// uncertainty in ln P: at Tb, u(Tb)·ΔS/(R·Tb) with u(Tb) the fluid's stated uncertainty (else
+/// <see cref="DefaultBoilingPointUncertainty"/>) and ΔS = <see cref="TroutonEntropy"/> (Trouton's
+/// rule, common practice, for d ln P/dT at Tb); 0.25 for the model; for data, the RMS of their
+/// stated u(P)/P, else 0.01. A deviation inside an anchor's uncertainty counts as that
+/// uncertainty: a candidate within every anchor's uncertainty has separation 1.</item>
+/// </list>
+/// <para>The best candidate is the one with the lowest score; it must score below
+/// <see cref="InconsistentScore"/> (else no candidate is consistent with what is known). It is
+/// accepted only when every other candidate is clearly worse on one of the two scales: a score at
+/// least <see cref="AmbiguityRatio"/> times the best's and above 1 (worse beyond the correlation's
+/// own expected error), or a separation at least <see cref="SeparationRatio"/> times the best's
+/// (a deviation that many times larger at an anchor known well enough to tell; the ratio keeps the
+/// rule free of the correlation's unknown error, which the best reading's deviation estimates).
+/// Two readings both within the anchors' uncertainty have separations 1 and 1 and scores below
+/// 1: a real tie, refused. With no anchor at all there is nothing to decide on.</para>
 /// <para><b>Thresholds</b> are given with each check below.</para>
 /// </remarks>
 public static class CorrelationAuditor
@@ -71,17 +87,32 @@ public static class CorrelationAuditor
     /// <summary>Points on the audit grid over the range.</summary>
     public const int GridPoints = 41;
 
-    /// <summary>ln P spread the normal boiling point is trusted to (see remarks).</summary>
+    /// <summary>ln P spread a right reading may show at the normal boiling point (see remarks).</summary>
     public const double BoilingPointSigma = 0.01;
+
+    /// <summary>Standard uncertainty of a normal boiling point whose fluid states none, K: catalog
+    /// values are quoted to 0.01 K from handbooks, and compilations of a well-studied fluid agree to
+    /// a few hundredths of a kelvin (from memory); 0.05 K is about a tenth of what separates the bar
+    /// and atm readings of a correlation at Tb (ln(1.01325)·R·Tb/ΔS ≈ 0.44 K for benzene).</summary>
+    public const double DefaultBoilingPointUncertainty = 0.05;
+
+    /// <summary>Entropy of vaporization at the normal boiling point by Trouton's rule, J/(mol·K)
+    /// (common practice: 85–90 for non-polar liquids): gives d ln P/dT ≈ ΔS/(R·Tb) at Tb, which
+    /// turns u(Tb) into an uncertainty in ln P without depending on any candidate.</summary>
+    public const double TroutonEntropy = 88;
+
+    /// <summary>A candidate whose score is at least this many times the best's (and above 1) is clearly worse (see remarks).</summary>
+    public const double AmbiguityRatio = 2;
+
+    /// <summary>A candidate whose separation is at least this many times the best's is clearly worse
+    /// (see remarks): a five-fold larger deviation, at an anchor known well enough to tell.</summary>
+    public const double SeparationRatio = 5;
 
     /// <summary>ln P spread the model is trusted to (see remarks).</summary>
     public const double ModelSigma = 0.25;
 
     /// <summary>ln P spread data are trusted to (see remarks).</summary>
     public const double DataSigma = 0.01;
-
-    /// <summary>Runner-up/best score ratio below which detection refuses to guess.</summary>
-    public const double AmbiguityRatio = 2;
 
     /// <summary>Best score above which no candidate is consistent.</summary>
     public const double InconsistentScore = 5;
@@ -109,11 +140,10 @@ public static class CorrelationAuditor
     /// pole check reports it.</summary>
     private static void RequireRepresentable(PublishedCorrelation correlation, IEnumerable<PublishedConvention> conventions, double[] grid, string what)
     {
-        var form = correlation.Form();
         (PublishedConvention Convention, double T, double LnP)? first = null;
         foreach (var convention in conventions)
         {
-            double[] si = correlation.SiCoefficients(convention);
+            var (form, si) = correlation.ToSi(convention);
             foreach (double t in grid)
             {
                 double lnP = si.All(double.IsFinite) ? form.LnPressure(t, si) : double.NaN;
@@ -135,8 +165,10 @@ public static class CorrelationAuditor
     }
 
     /// <summary>Runs the audit.</summary>
-    /// <exception cref="ArgumentException">No range can be set (no range, data or fluid), or a bad range.</exception>
-    /// <exception cref="InvalidInputException">Coefficients that overflow (no finite pressure on the range).</exception>
+    /// <exception cref="ArgumentException">No range can be set (no range, data or fluid), a bad range,
+    /// or a stated log base or scale the form (or the second correlation's) does not admit.</exception>
+    /// <exception cref="InvalidInputException">Coefficients that overflow (no finite pressure on the
+    /// range), or a Wagner Tc or Pc that is not positive in any candidate reading.</exception>
     public static AuditReport Audit(AuditRequest request)
     {
         ArgumentNullException.ThrowIfNull(request);
@@ -145,7 +177,7 @@ public static class CorrelationAuditor
         RequireRepresentable(request.Correlation, Candidates(request), grid, "correlation");
         if (request.Against is PublishedCorrelation against)
         {
-            RequireRepresentable(against, Candidates(request), grid, "second correlation");
+            RequireRepresentable(against, [.. Candidates(request).Select(c => SecondConvention(request, c)).Distinct()], grid, "second correlation");
         }
 
         var model = ModelPoints(request.Solver, grid);
@@ -153,7 +185,8 @@ public static class CorrelationAuditor
         double? tc = request.Fluid?.CriticalTemperature.Value;
 
         var findings = new List<AuditFinding>();
-        var candidates = Candidates(request).Select(c => Score(request.Correlation, c, tb, model, request.Data)).OrderBy(c => c.Score).ToList();
+        double tbUncertainty = request.Fluid?.NormalBoilingPoint?.StandardUncertainty ?? DefaultBoilingPointUncertainty;
+        var candidates = Candidates(request).Select(c => Score(request.Correlation, c, tb, tbUncertainty, model, request.Data)).OrderBy(c => c.Score).ToList();
         bool detected = candidates.Count > 1;
         ConventionCandidate? best = candidates[0];
         ConventionCandidate? runnerUp = candidates.Count > 1 ? candidates[1] : null;
@@ -163,7 +196,7 @@ public static class CorrelationAuditor
             if (best.Evidence.Count == 0)
             {
                 findings.Add(new("convention", AuditSeverity.Fail,
-                    $"the convention is not fully stated and there is nothing to test the {candidates.Count} candidate conventions against (give --fluid or --data, or state --log-base, --pressure-unit and --temperature-unit): "
+                    $"the convention is not fully stated and there is nothing to test the {candidates.Count} candidate conventions against (give --fluid or --data, or state --log-base, --correlation-pressure-unit and --correlation-temperature-unit): "
                     + "refusing to guess, since a wrong log base or unit changes pressures by orders of magnitude"));
                 convention = null;
             }
@@ -173,17 +206,18 @@ public static class CorrelationAuditor
                     $"no candidate convention is consistent with what is known: the best, {best.Convention}, deviates by {EvidenceText(best)}; the coefficients or the form may be wrong"));
                 convention = null;
             }
-            else if (runnerUp!.Score < Math.Max(AmbiguityRatio * best.Score, 1))
+            else if (candidates.Skip(1).FirstOrDefault(c => !ClearlyWorse(c, best)) is ConventionCandidate rival)
             {
+                runnerUp = rival;
                 findings.Add(new("convention", AuditSeverity.Fail,
-                    $"ambiguous: {best.Convention} (score {Fmt(best.Score)}: {EvidenceText(best)}) and {runnerUp.Convention} (score {Fmt(runnerUp.Score)}: {EvidenceText(runnerUp)}) are about equally plausible "
-                    + $"(the runner-up must score at least {Fmt(AmbiguityRatio)} times worse and above 1); refusing to guess: state the convention from the source"));
+                    $"ambiguous: {best.Convention} (score {Fmt(best.Score)}, separation {Fmt(best.Separation)}: {EvidenceText(best)}) and {rival.Convention} (score {Fmt(rival.Score)}, separation {Fmt(rival.Separation)}: {EvidenceText(rival)}) are about equally plausible "
+                    + $"(the other must score at least {Fmt(AmbiguityRatio)} times worse and above 1, or deviate at least {Fmt(SeparationRatio)} times as far in units of each anchor's own uncertainty); refusing to guess: state the convention from the source"));
                 convention = null;
             }
             else
             {
                 findings.Add(new("convention", AuditSeverity.Warn,
-                    $"inferred, not stated: {best.Convention} (score {Fmt(best.Score)}: {EvidenceText(best)}); runner-up {runnerUp.Convention} (score {Fmt(runnerUp.Score)}: {EvidenceText(runnerUp)}); confirm the convention in the source before using the correlation"));
+                    $"inferred, not stated: {best.Convention} (score {Fmt(best.Score)}: {EvidenceText(best)}; separation {Fmt(best.Separation)}); runner-up {runnerUp!.Convention} (score {Fmt(runnerUp.Score)}: {EvidenceText(runnerUp)}; separation {Fmt(runnerUp.Separation)}); confirm the convention in the source before using the correlation"));
             }
         }
         else
@@ -196,8 +230,7 @@ public static class CorrelationAuditor
             return new AuditReport { Convention = null, Detected = detected, Best = best, RunnerUp = runnerUp, SiCoefficients = null, MinimumTemperature = tMin, MaximumTemperature = tMax, Findings = findings };
         }
 
-        var form = request.Correlation.Form();
-        double[] si = request.Correlation.SiCoefficients(convention);
+        var (form, si) = request.Correlation.ToSi(convention);
         if (request.Data is { Count: > 0 } data)
         {
             findings.Add(DataCheck(form, si, data));
@@ -213,7 +246,7 @@ public static class CorrelationAuditor
             findings.Add(ModelCheck(form, si, model));
         }
 
-        if (form is AntoineForm)
+        if (form is AntoineForm or ExtendedAntoineForm)
         {
             findings.Add(PoleCheck(si, tMin, tMax));
         }
@@ -222,13 +255,16 @@ public static class CorrelationAuditor
         findings.Add(CriticalCheck(form, tMax, tc));
         if (request.Against is not null)
         {
-            var second = new PublishedConvention(request.AgainstLogBase ?? convention.LogBase, request.AgainstPressureUnit ?? convention.PressureUnit,
-                request.AgainstTemperatureUnit ?? (request.Against.AllowsCelsius ? convention.TemperatureUnit : PublishedTemperatureUnit.Kelvin));
+            var second = SecondConvention(request, convention);
             findings.Add(AgainstCheck(form, si, request.Against, second, grid, request.AgainstThreshold));
         }
 
         return new AuditReport { Convention = convention, Detected = detected, Best = best, RunnerUp = runnerUp, SiCoefficients = si, MinimumTemperature = tMin, MaximumTemperature = tMax, Findings = findings };
     }
+
+    /// <summary>Whether a candidate is clearly worse than the best on either scale (see remarks).</summary>
+    private static bool ClearlyWorse(ConventionCandidate candidate, ConventionCandidate best)
+        => candidate.Score >= Math.Max(AmbiguityRatio * best.Score, 1) || candidate.Separation >= SeparationRatio * best.Separation;
 
     private static (double, double) ResolveRange(AuditRequest request)
     {
@@ -244,27 +280,61 @@ public static class CorrelationAuditor
         return (lo, hi);
     }
 
-    private static IEnumerable<PublishedConvention> Candidates(AuditRequest request)
+    /// <summary>The second correlation's convention: each part stated for it, else the first's
+    /// where the second's form admits it, else the nearest it admits (log base e for a Wagner form,
+    /// K for an absolute-temperature form beside a Celsius or Fahrenheit Antoine set).</summary>
+    private static PublishedConvention SecondConvention(AuditRequest request, PublishedConvention first)
     {
-        LogBase[] bases = request.LogBase is LogBase b ? [b] : [LogBase.Ten, LogBase.E];
-        PublishedPressureUnit[] units = request.PressureUnit is PublishedPressureUnit u ? [u] : [.. PublishedConvention.PressureUnits];
-        PublishedTemperatureUnit[] scales = request.TemperatureUnit is PublishedTemperatureUnit t ? [t]
-            : request.Correlation.AllowsCelsius ? [PublishedTemperatureUnit.Kelvin, PublishedTemperatureUnit.Celsius] : [PublishedTemperatureUnit.Kelvin];
-        if (request.TemperatureUnit == PublishedTemperatureUnit.Celsius && !request.Correlation.AllowsCelsius)
+        string id = request.Against!.FormId;
+        var logBase = request.AgainstLogBase ?? (PublishedCorrelation.Refusal(id, first.LogBase, null) is null ? first.LogBase : LogBase.E);
+        var scale = request.AgainstTemperatureUnit ?? (PublishedCorrelation.Refusal(id, null, first.TemperatureUnit) is null ? first.TemperatureUnit : PublishedTemperatureUnit.Kelvin);
+        var convention = new PublishedConvention(logBase, request.AgainstPressureUnit ?? first.PressureUnit, scale);
+        return PublishedCorrelation.Refusal(id, convention.LogBase, convention.TemperatureUnit) is string why
+            ? throw new ArgumentException($"second correlation: {why}", nameof(request))
+            : convention;
+    }
+
+    private static List<PublishedConvention> Candidates(AuditRequest request)
+    {
+        var correlation = request.Correlation;
+        if (PublishedCorrelation.Refusal(correlation.FormId, request.LogBase, request.TemperatureUnit) is string why)
         {
-            throw new ArgumentException($"the {request.Correlation.FormId} form takes T in K only", nameof(request));
+            throw new ArgumentException(why, nameof(request));
         }
 
+        LogBase[] bases = request.LogBase is LogBase b ? [b] : [LogBase.Ten, LogBase.E];
+        PublishedPressureUnit[] units = request.PressureUnit is PublishedPressureUnit u ? [u] : [.. PublishedConvention.PressureUnits];
+        PublishedTemperatureUnit[] scales = request.TemperatureUnit is PublishedTemperatureUnit t ? [t] : [.. PublishedConvention.DetectedTemperatureUnits];
+        var candidates = new List<PublishedConvention>();
+        InvalidInputException? invalid = null;
         foreach (var lb in bases)
         {
             foreach (var pu in units)
             {
                 foreach (var tu in scales)
                 {
-                    yield return new PublishedConvention(lb, pu, tu);
+                    var convention = new PublishedConvention(lb, pu, tu);
+                    if (!correlation.Admits(convention))
+                    {
+                        continue; // a part left open takes only the values the form admits
+                    }
+
+                    try
+                    {
+                        _ = correlation.ToSi(convention);
+                        candidates.Add(convention);
+                    }
+                    catch (InvalidInputException ex)
+                    {
+                        invalid ??= ex; // a Wagner Tc or Pc that is not positive in this reading
+                    }
                 }
             }
         }
+
+        return candidates.Count > 0
+            ? candidates
+            : throw invalid ?? new InvalidInputException("coefficients", double.NaN, $"no convention can be read for the {correlation.FormId} form");
     }
 
     private sealed record ModelPoint(double Temperature, double LnPressure, double CompressibilityChange);
@@ -288,28 +358,32 @@ public static class CorrelationAuditor
         return points;
     }
 
-    private static ConventionCandidate Score(PublishedCorrelation correlation, PublishedConvention convention, double? tb, List<ModelPoint> model, IReadOnlyList<VapourPressurePoint>? data)
+    private static ConventionCandidate Score(PublishedCorrelation correlation, PublishedConvention convention, double? tb, double tbUncertainty, List<ModelPoint> model, IReadOnlyList<VapourPressurePoint>? data)
     {
-        var form = correlation.Form();
-        double[] si = correlation.SiCoefficients(convention);
+        var (form, si) = correlation.ToSi(convention);
         var evidence = new List<AnchorDeviation>();
         if (tb is double boil)
         {
-            evidence.Add(new("normal boiling point", form.LnPressure(boil, si) - Math.Log(Constants.StandardAtmosphere), BoilingPointSigma));
+            // u(ln P) = (d ln P/dT)·u(Tb), the slope by Trouton's rule (see remarks).
+            double u = TroutonEntropy / (Constants.GasConstant * boil) * tbUncertainty;
+            evidence.Add(new("normal boiling point", form.LnPressure(boil, si) - Math.Log(Constants.StandardAtmosphere), BoilingPointSigma, u));
         }
 
         if (model.Count > 0)
         {
-            evidence.Add(new("model", Rms(model.Select(m => form.LnPressure(m.Temperature, si) - m.LnPressure)), ModelSigma));
+            evidence.Add(new("model", Rms(model.Select(m => form.LnPressure(m.Temperature, si) - m.LnPressure)), ModelSigma, ModelSigma));
         }
 
         if (data is { Count: > 0 })
         {
-            evidence.Add(new("data", Rms(data.Select(d => form.LnPressure(d.Temperature, si) - Math.Log(d.Pressure))), DataSigma));
+            double u = data.All(d => d.StandardUncertainty is > 0) ? Rms(data.Select(d => d.StandardUncertainty!.Value / d.Pressure)) : DataSigma;
+            evidence.Add(new("data", Rms(data.Select(d => form.LnPressure(d.Temperature, si) - Math.Log(d.Pressure))), DataSigma, u));
         }
 
         double score = evidence.Count == 0 ? 0 : Math.Sqrt(evidence.Average(e => Math.Pow(e.LnDeviation / e.Sigma, 2)));
-        return new ConventionCandidate(convention, double.IsFinite(score) ? score : double.PositiveInfinity, evidence);
+        double separation = evidence.Count == 0 ? 1 : Math.Sqrt(evidence.Average(e => Math.Pow(Math.Max(Math.Abs(e.LnDeviation), e.Uncertainty) / e.Uncertainty, 2)));
+        return new ConventionCandidate(convention, double.IsFinite(score) ? score : double.PositiveInfinity, evidence,
+            double.IsFinite(separation) ? separation : double.PositiveInfinity);
     }
 
     private static double Rms(IEnumerable<double> values)
@@ -399,6 +473,15 @@ public static class CorrelationAuditor
             yield return new("latent-heat-positive", AuditSeverity.Pass,
                 $"the Clapeyron latent heat {dzText} is positive over the range, {Fmt(rows[^1].H / 1000)} to {Fmt(rows[0].H / 1000)} kJ/mol");
 
+            // Positive but absurd: the Trouton-type bound of the latent-heat estimator, applied by
+            // the same code (a wrong log base or a mis-scaled B gives a positive slope many times too steep).
+            var absurd = rows.Select(r => (r.T, Finding: LatentHeatEstimator.ImplausibilityFinding(r.T, r.H))).FirstOrDefault(r => r.Finding is not null);
+            yield return absurd.Finding is string finding
+                ? new("latent-heat-magnitude", AuditSeverity.Fail,
+                    $"{finding}, {dzText}: the correlation's slope is far too steep there; any latent heat or relief rate derived from it would be wrong")
+                : new("latent-heat-magnitude", AuditSeverity.Pass,
+                    $"dH/T stays below {Fmt(LatentHeatEstimator.MaximumEntropyOfVaporization)} J/(mol K) over the range (a Trouton-type bound, common practice)");
+
             // Decreasing and smooth: a rise, or a step of more than 20 % between neighbouring grid
             // points (a 2.5 % step of the range), is not how a latent heat behaves below Tc.
             var rise = rows.Zip(rows.Skip(1)).FirstOrDefault(p => p.Second.H > p.First.H);
@@ -465,8 +548,7 @@ public static class CorrelationAuditor
     // differ by more than five times it (5 % by default: then at least one is misapplied).
     private static AuditFinding AgainstCheck(VapourPressureForm form, double[] si, PublishedCorrelation other, PublishedConvention convention, double[] grid, double threshold)
     {
-        var otherForm = other.Form();
-        double[] otherSi = other.SiCoefficients(convention);
+        var (otherForm, otherSi) = other.ToSi(convention);
         var devs = grid.Select(t => (T: t, Dev: Math.Exp(form.LnPressure(t, si) - otherForm.LnPressure(t, otherSi)) - 1)).ToList();
         var outside = devs.Where(d => !(Math.Abs(d.Dev) <= threshold)).ToList();
         var worst = devs.MaxBy(d => Math.Abs(d.Dev));

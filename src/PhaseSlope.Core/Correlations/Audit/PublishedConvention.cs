@@ -49,6 +49,12 @@ public enum PublishedTemperatureUnit
 
     /// <summary>Degree Celsius, t = T − 273.15 K.</summary>
     Celsius,
+
+    /// <summary>Degree Fahrenheit, t = 1.8·T/K − 459.67 (<see cref="UnitTable"/>, NIST SP 811 B.9).</summary>
+    Fahrenheit,
+
+    /// <summary>Rankine, T_R = 1.8·T/K (<see cref="UnitTable"/>, NIST SP 811 B.9): absolute, like the kelvin.</summary>
+    Rankine,
 }
 
 /// <summary>The convention a published correlation is printed in: log base, pressure unit and
@@ -83,8 +89,37 @@ public sealed record PublishedConvention(LogBase LogBase, PublishedPressureUnit 
         _ => throw new ArgumentOutOfRangeException(nameof(unit)),
     };
 
-    /// <summary>The symbol written in reports: K or degC.</summary>
-    public static string Symbol(PublishedTemperatureUnit unit) => unit == PublishedTemperatureUnit.Kelvin ? "K" : "degC";
+    /// <summary>The symbol written in reports: K, degC, degF or degR (the unit table's symbols).</summary>
+    public static string Symbol(PublishedTemperatureUnit unit) => unit switch
+    {
+        PublishedTemperatureUnit.Kelvin => "K",
+        PublishedTemperatureUnit.Celsius => "degC",
+        PublishedTemperatureUnit.Fahrenheit => "degF",
+        PublishedTemperatureUnit.Rankine => "degR",
+        _ => throw new ArgumentOutOfRangeException(nameof(unit)),
+    };
+
+    /// <summary>The temperature tried when the scale is not given: K and degC (degF and degR are
+    /// read when stated, never guessed: the fewer candidates, the fewer false matches).</summary>
+    public static IReadOnlyList<PublishedTemperatureUnit> DetectedTemperatureUnits { get; } = [PublishedTemperatureUnit.Kelvin, PublishedTemperatureUnit.Celsius];
+
+    /// <summary>True for a scale with its zero at absolute zero (K, degR): the only ones a form
+    /// with terms in 1/T or ln T can be printed in.</summary>
+    public static bool IsAbsolute(PublishedTemperatureUnit unit) => unit is PublishedTemperatureUnit.Kelvin or PublishedTemperatureUnit.Rankine;
+
+    /// <summary>The printed temperature as t = k·T − o with T in K: the factor k and the offset o
+    /// of the scale, read from the one unit table (T/K = (t + o)·n/d there, so k = d/n).</summary>
+    public static (double Factor, double Offset) Scale(PublishedTemperatureUnit unit)
+    {
+        var u = UnitTable.Get(Symbol(unit));
+        return ((double)(u.Denominator / u.Numerator), (double)u.Offset);
+    }
+
+    /// <summary>A temperature in K expressed on the scale.</summary>
+    public static double FromKelvin(double kelvin, PublishedTemperatureUnit unit) => UnitTable.Get(Symbol(unit)).FromSi(kelvin);
+
+    /// <summary>A temperature on the scale expressed in K.</summary>
+    public static double ToKelvin(double value, PublishedTemperatureUnit unit) => UnitTable.Get(Symbol(unit)).ToSi(value);
 
     /// <summary>The symbol written in reports: 10 or e.</summary>
     public static string Symbol(LogBase logBase) => logBase == LogBase.Ten ? "10" : "e";
@@ -112,7 +147,7 @@ public sealed record PublishedConvention(LogBase LogBase, PublishedPressureUnit 
         return false;
     }
 
-    /// <summary>Parses K or degC (also °C) through the one unit table (case-sensitive).</summary>
+    /// <summary>Parses K, degC, degF or degR (also °C, °F, °R) through the one unit table (case-sensitive).</summary>
     public static bool TryParseTemperatureUnit(string text, out PublishedTemperatureUnit unit)
     {
         unit = PublishedTemperatureUnit.Kelvin;
@@ -127,6 +162,12 @@ public sealed record PublishedConvention(LogBase LogBase, PublishedPressureUnit 
                 return true;
             case "degC":
                 unit = PublishedTemperatureUnit.Celsius;
+                return true;
+            case "degF":
+                unit = PublishedTemperatureUnit.Fahrenheit;
+                return true;
+            case "degR":
+                unit = PublishedTemperatureUnit.Rankine;
                 return true;
             default:
                 return false;
