@@ -40,7 +40,7 @@ public class FluidFileTests
         Fluid fluid = ParseText(FluidFileTestData.Join(FluidFileTestData.ValidLines()));
 
         Assert.Equal(4251200.0, fluid.CriticalPressure.Value, 6);
-        Assert.Equal(0.04409562, fluid.MolarMass.Value, 14);
+        Assert.Equal(0.04409562, fluid.MolarMass!.Value, 14);
         Assert.Equal(5000.0, fluid.CriticalDensity!.Value, 9);
     }
 
@@ -64,7 +64,7 @@ public class FluidFileTests
     {
         Fluid fluid = ParseText(FluidFileTestData.WithLine(lineNumber, line));
 
-        Assert.Equal(0.04409562, fluid.MolarMass.Value, 14);
+        Assert.Equal(0.04409562, fluid.MolarMass!.Value, 14);
     }
 
     [Theory]
