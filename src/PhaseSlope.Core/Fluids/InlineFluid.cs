@@ -164,12 +164,22 @@ public static class InlineFluid
             throw Fail(key, $"the uncertainty's unit '{uUnit}' is not a unit of the same kind as '{unit}'");
         }
 
-        // A standard uncertainty is a difference: offsets (degC, degF) cancel, only the scale
-        // factors of the two units enter, each from the unit table.
+        // A standard uncertainty is a difference: offsets (degC, degF) cancel and only the scale
+        // factors of the two units enter, each from the unit table, in decimal arithmetic where
+        // the number fits (0.05 degC is then exactly 0.05 K).
         double u = double.Parse(uNumber, NumberStyles.Float, CultureInfo.InvariantCulture);
-        double si = uncertaintyUnit.ToSi(u) - uncertaintyUnit.ToSi(0.0);
-        double perValueUnit = valueUnit.ToSi(1.0) - valueUnit.ToSi(0.0);
-        return $"{number} {unit} ± {(si / perValueUnit).ToString("R", CultureInfo.InvariantCulture)}";
+        double converted;
+        try
+        {
+            decimal ratio = uncertaintyUnit.Numerator / uncertaintyUnit.Denominator / (valueUnit.Numerator / valueUnit.Denominator);
+            converted = Unit.ExactDecimal(uNumber, u) is decimal exact ? (double)(exact * ratio) : u * (double)ratio;
+        }
+        catch (OverflowException)
+        {
+            throw Fail(key, $"the uncertainty '{parts[1].Trim()}' is too large");
+        }
+
+        return $"{number} {unit} ± {converted.ToString("R", CultureInfo.InvariantCulture)}";
     }
 
     private static (string Number, string Unit) Split(string key, string text, string what)
