@@ -97,7 +97,9 @@ internal static class StateWriter
 
         var text = new StringBuilder();
         text.AppendLine(Title(engine, state));
-        text.AppendLine($"reference: {engine.Reference.Description}");
+        text.AppendLine(state.IdealGasUnavailableReason is null
+            ? $"reference: {engine.Reference.Description}"
+            : "reference: none (absolute h, s, u, a and g need the ideal-gas heat capacity cp°, which this fluid does not give)");
         text.AppendLine();
         text.Append(table.Render());
         if (state.IdealGasExtrapolated)

@@ -7,8 +7,8 @@ namespace PhaseSlope.Core.Fluids;
 /// <summary>A fluid defined in one argument from its critical constants, such as
 /// <c>inline:tc=369.89K±0.05K,pc=4.2512MPa,omega=0.152,molar_mass=44.1g/mol,name=my-propane</c>.</summary>
 /// <remarks>
-/// <para>The text starts with <see cref="Prefix"/> (so it is never a catalog name, whose spellings
-/// have no colon, nor a path, which is read only when the prefix is absent) and holds
+/// <para>The text starts with <see cref="Prefix"/> (so it is never a catalog name, none of which
+/// starts with it, nor a path, which is read only when the prefix is absent) and holds
 /// <c>key=value</c> pairs separated by commas, in any order, each key once: <c>tc</c>,
 /// <c>pc</c> and <c>omega</c> are required, <c>molar_mass</c> and <c>name</c> optional. Keys are
 /// matched without regard to case. A value is a number with its unit written on (<c>369.89K</c>)
