@@ -49,7 +49,7 @@ public sealed class PropertyModel
         {
             if (!ReferenceEquals(Reference, ReferenceState.IdealGas) && Reference.Id != ReferenceState.IdealGas.Id)
             {
-                throw RequireIdealGasFailure($"the reference state '{Reference.Id}', which sets the zero of h and s,");
+                throw RequireIdealGasFailure($"the reference state '{Reference.Id}' (it sets the zero of h and s)");
             }
 
             IdealGasUnavailableReason = $"needs the ideal-gas heat capacity cp°, which fluid '{fluid.Name}' does not give (residual properties, density, Z, ln φ, α, κT, (∂P/∂T)_V, the internal pressure and cp − cv do not need it)";

@@ -180,6 +180,17 @@ public class InlineFluidCommandTests
         Assert.Contains("kJ/kg", RunText("coexist", Propane, "-T", "300", "--units", "engineering"), StringComparison.Ordinal);
     }
 
+    [Theory]
+    [InlineData("coexist", "-T", "300")]
+    [InlineData("curve", "--points", "3")]
+    [InlineData("state", "-T", "300", "-P", "1e5")]
+    public void Reference_OtherThanBaseWithoutCp_RefusedNotIgnored(string command, params string[] rest)
+    {
+        // A reference sets the zero of h and s, which a fluid without cp° does not have.
+        AssertFailure(Run([command, PropaneNoMass, .. rest, "--reference", "nbp"]), ExitCodes.Fluid, "reference state 'nbp'");
+        Assert.Equal(0, Run([command, PropaneNoMass, .. rest, "--reference", "ideal-gas"]).ExitCode);
+    }
+
     [Fact]
     public void State_MassDensityWithoutMolarMass_UsageError()
         => AssertFailure(Run("state", PropaneNoMass, "-T", "300", "--density", "500 kg/m3"), ExitCodes.Usage, "--density");
