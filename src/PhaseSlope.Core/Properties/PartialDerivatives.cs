@@ -30,8 +30,11 @@ public static class PartialDerivatives
     /// <remarks>For the exact identities ((∂H/∂S)_P = T, (∂H/∂P)_S = V) the coefficients are formed
     /// with a few roundings each, one of them a cancellation such as P_T − T·P_T/T, so the cross
     /// products come out near 1e-16 relative; 1e-10 leaves six orders of margin for that. A
-    /// derivative that does depend on cv has cross products of order one relative (or exactly
-    /// zero coefficients on one side), so it is not mistaken for one that does not.</remarks>
+    /// derivative that does depend on cv or s has exactly zero coefficients on one side or cross
+    /// products far larger: the weakest dependence measured (WithoutIdealGasTests' states, all 448
+    /// derivatives) is (∂P/∂G)_A of liquid water at 400 K and 1 MPa, whose value moves by 2.8e-8
+    /// relative when cv and s change by tens of percent, against at most 1.7e-13 (rounding) for
+    /// every derivative computed without cp°.</remarks>
     private const double Parallel = 1e-10;
 
     /// <summary>(∂<paramref name="of"/>/∂<paramref name="by"/>) at constant <paramref name="hold"/>, SI molar units.</summary>
