@@ -60,7 +60,7 @@ public class SolverBenchmarks
         foreach (var point in CoexistenceCurve.Trace(_solver, CurvePoints))
         {
             var full = _engine.Coexistence(point);
-            sum += full.Liquid.State.Enthalpy + full.Vapour.State.Entropy;
+            sum += full.Liquid.State.Enthalpy!.Value + full.Vapour.State.Entropy!.Value;
         }
 
         return sum;

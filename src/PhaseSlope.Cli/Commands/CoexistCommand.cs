@@ -91,6 +91,7 @@ internal sealed class CoexistOptions
         double? p = pText is null ? null : QuantityParser.ParsePressure(pText, "--pressure");
         var reference = ReferenceOption.Parse(parse.GetValue(Reference)!);
         var fluid = FluidResolver.Resolve(parse.GetValue(Fluid)!);
+        output.RequireMolarMassFor(fluid);
         return new CoexistRequest(fluid, t, p, reference, model, output, Diagnostics.Given(parse));
     }
 }

@@ -31,6 +31,13 @@ internal sealed class CoexistenceContext
     {
         if (fluid.IdealGasHeatCapacity is null)
         {
+            if (reference.Id != ReferenceState.IdealGas.Id)
+            {
+                // A reference sets the zero of h and s, which this fluid cannot give: refused (exit 3,
+                // naming cp°) by the property engine's own check rather than silently ignored.
+                _ = new PropertyModel(fluid, model, reference);
+            }
+
             return new CoexistenceContext(new CoexistenceSolver(model, CoexistenceSolver.LowestValidTemperature(fluid)), null, reference);
         }
 

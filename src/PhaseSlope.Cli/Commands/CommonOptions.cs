@@ -48,7 +48,7 @@ internal sealed class CommonOptions
 
     /// <summary>The FLUID argument every fluid command takes.</summary>
     public static Argument<string> FluidArgument()
-        => new("FLUID") { Description = "Catalog name or synonym, or the path of a .fluid file" };
+        => new("FLUID") { Description = "Catalog name or synonym, the path of a .fluid file, or inline critical constants, e.g. inline:tc=369.89K,pc=4.2512MPa,omega=0.152[,molar_mass=44.1g/mol][,name=...]" };
 
     /// <summary>Adds the options a command honours: <paramref name="withEos"/> adds --eos, --alpha
     /// and --volume-shift; <paramref name="withUnits"/> adds --units (only for commands whose

@@ -175,6 +175,7 @@ internal sealed class CurveOptions
 
         var reference = ReferenceOption.Parse(parse.GetValue(Reference)!);
         var fluid = FluidResolver.Resolve(parse.GetValue(Fluid)!);
+        output.RequireMolarMassFor(fluid);
         return new CurveRequest(fluid, tFrom, tTo, n, outPath, reference, model, output, Diagnostics.Given(parse));
     }
 }

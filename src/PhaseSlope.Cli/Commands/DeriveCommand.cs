@@ -19,6 +19,12 @@ internal static class DeriveCommand
         {
             var request = options.Bind(parse);
             var (engine, state) = request.Point.Evaluate();
+            if (PartialDerivatives.NeedsIdealGas(state, request.Of, request.By, request.Hold))
+            {
+                // Decided from the Jacobian's dependence on cv and s, not from a list.
+                engine.RequireIdealGas($"(d{request.Of}/d{request.By}) at constant {request.Hold}, through cv or the absolute entropy,");
+            }
+
             double value = PartialDerivatives.Of(state, request.Of, request.By, request.Hold);
             options.Out.Emit(io, parse, StateWriter.Derivative(engine, state, request.Of, request.By, request.Hold, value, request.Format), "the derivative");
         }));

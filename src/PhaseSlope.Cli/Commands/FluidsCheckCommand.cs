@@ -62,7 +62,12 @@ internal static class FluidsCheckCommand
             : $"FAILS: {check.Failure}");
         table.Add("ideal-gas heat capacity", fluid.IdealGasHeatCapacity is { } cp
             ? $"present, {NumberText.Table(cp.MinimumTemperature)}-{NumberText.Table(cp.MaximumTemperature)} K; cp0(298.15 K) = {NumberText.Table(cp.HeatCapacity(298.15))} J/(mol K)"
-            : "absent: state and derive need it; coexist and curve work without it");
+            : "absent: absolute h, s, u, cp, cv, the speed of sound and derivatives through cv or s are unavailable; coexistence, residual properties, density, alpha and kappaT work without it");
+        if (fluid.MolarMass is null)
+        {
+            table.Add("molar mass", "absent: per-kilogram units, mass densities and the speed of sound are unavailable; molar results work without it");
+        }
+
         var text = new StringBuilder();
         text.AppendLine(Input.DataFileException.OneLine(path)); // user text: control and bidi characters escaped
         text.AppendLine();

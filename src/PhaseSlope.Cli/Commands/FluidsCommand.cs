@@ -118,6 +118,8 @@ internal sealed class FluidsShowOptions
     public FluidsShowRequest Bind(ParseResult parse)
     {
         var output = Common.BindOutput(parse);
-        return new FluidsShowRequest(FluidResolver.Resolve(parse.GetValue(Fluid)!), output);
+        var fluid = FluidResolver.Resolve(parse.GetValue(Fluid)!);
+        output.RequireMolarMassFor(fluid);
+        return new FluidsShowRequest(fluid, output);
     }
 }

@@ -48,7 +48,7 @@ internal sealed class PlotOptions
     public CommonOptions Common { get; } = new();
 
     /// <summary>FLUID[,FLUID...].</summary>
-    public Argument<string> Fluids { get; } = new("FLUID") { Description = "Catalog name or fluid file; several separated by commas (p-t, lnp-invt, t-rho, slope, latent)" };
+    public Argument<string> Fluids { get; } = new("FLUID") { Description = "Catalog name, fluid file or inline:... definition; several separated by commas (p-t, lnp-invt, t-rho, slope, latent); an inline definition keeps the key=value items that follow it" };
 
     /// <summary>--diagram.</summary>
     public Option<string> Kind { get; } = new("--diagram", "-d") { Description = $"Diagram: {string.Join(", ", DiagramKinds.Ids)}", Required = true };
@@ -138,7 +138,7 @@ internal sealed class PlotOptions
             _ => throw new UsageException($"--units: unknown unit system '{unitsText}' (use si or engineering)"),
         };
 
-        string[] names = [.. parse.GetValue(Fluids)!.Split(',').Select(n => n.Trim())];
+        string[] names = [.. FluidResolver.SplitList(parse.GetValue(Fluids)!)];
         if (names.Any(n => n.Length == 0))
         {
             throw new UsageException("FLUID: an empty name in the comma-separated list");

@@ -51,7 +51,9 @@ internal sealed class StateOptions
     public StateRequest Bind(ParseResult parse)
     {
         var output = Common.BindOutput(parse);
-        return new StateRequest(BindPoint(parse), output);
+        var point = BindPoint(parse);
+        output.RequireMolarMassFor(point.Fluid);
+        return new StateRequest(point, output);
     }
 
     /// <summary>Parses and checks the options that pick the state, then resolves the fluid (a
@@ -71,7 +73,7 @@ internal sealed class StateOptions
         double t = QuantityParser.ParseTemperature(parse.GetValue(Temperature)!, "--temperature");
         double? p = pText is null ? null : QuantityParser.ParsePressure(pText, "--pressure");
         Fluid fluid = FluidResolver.Resolve(parse.GetValue(Fluid)!);
-        double? rho = dText is null ? null : QuantityParser.ParseDensity(dText, "--density", fluid.MolarMass.Value);
+        double? rho = dText is null ? null : QuantityParser.ParseDensity(dText, "--density", fluid.MolarMass?.Value);
         return new StatePoint(fluid, t, p, rho, phase, reference, model);
     }
 

@@ -12,7 +12,7 @@ using PhaseSlope.Core.Tuning;
 
 namespace PhaseSlope.Cli.Commands;
 
-/// <summary><c>phaseslope tune DATA.csv (--fluid FLUID | --tc V --pc V [--omega V] --name NAME) --out FILE</c>:
+/// <summary><c>phaseslope tune DATA.csv (--fluid FLUID | --tc V --pc V [--omega V] [--molar-mass V] --name NAME) --out FILE</c>:
 /// tunes the model to measured vapour pressures and writes the tuned fluid file.</summary>
 internal static class TuneCommand
 {
@@ -72,7 +72,7 @@ internal sealed class TuneOptions
     public Option<string> Omega { get; } = new("--omega") { Description = "Acentric factor when no --fluid is given (the start of an alpha tuning; omit it to take it from the data point nearest 0.7 Tc)" };
 
     /// <summary>--molar-mass.</summary>
-    public Option<string> MolarMass { get; } = new("--molar-mass") { Description = "Molar mass when no --fluid is given, e.g. 86.18 g/mol (bare number: kg/mol)" };
+    public Option<string> MolarMass { get; } = new("--molar-mass") { Description = "Molar mass when no --fluid is given, e.g. 86.18 g/mol (bare number: kg/mol); optional, needed later only for mass units" };
 
     /// <summary>--name.</summary>
     public Option<string> Name { get; } = new("--name") { Description = "Name of the tuned fluid, lower case (needed without --fluid; default with --fluid: its name with '-tuned')" };
@@ -174,13 +174,14 @@ internal sealed class TuneOptions
                     ? w : throw new UsageException($"--omega: '{o}' is not a number");
             }
 
-            string molarMassText = parse.GetValue(MolarMass) ?? throw new UsageException("--molar-mass: needed with --tc and --pc (fluid files carry a molar mass)");
-            double molarMass = QuantityParser.ParseMolarMass(molarMassText, "--molar-mass");
             const string given = "given on the command line of phaseslope tune";
+            SourcedValue? molarMass = parse.GetValue(MolarMass) is string molarMassText
+                ? new SourcedValue(QuantityParser.ParseMolarMass(molarMassText, "--molar-mass"), given)
+                : null;
             baseFluid = new Fluid
             {
                 Name = name,
-                MolarMass = new SourcedValue(molarMass, given),
+                MolarMass = molarMass,
                 CriticalTemperature = new SourcedValue(tc, given),
                 CriticalPressure = new SourcedValue(pc, given),
                 AcentricFactor = new SourcedValue(omegaGiven ?? 0, given),

@@ -57,7 +57,7 @@ internal static class CoexistenceWriter
             json.WriteString("reference", reference.Id);
         }
 
-        json.WriteFinite("molar_mass_kg_mol", fluid.MolarMass.Value);
+        json.WriteNumberOrNull("molar_mass_kg_mol", fluid.MolarMass?.Value);
         json.WriteBoolean("critical", point.IsCritical);
         foreach (var column in CoexistenceColumns.Flat)
         {
@@ -71,8 +71,8 @@ internal static class CoexistenceWriter
 
         json.WriteFinite("inverse_slope_K_Pa", Finite(point.InverseSlope, "inverse_slope_K_Pa"));
         json.WriteFinite("compressibility_factor_change", point.CompressibilityChange);
-        WritePhase(json, "liquid", point.Liquid, row.Full?.Liquid, fluid.MolarMass.Value);
-        WritePhase(json, "vapour", point.Vapour, row.Full?.Vapour, fluid.MolarMass.Value);
+        WritePhase(json, "liquid", point.Liquid, row.Full?.Liquid, fluid.MolarMass?.Value);
+        WritePhase(json, "vapour", point.Vapour, row.Full?.Vapour, fluid.MolarMass?.Value);
         json.WriteStartObject("solver");
         json.WriteString("method", Kebab(point.Report.Method.ToString()));
         json.WriteFinite("iterations", point.Report.Iterations);
@@ -87,13 +87,13 @@ internal static class CoexistenceWriter
 
     private static readonly HashSet<string> PointKeys = ["temperature_K", "pressure_Pa"];
 
-    private static void WritePhase(Utf8JsonWriter json, string name, PhaseState phase, SaturatedPhase? full, double molarMass)
+    private static void WritePhase(Utf8JsonWriter json, string name, PhaseState phase, SaturatedPhase? full, double? molarMass)
     {
         json.WriteStartObject(name);
         if (full is null)
         {
             json.WriteFinite("density_mol_m3", phase.Density);
-            json.WriteFinite("density_kg_m3", phase.Density * molarMass);
+            json.WriteNumberOrNull("density_kg_m3", phase.Density * molarMass);
             json.WriteFinite("molar_volume_m3_mol", phase.MolarVolume);
             json.WriteFinite("compressibility_factor", phase.CompressibilityFactor);
             json.WriteFinite("ln_fugacity_coefficient", phase.LnFugacityCoefficient);
@@ -126,7 +126,7 @@ internal static class CoexistenceWriter
     {
         var columns = CoexistenceColumns.For(rows).Where(c => c.InCurveTable).ToArray();
         var table = new TextTable(columns.Select(c => CoexistenceColumns.Header(c, units)).ToArray(), columns.Select(_ => true).ToArray());
-        double m = fluid.MolarMass.Value;
+        double m = fluid.MolarMass?.Value ?? double.NaN; // SI tables do not use it; engineering units were refused without it
         foreach (var row in rows)
         {
             table.Add(columns.Select(c => NumberText.Table(CoexistenceColumns.Display(c, row, units, m))).ToArray());
@@ -145,12 +145,12 @@ internal static class CoexistenceWriter
     private static string ReferenceLine(IReadOnlyList<CoexistenceRow> rows, ReferenceState? reference)
         => rows.All(r => r.Full is not null) && reference is not null
             ? $"h and s reference: {reference.Description}"
-            : "h and s not shown: the fluid file has no ideal-gas heat capacity";
+            : "h and s not shown: the fluid has no ideal-gas heat capacity cp°";
 
     private static string SingleTable(CoexistenceRow row, Fluid fluid, IResidualModel model, ReferenceState? reference, UnitSystem units)
     {
         var point = row.Point;
-        double m = fluid.MolarMass.Value;
+        double m = fluid.MolarMass?.Value ?? double.NaN; // SI tables do not use it; engineering units were refused without it
         string Show(DisplayQuantity q, double si) => NumberText.Table(UnitFormatter.Convert(q, si, units, m));
         string Label(DisplayQuantity q) => UnitFormatter.Label(q, units);
 

@@ -167,7 +167,11 @@ internal static class EstimateReport
 
     private static IEnumerable<(string Label, string Key, string Unit, SourcedValue Value)> Values(Fluid fluid)
     {
-        yield return ("molar mass", "molar_mass_kg_per_mol", "kg/mol", fluid.MolarMass);
+        if (fluid.MolarMass is { } mass)
+        {
+            yield return ("molar mass", "molar_mass_kg_per_mol", "kg/mol", mass);
+        }
+
         if (fluid.NormalBoilingPoint is { } tb)
         {
             yield return ("normal boiling point", "normal_boiling_point_K", "K", tb);

@@ -165,7 +165,7 @@ internal static class FluidWriter
         var table = new TextTable(headers, [false, false, false, .. shown.Select(_ => true)]);
         foreach (var fluid in fluids)
         {
-            table.Add([fluid.Name, fluid.Formula ?? "", fluid.Family ?? "", .. shown.Select(f => Display(f, f.Get(fluid)!.Value, units, fluid.MolarMass.Value))]);
+            table.Add([fluid.Name, fluid.Formula ?? "", fluid.Family ?? "", .. shown.Select(f => f.Get(fluid) is SourcedValue v ? Display(f, v.Value, units, fluid.MolarMass?.Value ?? double.NaN) : "")]);
         }
 
         return $"{fluids.Count} {(fluids.Count == 1 ? "fluid" : "fluids")}{Environment.NewLine}{Environment.NewLine}{table.Render()}";
@@ -205,8 +205,9 @@ internal static class FluidWriter
         {
             if (field.Get(fluid) is SourcedValue value)
             {
-                string u = value.StandardUncertainty is double s ? DisplayUncertainty(field, s, units, fluid.MolarMass.Value) : "";
-                table.Add(field.Title, Display(field, value.Value, units, fluid.MolarMass.Value), u, Unit(field, units), value.Source);
+                double m = fluid.MolarMass?.Value ?? double.NaN; // engineering units were refused without it
+                string u = value.StandardUncertainty is double s ? DisplayUncertainty(field, s, units, m) : "";
+                table.Add(field.Title, Display(field, value.Value, units, m), u, Unit(field, units), value.Source);
             }
             else
             {

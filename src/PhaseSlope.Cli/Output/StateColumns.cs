@@ -9,8 +9,12 @@ namespace PhaseSlope.Cli.Output;
 internal static class StateColumns
 {
     /// <summary>A property of a state: SI key, title, display quantity (null: dimensionless), SI value
-    /// (null where undefined, e.g. cp at the critical point).</summary>
+    /// (null where undefined, e.g. cp at the critical point, or unavailable without cp°).</summary>
     public sealed record Column(string Key, string Title, DisplayQuantity? Quantity, Func<ThermodynamicState, double?> Value);
+
+    /// <summary>The table text of a property that needs the ideal-gas heat capacity the fluid does
+    /// not give; the table explains it in a note (<see cref="IdealGasNote"/>).</summary>
+    public const string Unavailable = "n/a";
 
     /// <summary>All properties in output order.</summary>
     public static IReadOnlyList<Column> All { get; } =
@@ -27,6 +31,7 @@ internal static class StateColumns
         new("gibbs_energy_J_mol", "Gibbs energy g", DisplayQuantity.MolarEnergy, s => s.GibbsEnergy),
         new("isobaric_heat_capacity_J_molK", "isobaric heat capacity cp", DisplayQuantity.MolarEntropy, s => s.IsobaricHeatCapacity),
         new("isochoric_heat_capacity_J_molK", "isochoric heat capacity cv", DisplayQuantity.MolarEntropy, s => s.IsochoricHeatCapacity),
+        new("heat_capacity_difference_J_molK", "cp - cv", DisplayQuantity.MolarEntropy, s => s.HeatCapacityDifference),
         new("ideal_gas_heat_capacity_J_molK", "ideal-gas heat capacity cp0", DisplayQuantity.MolarEntropy, s => s.IdealGasHeatCapacity),
         new("speed_of_sound_m_s", "speed of sound", DisplayQuantity.Speed, s => s.SpeedOfSound),
         new("isobaric_expansivity_1_K", "isobaric expansivity", DisplayQuantity.Expansivity, s => s.IsobaricExpansivity),
@@ -53,7 +58,7 @@ internal static class StateColumns
             json.WriteNumberOrNull(column.Key, column.Value(state));
         }
 
-        json.WriteFinite("density_kg_m3", state.Density * state.MolarMass);
+        json.WriteNumberOrNull("density_kg_m3", state.Density * state.MolarMass);
         json.WriteBoolean("ideal_gas_extrapolated", state.IdealGasExtrapolated);
     }
 
@@ -61,14 +66,56 @@ internal static class StateColumns
     public static string Unit(Column column, UnitSystem units)
         => column.Quantity is DisplayQuantity q ? UnitFormatter.Label(q, units) : "-";
 
-    /// <summary>Display text of a column ("undefined" where the property is).</summary>
+    /// <summary>Display text of a column ("undefined" where the property is; <see cref="Unavailable"/>
+    /// where it needs the cp° or the molar mass the fluid does not give).</summary>
     public static string Display(Column column, ThermodynamicState state, UnitSystem units)
     {
         if (column.Value(state) is not double value || !double.IsFinite(value))
         {
-            return "undefined";
+            return NeedsMissingData(column, state) ? Unavailable : "undefined";
         }
 
-        return NumberText.Table(column.Quantity is DisplayQuantity q ? UnitFormatter.Convert(q, value, units, state.MolarMass) : value);
+        return NumberText.Table(column.Quantity is DisplayQuantity q ? UnitFormatter.Convert(q, value, units, state.MolarMass ?? double.NaN) : value);
+    }
+
+    /// <summary>Whether a null property is null because the fluid lacks cp° or the molar mass,
+    /// computed rather than listed: it would have a value if the state had them. The state is
+    /// completed with placeholder values (cp° = 4R, M = 1 kg/mol) only to ask that; the
+    /// placeholders are never shown.</summary>
+    public static bool NeedsMissingData(Column column, ThermodynamicState state)
+    {
+        if (state.IdealGasUnavailableReason is null && state.MolarMass is not null)
+        {
+            return false;
+        }
+
+        double placeholderCv = 3 * Core.Constants.GasConstant;
+        var completed = state with
+        {
+            IsochoricHeatCapacity = state.IsochoricHeatCapacity ?? placeholderCv,
+            IdealGasHeatCapacity = state.IdealGasHeatCapacity ?? 4 * Core.Constants.GasConstant,
+            InternalEnergy = state.InternalEnergy ?? 0,
+            Enthalpy = state.Enthalpy ?? 0,
+            Entropy = state.Entropy ?? 0,
+            MolarMass = state.MolarMass ?? 1,
+        };
+        return column.Value(completed) is double v && double.IsFinite(v);
+    }
+
+    /// <summary>The note under a table in which some property is <see cref="Unavailable"/>.</summary>
+    public static string? IdealGasNote(ThermodynamicState state)
+    {
+        var notes = new List<string>();
+        if (state.IdealGasUnavailableReason is string reason)
+        {
+            notes.Add($"{Unavailable}: {reason}");
+        }
+
+        if (state.MolarMass is null)
+        {
+            notes.Add($"{Unavailable}: the speed of sound and mass-based values need the molar mass, which the fluid does not give");
+        }
+
+        return notes.Count == 0 ? null : string.Join(Environment.NewLine, notes.Select(n => $"note: {n}"));
     }
 }

@@ -70,7 +70,17 @@ internal static class StateWriter
             json.WriteString("undefined_reason", reason);
         }
 
-        json.WriteFinite("molar_mass_kg_mol", engine.MolarMass);
+        if (state.IdealGasUnavailableReason is string missing)
+        {
+            // The properties that are null for this reason are the ones that need cp°.
+            json.WriteString("ideal_gas_unavailable_reason", missing);
+        }
+
+        json.WriteNumberOrNull("molar_mass_kg_mol", engine.MolarMass);
+        if (engine.MolarMass is null)
+        {
+            json.WriteString("molar_mass_unavailable_reason", $"fluid '{engine.Fluid.Name}' gives no molar mass; density_kg_m3 and the speed of sound need it");
+        }
     }
 
     private static string Title(PropertyModel engine, ThermodynamicState state)
@@ -87,7 +97,9 @@ internal static class StateWriter
 
         var text = new StringBuilder();
         text.AppendLine(Title(engine, state));
-        text.AppendLine($"reference: {engine.Reference.Description}");
+        text.AppendLine(state.IdealGasUnavailableReason is null
+            ? $"reference: {engine.Reference.Description}"
+            : "reference: none (absolute h, s, u, a and g need the ideal-gas heat capacity cp°, which this fluid does not give)");
         text.AppendLine();
         text.Append(table.Render());
         if (state.IdealGasExtrapolated)
@@ -105,6 +117,11 @@ internal static class StateWriter
         if (state.UndefinedReason is string reason)
         {
             text.AppendLine($"note: {reason}");
+        }
+
+        if (StateColumns.IdealGasNote(state) is string unavailable)
+        {
+            text.AppendLine(unavailable);
         }
 
         text.AppendLine(CoexistenceWriter.Caution);

@@ -69,12 +69,18 @@ internal static class QuantityParser
     /// (<c>mol/m3</c>, <c>mol/L</c>, <c>mol/dm3</c>, <c>kmol/m3</c>), or a mass density in
     /// <c>kg/m3</c> or <c>g/cm3</c> (divided by <paramref name="molarMass"/>).</param>
     /// <param name="optionName">The option the text came from; it starts every error message.</param>
-    /// <param name="molarMass">Molar mass of the fluid in kg/mol, for mass densities.</param>
+    /// <param name="molarMass">Molar mass of the fluid in kg/mol, for mass densities; null when the
+    /// fluid gives none (a mass density is then refused).</param>
     /// <exception cref="UsageException">Empty, malformed, unknown unit, or not above zero.</exception>
-    public static double ParseDensity(string text, string optionName, double molarMass)
+    public static double ParseDensity(string text, string optionName, double? molarMass)
     {
         ParsedQuantity parsed = Parse(text, optionName, "density", [Dimension.AmountDensity, Dimension.MassDensity]);
-        double molar = parsed.Unit.Dimension == Dimension.MassDensity ? parsed.Value / molarMass : parsed.Value;
+        if (parsed.Unit.Dimension == Dimension.MassDensity && molarMass is null)
+        {
+            throw Fail(optionName, text, $"a density in {parsed.Unit.Symbol} needs the fluid's molar mass, which the fluid does not give", "(give the density in mol/m3, or give the fluid a molar mass)");
+        }
+
+        double molar = parsed.Unit.Dimension == Dimension.MassDensity ? parsed.Value / molarMass!.Value : parsed.Value;
         if (!double.IsFinite(molar))
         {
             throw Fail(optionName, text, "density is too large", null);

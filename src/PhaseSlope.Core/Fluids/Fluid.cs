@@ -1,3 +1,4 @@
+using PhaseSlope.Core.Errors;
 using PhaseSlope.Core.Models;
 
 namespace PhaseSlope.Core.Fluids;
@@ -23,8 +24,10 @@ public sealed record Fluid
     /// <summary>Family (for example "alkane", "refrigerant", "inorganic"), or null.</summary>
     public string? Family { get; init; }
 
-    /// <summary>Molar mass in kg/mol.</summary>
-    public required SourcedValue MolarMass { get; init; }
+    /// <summary>Molar mass in kg/mol, or null when not given (then nothing on a mass basis is
+    /// available: mass densities, per-kilogram units, the speed of sound; see
+    /// <see cref="RequireMolarMass"/>).</summary>
+    public SourcedValue? MolarMass { get; init; }
 
     /// <summary>Critical temperature in K.</summary>
     public required SourcedValue CriticalTemperature { get; init; }
@@ -68,6 +71,14 @@ public sealed record Fluid
     /// <summary>Free-text remarks from the fluid file, or null.</summary>
     public string? Remarks { get; init; }
 
-    /// <summary>Where the record was read from: a catalog resource name or a file path.</summary>
+    /// <summary>Where the record was read from: a catalog resource name, a file path, or
+    /// <see cref="InlineFluid.Origin"/> for a fluid given on the command line.</summary>
     public string Origin { get; init; } = "";
+
+    /// <summary>The molar mass in kg/mol, for a use that cannot do without it.</summary>
+    /// <param name="purpose">What needs it, for the message (e.g. "a density in kg/m3").</param>
+    /// <exception cref="FluidDataException">The fluid gives no molar mass.</exception>
+    public double RequireMolarMass(string purpose)
+        => MolarMass?.Value ?? throw new FluidDataException(Origin, 0, "molar_mass",
+            $"fluid '{Name}' gives no molar mass, which {purpose} needs");
 }

@@ -129,7 +129,7 @@ internal sealed partial class FluidFileParser
 
     private static readonly string[] RequiredKeys =
     [
-        KeyFormat, KeyName, KeyMolarMass, KeyCriticalTemperature, KeyCriticalPressure, KeyAcentricFactor,
+        KeyFormat, KeyName, KeyCriticalTemperature, KeyCriticalPressure, KeyAcentricFactor,
     ];
 
     private static readonly Dictionary<string, Quantity> QuantityOfKey = new(StringComparer.Ordinal)
@@ -202,6 +202,35 @@ internal sealed partial class FluidFileParser
             if (!_lineOfKey.ContainsKey(required))
             {
                 throw Fail(endLine, required, "required field is missing (end of file reached without it)");
+            }
+        }
+
+        return Build();
+    }
+
+    /// <summary>Reads a fluid from entries given one by one rather than as file lines (an inline
+    /// definition): the same keys, value syntax and checks as a file, without the <c>format</c>
+    /// line; each entry's position stands for its line in errors.</summary>
+    /// <param name="entries">(key, value text after the key) pairs, e.g. ("critical_temperature", "369.89 K | source").</param>
+    internal Fluid RunEntries(IEnumerable<(string Key, string Text)> entries)
+    {
+        int position = 0;
+        foreach (var (key, text) in entries)
+        {
+            position++;
+            if (key == KeyFormat)
+            {
+                throw Fail(position, key, "unknown key");
+            }
+
+            ReadEntry(position, key, text);
+        }
+
+        foreach (string required in RequiredKeys.Where(k => k != KeyFormat))
+        {
+            if (!_lineOfKey.ContainsKey(required))
+            {
+                throw Fail(0, required, "required value is missing");
             }
         }
 
@@ -588,20 +617,23 @@ internal sealed partial class FluidFileParser
                 $"give either '{KeyCriticalDensity}' (line {_lineOfKey[KeyCriticalDensity]}) or '{KeyCriticalMolarVolume}', not both");
         }
 
-        SourcedValue molarMass = ToSi(KeyMolarMass, molarMass: null)!;
-        if (molarMass.Value < FluidFile.MolarMassLowest || molarMass.Value > FluidFile.MolarMassHighest)
+        // The molar mass is optional: without it everything on a molar basis works, and what
+        // needs it (mass units, a critical density in kg/m3, the speed of sound) says so.
+        SourcedValue? molarMass = ToSi(KeyMolarMass, molarMass: null);
+        if (molarMass is not null && (molarMass.Value < FluidFile.MolarMassLowest || molarMass.Value > FluidFile.MolarMassHighest))
         {
             throw Fail(_lineOfKey[KeyMolarMass], KeyMolarMass,
                 $"implausible value {Show(molarMass.Value * 1e3)} g/mol; expected between {Show(FluidFile.MolarMassLowest * 1e3)} and {Show(FluidFile.MolarMassHighest * 1e3)} g/mol");
         }
 
-        SourcedValue criticalTemperature = ToSi(KeyCriticalTemperature, molarMass.Value)!;
-        SourcedValue criticalPressure = ToSi(KeyCriticalPressure, molarMass.Value)!;
-        SourcedValue acentricFactor = ToSi(KeyAcentricFactor, molarMass.Value)!;
-        SourcedValue? criticalDensity = ToSi(KeyCriticalDensity, molarMass.Value)
-            ?? ToSi(KeyCriticalMolarVolume, molarMass.Value);
-        SourcedValue? normalBoilingPoint = ToSi(KeyNormalBoilingPoint, molarMass.Value);
-        SourcedValue? triplePoint = ToSi(KeyTriplePointTemperature, molarMass.Value);
+        double? m = molarMass?.Value;
+        SourcedValue criticalTemperature = ToSi(KeyCriticalTemperature, m)!;
+        SourcedValue criticalPressure = ToSi(KeyCriticalPressure, m)!;
+        SourcedValue acentricFactor = ToSi(KeyAcentricFactor, m)!;
+        SourcedValue? criticalDensity = ToSi(KeyCriticalDensity, m)
+            ?? ToSi(KeyCriticalMolarVolume, m);
+        SourcedValue? normalBoilingPoint = ToSi(KeyNormalBoilingPoint, m);
+        SourcedValue? triplePoint = ToSi(KeyTriplePointTemperature, m);
 
         if (normalBoilingPoint is not null && criticalTemperature.Value <= normalBoilingPoint.Value)
         {
@@ -668,7 +700,7 @@ internal sealed partial class FluidFileParser
         {
             case Dimension.MassDensity:
                 // ρ[mol/m³] = ρ[kg/m³] / M[kg/mol]; the molar mass's own uncertainty is not propagated.
-                double m = molarMass ?? throw Fail(raw.Line, key, $"unit '{raw.Unit}' needs the molar mass");
+                double m = molarMass ?? throw Fail(raw.Line, key, $"unit '{raw.Unit}' needs the molar mass, which is not given ('{KeyMolarMass}')");
                 value = unit.ToSi(raw.Number) / m;
                 uncertainty = raw.Uncertainty is double um ? unit.ToSi(um) / m : null;
                 break;

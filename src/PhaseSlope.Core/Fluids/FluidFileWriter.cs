@@ -32,7 +32,11 @@ public static class FluidFileWriter
         Optional(text, "cas", fluid.CasNumber);
         Optional(text, "family", fluid.Family);
         text.Append('\n');
-        Quantity(text, "molar_mass", fluid.MolarMass, "kg/mol");
+        if (fluid.MolarMass is { } molarMass)
+        {
+            Quantity(text, "molar_mass", molarMass, "kg/mol");
+        }
+
         Quantity(text, "critical_temperature", fluid.CriticalTemperature, "K");
         Quantity(text, "critical_pressure", fluid.CriticalPressure, "Pa");
         Quantity(text, "acentric_factor", fluid.AcentricFactor, null);

@@ -14,11 +14,16 @@ namespace PhaseSlope.Core.Properties;
 /// h = u + P/ρ, s = s_ig − A_r,T, a = u − Ts, g = h − Ts and cv = cp° − R − T·A_r,TT, with the
 /// residual terms from <see cref="IResidualModel.Residual"/> (through <see cref="PhaseState"/>,
 /// where each residual formula is written once).
+/// <para>A fluid without cp° (<see cref="Fluid.IdealGasHeatCapacity"/> null) still gets every
+/// property that does not need it: ρ, Z, ln φ, the residual h and s, (∂P/∂T)_V, (∂P/∂ρ)_T, α, κT,
+/// the internal pressure and cp − cv; u, h, s, a, g, cv, cp, cp°, w, κS and μJT are null with
+/// <see cref="ThermodynamicState.IdealGasUnavailableReason"/>. A reference convention other than
+/// the base one needs cp° and is refused.</para>
 /// </remarks>
 public sealed class PropertyModel
 {
     private const double R = Constants.GasConstant;
-    private readonly IdealGasHeatCapacity _heatCapacity;
+    private readonly IdealGasHeatCapacity? _heatCapacity;
     private readonly double _enthalpyOffset;
     private readonly double _entropyOffset;
 
@@ -26,7 +31,9 @@ public sealed class PropertyModel
     private readonly (double Enthalpy, double Entropy) _idealGasAnchor;
 
     /// <summary>Builds the engine for a fluid, a cubic model and a reference convention.</summary>
-    /// <exception cref="FluidDataException">The fluid has no ideal-gas heat capacity.</exception>
+    /// <exception cref="FluidDataException">The fluid has no ideal-gas heat capacity and a
+    /// reference convention other than the base one (<see cref="ReferenceState.IdealGas"/>) is asked
+    /// for: every convention sets the zero of h and s, which need cp°.</exception>
     /// <exception cref="InvalidInputException">The reference convention's anchor state does not exist for this fluid (for example 0 °C above
     /// its critical temperature).</exception>
     public PropertyModel(Fluid fluid, IResidualModel model, ReferenceState? reference = null, CoexistenceOptions? options = null)
@@ -36,13 +43,41 @@ public sealed class PropertyModel
         Fluid = fluid;
         Model = model;
         Reference = reference ?? ReferenceState.IdealGas;
-        _heatCapacity = fluid.IdealGasHeatCapacity ?? throw new FluidDataException(fluid.Origin, 0, "ideal_gas_cp",
-            $"fluid '{fluid.Name}' has no ideal-gas heat capacity, which absolute caloric properties need (coexistence and residual properties work without it)");
+        _heatCapacity = fluid.IdealGasHeatCapacity;
         Solver = new CoexistenceSolver(model, CoexistenceSolver.LowestValidTemperature(fluid), options);
+        if (_heatCapacity is null)
+        {
+            if (!ReferenceEquals(Reference, ReferenceState.IdealGas) && Reference.Id != ReferenceState.IdealGas.Id)
+            {
+                throw RequireIdealGasFailure($"the reference state '{Reference.Id}' (it sets the zero of h and s)");
+            }
+
+            IdealGasUnavailableReason = $"needs the ideal-gas heat capacity cp°, which fluid '{fluid.Name}' does not give (residual properties, density, Z, ln φ, α, κT, (∂P/∂T)_V, the internal pressure and cp − cv do not need it)";
+            return;
+        }
+
         var anchor = _heatCapacity.Terms(ReferenceState.IdealGasTemperature);
         _idealGasAnchor = (anchor.Enthalpy, anchor.Entropy);
         (_enthalpyOffset, _entropyOffset) = Offsets(Reference);
     }
+
+    /// <summary>Why the properties that need cp° are null for this fluid, or null when it has cp°.</summary>
+    public string? IdealGasUnavailableReason { get; }
+
+    /// <summary>Throws unless the fluid has an ideal-gas heat capacity.</summary>
+    /// <param name="purpose">What needs it, for the message (e.g. "a pressure–enthalpy diagram").</param>
+    /// <exception cref="FluidDataException">The fluid has no cp°.</exception>
+    public void RequireIdealGas(string purpose)
+    {
+        if (_heatCapacity is null)
+        {
+            throw RequireIdealGasFailure(purpose);
+        }
+    }
+
+    private FluidDataException RequireIdealGasFailure(string purpose)
+        => new(Fluid.Origin, 0, "ideal_gas_cp",
+            $"fluid '{Fluid.Name}' has no ideal-gas heat capacity cp°, which {purpose} needs (coexistence and residual properties work without it)");
 
     /// <summary>The engine for a fluid with one of the published models.</summary>
     public static PropertyModel For(Fluid fluid, CubicModelKind kind, ReferenceState? reference = null)
@@ -60,8 +95,8 @@ public sealed class PropertyModel
     /// <summary>The coexistence solver of the same model.</summary>
     public CoexistenceSolver Solver { get; }
 
-    /// <summary>Molar mass, kg/mol.</summary>
-    public double MolarMass => Fluid.MolarMass.Value;
+    /// <summary>Molar mass, kg/mol, or null when the fluid gives none.</summary>
+    public double? MolarMass => Fluid.MolarMass?.Value;
 
     /// <summary>Relative distance in T and in P (or ρ) from the model's critical point within
     /// which a state is taken to be the critical point itself.</summary>
@@ -231,11 +266,14 @@ public sealed class PropertyModel
 
     /// <summary>Both saturated phases of a coexistence point with their full properties and their
     /// derivatives along the coexistence line.</summary>
+    /// <exception cref="FluidDataException">The fluid has no cp° (the along-line slopes of h, s
+    /// and u need it); its coexistence points themselves need none.</exception>
     public CoexistenceProperties Coexistence(CoexistencePoint point)
     {
         ArgumentNullException.ThrowIfNull(point);
+        RequireIdealGas("the full saturated-phase properties (h, s and their slopes along the line)");
         // Both phases share T, so their temperature-dependent ideal-gas part is computed once.
-        var idealGas = _heatCapacity.Terms(point.Temperature);
+        var idealGas = _heatCapacity?.Terms(point.Temperature);
         var liquid = Build(point.Liquid, PhaseLabel.Liquid, false, idealGas);
         var vapour = Build(point.Vapour, PhaseLabel.Vapour, false, idealGas);
         return new CoexistenceProperties(point, SaturatedPhase.Along(liquid, point), SaturatedPhase.Along(vapour, point));
@@ -244,18 +282,24 @@ public sealed class PropertyModel
     /// <summary>The complete state from its residual part: the ideal-gas part added, nothing
     /// evaluated again.</summary>
     private ThermodynamicState Build(PhaseState residual, PhaseLabel label, bool metastable)
-        => Build(residual, label, metastable, _heatCapacity.Terms(residual.Temperature));
+        => Build(residual, label, metastable, _heatCapacity?.Terms(residual.Temperature));
 
-    private ThermodynamicState Build(PhaseState residual, PhaseLabel label, bool metastable, (double HeatCapacity, double Enthalpy, double Entropy) idealGasAtT)
+    private ThermodynamicState Build(PhaseState residual, PhaseLabel label, bool metastable, (double HeatCapacity, double Enthalpy, double Entropy)? idealGasAtT)
     {
         var d = residual.Helmholtz;
         double t = residual.Temperature;
         double density = residual.Density;
         double pressure = residual.Pressure;
         double rt = R * t;
-        double cp0 = idealGasAtT.HeatCapacity;
-        var (hig, sig) = IdealGas(idealGasAtT, density * rt);
-        double u = _enthalpyOffset + hig - rt + residual.ResidualInternalEnergy;
+        double? cp0 = null, u = null, s = null;
+        if (idealGasAtT is { } ig)
+        {
+            cp0 = ig.HeatCapacity;
+            var (hig, sig) = IdealGas(ig, density * rt);
+            u = _enthalpyOffset + hig - rt + residual.ResidualInternalEnergy;
+            s = _entropyOffset + sig - d.DT;
+        }
+
         return new ThermodynamicState
         {
             Temperature = t,
@@ -264,11 +308,12 @@ public sealed class PropertyModel
             MolarMass = MolarMass,
             Phase = label,
             Metastable = metastable,
-            IdealGasExtrapolated = !_heatCapacity.InRange(t),
+            IdealGasExtrapolated = _heatCapacity is not null && !_heatCapacity.InRange(t),
+            IdealGasUnavailableReason = IdealGasUnavailableReason,
             CompressibilityFactor = residual.CompressibilityFactor,
             InternalEnergy = u,
             Enthalpy = u + pressure / density,
-            Entropy = _entropyOffset + sig - d.DT,
+            Entropy = s,
             ResidualEnthalpy = residual.ResidualEnthalpy,
             // ln Z is undefined for P ≤ 0 (a liquid under tension): ln φ and s_r, which contain it,
             // are null with the reason; every other property is finite there.
@@ -293,7 +338,7 @@ public sealed class PropertyModel
 
     private (double Enthalpy, double Entropy) Offsets(ReferenceState reference)
     {
-        double m = MolarMass;
+        double m = reference.PerMass ? Fluid.RequireMolarMass($"the reference state '{reference.Id}' (given per kilogram)") : 1;
         double hTarget = reference.PerMass ? reference.Enthalpy * m : reference.Enthalpy;
         double sTarget = reference.PerMass ? reference.Entropy * m : reference.Entropy;
         ThermodynamicState anchor;
@@ -301,7 +346,7 @@ public sealed class PropertyModel
         {
             case ReferenceAnchor.IdealGas:
                 // The base convention itself, shifted by the targets at its own anchor.
-                var (hBase, sBase) = IdealGas(_heatCapacity.Terms(reference.Temperature!.Value), reference.Pressure!.Value);
+                var (hBase, sBase) = IdealGas(_heatCapacity!.Terms(reference.Temperature!.Value), reference.Pressure!.Value);
                 return (hTarget - hBase, sTarget - sBase);
             case ReferenceAnchor.SaturatedLiquid:
                 var point = AnchorPoint(reference);
@@ -312,7 +357,7 @@ public sealed class PropertyModel
                 break;
         }
 
-        return (hTarget - anchor.Enthalpy, sTarget - anchor.Entropy);
+        return (hTarget - anchor.Enthalpy!.Value, sTarget - anchor.Entropy!.Value);
     }
 
     private CoexistencePoint AnchorPoint(ReferenceState reference)

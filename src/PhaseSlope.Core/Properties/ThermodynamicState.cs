@@ -10,6 +10,9 @@ namespace PhaseSlope.Core.Properties;
 /// κT = 1/(ρ·P_ρ); κS = κT·cv/cp; μJT = (T·α − 1)/(ρ·cp); (∂U/∂V)_T = T·P_T − P.
 /// Quantities that diverge where P_ρ → 0 (critical point, spinodal) are null there and for
 /// mechanically unstable states (P_ρ ≤ 0, or zero to rounding: see <see cref="MechanicallyStable"/>); the others are always finite.
+/// Without the fluid's ideal-gas heat capacity cp°, cv and the absolute u, h, s are unknown: they
+/// and everything built on them (a, g, cp, w, κS, μJT) are null, with
+/// <see cref="IdealGasUnavailableReason"/>; without a molar mass the speed of sound is null too.
 /// </remarks>
 public sealed record ThermodynamicState
 {
@@ -25,8 +28,8 @@ public sealed record ThermodynamicState
     /// <summary>Molar volume, m³/mol.</summary>
     public double MolarVolume => 1 / Density;
 
-    /// <summary>Molar mass, kg/mol.</summary>
-    public required double MolarMass { get; init; }
+    /// <summary>Molar mass, kg/mol, or null when the fluid gives none.</summary>
+    public required double? MolarMass { get; init; }
 
     /// <summary>Which kind of root this is.</summary>
     public required PhaseLabel Phase { get; init; }
@@ -40,20 +43,20 @@ public sealed record ThermodynamicState
     /// <summary>Compressibility factor P/(ρRT).</summary>
     public required double CompressibilityFactor { get; init; }
 
-    /// <summary>Molar internal energy, J/mol.</summary>
-    public required double InternalEnergy { get; init; }
+    /// <summary>Molar internal energy, J/mol; null without cp° (see <see cref="IdealGasUnavailableReason"/>).</summary>
+    public required double? InternalEnergy { get; init; }
 
-    /// <summary>Molar enthalpy, J/mol.</summary>
-    public required double Enthalpy { get; init; }
+    /// <summary>Molar enthalpy, J/mol; null without cp°.</summary>
+    public required double? Enthalpy { get; init; }
 
-    /// <summary>Molar entropy, J/(mol·K).</summary>
-    public required double Entropy { get; init; }
+    /// <summary>Molar entropy, J/(mol·K); null without cp°.</summary>
+    public required double? Entropy { get; init; }
 
-    /// <summary>Molar Helmholtz energy u − Ts, J/mol.</summary>
-    public double HelmholtzEnergy => InternalEnergy - Temperature * Entropy;
+    /// <summary>Molar Helmholtz energy u − Ts, J/mol; null without cp°.</summary>
+    public double? HelmholtzEnergy => InternalEnergy - Temperature * Entropy;
 
-    /// <summary>Molar Gibbs energy h − Ts, J/mol.</summary>
-    public double GibbsEnergy => Enthalpy - Temperature * Entropy;
+    /// <summary>Molar Gibbs energy h − Ts, J/mol; null without cp°.</summary>
+    public double? GibbsEnergy => Enthalpy - Temperature * Entropy;
 
     /// <summary>Residual enthalpy h − h_ig(T), J/mol.</summary>
     public required double ResidualEnthalpy { get; init; }
@@ -70,15 +73,19 @@ public sealed record ThermodynamicState
     /// liquid under tension), or null.</summary>
     public string? UndefinedReason { get; init; }
 
+    /// <summary>Why the properties that need the ideal-gas heat capacity cp° (u, h, s, a, g, cv,
+    /// cp, cp°, w, κS, μJT) are null: the fluid gives no cp°. Null when it does.</summary>
+    public string? IdealGasUnavailableReason { get; init; }
+
     /// <summary>True when the state is the model's critical point (recognised within
     /// <see cref="PropertyModel.CriticalPointTolerance"/>, however it was specified).</summary>
     public bool Critical { get; init; }
 
-    /// <summary>Isochoric molar heat capacity, J/(mol·K).</summary>
-    public required double IsochoricHeatCapacity { get; init; }
+    /// <summary>Isochoric molar heat capacity, J/(mol·K); null without cp°.</summary>
+    public required double? IsochoricHeatCapacity { get; init; }
 
-    /// <summary>Ideal-gas isobaric heat capacity cp°(T), J/(mol·K).</summary>
-    public required double IdealGasHeatCapacity { get; init; }
+    /// <summary>Ideal-gas isobaric heat capacity cp°(T), J/(mol·K); null when the fluid gives none.</summary>
+    public required double? IdealGasHeatCapacity { get; init; }
 
     /// <summary>(∂P/∂T)_V, Pa/K.</summary>
     public required double PressureTemperatureDerivative { get; init; }
@@ -97,18 +104,28 @@ public sealed record ThermodynamicState
     /// comes out as ±1e-12 J/mol of noise) counts as zero.</summary>
     public bool MechanicallyStable => PressureDensityDerivative > 1e-13 * Constants.GasConstant * Temperature;
 
-    /// <summary>Isobaric molar heat capacity, J/(mol·K); null where the state is not <see cref="MechanicallyStable"/>.</summary>
-    public double? IsobaricHeatCapacity => MechanicallyStable
-        ? IsochoricHeatCapacity + Temperature * PressureTemperatureDerivative * PressureTemperatureDerivative / (Density * Density * PressureDensityDerivative)
+    /// <summary>cp − cv = T·(∂P/∂T)_V²/(ρ²·(∂P/∂ρ)_T), J/(mol·K), which needs no cp°; null where
+    /// the state is not <see cref="MechanicallyStable"/>.</summary>
+    public double? HeatCapacityDifference => MechanicallyStable
+        ? Temperature * PressureTemperatureDerivative * PressureTemperatureDerivative / (Density * Density * PressureDensityDerivative)
         : null;
 
-    /// <summary>Speed of sound, m/s; null where w² ≤ 0.</summary>
+    /// <summary>Isobaric molar heat capacity, J/(mol·K); null where the state is not
+    /// <see cref="MechanicallyStable"/>, and without cp°.</summary>
+    public double? IsobaricHeatCapacity => IsochoricHeatCapacity + HeatCapacityDifference;
+
+    /// <summary>Speed of sound, m/s; null where w² ≤ 0, and without cp° or a molar mass.</summary>
     public double? SpeedOfSound
     {
         get
         {
+            if (IsochoricHeatCapacity is not double cv || MolarMass is not double m)
+            {
+                return null;
+            }
+
             double pt = PressureTemperatureDerivative;
-            double w2 = (PressureDensityDerivative + Temperature * pt * pt / (Density * Density * IsochoricHeatCapacity)) / MolarMass;
+            double w2 = (PressureDensityDerivative + Temperature * pt * pt / (Density * Density * cv)) / m;
             return w2 > 0 ? Math.Sqrt(w2) : null;
         }
     }
@@ -129,24 +146,58 @@ public sealed record ThermodynamicState
     /// building blocks of every other derivative (see <see cref="PartialDerivatives"/>).</summary>
     /// <remarks>S_T = cv/T and S_V = P_T (Maxwell, from dA = −S dT − P dV); U_T = cv,
     /// U_V = T·P_T − P; H = U + PV; A_T = −S, A_V = −P; G = A + PV.</remarks>
+    /// <exception cref="InvalidOperationException">The partial needs cv or the absolute entropy
+    /// and the state has no cp° (<see cref="IdealGasUnavailableReason"/>); use
+    /// <see cref="PartialDerivatives.NeedsIdealGas"/> to ask first.</exception>
     public (double DT, double DV) Partials(StateVariable variable)
+    {
+        var split = SplitPartials(variable);
+        if (IsochoricHeatCapacity is double cv && Entropy is double entropy)
+        {
+            double t = Temperature;
+            double v = MolarVolume;
+            double pt = PressureTemperatureDerivative;
+            // Written out as before the split so that a state with cp° gives the same bits.
+            double dt = variable switch
+            {
+                StateVariable.S => cv / t,
+                StateVariable.U => cv,
+                StateVariable.H => cv + v * pt,
+                StateVariable.A => -entropy,
+                StateVariable.G => -entropy + v * pt,
+                _ => split.DT,
+            };
+            return (dt, split.DV);
+        }
+
+        if (split.DTPerCv != 0 || split.DTPerEntropy != 0)
+        {
+            throw new InvalidOperationException($"(d{variable}/dT)_V needs cv or the absolute entropy: {IdealGasUnavailableReason}");
+        }
+
+        return (split.DT, split.DV);
+    }
+
+    /// <summary>(∂X/∂T)_V split as DT + DTPerCv·cv + DTPerEntropy·s (each term known without cp°),
+    /// and (∂X/∂V)_T, which never needs cp°: the form in which <see cref="PartialDerivatives"/>
+    /// decides whether a derivative needs cp°.</summary>
+    internal (double DT, double DTPerCv, double DTPerEntropy, double DV) SplitPartials(StateVariable variable)
     {
         double t = Temperature;
         double v = MolarVolume;
         double p = Pressure;
         double pt = PressureTemperatureDerivative;
         double pv = PressureVolumeDerivative;
-        double cv = IsochoricHeatCapacity;
         return variable switch
         {
-            StateVariable.T => (1, 0),
-            StateVariable.V => (0, 1),
-            StateVariable.P => (pt, pv),
-            StateVariable.S => (cv / t, pt),
-            StateVariable.U => (cv, t * pt - p),
-            StateVariable.H => (cv + v * pt, t * pt + v * pv),
-            StateVariable.A => (-Entropy, -p),
-            StateVariable.G => (-Entropy + v * pt, v * pv),
+            StateVariable.T => (1, 0, 0, 0),
+            StateVariable.V => (0, 0, 0, 1),
+            StateVariable.P => (pt, 0, 0, pv),
+            StateVariable.S => (0, 1 / t, 0, pt),
+            StateVariable.U => (0, 1, 0, t * pt - p),
+            StateVariable.H => (v * pt, 1, 0, t * pt + v * pv),
+            StateVariable.A => (0, 0, -1, -p),
+            StateVariable.G => (v * pt, 0, -1, v * pv),
             _ => throw new ArgumentOutOfRangeException(nameof(variable), variable, "unknown state variable"),
         };
     }

@@ -122,6 +122,21 @@ public static partial class QuantityText
         return true;
     }
 
+    /// <summary>Splits text such as <c>369.89K</c> or <c>4.2512 MPa</c> into its leading number,
+    /// as written, and the rest (the unit spelling, trimmed; empty for a bare number).</summary>
+    /// <param name="text">The text; the typographic minus (U+2212) is read as a minus.</param>
+    /// <param name="number">The number text (invariant form), when the text starts with one.</param>
+    /// <param name="unit">The rest of the text, trimmed.</param>
+    /// <returns>Whether the text starts with a number.</returns>
+    public static bool TrySplit(string text, out string number, out string unit)
+    {
+        ArgumentNullException.ThrowIfNull(text);
+        Match match = LeadingNumber().Match(text.Trim().Replace('\u2212', '-'));
+        number = match.Success ? match.Groups["num"].Value : "";
+        unit = match.Success ? match.Groups["rest"].Value.Trim() : "";
+        return match.Success;
+    }
+
     /// <summary>Converts a number, given as its text and its double reading, to the SI unit:
     /// in decimal where the text fits a decimal, in double otherwise.</summary>
     /// <param name="numberText">The number as written (invariant culture).</param>

@@ -7,6 +7,14 @@ namespace PhaseSlope.Plots.Diagrams;
 /// <summary>Series in the house style, shared by the diagram builders.</summary>
 internal static class Chart
 {
+    /// <summary>The molar mass a diagram converts with: required for mass units (engineering),
+    /// unused (NaN when the fluid gives none) for molar SI units.</summary>
+    /// <exception cref="Core.Errors.FluidDataException">Mass units and no molar mass.</exception>
+    public static double MolarMass(PlotFluid fluid, DiagramOptions options)
+        => options.Units == PlotUnits.Si
+            ? fluid.Fluid.MolarMass?.Value ?? double.NaN
+            : fluid.Fluid.RequireMolarMass("a diagram in engineering (per-kilogram) units");
+
     /// <summary>Line width of a main curve in pixels.</summary>
     public const double Thick = 2.5;
 

@@ -28,7 +28,7 @@ public static class LatentDiagram
         for (int i = 0; i < fluids.Count; i++)
         {
             var fluid = fluids[i];
-            double m = fluid.Fluid.MolarMass.Value;
+            double m = Chart.MolarMass(fluid, options);
             var curve = Chart.Curve(fluid, options.Points);
             model.Series.Add(Chart.Line($"{fluid.Name} (model)", HouseStyle.Colour(i),
                 curve.Select(c => new DataPoint(units.Temperature(c.Temperature), units.Enthalpy(c.EnthalpyOfVaporization, m)))));
@@ -40,7 +40,7 @@ public static class LatentDiagram
         if (options.Data is { Count: > 0 } data)
         {
             var first = fluids[0];
-            double m = first.Fluid.MolarMass.Value;
+            double m = Chart.MolarMass(first, options);
             var points = FromData(first, data);
             var colour = HouseStyle.Colour(fluids.Count);
             var band = new AreaSeries

@@ -31,10 +31,11 @@ public static class PressureEnthalpyDiagram
         ArgumentNullException.ThrowIfNull(options);
         var units = new UnitScale(options.Units);
         var properties = new PropertyModel(fluid.Fluid, fluid.Model);
+        properties.RequireIdealGas("a pressure–enthalpy diagram");
         var solver = properties.Solver;
         double tc = fluid.Model.CriticalTemperature;
         double pc = fluid.Model.CriticalPressure;
-        double m = fluid.Fluid.MolarMass.Value;
+        double m = Chart.MolarMass(fluid, options);
         DataPoint Map(double h, double p) => new(units.Enthalpy(h, m), units.Pressure(p));
 
         var model = HouseStyle.NewModel($"P–h diagram of {fluid.Name} ({Chart.ModelTitle(fluid)}, ideal-gas reference)");
@@ -48,16 +49,16 @@ public static class PressureEnthalpyDiagram
         var curve = CoexistenceCurve.Trace(solver, tStart, tc, options.Points);
         var saturated = curve.Take(curve.Count - 1).Select(properties.Coexistence).ToList();
         var critical = properties.AtDensity(curve[^1].Temperature, curve[^1].Liquid.Density);
-        var dome = saturated.Select(s => Map(s.Liquid.State.Enthalpy, s.Point.Pressure)).Append(Map(critical.Enthalpy, critical.Pressure))
-            .Concat(saturated.AsEnumerable().Reverse().Select(s => Map(s.Vapour.State.Enthalpy, s.Point.Pressure)));
+        var dome = saturated.Select(s => Map(s.Liquid.State.Enthalpy!.Value, s.Point.Pressure)).Append(Map(critical.Enthalpy!.Value, critical.Pressure))
+            .Concat(saturated.AsEnumerable().Reverse().Select(s => Map(s.Vapour.State.Enthalpy!.Value, s.Point.Pressure)));
         model.Series.Add(Chart.Line("saturated liquid and vapour", HouseStyle.Ink, dome, Chart.Thick));
 
         var grey = OxyColor.FromRgb(130, 130, 130);
         bool qualityInLegend = true;
         foreach (double x in Qualities)
         {
-            var line = saturated.Select(s => Map(s.Liquid.State.Enthalpy + x * (s.Vapour.State.Enthalpy - s.Liquid.State.Enthalpy), s.Point.Pressure))
-                .Append(Map(critical.Enthalpy, critical.Pressure)).ToList();
+            var line = saturated.Select(s => Map(s.Liquid.State.Enthalpy!.Value + x * (s.Vapour.State.Enthalpy!.Value - s.Liquid.State.Enthalpy!.Value), s.Point.Pressure))
+                .Append(Map(critical.Enthalpy!.Value, critical.Pressure)).ToList();
             model.Series.Add(Chart.Line(qualityInLegend ? "vapour quality x = 0.1 … 0.9" : null, grey, line, 1, LineStyle.Dot));
             model.Annotations.Add(new TextAnnotation
             {
@@ -91,22 +92,22 @@ public static class PressureEnthalpyDiagram
                 var sat = properties.Coexistence(solver.AtTemperature(t));
                 double pSat = sat.Point.Pressure;
                 points.AddRange(LogSpaced(pMax, pSat, IsothermPoints).SkipLast(1)
-                    .Select(p => Map(properties.AtPressure(t, p, PhaseChoice.Liquid).Enthalpy, p)));
-                points.Add(Map(sat.Liquid.State.Enthalpy, pSat));
-                points.Add(Map(sat.Vapour.State.Enthalpy, pSat));
+                    .Select(p => Map(properties.AtPressure(t, p, PhaseChoice.Liquid).Enthalpy!.Value, p)));
+                points.Add(Map(sat.Liquid.State.Enthalpy!.Value, pSat));
+                points.Add(Map(sat.Vapour.State.Enthalpy!.Value, pSat));
                 points.AddRange(LogSpaced(pSat, pMin, IsothermPoints).Skip(1)
-                    .Select(p => Map(properties.AtPressure(t, p, PhaseChoice.Vapour).Enthalpy, p)));
+                    .Select(p => Map(properties.AtPressure(t, p, PhaseChoice.Vapour).Enthalpy!.Value, p)));
             }
             else
             {
-                points.AddRange(LogSpaced(pMax, pMin, 2 * IsothermPoints).Select(p => Map(properties.AtPressure(t, p).Enthalpy, p)));
+                points.AddRange(LogSpaced(pMax, pMin, 2 * IsothermPoints).Select(p => Map(properties.AtPressure(t, p).Enthalpy!.Value, p)));
             }
 
             string label = $"T = {Chart.Number(tr)} Tc ({Chart.Number(units.Temperature(t))} {units.TemperatureUnit})";
             model.Series.Add(Chart.Line(label, HouseStyle.Colour(colour++), points, Chart.Thin + 0.5));
         }
 
-        model.Series.Add(Chart.Critical([Map(critical.Enthalpy, critical.Pressure)]));
+        model.Series.Add(Chart.Critical([Map(critical.Enthalpy!.Value, critical.Pressure)]));
         return model;
     }
 

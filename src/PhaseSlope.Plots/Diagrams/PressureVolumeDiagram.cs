@@ -28,7 +28,7 @@ public static class PressureVolumeDiagram
         double tc = cubic.CriticalTemperature;
         double pc = cubic.CriticalPressure;
         double vc = 1 / cubic.CriticalDensity;
-        double m = fluid.Fluid.MolarMass.Value;
+        double m = Chart.MolarMass(fluid, options);
         DataPoint Map(double v, double p) => options.Reduced ? new(v / vc, p / pc) : new(units.Volume(v, m), units.Pressure(p));
 
         var model = HouseStyle.NewModel($"Isotherms of {fluid.Name} in P–v ({Chart.ModelTitle(fluid)})");

@@ -28,7 +28,7 @@ public static class TemperatureDensityDiagram
             var curve = Chart.Curve(fluid, options.Points);
             double tc = fluid.Model.CriticalTemperature;
             double rhoc = fluid.Model.CriticalDensity;
-            double m = fluid.Fluid.MolarMass.Value;
+            double m = Chart.MolarMass(fluid, options);
             DataPoint Map(double rho, double t)
                 => options.Reduced ? new(rho / rhoc, t / tc) : new(units.Density(rho, m), units.Temperature(t));
 

@@ -27,11 +27,12 @@ public static class TemperatureEntropyDiagram
         ArgumentNullException.ThrowIfNull(options);
         var units = new UnitScale(options.Units);
         var properties = new PropertyModel(fluid.Fluid, fluid.Model);
+        properties.RequireIdealGas("a temperature–entropy diagram");
         var solver = properties.Solver;
         double tc = fluid.Model.CriticalTemperature;
         double pc = fluid.Model.CriticalPressure;
-        double m = fluid.Fluid.MolarMass.Value;
-        DataPoint Map(ThermodynamicState s) => new(units.Entropy(s.Entropy, m), units.Temperature(s.Temperature));
+        double m = Chart.MolarMass(fluid, options);
+        DataPoint Map(ThermodynamicState s) => new(units.Entropy(s.Entropy!.Value, m), units.Temperature(s.Temperature));
 
         var model = HouseStyle.NewModel($"T–s diagram of {fluid.Name} ({Chart.ModelTitle(fluid)}, ideal-gas reference)");
         model.Axes.Add(HouseStyle.Linear(AxisPosition.Bottom, "entropy s", units.EntropyUnit));

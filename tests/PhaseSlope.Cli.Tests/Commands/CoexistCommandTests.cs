@@ -200,7 +200,7 @@ public class CoexistCommandTests
         string text = RunText("coexist", "propane", "--temperature", "300", "--units", "engineering");
         var fluid = FluidCatalog.Embedded.Find("propane");
         var point = CoexistenceSolver.For(fluid, CubicModelKind.PengRobinson).AtTemperature(300);
-        double m = fluid.MolarMass.Value;
+        double m = fluid.MolarMass!.Value;
 
         Assert.Contains("saturation temperature  26.85 degC\n", text, StringComparison.Ordinal);
         Assert.Matches(@"saturation pressure +[0-9.]+ bar\n", text);

@@ -126,7 +126,7 @@ public class CurveCommandTests
             var cells = table.Cells(table.Rows[i]).Select(c => double.Parse(c, CultureInfo.InvariantCulture)).ToArray();
             Assert.Equal(core[i].Temperature - 273.15, cells[0], 1e-4);
             AssertRelative(core[i].Pressure / 1e5, cells[1], 1e-6, "bar");
-            AssertRelative(core[i].Liquid.Density * fluid.MolarMass.Value, cells[2], 1e-6, "kg/m3");
+            AssertRelative(core[i].Liquid.Density * fluid.MolarMass!.Value, cells[2], 1e-6, "kg/m3");
             if (i < 4)
             {
                 AssertRelative(core[i].EnthalpyOfVaporization / fluid.MolarMass.Value / 1e3, cells[4], 1e-6, "kJ/kg");

@@ -13,7 +13,7 @@ public class FluidsCommandTests
         AssertSameDouble(fluid.CriticalTemperature.Value, json.GetProperty("critical_temperature_K").GetDouble(), "critical_temperature_K");
         AssertSameDouble(fluid.CriticalPressure.Value, json.GetProperty("critical_pressure_Pa").GetDouble(), "critical_pressure_Pa");
         AssertSameDouble(fluid.AcentricFactor.Value, json.GetProperty("acentric_factor").GetDouble(), "acentric_factor");
-        AssertSameDouble(fluid.MolarMass.Value, json.GetProperty("molar_mass_kg_mol").GetDouble(), "molar_mass_kg_mol");
+        AssertSameDouble(fluid.MolarMass!.Value, json.GetProperty("molar_mass_kg_mol").GetDouble(), "molar_mass_kg_mol");
         var sources = json.GetProperty("sources");
         Assert.Equal(JsonValueKind.Object, sources.ValueKind);
         Assert.Equal(fluid.CriticalTemperature.Source, sources.GetProperty("critical_temperature_K").GetString());

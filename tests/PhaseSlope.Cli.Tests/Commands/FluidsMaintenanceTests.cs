@@ -124,7 +124,7 @@ public class FluidsMaintenanceTests
         var fluid = FluidFile.Parse(reader, "stdout");
         Assert.Equal("C2H6O", fluid.Formula);
         // IUPAC 2005 weights (from memory): 2·12.0107 + 6·1.00794 + 15.9994 = 46.06844 g/mol.
-        Assert.Equal(ChemicalFormula.MolarMass("C2H6O"), fluid.MolarMass.Value);
+        Assert.Equal(ChemicalFormula.MolarMass("C2H6O"), fluid.MolarMass!.Value);
         AssertRelative(0.04606844, fluid.MolarMass.Value, 1e-12, "molar mass of ethanol");
         Assert.Contains("atoms of the Joback groups (C2H6O)", fluid.MolarMass.Source, StringComparison.Ordinal);
     }

@@ -43,7 +43,7 @@ public class LatentHeatEstimatorTests(ITestOutputHelper output)
     private double DeviationPercent(VolumeChangeModel model, double celsius, double hfg)
     {
         var point = Estimate(model, celsius);
-        double kjPerKg = point.EnthalpyOfVaporization / Water.MolarMass.Value / 1e3;
+        double kjPerKg = point.EnthalpyOfVaporization / Water.MolarMass!.Value / 1e3;
         double deviation = 100 * (kjPerKg / hfg - 1);
         output.WriteLine($"{model} {celsius} °C: ΔZ {point.CompressibilityChange:F5}, ΔH {kjPerKg:F1} kJ/kg vs {hfg}, {deviation:+0.00;-0.00} %");
         return deviation;

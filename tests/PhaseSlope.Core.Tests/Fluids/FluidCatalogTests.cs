@@ -130,7 +130,7 @@ public class FluidCatalogTests
         {
             Assert.False(fluid.Formula is null, $"{fluid.Name} has no formula");
             double sum = ChemicalFormula.MolarMass(fluid.Formula!) * 1000.0;
-            AssertClose.Relative(sum / 1000.0, fluid.MolarMass.Value, 1e-5, $"{fluid.Name} molar mass (kg/mol) vs formula");
+            AssertClose.Relative(sum / 1000.0, fluid.MolarMass!.Value, 1e-5, $"{fluid.Name} molar mass (kg/mol) vs formula");
         }
     }
 

@@ -40,7 +40,7 @@ public class FluidFileTests
         Fluid fluid = ParseText(FluidFileTestData.Join(FluidFileTestData.ValidLines()));
 
         Assert.Equal(4251200.0, fluid.CriticalPressure.Value, 6);
-        Assert.Equal(0.04409562, fluid.MolarMass.Value, 14);
+        Assert.Equal(0.04409562, fluid.MolarMass!.Value, 14);
         Assert.Equal(5000.0, fluid.CriticalDensity!.Value, 9);
     }
 
@@ -64,7 +64,7 @@ public class FluidFileTests
     {
         Fluid fluid = ParseText(FluidFileTestData.WithLine(lineNumber, line));
 
-        Assert.Equal(0.04409562, fluid.MolarMass.Value, 14);
+        Assert.Equal(0.04409562, fluid.MolarMass!.Value, 14);
     }
 
     [Theory]
@@ -221,7 +221,6 @@ public class FluidFileTests
         [
             "format phaseslope-fluid 1",
             "name minimal",
-            "molar_mass 10 g/mol | s",
             "critical_temperature 100 K | s",
             "critical_pressure 1 MPa | s",
             "acentric_factor 0 | s",
@@ -230,6 +229,8 @@ public class FluidFileTests
         Fluid fluid = ParseText(text);
 
         Assert.Empty(fluid.Synonyms);
+        Assert.Null(fluid.MolarMass);
+        Assert.Null(fluid.IdealGasHeatCapacity);
         Assert.Null(fluid.Formula);
         Assert.Null(fluid.CasNumber);
         Assert.Null(fluid.Family);
@@ -246,7 +247,8 @@ public class FluidFileTests
         { "duplicate key", FluidFileTestData.WithExtraLine("name butane"), 17, "name" },
         { "duplicate numeric key", FluidFileTestData.WithExtraLine("critical_temperature 369.89 K | s"), 17, "critical_temperature" },
         { "missing name", FluidFileTestData.Without("name"), 16, "name" },
-        { "missing molar mass", FluidFileTestData.Without("molar_mass"), 16, "molar_mass" },
+        // The molar mass is optional, but a mass density cannot be converted without it.
+        { "mass density without molar mass", FluidFileTestData.Join(FluidFileTestData.ValidLines().Select(l => l.StartsWith("molar_mass ", StringComparison.Ordinal) ? "" : l.StartsWith("critical_density ", StringComparison.Ordinal) ? "critical_density 220.4781 kg/m3 | s" : l)), 12, "critical_density" },
         { "missing critical temperature", FluidFileTestData.Without("critical_temperature"), 16, "critical_temperature" },
         { "missing critical pressure", FluidFileTestData.Without("critical_pressure"), 16, "critical_pressure" },
         { "missing acentric factor", FluidFileTestData.Without("acentric_factor"), 16, "acentric_factor" },

@@ -22,7 +22,7 @@ public class VolumeShiftTests
     private static double MinimumTemperature => CoexistenceSolver.LowestValidTemperature(Propane);
 
     private static double LiquidMassDensity(CubicModel model, double temperature)
-        => new CoexistenceSolver(model, MinimumTemperature).AtTemperature(temperature).Liquid.Density * Propane.MolarMass.Value;
+        => new CoexistenceSolver(model, MinimumTemperature).AtTemperature(temperature).Liquid.Density * Propane.MolarMass!.Value;
 
     [Fact]
     public void Correlations_AreTheFormulasWithYamadaGunnZra()
@@ -69,7 +69,7 @@ public class VolumeShiftTests
         double tc = model.CriticalTemperature;
         double c = VolumeShift.PenelouxSoaveRedlichKwong(tc, model.CriticalPressure, RackettZ);
         double t = 0.7 * tc;
-        double rackett = Propane.MolarMass.Value
+        double rackett = Propane.MolarMass!.Value
             / (R * tc / model.CriticalPressure * Math.Pow(RackettZ, 1 + Math.Pow(1 - 0.7, 2.0 / 7)));
 
         AssertClose.Relative(rackett, LiquidMassDensity(model.WithVolumeShift(c), t), 0.01, "translated SRK liquid density at Tr = 0.7");
@@ -85,7 +85,7 @@ public class VolumeShiftTests
         // The fit is exact by construction; the check is that the translated model's own
         // coexistence solve returns it: limited by the solver's ~1e-12 on each volume, so 1e-10.
         double t = Propane.NormalBoilingPoint!.Value;
-        double measured = PropaneLiquidDensityAtNormalBoilingPoint / Propane.MolarMass.Value;
+        double measured = PropaneLiquidDensityAtNormalBoilingPoint / Propane.MolarMass!.Value;
         var model = CubicModel.For(kind, Propane);
 
         double c = VolumeShift.FitToLiquidDensity(model, t, measured, MinimumTemperature);

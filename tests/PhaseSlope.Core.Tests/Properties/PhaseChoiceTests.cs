@@ -47,7 +47,7 @@ public class PhaseChoiceTests
             Assert.True(liquid.Density > vapour.Density, at);
             Assert.Equal(stablePhase, stable.Phase);
             Assert.False(stable.Metastable, at);
-            Assert.Equal(Math.Min(liquid.GibbsEnergy, vapour.GibbsEnergy), stable.GibbsEnergy);
+            Assert.Equal(Math.Min(liquid.GibbsEnergy!.Value, vapour.GibbsEnergy!.Value), stable.GibbsEnergy!.Value);
             var other = stablePhase == PhaseLabel.Liquid ? vapour : liquid;
             var chosen = stablePhase == PhaseLabel.Liquid ? liquid : vapour;
             Assert.True(other.Metastable, $"the {other.Phase} root at {at} is metastable");

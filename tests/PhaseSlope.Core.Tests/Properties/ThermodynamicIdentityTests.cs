@@ -77,7 +77,7 @@ public class ThermodynamicIdentityTests(ITestOutputHelper output)
         // cp − cv = T v α²/κT (Mayer's relation, general form).
         Check(t * v * alphaP * alphaP / kappaT, cp - cv, IdentityTolerance, "cp - cv = T v alpha^2/kappaT");
         Check(cp, s.IsobaricHeatCapacity!.Value, IdentityTolerance, "IsobaricHeatCapacity = (dH/dT)_P");
-        Check(cv, s.IsochoricHeatCapacity, IdentityTolerance, "IsochoricHeatCapacity = (dU/dT)_V");
+        Check(cv, s.IsochoricHeatCapacity!.Value, IdentityTolerance, "IsochoricHeatCapacity = (dU/dT)_V");
         Check(alphaP, s.IsobaricExpansivity!.Value, IdentityTolerance, "IsobaricExpansivity");
         Check(kappaT, s.IsothermalCompressibility!.Value, IdentityTolerance, "IsothermalCompressibility");
         // (∂H/∂P)_T = v(1 − Tα).
@@ -87,7 +87,7 @@ public class ThermodynamicIdentityTests(ITestOutputHelper output)
         Check(kappaT * cv / cp, kappaS, IdentityTolerance, "kappaS = kappaT cv/cp");
         Check(kappaS, s.IsentropicCompressibility!.Value, IdentityTolerance, "IsentropicCompressibility");
         double w = s.SpeedOfSound!.Value;
-        Check(kappaS, 1 / (s.Density * s.MolarMass * w * w), IdentityTolerance, "kappaS = 1/(rho w^2)");
+        Check(kappaS, 1 / (s.Density * s.MolarMass!.Value * w * w), IdentityTolerance, "kappaS = 1/(rho w^2)");
         // Joule–Thomson: (∂T/∂P)_H = (Tα − 1)v/cp.
         Check((t * alphaP - 1) * v / cp, D(s, T, P, H), IdentityTolerance, "(dT/dP)_H = (T alpha - 1) v/cp");
         Check(D(s, T, P, H), s.JouleThomsonCoefficient!.Value, IdentityTolerance, "JouleThomsonCoefficient");
@@ -95,7 +95,7 @@ public class ThermodynamicIdentityTests(ITestOutputHelper output)
         Check(-1, D(s, P, T, V) * D(s, T, V, P) * D(s, V, P, T), IdentityTolerance, "cyclic rule");
         // Fundamental relations: (∂G/∂P)_T = V, (∂G/∂T)_P = −S, (∂A/∂V)_T = −P, (∂U/∂S)_V = T, (∂H/∂S)_P = T.
         Check(v, D(s, G, P, T), IdentityTolerance, "(dG/dP)_T = V");
-        Check(-s.Entropy, D(s, G, T, P), IdentityTolerance, "(dG/dT)_P = -S");
+        Check(-s.Entropy!.Value, D(s, G, T, P), IdentityTolerance, "(dG/dT)_P = -S");
         Check(-p, D(s, A, V, T), IdentityTolerance, "(dA/dV)_T = -P");
         Check(t, D(s, U, S, V), IdentityTolerance, "(dU/dS)_V = T");
         Check(t, D(s, H, S, P), IdentityTolerance, "(dH/dS)_P = T");
@@ -111,10 +111,10 @@ public class ThermodynamicIdentityTests(ITestOutputHelper output)
         // than H in magnitude here, so the comparison is scaled by (|G| + T|S|)/T²: the terms agree
         // to a few ulps of that scale.
         var (_, s) = Build(fluid, kind, alpha, shift, t, p, phase);
-        double lhs = D(s, G, T, P) / t - s.GibbsEnergy / (t * t);
-        double scale = (Math.Abs(s.GibbsEnergy) + t * Math.Abs(s.Entropy)) / (t * t);
-        output.WriteLine($"Gibbs-Helmholtz: deviation {Math.Abs(lhs + s.Enthalpy / (t * t)) / scale:E2} of scale");
-        AssertClose.Absolute(-s.Enthalpy / (t * t), lhs, IdentityTolerance * scale, "Gibbs-Helmholtz (d(G/T)/dT)_P = -H/T^2");
+        double lhs = D(s, G, T, P) / t - s.GibbsEnergy!.Value / (t * t);
+        double scale = (Math.Abs(s.GibbsEnergy!.Value) + t * Math.Abs(s.Entropy!.Value)) / (t * t);
+        output.WriteLine($"Gibbs-Helmholtz: deviation {Math.Abs(lhs + s.Enthalpy!.Value / (t * t)) / scale:E2} of scale");
+        AssertClose.Absolute(-s.Enthalpy!.Value / (t * t), lhs, IdentityTolerance * scale, "Gibbs-Helmholtz (d(G/T)/dT)_P = -H/T^2");
     }
 
     /// <summary>Truncation part of the tolerance of a five-point central difference, whose
@@ -151,22 +151,22 @@ public class ThermodynamicIdentityTests(ITestOutputHelper output)
         ThermodynamicState At(double tt, double pp) => engine.AtPressure(tt, pp, choice);
         double dT = 1e-4 * t;
         double dP = 1e-4 * p;
-        double gScale = Math.Abs(s.Enthalpy) + t * Math.Abs(s.Entropy);
+        double gScale = Math.Abs(s.Enthalpy!.Value) + t * Math.Abs(s.Entropy!.Value);
 
-        CheckDifference(x => At(x, p).Enthalpy, t, dT, s.IsobaricHeatCapacity!.Value, "cp vs FD of h(T) at constant P");
+        CheckDifference(x => At(x, p).Enthalpy!.Value, t, dT, s.IsobaricHeatCapacity!.Value, "cp vs FD of h(T) at constant P");
         CheckDifference(x => At(x, p).MolarVolume, t, dT, D(s, V, T, P), "(dV/dT)_P vs FD");
-        CheckDifference(x => At(x, p).Entropy, t, dT, D(s, S, T, P), "(dS/dT)_P vs FD");
-        CheckDifference(x => At(x, p).GibbsEnergy, t, dT, D(s, G, T, P), "(dG/dT)_P vs FD", gScale);
-        CheckDifference(x => At(t, x).Entropy, p, dP, D(s, S, P, T), "(dS/dP)_T vs FD");
-        CheckDifference(x => At(t, x).Enthalpy, p, dP, D(s, H, P, T), "(dH/dP)_T vs FD");
+        CheckDifference(x => At(x, p).Entropy!.Value, t, dT, D(s, S, T, P), "(dS/dT)_P vs FD");
+        CheckDifference(x => At(x, p).GibbsEnergy!.Value, t, dT, D(s, G, T, P), "(dG/dT)_P vs FD", gScale);
+        CheckDifference(x => At(t, x).Entropy!.Value, p, dP, D(s, S, P, T), "(dS/dP)_T vs FD");
+        CheckDifference(x => At(t, x).Enthalpy!.Value, p, dP, D(s, H, P, T), "(dH/dP)_T vs FD");
         CheckDifference(x => At(t, x).MolarVolume, p, dP, D(s, V, P, T), "(dV/dP)_T vs FD");
-        CheckDifference(x => At(t, x).GibbsEnergy, p, dP, D(s, G, P, T), "(dG/dP)_T vs FD", gScale);
+        CheckDifference(x => At(t, x).GibbsEnergy!.Value, p, dP, D(s, G, P, T), "(dG/dP)_T vs FD", gScale);
 
         // Joule–Thomson along constant h: T(P') with h(T(P'), P') = h(T, P), found by Newton steps
         // with the exact cp until the step is below rounding; then μJT = dT/dP by central
         // differences. One evaluation of T(P') is uncertain by ~ε·(T + |h|/cp) (the rounding of T
         // itself and of h converted to temperature), the scale passed below.
-        double h0 = s.Enthalpy;
+        double h0 = s.Enthalpy!.Value;
         double cp0 = s.IsobaricHeatCapacity!.Value;
         double TemperatureAtEnthalpy(double pp)
         {
@@ -174,7 +174,7 @@ public class ThermodynamicIdentityTests(ITestOutputHelper output)
             for (int i = 0; i < 30; i++)
             {
                 var state = At(tt, pp);
-                double step = (state.Enthalpy - h0) / state.IsobaricHeatCapacity!.Value;
+                double step = (state.Enthalpy!.Value - h0) / state.IsobaricHeatCapacity!.Value;
                 tt -= step;
                 if (Math.Abs(step) <= 1e-15 * tt)
                 {
@@ -200,14 +200,14 @@ public class ThermodynamicIdentityTests(ITestOutputHelper output)
         // A step that changes P by at most 5 %, so that a stiff liquid is not stretched to a
         // negative pressure (which AtDensity rejects): |ΔP| ≈ 2δV/(V·κT).
         double dV = Math.Min(1e-4, 0.025 * p * s.IsothermalCompressibility!.Value) * v;
-        double aScale = Math.Abs(s.InternalEnergy) + t * Math.Abs(s.Entropy);
+        double aScale = Math.Abs(s.InternalEnergy!.Value) + t * Math.Abs(s.Entropy!.Value);
 
-        CheckDifference(x => At(t, x).Entropy, v, dV, D(s, S, V, T), "(dS/dV)_T vs FD");
-        CheckDifference(x => At(t, x).InternalEnergy, v, dV, D(s, U, V, T), "(dU/dV)_T vs FD");
-        CheckDifference(x => At(t, x).HelmholtzEnergy, v, dV, D(s, A, V, T), "(dA/dV)_T vs FD", aScale);
-        CheckDifference(x => At(x, v).InternalEnergy, t, dT, s.IsochoricHeatCapacity, "cv vs FD of u(T) at constant V");
+        CheckDifference(x => At(t, x).Entropy!.Value, v, dV, D(s, S, V, T), "(dS/dV)_T vs FD");
+        CheckDifference(x => At(t, x).InternalEnergy!.Value, v, dV, D(s, U, V, T), "(dU/dV)_T vs FD");
+        CheckDifference(x => At(t, x).HelmholtzEnergy!.Value, v, dV, D(s, A, V, T), "(dA/dV)_T vs FD", aScale);
+        CheckDifference(x => At(x, v).InternalEnergy!.Value, t, dT, s.IsochoricHeatCapacity!.Value, "cv vs FD of u(T) at constant V");
         CheckDifference(x => At(x, v).Pressure, t, dT, D(s, P, T, V), "(dP/dT)_V vs FD", Math.Abs(p) + 1 / (s.IsothermalCompressibility!.Value));
-        CheckDifference(x => At(x, v).Entropy, t, dT, D(s, S, T, V), "(dS/dT)_V vs FD");
-        CheckDifference(x => At(x, v).HelmholtzEnergy, t, dT, D(s, A, T, V), "(dA/dT)_V = -S vs FD", aScale);
+        CheckDifference(x => At(x, v).Entropy!.Value, t, dT, D(s, S, T, V), "(dS/dT)_V vs FD");
+        CheckDifference(x => At(x, v).HelmholtzEnergy!.Value, t, dT, D(s, A, T, V), "(dA/dT)_V = -S vs FD", aScale);
     }
 }
