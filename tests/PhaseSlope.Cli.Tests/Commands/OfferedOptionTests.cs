@@ -35,6 +35,19 @@ public sealed class OfferedOptionTests : IDisposable
         public override string ToString() => $"{Command} {Option}: {string.Join(' ', Variant)}";
     }
 
+    /// <summary>--uncertainty adds uncertainties; --samples and --seed change the Monte Carlo
+    /// numbers and are refused without monte-carlo.</summary>
+    private static IEnumerable<Row> UncertaintyRows(string command, string[] baseline)
+    {
+        string[] mc = [.. baseline, "--uncertainty", "monte-carlo", "--samples", "50"];
+        yield return Changes(command, "--uncertainty", baseline, "--uncertainty", "linear");
+        yield return Differs(command, "--uncertainty", [.. baseline, "--uncertainty", "linear"], [.. baseline, "--uncertainty", "monte-carlo", "--samples", "50"]);
+        yield return Differs(command, "--samples", mc, [.. baseline, "--uncertainty", "monte-carlo", "--samples", "60"]);
+        yield return Refused(command, "--samples", [.. baseline, "--samples", "60"]);
+        yield return Changes(command, "--seed", mc, "--seed", "2");
+        yield return Refused(command, "--seed", [.. baseline, "--uncertainty", "linear", "--seed", "2"]);
+    }
+
     private static Row Changes(string command, string option, string[] baseline, params string[] extra)
         => new(command, option, baseline, [.. baseline, .. extra], null);
 
@@ -57,6 +70,10 @@ public sealed class OfferedOptionTests : IDisposable
 
         yield return Changes("coexist", "--reference", coexist, "--reference", "nbp");
         yield return Changes("coexist", "--diagnostics", coexist, "--diagnostics");
+        foreach (var row in UncertaintyRows("coexist", coexist))
+        {
+            yield return row;
+        }
 
         foreach (var row in OutRows())
         {
@@ -71,6 +88,10 @@ public sealed class OfferedOptionTests : IDisposable
         yield return Refused("curve", "--units", [.. curve, "--out", "{dir}/out.csv", "--units", "engineering"]);
         yield return Changes("curve", "--reference", curve, "--reference", "nbp");
         yield return Changes("curve", "--diagnostics", curve, "--diagnostics");
+        foreach (var row in UncertaintyRows("curve", curve))
+        {
+            yield return row;
+        }
         foreach (var row in ModelAndOutputRows("curve", curve, units: true))
         {
             yield return row;

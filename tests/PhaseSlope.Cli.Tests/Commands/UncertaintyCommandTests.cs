@@ -1,0 +1,105 @@
+using System.Text.Json;
+using PhaseSlope.Core.Equilibrium;
+using PhaseSlope.Core.Fluids;
+using PhaseSlope.Core.Uncertainty;
+using static PhaseSlope.Cli.Tests.CliHarness;
+
+namespace PhaseSlope.Cli.Tests.Commands;
+
+public class UncertaintyCommandTests
+{
+    private static readonly string[] Keys =
+        ["temperature_K", "pressure_Pa", "enthalpy_of_vaporization_J_mol", "liquid_density_mol_m3", "vapour_density_mol_m3"];
+
+    [Fact]
+    public void Coexist_Linear_JsonMatchesTheCoreAndNamesTheDefault()
+    {
+        var json = RunJson("coexist", "propane", "-T", "300", "--uncertainty", "linear", "--format", "json");
+        var u = json.GetProperty("standard_uncertainty");
+
+        var parameters = new CubicParameterization(FluidCatalog.Embedded.Find("propane"), Core.Models.CubicModelKind.PengRobinson);
+        var point = new CoexistenceSolver(parameters.Nominal, parameters.MinimumTemperature).AtTemperature(300);
+        var expected = LinearPropagation.Propagate(point, parameters, atFixedPressure: false);
+        Assert.Equal("linear", u.GetProperty("method").GetString());
+        AssertSameDouble(expected.Pressure!.Value, u.GetProperty("pressure_Pa").GetDouble(), "u(P)");
+        AssertSameDouble(expected.EnthalpyOfVaporization!.Value, u.GetProperty("enthalpy_of_vaporization_J_mol").GetDouble(), "u(dH)");
+        AssertSameDouble(expected.LiquidDensity!.Value, u.GetProperty("liquid_density_mol_m3").GetDouble(), "u(rhoL)");
+        AssertSameDouble(expected.VapourDensity!.Value, u.GetProperty("vapour_density_mol_m3").GetDouble(), "u(rhoV)");
+        Assert.Equal(0, u.GetProperty("temperature_K").GetDouble());
+        Assert.Equal(JsonValueKind.Null, u.GetProperty("undefined_reason").ValueKind);
+        var inputs = u.GetProperty("inputs").EnumerateArray().ToArray();
+        Assert.Equal(["critical_temperature_K", "critical_pressure_Pa", "acentric_factor"], inputs.Select(i => i.GetProperty("name").GetString()));
+        Assert.All(inputs, i => Assert.StartsWith("family default (alkane", i.GetProperty("uncertainty_source").GetString()));
+    }
+
+    [Fact]
+    public void Coexist_AtPressure_GivesTheUncertaintyOfTheTemperature()
+    {
+        var json = RunJson("coexist", "carbon dioxide", "-P", "3 MPa", "--uncertainty", "linear", "--format", "json");
+        var u = json.GetProperty("standard_uncertainty");
+
+        Assert.True(u.GetProperty("temperature_K").GetDouble() > 0);
+        Assert.Equal(0, u.GetProperty("pressure_Pa").GetDouble());
+        // Carbon dioxide's file states u(Tc) and u(Pc) (Span & Wagner 1996, from memory).
+        Assert.StartsWith("stated in the fluid file", u.GetProperty("inputs")[0].GetProperty("uncertainty_source").GetString());
+    }
+
+    [Fact]
+    public void Curve_MonteCarlo_SameSeedSameOutput_OtherSeedOtherNumbers()
+    {
+        string[] args = ["curve", "propane", "-n", "8", "--uncertainty", "monte-carlo", "--samples", "300", "--format", "json"];
+        string first = RunText(args);
+        string again = RunText(args);
+        string other = RunText([.. args, "--seed", "9"]);
+
+        Assert.Equal(first, again);
+        Assert.NotEqual(first, other);
+        using var document = StrictJson.Parse(first);
+        var rows = document.RootElement.EnumerateArray().ToArray();
+        foreach (var row in rows[..^1])
+        {
+            var u = row.GetProperty("standard_uncertainty");
+            Assert.Equal("monte-carlo", u.GetProperty("method").GetString());
+            Assert.Equal(300, u.GetProperty("samples").GetInt32());
+            Assert.Equal(1, u.GetProperty("seed").GetInt32());
+            Assert.All(Keys[1..], k => Assert.True(u.GetProperty(k).GetDouble() > 0, k));
+        }
+
+        // The last row is the critical point: about half the samples have their Tc below it.
+        var last = rows[^1].GetProperty("standard_uncertainty");
+        Assert.All(Keys, k => Assert.Equal(JsonValueKind.Null, last.GetProperty(k).ValueKind));
+        Assert.Contains("samples have no coexistence state here", last.GetProperty("undefined_reason").GetString());
+    }
+
+    [Fact]
+    public void Curve_Csv_HasUColumns_EmptyWithAReasonWhereUndefined()
+    {
+        string[] lines = RunText("curve", "propane", "-n", "5", "--uncertainty", "linear", "--format", "csv").TrimEnd().Split('\n');
+        string[] header = lines[0].TrimEnd('\r').Split(',');
+
+        Assert.Equal(["u_temperature_K", "u_pressure_Pa", "u_enthalpy_of_vaporization_J_mol", "u_liquid_density_mol_m3", "u_vapour_density_mol_m3", "u_undefined_reason"], header[^6..]);
+        Assert.DoesNotContain(",,", lines[1]);
+        Assert.Contains(",,,,,", lines[^1]);
+        Assert.Contains("critical point", lines[^1]);
+    }
+
+    [Fact]
+    public void Curve_Table_ShowsUColumnsAndTheInputs()
+    {
+        string text = RunText("curve", "propane", "-n", "5", "--uncertainty", "linear");
+
+        Assert.Contains("u(P) [kPa]", text);
+        Assert.Contains("u(rho_L) [mol/m3]", text);
+        Assert.Contains("u(dH_vap) [J/mol]", text);
+        Assert.Contains("critical_temperature_K = 369.89 +/- 0.3", text);
+        Assert.Contains("u undefined: at or next to the critical point", text);
+    }
+
+    [Fact]
+    public void Coexist_WithoutUncertainty_HasNoUncertaintyMember()
+    {
+        var json = RunJson("coexist", "propane", "-T", "300", "--format", "json");
+
+        Assert.False(json.TryGetProperty("standard_uncertainty", out _));
+    }
+}
