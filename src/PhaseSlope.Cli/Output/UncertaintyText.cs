@@ -11,6 +11,13 @@ namespace PhaseSlope.Cli.Output;
 /// <param name="Inputs">The inputs with their standard uncertainties and sources.</param>
 internal sealed record UncertaintySummary(UncertaintyChoice Choice, IReadOnlyList<UncertainInput> Inputs);
 
+/// <summary>How a latent-heat band was made: the method (null: linear), the Tc and Pc inputs
+/// (empty when none is known) and the band itself.</summary>
+internal sealed record LatentBandText(UncertaintyChoice? Choice, IReadOnlyList<UncertainInput> Inputs, Core.Correlations.LatentHeatBand Band)
+{
+    public string MethodName => Choice?.MethodName ?? "linear";
+}
+
 /// <summary>Writes propagated standard uncertainties of coexistence states: the JSON member
 /// <c>standard_uncertainty</c>, the CSV <c>u_</c> columns and the table columns and lines.</summary>
 internal static class UncertaintyText
@@ -57,9 +64,9 @@ internal static class UncertaintyText
     }
 
     /// <summary>The array <c>inputs</c>: each uncertain input with its value, u and source.</summary>
-    public static void WriteInputs(Utf8JsonWriter json, IReadOnlyList<UncertainInput> inputs)
+    public static void WriteInputs(Utf8JsonWriter json, IReadOnlyList<UncertainInput> inputs, string key = "inputs")
     {
-        json.WriteStartArray("inputs");
+        json.WriteStartArray(key);
         foreach (var input in inputs)
         {
             json.WriteStartObject();

@@ -37,10 +37,14 @@ public sealed class OfferedOptionTests : IDisposable
 
     /// <summary>--uncertainty adds uncertainties; --samples and --seed change the Monte Carlo
     /// numbers and are refused without monte-carlo.</summary>
-    private static IEnumerable<Row> UncertaintyRows(string command, string[] baseline)
+    private static IEnumerable<Row> UncertaintyRows(string command, string[] baseline, bool linearByDefault = false)
     {
         string[] mc = [.. baseline, "--uncertainty", "monte-carlo", "--samples", "50"];
-        yield return Changes(command, "--uncertainty", baseline, "--uncertainty", "linear");
+        if (!linearByDefault)
+        {
+            yield return Changes(command, "--uncertainty", baseline, "--uncertainty", "linear");
+        }
+
         yield return Differs(command, "--uncertainty", [.. baseline, "--uncertainty", "linear"], [.. baseline, "--uncertainty", "monte-carlo", "--samples", "50"]);
         yield return Differs(command, "--samples", mc, [.. baseline, "--uncertainty", "monte-carlo", "--samples", "60"]);
         yield return Refused(command, "--samples", [.. baseline, "--samples", "60"]);
@@ -159,6 +163,11 @@ public sealed class OfferedOptionTests : IDisposable
         yield return Changes("latent", "--to", latent, "--to", "400");
         yield return Changes("latent", "--points", latent, "--points", "5");
         yield return Refused("latent", "--points", [.. latent, "--temperature", "350", "--points", "5"]);
+        foreach (var row in UncertaintyRows("latent", latentFluid, linearByDefault: true))
+        {
+            yield return row;
+        }
+
         yield return Changes("latent", "--eos", latentFluid, "--eos", "srk");
         yield return Refused("latent", "--eos", [.. latent, "--eos", "srk"]);
         yield return Changes("latent", "--alpha", latentFluid, "--alpha", "twu");
