@@ -92,6 +92,8 @@ public class BadInputCatalogueTests
         { ["coexist", "propane", "-T", "300", "--samples", "100"], ExitCodes.Usage, "--samples: applies only with --uncertainty monte-carlo" },
         { ["curve", "propane", "--uncertainty", "linear", "--seed", "3"], ExitCodes.Usage, "--seed: applies only with --uncertainty monte-carlo" },
         { ["curve", "propane", "--uncertainty", "monte-carlo", "--samples", "1"], ExitCodes.Usage, "--samples: must be between 2 and 10000000, got 1" },
+        { ["state", "propane", "-T", "300", "-P", "1MPa", "--uncertainty", "exact"], ExitCodes.Usage, "--uncertainty: unknown method 'exact' (use linear or monte-" },
+        { ["latent", "{dir}/ok.csv", "--form", "antoine", "--samples", "10"], ExitCodes.Usage, "--samples: applies only with --uncertainty monte-carlo" },
         { ["state", "propane", "-P", "1e6", "--density", "100"], ExitCodes.Usage, "Option '--temperature' is required." },
         { ["derive", "propane", "--of", "H", "--by", "T", "--hold", "P", "-T", "300", "-P", "1e6", "--units", "engineering"], ExitCodes.Usage, "Unrecognized command or argument '--units'." },
         { ["fit", "{dir}/ok.csv", "--form", "antoine", "--units", "engineering"], ExitCodes.Usage, "Unrecognized command or argument '--units'." },

@@ -119,13 +119,20 @@ public sealed class CubicParameterization
             return new CubicModel(Kind, Kind.Entry().Form, _alphaParameters.Alpha(tc, own), tc, pc, shift);
         }
 
-        var fluid = _fluid with
+        return CubicModel.For(Kind, FluidFor(values), _alpha, shift);
+    }
+
+    /// <summary>The fluid with Tc, Pc and ω replaced by the first three values (everything else,
+    /// such as the ideal-gas heat capacity, kept).</summary>
+    public Fluid FluidFor(IReadOnlyList<double> values)
+    {
+        ArgumentNullException.ThrowIfNull(values);
+        return _fluid with
         {
-            CriticalTemperature = _fluid.CriticalTemperature with { Value = tc },
-            CriticalPressure = _fluid.CriticalPressure with { Value = pc },
-            AcentricFactor = _fluid.AcentricFactor with { Value = omega },
+            CriticalTemperature = _fluid.CriticalTemperature with { Value = values[0] },
+            CriticalPressure = _fluid.CriticalPressure with { Value = values[1] },
+            AcentricFactor = _fluid.AcentricFactor with { Value = values[2] },
         };
-        return CubicModel.For(Kind, fluid, _alpha, shift);
     }
 
     /// <summary>The exact derivatives of b, a·α(T), a·α′(T) and c of the nominal model with respect

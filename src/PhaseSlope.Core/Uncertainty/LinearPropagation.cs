@@ -142,7 +142,7 @@ public static class LinearPropagation
         => aP - d.Temperature * aTP + d.Density * aRhoP + HDensity(d) * dRho;
 
     /// <summary>(∂h_r/∂ρ)_T = 2A_ρ + ρA_ρρ − T·A_Tρ.</summary>
-    private static double HDensity(in HelmholtzDerivatives d) => 2 * d.DRho + d.Density * d.DRhoRho - d.Temperature * d.DTRho;
+    internal static double HDensity(in HelmholtzDerivatives d) => 2 * d.DRho + d.Density * d.DRhoRho - d.Temperature * d.DTRho;
 
     /// <summary>dρ/dT along the line: (dPsat/dT − (∂P/∂T)_ρ)/(∂P/∂ρ)_T.</summary>
     private static double LineDensitySlope(in HelmholtzDerivatives d, double slope) => (slope - d.PressureDT) / d.PressureDRho;
@@ -153,7 +153,7 @@ public static class LinearPropagation
         => -d.Temperature * d.DTT + d.Density * d.DTRho + HDensity(d) * LineDensitySlope(d, slope);
 
     /// <summary>dρ/dp of the translated model, ρ = 1/(1/ρc − c), from dρc/dp of the cubic and dc/dp.</summary>
-    private static double Translated(double cubicDensity, double cubicDensityDerivative, double shiftDerivative, double shift)
+    internal static double Translated(double cubicDensity, double cubicDensityDerivative, double shiftDerivative, double shift)
     {
         double v = 1 / cubicDensity - shift;
         double dv = -cubicDensityDerivative / (cubicDensity * cubicDensity) - shiftDerivative;
@@ -162,7 +162,7 @@ public static class LinearPropagation
 
     /// <summary>The parameter derivatives of the untranslated cubic's A_r, A_ρ and A_T at one (T, ρ),
     /// as coefficients of ∂b, ∂g and ∂g_T.</summary>
-    private readonly struct Partials
+    internal readonly struct Partials
     {
         private readonly double _ab, _ag, _arhob, _arhog, _atb, _atgT;
 

@@ -112,6 +112,11 @@ public sealed class OfferedOptionTests : IDisposable
             yield return row;
         }
 
+        foreach (var row in UncertaintyRows("state", state))
+        {
+            yield return row;
+        }
+
         string[] derive = ["derive", "propane", "--of", "U", "--by", "V", "--hold", "T", "-T", "300", "-P", "1MPa"];
         yield return Differs("derive", "--of", derive, ["derive", "propane", "--of", "H", "--by", "V", "--hold", "T", "-T", "300", "-P", "1MPa"]);
         yield return Differs("derive", "--by", derive, ["derive", "propane", "--of", "U", "--by", "P", "--hold", "T", "-T", "300", "-P", "1MPa"]);

@@ -103,3 +103,31 @@ public class UncertaintyCommandTests
         Assert.False(json.TryGetProperty("standard_uncertainty", out _));
     }
 }
+
+public class StateUncertaintyCommandTests
+{
+    [Fact]
+    public void State_Linear_JsonMatchesTheCore()
+    {
+        var json = RunJson("state", "propane", "-T", "300", "-P", "3MPa", "--uncertainty", "linear", "--format", "json");
+        var u = json.GetProperty("standard_uncertainty");
+
+        var parameters = new CubicParameterization(FluidCatalog.Embedded.Find("propane"), Core.Models.CubicModelKind.PengRobinson);
+        var expected = StatePropagation.Linear(parameters, 300, json.GetProperty("density_mol_m3").GetDouble(), densityGiven: false);
+        AssertSameDouble(expected.Density!.Value, u.GetProperty("density_mol_m3").GetDouble(), "u(rho)");
+        AssertSameDouble(expected.ResidualEnthalpy!.Value, u.GetProperty("residual_enthalpy_J_mol").GetDouble(), "u(h_r)");
+        Assert.Equal(0, u.GetProperty("pressure_Pa").GetDouble());
+        Assert.Equal("linear", u.GetProperty("method").GetString());
+    }
+
+    [Fact]
+    public void State_MonteCarlo_Csv_HasUColumns_AndIsReproducible()
+    {
+        string[] args = ["state", "propane", "-T", "300", "--density", "12000", "--uncertainty", "monte-carlo", "--samples", "200", "--format", "csv"];
+        string first = RunText(args);
+
+        Assert.Equal(first, RunText(args));
+        string header = first.Split('\n')[0].TrimEnd('\r');
+        Assert.EndsWith("u_density_mol_m3,u_pressure_Pa,u_compressibility_factor,u_residual_enthalpy_J_mol,u_residual_entropy_J_molK,u_undefined_reason", header);
+    }
+}
