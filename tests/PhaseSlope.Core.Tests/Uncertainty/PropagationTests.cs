@@ -166,4 +166,24 @@ public class PropagationTests
         Assert.StartsWith("family default (alkane", propane[1].UncertaintySource);
         Assert.Same(FamilyUncertainty.Unknown, FamilyUncertainty.For("no such family"));
     }
+
+    [Fact]
+    public void CriticalConstants_EstimatedValues_GetTheEstimateDefault()
+    {
+        // A value whose source begins "estimated by" (as fluids estimate writes) gets the
+        // group-contribution default whatever the family: u(Tc) 1 % of Tc, u(Pc) 5 %, u(omega) 0.03.
+        var propane = Catalog("propane");
+        var estimated = propane with
+        {
+            CriticalTemperature = new SourcedValue(370, "estimated by the Joback group-contribution method"),
+            CriticalPressure = new SourcedValue(4.2e6, "estimated by the Joback group-contribution method"),
+            AcentricFactor = new SourcedValue(0.15, "estimated by Lee-Kesler from the normal boiling point"),
+        };
+        var inputs = FamilyUncertainty.CriticalConstants(estimated);
+
+        AssertClose.Relative(3.7, inputs[0].StandardUncertainty, 1e-12, "u(Tc)");
+        AssertClose.Relative(0.05 * 4.2e6, inputs[1].StandardUncertainty, 1e-12, "u(Pc)");
+        Assert.Equal(0.03, inputs[2].StandardUncertainty);
+        Assert.All(inputs, i => Assert.StartsWith("estimate default", i.UncertaintySource));
+    }
 }
