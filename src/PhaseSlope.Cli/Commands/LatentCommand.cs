@@ -197,10 +197,10 @@ internal sealed class LatentOptions
     public LatentRequest Bind(ParseResult parse)
     {
         var format = Common.OutputFormat(parse);
+        var uncertainty = Uncertainty.Bind(parse); // options before the fluid file and the data
         var fluid = Correlation.FluidOf(parse);
         var temperatures = BindTemperatures(parse);
         var modelChoice = Common.BindModel(parse);
-        var uncertainty = Uncertainty.Bind(parse);
 
         bool criticalGiven = parse.GetValue(Correlation.CriticalTemperature) is not null && parse.GetValue(Correlation.CriticalPressure) is not null;
         string volumeText = parse.GetValue(Volume) ?? (fluid is not null ? "eos" : criticalGiven ? "haggenmacher" : "ideal-gas");

@@ -131,3 +131,32 @@ public class StateUncertaintyCommandTests
         Assert.EndsWith("u_density_mol_m3,u_pressure_Pa,u_compressibility_factor,u_residual_enthalpy_J_mol,u_residual_entropy_J_molK,u_undefined_reason", header);
     }
 }
+
+public class LatentUncertaintyCommandTests
+{
+    [Fact]
+    public void Latent_Band_HeldAtTheDataEnd_AndMonteCarloReproducible()
+    {
+        // The invented FRC-7 example: data 300-480 K, Wagner 2.5-5 anchored at Tc = 540 K.
+        string[] args = ["latent", FitData.ExampleCsv, "--fluid", FitData.ExampleFluid, "--form", "wagner-2.5-5", "--from", "460", "--to", "530", "--points", "8", "--format", "json"];
+        var json = RunJson(args);
+        var points = json.GetProperty("points").EnumerateArray().ToArray();
+        double atEnd = RunJson(["latent", FitData.ExampleCsv, "--fluid", FitData.ExampleFluid, "--form", "wagner-2.5-5", "-T", "480", "--format", "json"])
+            .GetProperty("points")[0].GetProperty("standard_uncertainty_J_mol").GetDouble();
+
+        Assert.Equal("linear", json.GetProperty("uncertainty_method").GetString());
+        Assert.Equal(2, json.GetProperty("uncertain_inputs").GetArrayLength());
+        foreach (var p in points.Where(p => p.GetProperty("extrapolated").GetBoolean()))
+        {
+            Assert.True(p.GetProperty("standard_uncertainty_J_mol").GetDouble() >= atEnd, p.ToString());
+            Assert.True(p.GetProperty("critical_point_uncertainty_J_mol").GetDouble() > 0, "the Wagner form uses Tc and Pc");
+        }
+
+        string[] mc = [.. args[..^8], "--from", "400", "--to", "470", "--points", "3", "--format", "json", "--uncertainty", "monte-carlo", "--samples", "200"];
+        string first = RunText(mc);
+        Assert.Equal(first, RunText(mc));
+        using var document = StrictJson.Parse(first);
+        Assert.Equal("monte-carlo", document.RootElement.GetProperty("uncertainty_method").GetString());
+        Assert.Equal(200, document.RootElement.GetProperty("samples").GetInt32());
+    }
+}
