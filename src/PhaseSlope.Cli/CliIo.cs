@@ -12,6 +12,11 @@ internal sealed class CliIo(TextWriter output, TextWriter error)
     /// <summary>Standard error: one-line messages.</summary>
     public TextWriter Error { get; } = error;
 
+    /// <summary>True when the error stream is the process's own standard error and that is a
+    /// terminal (not redirected): only then may a progress bar be drawn on it. Tests and CI pass
+    /// their own writers or redirect the stream, so they never see one.</summary>
+    public bool ErrorIsTerminal => ReferenceEquals(Error, Console.Error) && !Console.IsErrorRedirected;
+
     /// <summary>Runs a command body and maps failures to one stderr line and an exit code.</summary>
     /// <remarks>The body writes its result to <see cref="Out"/> only after all computation is
     /// done, so a failure leaves standard output empty.</remarks>

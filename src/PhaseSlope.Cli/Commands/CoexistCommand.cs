@@ -20,8 +20,22 @@ internal static class CoexistCommand
             var request = options.Bind(parse);
             var context = CoexistenceContext.Create(request.Fluid, options.Diagnostics.Begin(request.Diagnostics, request.Model.For(request.Fluid)), request.Reference);
             var point = request.Temperature is double t ? context.Solver.AtTemperature(t) : context.Solver.AtPressure(request.Pressure!.Value);
-            options.Out.Emit(io, parse, CoexistenceWriter.Render([context.Row(point)], single: true, request.Output.Format, request.Fluid,
-                context.Solver.Model, request.Reference, request.Output.Units), "the coexistence state");
+            var row = context.Row(point);
+            UncertaintySummary? summary = null;
+            if (request.Uncertainty is { } choice)
+            {
+                var parameters = UncertaintyRun.Parameters(request.Model, request.Fluid);
+                row = row with
+                {
+                    Uncertainty = request.Temperature is null
+                        ? UncertaintyRun.AtPressure(io, choice, parameters, point)
+                        : UncertaintyRun.AtTemperatures(io, choice, parameters, [point])[0],
+                };
+                summary = UncertaintyRun.Summary(choice, parameters);
+            }
+
+            options.Out.Emit(io, parse, CoexistenceWriter.Render([row], single: true, request.Output.Format, request.Fluid,
+                context.Solver.Model, request.Reference, request.Output.Units, summary), "the coexistence state");
             options.Diagnostics.End(io, [point]);
         }));
         return command;
@@ -36,8 +50,9 @@ internal static class CoexistCommand
 /// <param name="Model">The model choice.</param>
 /// <param name="Output">The output format and units.</param>
 /// <param name="Diagnostics">Whether --diagnostics was given.</param>
+/// <param name="Uncertainty">How to propagate input uncertainties, or null for none.</param>
 internal sealed record CoexistRequest(Fluid Fluid, double? Temperature, double? Pressure, ReferenceState Reference,
-    ModelChoice Model, OutputChoice Output, bool Diagnostics);
+    ModelChoice Model, OutputChoice Output, bool Diagnostics, UncertaintyChoice? Uncertainty = null);
 
 /// <summary>The options of <c>coexist</c>, bound to a <see cref="CoexistRequest"/>.</summary>
 internal sealed class CoexistOptions
@@ -63,6 +78,9 @@ internal sealed class CoexistOptions
     /// <summary>--diagnostics.</summary>
     public DiagnosticsOption Diagnostics { get; } = new();
 
+    /// <summary>--uncertainty, --samples, --seed.</summary>
+    public UncertaintyOptions Uncertainty { get; } = new();
+
     /// <summary>Adds every option to the command.</summary>
     public void AddTo(Command command)
     {
@@ -73,6 +91,7 @@ internal sealed class CoexistOptions
         Common.AddTo(command, withEos: true);
         Out.AddTo(command);
         Diagnostics.AddTo(command);
+        Uncertainty.AddTo(command);
     }
 
     /// <summary>Parses and checks every option, then resolves the fluid.</summary>
@@ -90,8 +109,9 @@ internal sealed class CoexistOptions
         double? t = tText is null ? null : QuantityParser.ParseTemperature(tText, "--temperature");
         double? p = pText is null ? null : QuantityParser.ParsePressure(pText, "--pressure");
         var reference = ReferenceOption.Parse(parse.GetValue(Reference)!);
+        var uncertainty = Uncertainty.Bind(parse);
         var fluid = FluidResolver.Resolve(parse.GetValue(Fluid)!);
         output.RequireMolarMassFor(fluid);
-        return new CoexistRequest(fluid, t, p, reference, model, output, Diagnostics.Given(parse));
+        return new CoexistRequest(fluid, t, p, reference, model, output, Diagnostics.Given(parse), uncertainty);
     }
 }

@@ -62,7 +62,17 @@ internal static class CurveCommand
             }
 
             var curve = CoexistenceCurve.Trace(solver, start, end, request.Points);
-            string text = CoexistenceWriter.Render(curve.Select(context.Row).ToArray(), single: false, request.Output.Format, data, solver.Model, zero, request.Output.Units);
+            var rows = curve.Select(context.Row).ToArray();
+            UncertaintySummary? summary = null;
+            if (request.Uncertainty is { } choice)
+            {
+                var parameters = UncertaintyRun.Parameters(request.Model, data);
+                var values = UncertaintyRun.AtTemperatures(io, choice, parameters, curve);
+                rows = rows.Select((r, i) => r with { Uncertainty = values[i] }).ToArray();
+                summary = UncertaintyRun.Summary(choice, parameters);
+            }
+
+            string text = CoexistenceWriter.Render(rows, single: false, request.Output.Format, data, solver.Model, zero, request.Output.Units, summary);
             if (outPath is null)
             {
                 io.Out.Write(text);
@@ -106,8 +116,9 @@ internal static class CurveCommand
 /// <param name="Model">The model choice.</param>
 /// <param name="Output">The output format and units.</param>
 /// <param name="Diagnostics">Whether --diagnostics was given.</param>
+/// <param name="Uncertainty">How to propagate input uncertainties, or null for none.</param>
 internal sealed record CurveRequest(Fluid Fluid, double? From, double? To, int Points, string? OutPath, ReferenceState Reference,
-    ModelChoice Model, OutputChoice Output, bool Diagnostics);
+    ModelChoice Model, OutputChoice Output, bool Diagnostics, UncertaintyChoice? Uncertainty = null);
 
 /// <summary>The options of <c>curve</c>, bound to a <see cref="CurveRequest"/>.</summary>
 internal sealed class CurveOptions
@@ -140,6 +151,9 @@ internal sealed class CurveOptions
     /// <summary>--diagnostics.</summary>
     public DiagnosticsOption Diagnostics { get; } = new();
 
+    /// <summary>--uncertainty, --samples, --seed.</summary>
+    public UncertaintyOptions Uncertainty { get; } = new();
+
     /// <summary>Adds every option to the command.</summary>
     public void AddTo(Command command)
     {
@@ -151,6 +165,7 @@ internal sealed class CurveOptions
         command.Options.Add(Reference);
         Common.AddTo(command, withEos: true);
         Diagnostics.AddTo(command);
+        Uncertainty.AddTo(command);
     }
 
     /// <summary>Parses and checks every option, then resolves the fluid; the temperature range is
@@ -174,8 +189,9 @@ internal sealed class CurveOptions
         }
 
         var reference = ReferenceOption.Parse(parse.GetValue(Reference)!);
+        var uncertainty = Uncertainty.Bind(parse);
         var fluid = FluidResolver.Resolve(parse.GetValue(Fluid)!);
         output.RequireMolarMassFor(fluid);
-        return new CurveRequest(fluid, tFrom, tTo, n, outPath, reference, model, output, Diagnostics.Given(parse));
+        return new CurveRequest(fluid, tFrom, tTo, n, outPath, reference, model, output, Diagnostics.Given(parse), uncertainty);
     }
 }

@@ -3,6 +3,8 @@ using PhaseSlope.Cli.Output;
 using PhaseSlope.Cli.Units;
 using PhaseSlope.Core.Correlations;
 using PhaseSlope.Core.Equilibrium;
+using PhaseSlope.Core.Fluids;
+using PhaseSlope.Core.Uncertainty;
 
 namespace PhaseSlope.Cli.Commands;
 
@@ -22,10 +24,60 @@ internal static class LatentCommand
             var fits = CorrelationOptions.Fit(request.Forms, request.Auto, request.Data);
             var fit = fits[0];
             var estimator = new LatentHeatEstimator(fit, request.VolumeModel, request.Solver, request.CriticalTemperature, request.CriticalPressure);
-            var results = request.Temperatures.Resolve(fit.MinimumTemperature, fit.MaximumTemperature).Select(estimator.At).ToArray();
-            options.Out.Emit(io, parse, FitWriter.Latent(fit, request.VolumeModel, results, fits, request.Format, request.Solver?.Model.Identity), $"{results.Length} latent heats");
+            var (band, inputs) = Band(request, estimator);
+            var temperatures = request.Temperatures.Resolve(fit.MinimumTemperature, fit.MaximumTemperature);
+            IReadOnlyList<LatentHeatPoint> results;
+            if (request.Uncertainty is { } choice)
+            {
+                using var bar = new ProgressBar(io, choice.Samples, "Monte Carlo");
+                results = band.MonteCarlo(temperatures, choice.Samples, choice.Seed, bar);
+            }
+            else
+            {
+                results = band.Linear(temperatures);
+            }
+
+            options.Out.Emit(io, parse, FitWriter.Latent(fit, request.VolumeModel, results, fits, request.Format, request.Solver?.Model.Identity,
+                new LatentBandText(request.Uncertainty, inputs, band)), $"{results.Count} latent heats");
         }));
         return command;
+    }
+
+    /// <summary>The band: the estimator rebuilt for a moved Tc or Pc refits the same form with
+    /// them and, for the eos volume model, solves the fluid's model with them.</summary>
+    private static (LatentHeatBand Band, IReadOnlyList<UncertainInput> Inputs) Band(LatentRequest request, LatentHeatEstimator nominal)
+    {
+        if (request.CriticalTemperature is not double tc || request.CriticalPressure is not double pc)
+        {
+            return (new LatentHeatBand((_, _) => nominal, nominal, 0, 0), []);
+        }
+
+        IReadOnlyList<UncertainInput> inputs;
+        if (request.Fluid is { } fluid)
+        {
+            inputs = FamilyUncertainty.CriticalConstants(fluid).Take(2).ToArray();
+        }
+        else
+        {
+            var unknown = FamilyUncertainty.Unknown;
+            string source = $"family default (given with --tc and --pc: {unknown.Basis})";
+            inputs = [new UncertainInput("critical_temperature_K", tc, unknown.CriticalTemperature, source),
+                new UncertainInput("critical_pressure_Pa", pc, unknown.CriticalPressureRelative * pc, source)];
+        }
+
+        var fit = nominal.Fit;
+        var parameters = request.Solver is not null && request.Fluid is not null && request.Model is not null
+            ? UncertaintyRun.Parameters(request.Model, request.Fluid)
+            : null;
+        LatentHeatEstimator Build(double t, double p)
+        {
+            var refit = fit.Form.UsesCriticalPoint ? VapourPressureFitter.Fit(fit.Form.WithCriticalPoint(t, p), fit.Data) : fit;
+            var solver = parameters is null ? null
+                : new CoexistenceSolver(parameters.Build([t, p, parameters.Inputs[2].Value]), parameters.MinimumTemperature);
+            return new LatentHeatEstimator(refit, nominal.VolumeModel, solver, t, p);
+        }
+
+        return (new LatentHeatBand(Build, nominal, inputs[0].StandardUncertainty, inputs[1].StandardUncertainty), inputs);
     }
 }
 
@@ -68,6 +120,9 @@ internal sealed record LatentTemperatures(double? Single, double? From, double? 
 /// <param name="CriticalPressure">Pc in Pa from the fluid or --pc, else null.</param>
 /// <param name="Temperatures">Where to report.</param>
 /// <param name="Format">The output format (the table is in K, kPa and J/mol).</param>
+/// <param name="Fluid">The --fluid, or null.</param>
+/// <param name="Model">The model choice behind --volume-model eos.</param>
+/// <param name="Uncertainty">--uncertainty monte-carlo with its samples and seed, or null for the linear band.</param>
 internal sealed record LatentRequest(
     IReadOnlyList<VapourPressureForm> Forms,
     bool Auto,
@@ -77,7 +132,10 @@ internal sealed record LatentRequest(
     double? CriticalTemperature,
     double? CriticalPressure,
     LatentTemperatures Temperatures,
-    OutputFormat Format);
+    OutputFormat Format,
+    Fluid? Fluid = null,
+    ModelChoice? Model = null,
+    UncertaintyChoice? Uncertainty = null);
 
 /// <summary>The options of <c>latent</c>, bound to a <see cref="LatentRequest"/>.</summary>
 internal sealed class LatentOptions
@@ -128,13 +186,18 @@ internal sealed class LatentOptions
         command.Options.Add(Common.Alpha);
         Common.AddTo(command, withEos: false, withUnits: false); // the table is in K, kPa and J/mol
         Out.AddTo(command);
+        Uncertainty.AddTo(command);
     }
+
+    /// <summary>--uncertainty, --samples, --seed.</summary>
+    public UncertaintyOptions Uncertainty { get; } = new();
 
     /// <summary>Parses and checks every option (the temperatures included), then reads the data
     /// file and checks it against the critical point.</summary>
     public LatentRequest Bind(ParseResult parse)
     {
         var format = Common.OutputFormat(parse);
+        var uncertainty = Uncertainty.Bind(parse); // options before the fluid file and the data
         var fluid = Correlation.FluidOf(parse);
         var temperatures = BindTemperatures(parse);
         var modelChoice = Common.BindModel(parse);
@@ -177,7 +240,7 @@ internal sealed class LatentOptions
             ? new CoexistenceSolver(modelChoice.For(fluid), CoexistenceSolver.LowestValidTemperature(fluid))
             : null;
         var (tc, pc) = Correlation.CriticalPoint(parse, fluid);
-        return new LatentRequest(forms, auto, data, model, solver, tc, pc, temperatures, format);
+        return new LatentRequest(forms, auto, data, model, solver, tc, pc, temperatures, format, fluid, modelChoice, uncertainty);
     }
 
     private LatentTemperatures BindTemperatures(ParseResult parse)

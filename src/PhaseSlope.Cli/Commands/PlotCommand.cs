@@ -154,7 +154,7 @@ internal sealed class PlotOptions
         }
 
         var probe = new DiagramOptions { Reduced = parse.GetValue(Reduced), Logarithmic = parse.GetValue(Log), Units = axisUnits, Data = dataPath is null ? null : [] };
-        var fluids = names.Select(FluidResolver.Resolve).Select(f => new PlotFluid(f, Common.Model(parse, f))).ToList();
+        var fluids = names.Select(FluidResolver.Resolve).Select(f => new PlotFluid(f, Common.Model(parse, f)) { Alpha = Common.BindModel(parse).Alpha }).ToList();
         try
         {
             Diagram.Check(kind, fluids, probe);

@@ -1,5 +1,7 @@
 using System.CommandLine;
 using PhaseSlope.Cli.Output;
+using PhaseSlope.Core.Properties;
+using PhaseSlope.Core.Uncertainty;
 
 namespace PhaseSlope.Cli.Commands;
 
@@ -14,12 +16,47 @@ internal static class StateCommand
         options.AddTo(command, withUnits: true);
         var outFile = new OutputOption();
         outFile.AddTo(command);
+        var uncertainty = new UncertaintyOptions();
+        uncertainty.AddTo(command);
         command.SetAction(parse => io.Guard(() =>
         {
+            var choice = uncertainty.Bind(parse);
             var request = options.Bind(parse);
             var (engine, state) = request.Point.Evaluate();
-            outFile.Emit(io, parse, StateWriter.State(engine, state, request.Output.Format, request.Output.Units), "the state");
+            var text = choice is null ? null : Uncertainty(io, choice, request.Point, state);
+            outFile.Emit(io, parse, StateWriter.State(engine, state, request.Output.Format, request.Output.Units, text), "the state");
         }));
         return command;
+    }
+
+    /// <summary>The state's uncertainties: linear from the nominal state's density, or Monte
+    /// Carlo re-evaluating the same (T, P) or (T, ρ) with the same phase rule for every sample.</summary>
+    private static StateUncertaintyText Uncertainty(CliIo io, UncertaintyChoice choice, StatePoint point, ThermodynamicState state)
+    {
+        var parameters = UncertaintyRun.Parameters(point.Model, point.Fluid);
+        bool densityGiven = point.Density is not null;
+        StateUncertainty values;
+        if (state.Critical)
+        {
+            values = new StateUncertainty(choice.Method, null, null, null, null, null,
+                "the state is the model's critical point, where the properties are not differentiable in Tc and Pc");
+        }
+        else if (choice.Method == PropagationMethod.Linear)
+        {
+            values = StatePropagation.Linear(parameters, point.Temperature, state.Density, densityGiven);
+        }
+        else
+        {
+            using var bar = new ProgressBar(io, choice.Samples, "Monte Carlo");
+            values = StatePropagation.MonteCarlo(parameters, x =>
+            {
+                var sample = point with { Fluid = parameters.FluidFor(x) };
+                var (_, s) = sample.Evaluate();
+                return new StateValues(s.Density, point.Pressure ?? s.Pressure, s.CompressibilityFactor, s.ResidualEnthalpy,
+                    s.ResidualEntropy ?? throw new Core.Errors.InvalidInputException("state", s.Density, "residual entropy undefined"));
+            }, choice.Samples, choice.Seed, bar);
+        }
+
+        return new StateUncertaintyText(values, UncertaintyRun.Summary(choice, parameters));
     }
 }

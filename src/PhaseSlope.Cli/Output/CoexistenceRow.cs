@@ -1,10 +1,10 @@
 using PhaseSlope.Core.Equilibrium;
 using PhaseSlope.Core.Properties;
+using PhaseSlope.Core.Uncertainty;
 
 namespace PhaseSlope.Cli.Output;
 
-/// <summary>A coexistence point, with the full phase properties when the fluid has an ideal-gas
-/// heat capacity (null otherwise: only coexistence and residual properties are then printed).</summary>
-/// <param name="Point">The coexistence point.</param>
-/// <param name="Full">Both saturated phases with caloric properties and along-line slopes, or null.</param>
-internal sealed record CoexistenceRow(CoexistencePoint Point, CoexistenceProperties? Full);
+/// <summary>One coexistence state as written: the solver's point, the full property set when
+/// the fluid has an ideal-gas heat capacity (else null), and its standard uncertainties when
+/// they were asked for (else null).</summary>
+internal sealed record CoexistenceRow(CoexistencePoint Point, CoexistenceProperties? Full, CoexistenceUncertainty? Uncertainty = null);

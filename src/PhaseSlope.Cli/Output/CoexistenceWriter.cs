@@ -17,28 +17,29 @@ internal static class CoexistenceWriter
         "Model estimates. Before use for pressure equipment, relief sizing or flammable or toxic service, verify against measured data and follow local codes and licensed engineering practice.";
 
     /// <summary>Renders rows in a format; <paramref name="single"/> prints one object instead of an array.</summary>
-    public static string Render(IReadOnlyList<CoexistenceRow> rows, bool single, OutputFormat format, Fluid fluid, IResidualModel model, ReferenceState? reference, UnitSystem units)
+    public static string Render(IReadOnlyList<CoexistenceRow> rows, bool single, OutputFormat format, Fluid fluid, IResidualModel model, ReferenceState? reference, UnitSystem units,
+        UncertaintySummary? uncertainty = null)
         => format switch
         {
-            OutputFormat.Json => Json(rows, single, fluid, model, reference),
-            OutputFormat.Csv => Csv(rows),
-            _ => single ? SingleTable(rows[0], fluid, model, reference, units) : CurveTable(rows, fluid, model, reference, units),
+            OutputFormat.Json => Json(rows, single, fluid, model, reference, uncertainty),
+            OutputFormat.Csv => Csv(rows, uncertainty),
+            _ => single ? SingleTable(rows[0], fluid, model, reference, units, uncertainty) : CurveTable(rows, fluid, model, reference, units, uncertainty),
         };
 
-    private static string Json(IReadOnlyList<CoexistenceRow> rows, bool single, Fluid fluid, IResidualModel model, ReferenceState? reference)
+    private static string Json(IReadOnlyList<CoexistenceRow> rows, bool single, Fluid fluid, IResidualModel model, ReferenceState? reference, UncertaintySummary? uncertainty)
     {
         return JsonText.Write(json =>
         {
             if (single)
             {
-                WriteObject(json, rows[0], fluid, model, reference);
+                WriteObject(json, rows[0], fluid, model, reference, uncertainty);
             }
             else
             {
                 json.WriteStartArray();
                 foreach (var row in rows)
                 {
-                    WriteObject(json, row, fluid, model, reference);
+                    WriteObject(json, row, fluid, model, reference, uncertainty);
                 }
 
                 json.WriteEndArray();
@@ -46,7 +47,7 @@ internal static class CoexistenceWriter
         });
     }
 
-    private static void WriteObject(Utf8JsonWriter json, CoexistenceRow row, Fluid fluid, IResidualModel model, ReferenceState? reference)
+    private static void WriteObject(Utf8JsonWriter json, CoexistenceRow row, Fluid fluid, IResidualModel model, ReferenceState? reference, UncertaintySummary? uncertainty)
     {
         var point = row.Point;
         json.WriteStartObject();
@@ -82,6 +83,11 @@ internal static class CoexistenceWriter
         json.WriteFinite("model_evaluations", point.Report.ModelEvaluations);
         json.WriteFinite("density_uncertainty", point.Report.DensityUncertainty);
         json.WriteEndObject();
+        if (uncertainty is not null && row.Uncertainty is { } values)
+        {
+            UncertaintyText.WriteJson(json, values, uncertainty);
+        }
+
         json.WriteEndObject();
     }
 
@@ -114,30 +120,54 @@ internal static class CoexistenceWriter
         json.WriteEndObject();
     }
 
-    private static string Csv(IReadOnlyList<CoexistenceRow> rows)
+    private static string Csv(IReadOnlyList<CoexistenceRow> rows, UncertaintySummary? uncertainty)
     {
         var columns = CoexistenceColumns.For(rows);
+        var header = columns.Select(c => c.Key);
+        if (uncertainty is not null)
+        {
+            header = header.Concat(UncertaintyText.CsvHeader);
+        }
+
         return CsvText.Write(
-            columns.Select(c => c.Key).ToArray(),
-            rows.Select(r => columns.Select(c => NumberText.RoundTrip(Finite(c.Value(r), c.Key))).ToArray()));
+            header.ToArray(),
+            rows.Select(r =>
+            {
+                var cells = columns.Select(c => NumberText.RoundTrip(Finite(c.Value(r), c.Key)));
+                return (uncertainty is null ? cells : cells.Concat(UncertaintyText.CsvCells(r.Uncertainty))).ToArray();
+            }));
     }
 
-    private static string CurveTable(IReadOnlyList<CoexistenceRow> rows, Fluid fluid, IResidualModel model, ReferenceState? reference, UnitSystem units)
+    private static string CurveTable(IReadOnlyList<CoexistenceRow> rows, Fluid fluid, IResidualModel model, ReferenceState? reference, UnitSystem units, UncertaintySummary? uncertainty)
     {
         var columns = CoexistenceColumns.For(rows).Where(c => c.InCurveTable).ToArray();
-        var table = new TextTable(columns.Select(c => CoexistenceColumns.Header(c, units)).ToArray(), columns.Select(_ => true).ToArray());
+        // A curve is traced at given temperatures: u(T) is zero on every row and not shown.
+        var uColumns = uncertainty is null ? [] : UncertaintyText.Quantities.Where(q => q.Display != DisplayQuantity.Temperature).ToArray();
+        var headers = columns.Select(c => CoexistenceColumns.Header(c, units)).Concat(uColumns.Select(q => UncertaintyText.Header(q, units))).ToArray();
+        var table = new TextTable(headers, headers.Select(_ => true).ToArray());
         double m = fluid.MolarMass?.Value ?? double.NaN; // SI tables do not use it; engineering units were refused without it
         foreach (var row in rows)
         {
-            table.Add(columns.Select(c => NumberText.Table(CoexistenceColumns.Display(c, row, units, m))).ToArray());
+            table.Add(columns.Select(c => NumberText.Table(CoexistenceColumns.Display(c, row, units, m)))
+                .Concat(uColumns.Select(q => UncertaintyText.Cell(q, row.Uncertainty, units, m))).ToArray());
         }
 
         var text = new StringBuilder();
         text.AppendLine($"Saturation curve of {fluid.Name}, {ModelText.Describe(model)}; {rows.Count} states{(rows[^1].Point.IsCritical ? ", the last one the critical point" : "")}");
         text.AppendLine(ReferenceLine(rows, reference));
+        if (uncertainty is not null)
+        {
+            UncertaintyText.DescribeInputs(text, uncertainty);
+        }
+
         text.AppendLine();
         text.Append(table.Render());
         text.AppendLine();
+        if (uncertainty is not null)
+        {
+            UncertaintyText.DescribeReasons(text, rows.Select(r => r.Uncertainty));
+        }
+
         text.AppendLine(Caution);
         return text.ToString();
     }
@@ -147,7 +177,7 @@ internal static class CoexistenceWriter
             ? $"h and s reference: {reference.Description}"
             : "h and s not shown: the fluid has no ideal-gas heat capacity cp°";
 
-    private static string SingleTable(CoexistenceRow row, Fluid fluid, IResidualModel model, ReferenceState? reference, UnitSystem units)
+    private static string SingleTable(CoexistenceRow row, Fluid fluid, IResidualModel model, ReferenceState? reference, UnitSystem units, UncertaintySummary? uncertainty)
     {
         var point = row.Point;
         double m = fluid.MolarMass?.Value ?? double.NaN; // SI tables do not use it; engineering units were refused without it
@@ -196,6 +226,21 @@ internal static class CoexistenceWriter
         text.AppendLine();
         text.Append(jumps.Render());
         text.AppendLine();
+        if (uncertainty is not null)
+        {
+            var table = new TextTable(["standard uncertainty", "u", "unit"], [false, true, false]);
+            foreach (var q in UncertaintyText.Quantities)
+            {
+                string header = UncertaintyText.Header(q, units);
+                int open = header.LastIndexOf('[');
+                table.Add(q.Title, UncertaintyText.Cell(q, row.Uncertainty, units, m), header[(open + 1)..^1]);
+            }
+
+            UncertaintyText.DescribeInputs(text, uncertainty);
+            text.Append(table.Render());
+            UncertaintyText.DescribeReasons(text, [row.Uncertainty]);
+            text.AppendLine();
+        }
         text.AppendLine($"solver: {Kebab(point.Report.Method.ToString())}, {point.Report.Iterations} iterations, {point.Report.ModelEvaluations} model evaluations, |ln phi_L - ln phi_V| = {point.Report.FugacityResidual.ToString("G3", CultureInfo.InvariantCulture)}, densities to {point.Report.DensityUncertainty.ToString("G2", CultureInfo.InvariantCulture)} relative, {Kebab(point.Report.StopReason.ToString())}");
         text.AppendLine(Caution);
         return text.ToString();

@@ -153,7 +153,8 @@ internal static class FitWriter
     }
 
     /// <summary>Renders latent heats.</summary>
-    public static string Latent(VapourPressureFit fit, VolumeChangeModel model, IReadOnlyList<LatentHeatPoint> points, IReadOnlyList<VapourPressureFit> candidates, OutputFormat format, Core.Models.ModelIdentity? equationOfState = null)
+    public static string Latent(VapourPressureFit fit, VolumeChangeModel model, IReadOnlyList<LatentHeatPoint> points, IReadOnlyList<VapourPressureFit> candidates, OutputFormat format, Core.Models.ModelIdentity? equationOfState = null,
+        LatentBandText? band = null)
         => format switch
         {
             OutputFormat.Json => JsonText.Write(json =>
@@ -165,6 +166,18 @@ internal static class FitWriter
                 {
                     // The model behind the coexisting volumes, named in full.
                     ModelText.WriteJson(json, equationOfState);
+                }
+
+                if (band is not null)
+                {
+                    json.WriteString("uncertainty_method", band.MethodName);
+                    if (band.Choice is { Method: Core.Uncertainty.PropagationMethod.MonteCarlo } mc)
+                    {
+                        json.WriteNumber("samples", mc.Samples);
+                        json.WriteNumber("seed", mc.Seed);
+                    }
+
+                    UncertaintyText.WriteInputs(json, band.Inputs, "uncertain_inputs");
                 }
 
                 json.WriteStartArray("points");
@@ -182,6 +195,14 @@ internal static class FitWriter
                         json.WriteString("finding", finding);
                     }
 
+                    if (band is not null)
+                    {
+                        json.WriteNumberOrNull("fit_uncertainty_J_mol", p.FitUncertainty);
+                        json.WriteFinite("critical_point_uncertainty_J_mol", p.CriticalPointUncertainty);
+                        json.WriteNumberOrNull("volume_model_uncertainty_J_mol", p.VolumeModelUncertainty);
+                        json.WriteBoolean("band_held_at_data_end", p.BandHeldAtDataEnd);
+                    }
+
                     json.WriteEndObject();
                 }
 
@@ -190,14 +211,17 @@ internal static class FitWriter
                 json.WriteEndObject();
             }),
             OutputFormat.Csv => CsvText.Write(
-                ["temperature_K", "pressure_Pa", "enthalpy_of_vaporization_J_mol", "standard_uncertainty_J_mol", "compressibility_change", "extrapolated", "finding"],
+                ["temperature_K", "pressure_Pa", "enthalpy_of_vaporization_J_mol", "standard_uncertainty_J_mol", "compressibility_change", "extrapolated",
+                    "fit_uncertainty_J_mol", "critical_point_uncertainty_J_mol", "volume_model_uncertainty_J_mol", "band_held_at_data_end", "finding"],
                 points.Select(p => new[]
                 {
                     NumberText.RoundTrip(p.Temperature), NumberText.RoundTrip(p.Pressure), NumberText.RoundTrip(p.EnthalpyOfVaporization),
                     NumberText.RoundTripOrEmpty(p.StandardUncertainty), NumberText.RoundTrip(p.CompressibilityChange), p.Extrapolated ? "true" : "false",
+                    NumberText.RoundTripOrEmpty(p.FitUncertainty), NumberText.RoundTrip(p.CriticalPointUncertainty), NumberText.RoundTripOrEmpty(p.VolumeModelUncertainty),
+                    p.BandHeldAtDataEnd ? "true" : "false",
                     p.Finding ?? "",
                 })),
-            _ => LatentTable(fit, model, points),
+            _ => LatentTable(fit, model, points, band),
         };
 
     /// <summary>The command-line identifier of a volume model.</summary>
@@ -428,17 +452,19 @@ internal static class FitWriter
         output.Write(text);
     }
 
-    private static string LatentTable(VapourPressureFit fit, VolumeChangeModel model, IReadOnlyList<LatentHeatPoint> points)
+    private static string LatentTable(VapourPressureFit fit, VolumeChangeModel model, IReadOnlyList<LatentHeatPoint> points, LatentBandText? band)
     {
         var text = new StringBuilder();
         text.AppendLine($"enthalpy of vaporization by Clapeyron, dH = T dv dP/dT: dP/dT from the {fit.Form.Id} fit, dv from {VolumeModelId(model)}");
         text.AppendLine($"data range {NumberText.Table(fit.MinimumTemperature)} to {NumberText.Table(fit.MaximumTemperature)} K; rows marked * are extrapolated");
         text.AppendLine();
-        var table = new TextTable(["T [K]", "P [kPa]", "dZ", "dH_vap [J/mol]", "u(dH) [J/mol]", ""], [true, true, true, true, true, false]);
+        var table = new TextTable(["T [K]", "P [kPa]", "dZ", "dH_vap [J/mol]", "u(dH) [J/mol]", "u fit", "u Tc,Pc", "u dv", ""], [true, true, true, true, true, true, true, true, false]);
         foreach (var p in points)
         {
             table.Add(NumberText.Table(p.Temperature), NumberText.Table(UnitFormatter.Pressure(p.Pressure, UnitSystem.Si)), NumberText.Table(p.CompressibilityChange),
-                NumberText.Table(p.EnthalpyOfVaporization), NumberText.TableOrUndefined(p.StandardUncertainty), p.Extrapolated ? "*" : "");
+                NumberText.Table(p.EnthalpyOfVaporization), NumberText.TableOrUndefined(p.StandardUncertainty),
+                NumberText.TableOrUndefined(p.FitUncertainty), NumberText.Table(p.CriticalPointUncertainty), NumberText.TableOrUndefined(p.VolumeModelUncertainty),
+                (p.BandHeldAtDataEnd ? "+" : "") + (p.Extrapolated ? "*" : ""));
         }
 
         text.Append(table.Render());
@@ -448,7 +474,15 @@ internal static class FitWriter
         }
 
         text.AppendLine();
-        text.AppendLine("u(dH) is the standard uncertainty from the fit covariance only; the volume model adds its own (see docs/validation.md).");
+        text.AppendLine($"u(dH) is the standard uncertainty ({band?.MethodName ?? "linear"}) from the fit covariance (u fit), the uncertainty of Tc and Pc where the form or the volume model uses them (u Tc,Pc)");
+        text.AppendLine("and the volume model (u dv; see docs/uncertainty.md); rows marked + are outside the data, with the band held at that of the nearest data end.");
+        if (band is not null)
+        {
+            foreach (var input in band.Inputs)
+            {
+                text.AppendLine($"  {input.Name} = {NumberText.Table(input.Value)} +/- {NumberText.Table(input.StandardUncertainty)}: {input.UncertaintySource}");
+            }
+        }
         if (!fit.CovarianceDefined)
         {
             text.AppendLine($"u(dH) undefined: {CovarianceUndefined}");

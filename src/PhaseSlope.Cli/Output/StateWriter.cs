@@ -11,7 +11,7 @@ namespace PhaseSlope.Cli.Output;
 internal static class StateWriter
 {
     /// <summary>Renders a state.</summary>
-    public static string State(PropertyModel engine, ThermodynamicState state, OutputFormat format, UnitSystem units)
+    public static string State(PropertyModel engine, ThermodynamicState state, OutputFormat format, UnitSystem units, StateUncertaintyText? uncertainty = null)
         => format switch
         {
             OutputFormat.Json => JsonText.Write(json =>
@@ -19,12 +19,14 @@ internal static class StateWriter
                 json.WriteStartObject();
                 WriteHeader(json, engine, state);
                 StateColumns.WriteMembers(json, state);
+                uncertainty?.WriteJson(json);
                 json.WriteEndObject();
             }),
             OutputFormat.Csv => CsvText.Write(
-                [.. StateColumns.All.Select(c => c.Key)],
-                [StateColumns.All.Select(c => c.Value(state) is double v && double.IsFinite(v) ? NumberText.RoundTrip(v) : "").ToArray()]),
-            _ => StateTable(engine, state, units),
+                [.. StateColumns.All.Select(c => c.Key), .. uncertainty?.CsvHeader ?? []],
+                [[.. StateColumns.All.Select(c => c.Value(state) is double v && double.IsFinite(v) ? NumberText.RoundTrip(v) : ""), .. uncertainty?.CsvCells ?? []]]),
+            // Without a molar mass only SI tables are allowed (engineering units were refused), which do not use it.
+            _ => StateTable(engine, state, units) + (uncertainty?.Table(units, engine.MolarMass ?? double.NaN) ?? ""),
         };
 
     /// <summary>Renders a derivative value.</summary>

@@ -37,6 +37,13 @@ public sealed class CorrespondingStatesForm : VapourPressureForm
     /// <inheritdoc />
     public override IReadOnlyList<string> ParameterNames { get; } = [];
 
+    /// <inheritdoc />
+    public override bool UsesCriticalPoint => true;
+
+    /// <inheritdoc />
+    public override VapourPressureForm WithCriticalPoint(double criticalTemperature, double criticalPressure)
+        => new CorrespondingStatesForm(_ambroseWalton, criticalTemperature, criticalPressure, AcentricFactor);
+
     /// <summary>Tc, K.</summary>
     public double CriticalTemperature { get; }
 

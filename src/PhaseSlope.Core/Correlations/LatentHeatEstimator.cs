@@ -116,10 +116,40 @@ public sealed class LatentHeatEstimator
         };
         double enthalpy = ClapeyronEquation.EnthalpyOfVaporization(temperature, slope, dz);
         string? finding = ImplausibilityFinding(temperature, enthalpy);
-        return new LatentHeatPoint(temperature, p, enthalpy,
-            ClapeyronEquation.EnthalpyOfVaporization(temperature, Fit.SlopeStandardUncertainty(temperature), dz),
-            dz, !Fit.InRange(temperature))
-        { Finding = finding };
+        double fitUncertainty = ClapeyronEquation.EnthalpyOfVaporization(temperature, Fit.SlopeStandardUncertainty(temperature), dz);
+        return new LatentHeatPoint(temperature, p, enthalpy, fitUncertainty, dz, !Fit.InRange(temperature))
+        {
+            Finding = finding,
+            FitUncertainty = fitUncertainty,
+            VolumeModelUncertainty = VolumeModelRelativeUncertainty(temperature, p, dz) * enthalpy,
+        };
+    }
+
+    /// <summary>The relative standard uncertainty of ΔZ from the volume model, or null when it
+    /// cannot be sized.</summary>
+    /// <remarks>Sized on the water validation in docs/validation.md (IAPWS-generated data against
+    /// steam-table enthalpies, one fluid; that the error grows as ΔZ falls from 1 is common
+    /// practice): the cubic's ΔZ (eos) was within 0.13 % at ΔZ ≈ 1 and within 2.5 % down to
+    /// ΔZ ≈ 0.66, so u = min(0.025, 0.5·(1 − ΔZ)) + 0.001; Haggenmacher's within 0.1 % and
+    /// 0.94 %, so u = min(0.01, 0.25·(1 − ΔZ)) + 0.001. The ideal-gas route's error is its
+    /// bias: it overestimates by 1/ΔZ, so it is high by 1 − ΔZ of its own value, sized with Haggenmacher's ΔZ when Tc and Pc are known, else not sized.</remarks>
+    internal double? VolumeModelRelativeUncertainty(double temperature, double pressure, double dz)
+    {
+        switch (VolumeModel)
+        {
+            case VolumeChangeModel.EquationOfState:
+                return Math.Min(0.025, 0.5 * (1 - dz)) + 0.001;
+            case VolumeChangeModel.Haggenmacher:
+                return Math.Min(0.01, 0.25 * (1 - dz)) + 0.001;
+            default:
+                if (CriticalTemperature is double tc && CriticalPressure is double pc)
+                {
+                    double radicand = 1 - pressure / pc / Math.Pow(temperature / tc, 3);
+                    return radicand > 0 ? 1 - Math.Sqrt(radicand) : null;
+                }
+
+                return null;
+        }
     }
 
     /// <summary>ΔZ = √(1 − Pr/Tr³) (Haggenmacher 1946) at T and the fitted P.</summary>

@@ -46,6 +46,16 @@ public abstract class VapourPressureForm
     /// fitter uses as it is, without iterating.</summary>
     public virtual bool IsLinearInParameters => false;
 
+    /// <summary>Whether the form is written in Tc and Pc (Wagner and corresponding-states forms),
+    /// so that their uncertainty moves the fitted curve.</summary>
+    public virtual bool UsesCriticalPoint => false;
+
+    /// <summary>The same form with another Tc and Pc (itself for a form that uses neither); used
+    /// to propagate the uncertainty of the critical point into a fit.</summary>
+    /// <param name="criticalTemperature">Tc in K.</param>
+    /// <param name="criticalPressure">Pc in Pa.</param>
+    public virtual VapourPressureForm WithCriticalPoint(double criticalTemperature, double criticalPressure) => this;
+
     /// <summary>Starting values for a fit to (T, ln P) with weights, from a linearised fit; for a
     /// form that is <see cref="IsLinearInParameters"/>, the weighted least-squares solution itself.</summary>
     public abstract double[] StartingValues(IReadOnlyList<double> temperatures, IReadOnlyList<double> lnPressures, IReadOnlyList<double> weights);

@@ -16,6 +16,7 @@ public sealed class WagnerForm : VapourPressureForm
         Preconditions.Positive(criticalTemperature, "critical temperature");
         Preconditions.Positive(criticalPressure, "critical pressure");
         Id = id;
+        _label = label;
         _exponents = exponents;
         CriticalTemperature = criticalTemperature;
         CriticalPressure = criticalPressure;
@@ -27,6 +28,15 @@ public sealed class WagnerForm : VapourPressureForm
     /// <summary>The 3-6 form.</summary>
     public static WagnerForm ThreeSix(double criticalTemperature, double criticalPressure)
         => new("wagner-3-6", "Wagner 1973, 3-6 form", ExponentsOf("wagner-3-6"), criticalTemperature, criticalPressure);
+
+    private readonly string _label;
+
+    /// <inheritdoc />
+    public override bool UsesCriticalPoint => true;
+
+    /// <inheritdoc />
+    public override VapourPressureForm WithCriticalPoint(double criticalTemperature, double criticalPressure)
+        => new WagnerForm(Id, _label, _exponents, criticalTemperature, criticalPressure);
 
     /// <summary>The 2.5-5 form.</summary>
     public static WagnerForm TwoHalfFive(double criticalTemperature, double criticalPressure)

@@ -2,6 +2,7 @@ using OxyPlot;
 using OxyPlot.Axes;
 using OxyPlot.Series;
 using PhaseSlope.Core.Correlations;
+using PhaseSlope.Core.Equilibrium;
 
 namespace PhaseSlope.Plots.Diagrams;
 
@@ -45,7 +46,7 @@ public static class LatentDiagram
             var colour = HouseStyle.Colour(fluids.Count);
             var band = new AreaSeries
             {
-                Title = "±u (standard uncertainty)",
+                Title = "±u (standard uncertainty: fit, Tc and Pc, volume model)",
                 Color = OxyColors.Undefined,
                 Fill = OxyColor.FromAColor(110, colour),
                 StrokeThickness = 0,
@@ -76,8 +77,15 @@ public static class LatentDiagram
         double pc = fluid.Fluid.CriticalPressure.Value;
         var fit = VapourPressureFitter.Fit(WagnerForm.ThreeSix(tc, pc), data);
         var estimator = new LatentHeatEstimator(fit, VolumeChangeModel.EquationOfState, fluid.Solver(), tc, pc);
+        // The band of the latent command: the fit, Tc and Pc (the Wagner form and the model's
+        // ΔZ use them; refit and re-solved at ±u) and the volume model (docs/uncertainty.md).
+        LatentHeatEstimator Build(double t, double p) => new(
+            VapourPressureFitter.Fit(WagnerForm.ThreeSix(t, p), data), VolumeChangeModel.EquationOfState,
+            new CoexistenceSolver(fluid.WithCriticalPoint(t, p), CoexistenceSolver.LowestValidTemperature(fluid.Fluid)), t, p);
+        var inputs = Core.Uncertainty.FamilyUncertainty.CriticalConstants(fluid.Fluid);
+        var band = new LatentHeatBand(Build, estimator, inputs[0].StandardUncertainty, inputs[1].StandardUncertainty);
         double lo = fit.MinimumTemperature;
         double hi = fit.MaximumTemperature;
-        return [.. Enumerable.Range(0, DataPoints).Select(k => estimator.At(k == DataPoints - 1 ? hi : lo + (hi - lo) * k / (DataPoints - 1)))];
+        return band.Linear([.. Enumerable.Range(0, DataPoints).Select(k => k == DataPoints - 1 ? hi : lo + (hi - lo) * k / (DataPoints - 1))]);
     }
 }

@@ -35,6 +35,23 @@ public sealed class OfferedOptionTests : IDisposable
         public override string ToString() => $"{Command} {Option}: {string.Join(' ', Variant)}";
     }
 
+    /// <summary>--uncertainty adds uncertainties; --samples and --seed change the Monte Carlo
+    /// numbers and are refused without monte-carlo.</summary>
+    private static IEnumerable<Row> UncertaintyRows(string command, string[] baseline, bool linearByDefault = false)
+    {
+        string[] mc = [.. baseline, "--uncertainty", "monte-carlo", "--samples", "50"];
+        if (!linearByDefault)
+        {
+            yield return Changes(command, "--uncertainty", baseline, "--uncertainty", "linear");
+        }
+
+        yield return Differs(command, "--uncertainty", [.. baseline, "--uncertainty", "linear"], [.. baseline, "--uncertainty", "monte-carlo", "--samples", "50"]);
+        yield return Differs(command, "--samples", mc, [.. baseline, "--uncertainty", "monte-carlo", "--samples", "60"]);
+        yield return Refused(command, "--samples", [.. baseline, "--samples", "60"]);
+        yield return Changes(command, "--seed", mc, "--seed", "2");
+        yield return Refused(command, "--seed", [.. baseline, "--uncertainty", "linear", "--seed", "2"]);
+    }
+
     private static Row Changes(string command, string option, string[] baseline, params string[] extra)
         => new(command, option, baseline, [.. baseline, .. extra], null);
 
@@ -57,6 +74,10 @@ public sealed class OfferedOptionTests : IDisposable
 
         yield return Changes("coexist", "--reference", coexist, "--reference", "nbp");
         yield return Changes("coexist", "--diagnostics", coexist, "--diagnostics");
+        foreach (var row in UncertaintyRows("coexist", coexist))
+        {
+            yield return row;
+        }
 
         foreach (var row in OutRows())
         {
@@ -71,6 +92,10 @@ public sealed class OfferedOptionTests : IDisposable
         yield return Refused("curve", "--units", [.. curve, "--out", "{dir}/out.csv", "--units", "engineering"]);
         yield return Changes("curve", "--reference", curve, "--reference", "nbp");
         yield return Changes("curve", "--diagnostics", curve, "--diagnostics");
+        foreach (var row in UncertaintyRows("curve", curve))
+        {
+            yield return row;
+        }
         foreach (var row in ModelAndOutputRows("curve", curve, units: true))
         {
             yield return row;
@@ -83,6 +108,11 @@ public sealed class OfferedOptionTests : IDisposable
         }
 
         foreach (var row in ModelAndOutputRows("state", state, units: true))
+        {
+            yield return row;
+        }
+
+        foreach (var row in UncertaintyRows("state", state))
         {
             yield return row;
         }
@@ -150,6 +180,11 @@ public sealed class OfferedOptionTests : IDisposable
         yield return Changes("latent", "--to", latent, "--to", "400");
         yield return Changes("latent", "--points", latent, "--points", "5");
         yield return Refused("latent", "--points", [.. latent, "--temperature", "350", "--points", "5"]);
+        foreach (var row in UncertaintyRows("latent", latentFluid, linearByDefault: true))
+        {
+            yield return row;
+        }
+
         yield return Changes("latent", "--eos", latentFluid, "--eos", "srk");
         yield return Refused("latent", "--eos", [.. latent, "--eos", "srk"]);
         yield return Changes("latent", "--alpha", latentFluid, "--alpha", "twu");

@@ -1,0 +1,82 @@
+using System.Text;
+using System.Text.Json;
+using PhaseSlope.Cli.Commands;
+using PhaseSlope.Cli.Units;
+using PhaseSlope.Core.Uncertainty;
+
+namespace PhaseSlope.Cli.Output;
+
+/// <summary>Writes the standard uncertainties of a single-phase state (<c>state --uncertainty</c>).</summary>
+/// <param name="Values">The uncertainties.</param>
+/// <param name="Summary">Method and inputs.</param>
+internal sealed record StateUncertaintyText(StateUncertainty Values, UncertaintySummary Summary)
+{
+    private sealed record Quantity(string Key, string Title, DisplayQuantity? Display, Func<StateUncertainty, double?> Value);
+
+    private static readonly Quantity[] Quantities =
+    [
+        new("density_mol_m3", "u(rho)", DisplayQuantity.Density, u => u.Density),
+        new("pressure_Pa", "u(P)", DisplayQuantity.Pressure, u => u.Pressure),
+        new("compressibility_factor", "u(Z)", null, u => u.CompressibilityFactor),
+        new("residual_enthalpy_J_mol", "u(h_r)", DisplayQuantity.MolarEnergy, u => u.ResidualEnthalpy),
+        new("residual_entropy_J_molK", "u(s_r)", DisplayQuantity.MolarEntropy, u => u.ResidualEntropy),
+    ];
+
+    public void WriteJson(Utf8JsonWriter json)
+    {
+        json.WriteStartObject("standard_uncertainty");
+        json.WriteString("method", Summary.Choice.MethodName);
+        if (Summary.Choice.Method == PropagationMethod.MonteCarlo)
+        {
+            json.WriteNumber("samples", Summary.Choice.Samples);
+            json.WriteNumber("seed", Summary.Choice.Seed);
+        }
+
+        foreach (var q in Quantities)
+        {
+            json.WriteNumberOrNull(q.Key, Checked(q));
+        }
+
+        if (Values.Reason is string reason)
+        {
+            json.WriteString("undefined_reason", reason);
+        }
+        else
+        {
+            json.WriteNull("undefined_reason");
+        }
+
+        UncertaintyText.WriteInputs(json, Summary.Inputs);
+        json.WriteEndObject();
+    }
+
+    public IEnumerable<string> CsvHeader => Quantities.Select(q => $"u_{q.Key}").Append("u_undefined_reason");
+
+    public IEnumerable<string> CsvCells => Quantities.Select(q => NumberText.RoundTripOrEmpty(Checked(q))).Append(Values.Reason ?? "");
+
+    public string Table(UnitSystem units, double molarMass)
+    {
+        var text = new StringBuilder();
+        text.AppendLine();
+        UncertaintyText.DescribeInputs(text, Summary);
+        var table = new TextTable(["standard uncertainty", "u", "unit"], [false, true, false]);
+        foreach (var q in Quantities)
+        {
+            string cell = Checked(q) is double v
+                ? NumberText.Table(q.Display is DisplayQuantity d ? UnitFormatter.Convert(d, v, units, molarMass) : v)
+                : "undefined";
+            table.Add(q.Title, cell, q.Display is DisplayQuantity dq ? UnitFormatter.Label(dq, units) : "-");
+        }
+
+        text.Append(table.Render());
+        if (Values.Reason is string reason)
+        {
+            text.AppendLine($"u undefined: {reason}");
+        }
+
+        text.AppendLine("u(h_r) and u(s_r) are those of h and s whenever the reference state does not itself depend on the model (the ideal-gas reference).");
+        return text.ToString();
+    }
+
+    private double? Checked(Quantity q) => q.Value(Values) is double v ? FiniteNumbers.Check(v, $"u({q.Key})") : null;
+}
