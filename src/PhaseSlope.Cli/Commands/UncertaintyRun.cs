@@ -1,6 +1,8 @@
 using PhaseSlope.Cli.Output;
 using PhaseSlope.Core.Equilibrium;
 using PhaseSlope.Core.Fluids;
+using PhaseSlope.Core.Models;
+using PhaseSlope.Core.Tuning;
 using PhaseSlope.Core.Uncertainty;
 
 namespace PhaseSlope.Cli.Commands;
@@ -13,11 +15,18 @@ internal static class UncertaintyRun
     /// volume shift following them when it is the Péneloux correlation.</summary>
     public static CubicParameterization Parameters(ModelChoice model, Fluid fluid)
     {
+        // A tuned fluid's fitted alpha parameters carry their covariance from the fit: they are
+        // uncertain inputs beside Tc, Pc and ω.
+        var alpha = CubicModel.EffectiveAlpha(model.Kind, fluid, model.Alpha);
+        var set = alpha == AlphaForm.Default ? null : CubicModel.FindParameters(fluid, model.Kind, alpha);
+        var hook = set is { Covariance: { } covariance }
+            ? TunableAlpha.Uncertainty(set, covariance, fluid.CriticalTemperature.Value)
+            : null;
         bool peneloux = string.Equals(model.VolumeShiftText.Trim(), "peneloux", StringComparison.OrdinalIgnoreCase);
         return peneloux
-            ? new CubicParameterization(fluid, model.Kind, model.Alpha, VolumeShiftRule.Peneloux)
-            : new CubicParameterization(fluid, model.Kind, model.Alpha, VolumeShiftRule.Fixed,
-                CommonOptions.ParseShift(model.VolumeShiftText, model.Kind, fluid));
+            ? new CubicParameterization(fluid, model.Kind, alpha, VolumeShiftRule.Peneloux, alphaParameters: hook)
+            : new CubicParameterization(fluid, model.Kind, alpha, VolumeShiftRule.Fixed,
+                CommonOptions.ParseShift(model.VolumeShiftText, model.Kind, fluid), hook);
     }
 
     /// <summary>The summary written beside the values.</summary>

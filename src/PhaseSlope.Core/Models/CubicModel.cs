@@ -114,9 +114,9 @@ public sealed class CubicModel : IResidualModel
         if (alpha == AlphaForm.Default)
         {
             // A tuned fluid prefers its tuned alpha function, where it has one for this model.
-            if (fluid.PreferredAlpha != AlphaForm.Default && kind.Entry().AcceptsAlphaChoice && FindParameters(fluid, kind, fluid.PreferredAlpha) is not null)
+            if (EffectiveAlpha(kind, fluid, alpha) is var preferred && preferred != AlphaForm.Default)
             {
-                return For(kind, fluid, fluid.PreferredAlpha, volumeShift);
+                return For(kind, fluid, preferred, volumeShift);
             }
 
             return For(kind, tc, pc, omega, volumeShift);
@@ -162,6 +162,18 @@ public sealed class CubicModel : IResidualModel
         }
 
         return new CubicModel(kind, form, function, tc, pc, volumeShift);
+    }
+
+    /// <summary>The alpha form a model for <paramref name="fluid"/> actually uses when
+    /// <paramref name="alpha"/> is asked for: the fluid's preferred (tuned) form in place of
+    /// <see cref="AlphaForm.Default"/> when it has parameters for this model.</summary>
+    public static AlphaForm EffectiveAlpha(CubicModelKind kind, Fluid fluid, AlphaForm alpha)
+    {
+        ArgumentNullException.ThrowIfNull(fluid);
+        return alpha == AlphaForm.Default && fluid.PreferredAlpha != AlphaForm.Default && kind.Entry().AcceptsAlphaChoice
+            && FindParameters(fluid, kind, fluid.PreferredAlpha) is not null
+            ? fluid.PreferredAlpha
+            : alpha;
     }
 
     /// <summary>The alpha function of a fluid-specific parameter set.</summary>
@@ -232,7 +244,7 @@ public sealed class CubicModel : IResidualModel
 
     /// <summary>The fluid's parameter set of the form for this model; for Peng–Robinson 1978 a
     /// set given for Peng–Robinson when there is none of its own.</summary>
-    private static AlphaParameterSet? FindParameters(Fluid fluid, CubicModelKind kind, AlphaForm alpha)
+    public static AlphaParameterSet? FindParameters(Fluid fluid, CubicModelKind kind, AlphaForm alpha)
     {
         AlphaParameterSet? own = fluid.AlphaParameters.FirstOrDefault(p => p.Form == alpha && p.Model == kind);
         if (own is null && kind.Entry().AlphaParametersOf is CubicModelKind other)

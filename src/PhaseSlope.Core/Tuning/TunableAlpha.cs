@@ -1,4 +1,7 @@
+using MathNet.Numerics.LinearAlgebra;
+using PhaseSlope.Core.Fluids;
 using PhaseSlope.Core.Models;
+using PhaseSlope.Core.Uncertainty;
 
 namespace PhaseSlope.Core.Tuning;
 
@@ -23,6 +26,37 @@ public abstract class TunableAlpha
 
     /// <summary>∂α/∂θ_j at <paramref name="temperature"/>, written into <paramref name="gradient"/>.</summary>
     public abstract void Gradient(double temperature, double criticalTemperature, IReadOnlyList<double> parameters, Span<double> gradient);
+
+    /// <summary>∂(dα/dT)/∂θ_j at <paramref name="temperature"/>, written into <paramref name="gradient"/>.</summary>
+    public abstract void SlopeGradient(double temperature, double criticalTemperature, IReadOnlyList<double> parameters, Span<double> gradient);
+
+    /// <summary>The fluid's parameter set with its covariance as uncertain inputs for the
+    /// propagation (<see cref="AlphaParameterUncertainty"/>): values, covariance, how to build α,
+    /// and the exact ∂α/∂θ and ∂(dα/dT)/∂θ.</summary>
+    /// <param name="set">The fluid's parameter set.</param>
+    /// <param name="covariance">Its covariance.</param>
+    /// <param name="criticalTemperature">The nominal Tc in K (the sensitivities are those of the nominal model).</param>
+    public static AlphaParameterUncertainty Uncertainty(AlphaParameterSet set, double[,] covariance, double criticalTemperature)
+    {
+        ArgumentNullException.ThrowIfNull(set);
+        ArgumentNullException.ThrowIfNull(covariance);
+        var family = Of(set.Form);
+        var values = set.Values.ToArray();
+        var names = family.ParameterNames;
+        var inputs = values.Select((v, j) => new UncertainInput($"alpha_{names[j]}", v, Math.Sqrt(Math.Max(covariance[j, j], 0)), set.Source)).ToArray();
+        return new AlphaParameterUncertainty(
+            inputs,
+            Matrix<double>.Build.DenseOfArray(covariance),
+            (tc, p) => family.Create(p, tc, set.Source),
+            (t, k) =>
+            {
+                var g = new double[values.Length];
+                var gs = new double[values.Length];
+                family.Gradient(t, criticalTemperature, values, g);
+                family.SlopeGradient(t, criticalTemperature, values, gs);
+                return (g[k], gs[k]);
+            });
+    }
 
     /// <summary>Starting parameters equivalent (or close) to the model's own alpha function for ω.</summary>
     public abstract double[] Start(CubicModelKind kind, double acentricFactor, double criticalTemperature);
@@ -57,6 +91,15 @@ public abstract class TunableAlpha
             gradient[0] = 2 * (1 + p[0] * x) * x;
         }
 
+        public override void SlopeGradient(double temperature, double tc, IReadOnlyList<double> p, Span<double> gradient)
+        {
+            // α′ = 2g·m·x′ with x′ = dx/dT = −1/(2√(T·Tc)): ∂α′/∂m = 2x′·(g + m·x) = 2x′·(1 + 2m·x).
+            double s = Math.Sqrt(temperature / tc);
+            double x = 1 - s;
+            double dx = -1 / (2 * s * tc);
+            gradient[0] = 2 * dx * (1 + 2 * p[0] * x);
+        }
+
         public override double[] Start(CubicModelKind kind, double omega, double tc) => [OwnSlope(kind, omega, tc)];
     }
 
@@ -78,6 +121,21 @@ public abstract class TunableAlpha
             gradient[0] = 2 * g * x;
             gradient[1] = subcritical ? 2 * g * x * x : 0;
             gradient[2] = subcritical ? 2 * g * x * x * x : 0;
+        }
+
+        public override void SlopeGradient(double temperature, double tc, IReadOnlyList<double> p, Span<double> gradient)
+        {
+            // α′ = 2g·g_x·x′: ∂α′/∂ck = 2x′·(x^k·g_x + g·k·x^(k−1)); above Tc only c1 acts.
+            double s = Math.Sqrt(temperature / tc);
+            double x = 1 - s;
+            double dx = -1 / (2 * s * tc);
+            bool subcritical = temperature <= tc;
+            double c2 = subcritical ? p[1] : 0, c3 = subcritical ? p[2] : 0;
+            double g = 1 + x * (p[0] + x * (c2 + x * c3));
+            double gx = p[0] + x * (2 * c2 + 3 * c3 * x);
+            gradient[0] = 2 * dx * (x * gx + g);
+            gradient[1] = subcritical ? 2 * dx * (x * x * gx + 2 * g * x) : 0;
+            gradient[2] = subcritical ? 2 * dx * (x * x * x * gx + 3 * g * x * x) : 0;
         }
 
         // With c2 = c3 = 0 the Mathias–Copeman function is the Soave form with m = c1.
@@ -102,6 +160,21 @@ public abstract class TunableAlpha
             gradient[0] = alpha * (1 - power);
             gradient[1] = alpha * (n * lnTr - l * power * n * lnTr);
             gradient[2] = alpha * ((m - 1) * lnTr - l * power * m * lnTr);
+        }
+
+        public override void SlopeGradient(double temperature, double tc, IReadOnlyList<double> p, Span<double> gradient)
+        {
+            // α′ = α·q with q = d ln α/dT = [N(M − 1) − L·N·M·Tr^(NM)]/T, so ∂α′/∂θ = ∂α/∂θ·q + α·∂q/∂θ.
+            double l = p[0], m = p[1], n = p[2];
+            double lnTr = Math.Log(temperature / tc);
+            double power = Math.Exp(n * m * lnTr);
+            double alpha = Math.Exp(n * (m - 1) * lnTr + l * (1 - power));
+            double q = (n * (m - 1) - l * n * m * power) / temperature;
+            Span<double> da = stackalloc double[3];
+            Gradient(temperature, tc, p, da);
+            gradient[0] = da[0] * q + alpha * (-n * m * power / temperature);
+            gradient[1] = da[1] * q + alpha * (n - l * n * power * (1 + m * n * lnTr)) / temperature;
+            gradient[2] = da[2] * q + alpha * ((m - 1) - l * m * power * (1 + n * m * lnTr)) / temperature;
         }
 
         // The generalised Twu (1995) constants for Peng–Robinson below Tc, interpolated in ω as

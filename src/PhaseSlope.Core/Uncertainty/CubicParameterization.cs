@@ -187,7 +187,7 @@ public sealed class CubicParameterization
         double omega = Inputs[2].Value;
         switch (Nominal.Alpha)
         {
-            case SoaveAlpha soave:
+            case SoaveAlpha { FluidSpecific: false } soave:
             {
                 // α = g², g = 1 + m·x, x = 1 − s, s = √(T/Tc); α′ = −m·g/(s·Tc).
                 // ∂α/∂m = 2g·x; ∂α′/∂m = −(g + m·x)/(s·Tc).

@@ -60,6 +60,22 @@ public sealed class TuneCommandTests : IDisposable
     }
 
     [Fact]
+    public void TunedFluid_CurveWithUncertainty_CarriesTheFittedParametersAsInputs()
+    {
+        // The third command of the job: a saturation table with an uncertainty on every value,
+        // where the tuned alpha parameters' covariance from the fit is one of the inputs.
+        string fluid = _folder.File("frc-u.fluid");
+        Assert.Equal(0, Run("tune", FitData.ExampleCsv, "--tc", "540", "--pc", "3.1MPa", "--name", "frc-u", "--out", fluid).ExitCode);
+        var curve = Run("curve", fluid, "--points", "5", "--uncertainty", "linear", "--format", "json");
+        Assert.True(curve.ExitCode == 0, curve.ToString());
+        using var document = StrictJson.Parse(curve.Stdout);
+        var row = document.RootElement[2].GetProperty("standard_uncertainty");
+        string[] names = [.. row.GetProperty("inputs").EnumerateArray().Select(i => i.GetProperty("name").GetString()!)];
+        Assert.Equal(["critical_temperature_K", "critical_pressure_Pa", "acentric_factor", "alpha_c1", "alpha_c2", "alpha_c3"], names);
+        Assert.True(row.GetProperty("pressure_Pa").GetDouble() > 0);
+    }
+
+    [Fact]
     public void OnePoint_TunesTheAcentricFactorOnly()
     {
         string data = _folder.File("one.csv");
