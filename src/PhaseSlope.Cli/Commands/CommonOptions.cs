@@ -27,9 +27,10 @@ internal sealed class CommonOptions
     /// <summary>--volume-shift: Peneloux volume translation.</summary>
     public Option<string> VolumeShift { get; } = new("--volume-shift")
     {
-        Description = "Volume translation c (v = v_eos - c): none (default), peneloux (the published correlation for pr or srk), "
+        Description = "Volume translation c (v = v_eos - c): fluid (default: the fluid file's own volume_shift_pr/srk, fitted to its liquid densities, else none), "
+            + "none, peneloux (the published correlation for pr or srk), "
             + "or a value in m3/mol, cm3/mol or L/mol (bare number: m3/mol); it shifts densities and leaves Psat and latent heats unchanged",
-        DefaultValueFactory = _ => "none",
+        DefaultValueFactory = _ => "fluid",
     };
 
     /// <summary>--format: table, csv or json.</summary>
@@ -88,7 +89,8 @@ internal sealed class CommonOptions
             "mathias-copeman" => AlphaForm.MathiasCopeman,
             _ => throw new UsageException($"--alpha: unknown alpha function '{alphaText}' (use default, twu or mathias-copeman)"),
         };
-        string shiftText = Offered(parse, VolumeShift) ? parse.GetValue(VolumeShift) ?? "none" : "none";
+        // Where --volume-shift is not offered (the shift cannot change the result) the fluid's own is kept.
+        string shiftText = Offered(parse, VolumeShift) ? parse.GetValue(VolumeShift) ?? "fluid" : "fluid";
         _ = ParseShift(shiftText, kind, fluid: null);
         return new ModelChoice(kind, alpha, shiftText);
     }
@@ -129,6 +131,13 @@ internal sealed class CommonOptions
         if (string.Equals(t, "none", StringComparison.OrdinalIgnoreCase))
         {
             return 0;
+        }
+
+        if (string.Equals(t, "fluid", StringComparison.OrdinalIgnoreCase))
+        {
+            // Peng–Robinson 1978 shares Peng–Robinson's translation (the same cubic form).
+            var own = kind.Entry().Form == CubicForm.PengRobinson ? CubicModelKind.PengRobinson : CubicModelKind.SoaveRedlichKwong;
+            return fluid?.VolumeShifts.FirstOrDefault(s => s.Model == own && kind.Entry().AcceptsAlphaChoice)?.Shift.Value ?? 0;
         }
 
         if (string.Equals(t, "peneloux", StringComparison.OrdinalIgnoreCase))

@@ -72,13 +72,18 @@ internal sealed class CorrelationOptions
     /// <summary>Reads and converts a data file of measured vapour pressures (also used by <c>plot --data</c>).</summary>
     /// <exception cref="DataFileException">The file is missing, unreadable or invalid.</exception>
     public static IReadOnlyList<VapourPressurePoint> ReadDataFile(string path, string? temperatureUnit, string? pressureUnit, int minimumRows = VapourPressureCsv.MinimumRows)
+        => [.. ReadDataRecords(path, temperatureUnit, pressureUnit, minimumRows).Select(r => new VapourPressurePoint(r.Temperature, r.Pressure, r.StandardUncertainty, r.Weight))];
+
+    /// <summary>Reads a data file's rows as written (with any liquid densities, which only
+    /// <c>tune</c> uses).</summary>
+    /// <exception cref="DataFileException">The file is missing, unreadable or invalid.</exception>
+    public static IReadOnlyList<VapourPressureRecord> ReadDataRecords(string path, string? temperatureUnit, string? pressureUnit, int minimumRows = VapourPressureCsv.MinimumRows)
     {
         var options = new VapourPressureCsvOptions(temperatureUnit, pressureUnit, minimumRows);
-        IReadOnlyList<VapourPressureRecord> records;
         try
         {
             using var reader = new StreamReader(BoundedInput.Open(path, BoundedInput.DataFileLimit));
-            records = VapourPressureCsv.Read(reader, path, options);
+            return VapourPressureCsv.Read(reader, path, options);
         }
         catch (Exception ex) when (ex is FileNotFoundException or DirectoryNotFoundException)
         {
@@ -88,8 +93,6 @@ internal sealed class CorrelationOptions
         {
             throw new DataFileException(path, null, null, $"cannot read data file: {ex.Message}", ex);
         }
-
-        return [.. records.Select(r => new VapourPressurePoint(r.Temperature, r.Pressure, r.StandardUncertainty, r.Weight))];
     }
 
     /// <summary>The fluid, when --fluid is given. A fluid brings its own Tc and Pc, so --tc or

@@ -190,7 +190,19 @@ internal sealed class TuneOptions
         }
 
         string dataPath = parse.GetValue(Data)!;
-        var data = CorrelationOptions.ReadDataFile(dataPath, parse.GetValue(TemperatureUnit), parse.GetValue(PressureUnit), minimumRows: 1);
+        var records = CorrelationOptions.ReadDataRecords(dataPath, parse.GetValue(TemperatureUnit), parse.GetValue(PressureUnit), minimumRows: 1);
+        IReadOnlyList<VapourPressurePoint> data = [.. records.Select(r => new VapourPressurePoint(r.Temperature, r.Pressure, r.StandardUncertainty, r.Weight))];
+        var densities = new List<LiquidDensityPoint>();
+        foreach (var r in records.Where(r => r.LiquidDensity is not null))
+        {
+            var d = r.LiquidDensity!;
+            double molar = d.PerMass
+                ? d.Value / (baseFluid.MolarMass?.Value ?? throw new DataFileException(dataPath, r.Line, null,
+                    "a liquid density in mass units needs the molar mass: give --molar-mass (or a fluid that has one), or write rho_L in mol/L"))
+                : d.Value;
+            densities.Add(new LiquidDensityPoint(r.Temperature, molar));
+        }
+
         if (fluidText is null && omegaGiven is null)
         {
             if (data.Count == 1 && form != AlphaForm.Default)
@@ -218,6 +230,7 @@ internal sealed class TuneOptions
             Kind = kind,
             Form = form,
             VapourPressures = data,
+            LiquidDensities = densities,
             DataOrigin = $"{Path.GetFileName(dataPath)}, sha256 {Checksum(dataPath)}",
             Date = DateOnly.FromDateTime(DateTime.UtcNow),
             Name = name,

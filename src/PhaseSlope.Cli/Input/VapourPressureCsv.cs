@@ -31,6 +31,7 @@ internal static partial class VapourPressureCsv
         Pressure,
         Uncertainty,
         Weight,
+        LiquidDensity,
     }
 
     private enum UncertaintyKind
@@ -48,10 +49,12 @@ internal static partial class VapourPressureCsv
         public Unit? PressureUnit { get; init; }
 
         public UncertaintyKind Uncertainty { get; init; }
+
+        public Unit? DensityUnit { get; init; }
     }
 
     /// <summary>The columns found in the header row.</summary>
-    private sealed record Layout(int HeaderLine, int FieldCount, string[] Headers, Column Temperature, Column Pressure, Column? Uncertainty, Column? Weight);
+    private sealed record Layout(int HeaderLine, int FieldCount, string[] Headers, Column Temperature, Column Pressure, Column? Uncertainty, Column? Weight, Column? LiquidDensity);
 
     /// <summary>A header cell: a name, then optionally a unit in square brackets.</summary>
     [GeneratedRegex(@"^(?<name>[^\[\]]*?)\s*(?:\[(?<unit>[^\[\]]*)\])?$", RegexOptions.CultureInvariant)]
@@ -67,6 +70,7 @@ internal static partial class VapourPressureCsv
     private static readonly string[] UncertaintyNames = ["u(P)", "uncertainty", "sigma_P"];
     private const string RelativeUncertaintyName = "u_r(P)";
     private const string WeightName = "weight";
+    private static readonly string[] LiquidDensityNames = ["rho_L", "liquid density"];
 
     /// <summary>Reads every data row of the file, converted to K and Pa and sorted by temperature.</summary>
     /// <param name="reader">The file's text; left open.</param>
@@ -210,7 +214,7 @@ internal static partial class VapourPressureCsv
                 "the first row holds numbers, not column names: a header row is required (e.g. 'T [K],P [kPa]')");
         }
 
-        Column? temperature = null, pressure = null, uncertainty = null, weight = null;
+        Column? temperature = null, pressure = null, uncertainty = null, weight = null, density = null;
         for (int index = 0; index < cells.Length; index++)
         {
             Column? column = ReadHeaderCell(index, cells[index], origin, line, defaultTemperature, defaultPressure);
@@ -230,6 +234,9 @@ internal static partial class VapourPressureCsv
                     break;
                 case Role.Weight:
                     slot = ref weight;
+                    break;
+                case Role.LiquidDensity:
+                    slot = ref density;
                     break;
             }
             if (slot is not null)
@@ -253,7 +260,7 @@ internal static partial class VapourPressureCsv
             throw new DataFileException(origin, line, weight.Header,
                 $"give an uncertainty or a weight, not both: column '{uncertainty.Header}' already gives the uncertainty");
         }
-        return new Layout(line, cells.Length, cells, temperature, pressure, uncertainty, weight);
+        return new Layout(line, cells.Length, cells, temperature, pressure, uncertainty, weight, density);
     }
 
     private static DataFileException Missing(string origin, int line, string[] cells, string quantity, string forms)
@@ -268,6 +275,7 @@ internal static partial class VapourPressureCsv
         Role.Temperature => "temperature",
         Role.Pressure => "pressure",
         Role.Uncertainty => "uncertainty of the pressure",
+        Role.LiquidDensity => "saturated-liquid density",
         _ => "weight",
     };
 
@@ -285,7 +293,7 @@ internal static partial class VapourPressureCsv
         if (unit is { Length: 0 })
         {
             bool known = Is(name, TemperatureNames) || Is(name, PressureNames) || Is(name, UncertaintyNames)
-                || Is(name, [RelativeUncertaintyName, WeightName]);
+                || Is(name, [RelativeUncertaintyName, WeightName]) || Is(name, LiquidDensityNames);
             if (known)
             {
                 throw new DataFileException(origin, line, header, "empty unit in brackets (write the unit, or leave out the brackets)");
@@ -326,6 +334,16 @@ internal static partial class VapourPressureCsv
                 _ => throw new DataFileException(origin, line, header,
                     $"a relative uncertainty has no unit other than '%' (found '{unit}'; without a unit it is a fraction, e.g. 0.003)"),
             };
+        }
+        if (Is(name, LiquidDensityNames))
+        {
+            if (unit is null || !UnitTable.TryFind(unit, out var densityUnit, Dimension.AmountDensity, Dimension.MassDensity) || densityUnit is null)
+            {
+                throw new DataFileException(origin, line, header,
+                    unit is null ? "no density unit: write it in brackets (e.g. 'rho_L [kg/m3]' or 'rho_L [mol/L]')" : $"'{unit}' is not a density unit (use mol/m3, mol/L, kg/m3 or g/cm3)");
+            }
+
+            return new Column(index, header, Role.LiquidDensity) { DensityUnit = densityUnit };
         }
         if (Is(name, [WeightName]))
         {
@@ -456,7 +474,20 @@ internal static partial class VapourPressureCsv
             weight = wValue;
         }
 
-        return new VapourPressureRecord(temperature, pressure, uncertainty, weight, line);
+        LiquidDensity? liquidDensity = null;
+        if (layout.LiquidDensity is Column d && fields[d.Index].Length > 0)
+        {
+            // An empty cell: no density measured at this temperature.
+            (double dValue, string dExact) = Number(fields, d, origin, line);
+            double si = DataUnits.ToSi(d.DensityUnit!, dValue, dExact);
+            if (!(si > 0.0) || !double.IsFinite(si))
+            {
+                throw new DataFileException(origin, line, d.Header, "the liquid density must be a positive number");
+            }
+            liquidDensity = new LiquidDensity(si, d.DensityUnit!.Dimension == Dimension.MassDensity);
+        }
+
+        return new VapourPressureRecord(temperature, pressure, uncertainty, weight, line) { LiquidDensity = liquidDensity };
     }
 
     private static string Fields(int count) => count == 1 ? "field" : "fields";

@@ -10,4 +10,15 @@ namespace PhaseSlope.Cli.Input;
 /// one; otherwise null. A file gives an uncertainty or a weight, never both.</param>
 /// <param name="Line">1-based physical line of the file the point was read from, counting comment
 /// and blank lines, for error messages of later steps.</param>
-internal sealed record VapourPressureRecord(double Temperature, double Pressure, double? StandardUncertainty, double? Weight, int Line);
+internal sealed record VapourPressureRecord(double Temperature, double Pressure, double? StandardUncertainty, double? Weight, int Line)
+{
+    /// <summary>The saturated-liquid density measured at this temperature (an optional
+    /// <c>rho_L [unit]</c> column; only <c>tune</c> reads it), or null.</summary>
+    public LiquidDensity? LiquidDensity { get; init; }
+}
+
+/// <summary>A measured saturated-liquid density in SI: mol/m³, or kg/m³ when <paramref name="PerMass"/>
+/// (converted with the fluid's molar mass once the fluid is known).</summary>
+/// <param name="Value">The density.</param>
+/// <param name="PerMass">Whether it is a mass density.</param>
+internal sealed record LiquidDensity(double Value, bool PerMass);

@@ -40,6 +40,12 @@ internal static class TuneWriter
             text.AppendLine(result.Convex ? "alpha: positive, decreasing and convex up to Tc" : "alpha: positive and decreasing up to Tc, but not convex everywhere (finding: non-convex alpha; second derivatives such as cv may be distorted)");
         }
 
+        if (result.VolumeShift is { } shift)
+        {
+            text.AppendLine(string.Create(CultureInfo.InvariantCulture,
+                $"volume translation: c = {NumberText.Table(shift.Shift * 1e6)} cm3/mol{(shift.StandardError is double e ? $" (standard error {NumberText.Table(e * 1e6)} cm3/mol)" : "")}, fitted to {shift.Comparisons.Count} liquid densities: AAD {shift.AadBeforePercent:0.###} % before, {shift.AadAfterPercent:0.###} % after (Psat and latent heats unchanged)"));
+        }
+
         text.AppendLine();
         var parameters = new TextTable(["parameter", "value", "standard error"], [false, true, true]);
         foreach (var (name, value, error) in result.Parameters)
@@ -56,6 +62,18 @@ internal static class TuneWriter
         }
 
         text.Append(points.Render());
+        if (result.VolumeShift is { } fit)
+        {
+            text.AppendLine();
+            var densities = new TextTable(["T [K]", "rho_L measured [mol/m3]", "before [%]", "after [%]"], [true, true, true, true]);
+            foreach (var c in fit.Comparisons)
+            {
+                densities.Add(NumberText.Table(c.Temperature), NumberText.Table(c.Measured), Fixed(c.DeviationBeforePercent), Fixed(c.DeviationAfterPercent));
+            }
+
+            text.Append(densities.Render());
+        }
+
         text.AppendLine(Caution);
         return text.ToString();
     }
@@ -132,6 +150,40 @@ internal static class TuneWriter
         }
 
         json.WriteEndArray();
+        if (result.VolumeShift is { } shift)
+        {
+            json.WriteStartObject("volume_shift");
+            json.WriteFinite("value_m3_mol", shift.Shift);
+            if (shift.StandardError is double e)
+            {
+                json.WriteFinite("standard_error_m3_mol", e);
+            }
+            else
+            {
+                json.WriteNull("standard_error_m3_mol");
+            }
+
+            json.WriteFinite("liquid_density_aad_before_percent", shift.AadBeforePercent);
+            json.WriteFinite("liquid_density_aad_after_percent", shift.AadAfterPercent);
+            json.WriteStartArray("points");
+            foreach (var c in shift.Comparisons)
+            {
+                json.WriteStartObject();
+                json.WriteFinite("temperature_K", c.Temperature);
+                json.WriteFinite("liquid_density_mol_m3", c.Measured);
+                json.WriteFinite("liquid_density_before_mol_m3", c.Before);
+                json.WriteFinite("liquid_density_after_mol_m3", c.After);
+                json.WriteEndObject();
+            }
+
+            json.WriteEndArray();
+            json.WriteEndObject();
+        }
+        else
+        {
+            json.WriteNull("volume_shift");
+        }
+
         json.WriteString("caution", Caution);
         json.WriteEndObject();
     });

@@ -56,6 +56,10 @@ public sealed record Fluid
     /// Twu or Mathias–Copeman constants fitted for one cubic model); empty when none are given.</summary>
     public IReadOnlyList<AlphaParameterSet> AlphaParameters { get; init; } = [];
 
+    /// <summary>The fluid's own volume translations c (m³/mol, v = v_cubic − c) per cubic model, fitted to
+    /// its liquid densities (for example by <c>phaseslope tune</c>); empty when none are given.</summary>
+    public IReadOnlyList<FluidVolumeShift> VolumeShifts { get; init; } = [];
+
     /// <summary>The fluid's published vapour-pressure equation, or null when the file gives none.</summary>
     public PublishedVapourPressure? VapourPressureEquation { get; init; }
 
@@ -82,3 +86,8 @@ public sealed record Fluid
         => MolarMass?.Value ?? throw new FluidDataException(Origin, 0, "molar_mass",
             $"fluid '{Name}' gives no molar mass, which {purpose} needs");
 }
+
+/// <summary>A fluid's own volume translation for one cubic model.</summary>
+/// <param name="Model">The cubic model (Peng–Robinson or Soave–Redlich–Kwong form).</param>
+/// <param name="Shift">c in m³/mol with its source and standard uncertainty.</param>
+public sealed record FluidVolumeShift(CubicModelKind Model, SourcedValue Shift);

@@ -110,6 +110,8 @@ internal sealed partial class FluidFileParser
     private const string KeyAlphaDefault = "alpha_default";
     private const string KeyProvenance = "provenance";
     private const string KeyVapourPressureEquation = "vapour_pressure_equation";
+    private const string KeyVolumeShiftPr = "volume_shift_pr";
+    private const string KeyVolumeShiftSrk = "volume_shift_srk";
 
     /// <summary>The keys of fluid-specific alpha parameters.</summary>
     private static readonly string[] AlphaKeys =
@@ -122,7 +124,7 @@ internal sealed partial class FluidFileParser
         KeyFormat, KeyName, KeySynonyms, KeyFormula, KeyCas, KeyFamily,
         KeyMolarMass, KeyCriticalTemperature, KeyCriticalPressure, KeyAcentricFactor,
         KeyCriticalDensity, KeyCriticalMolarVolume, KeyNormalBoilingPoint,
-        KeyTriplePointTemperature, KeyIdealGasCp, KeyVapourPressureEquation,
+        KeyTriplePointTemperature, KeyIdealGasCp, KeyVapourPressureEquation, KeyVolumeShiftPr, KeyVolumeShiftSrk,
         .. AlphaKeys, .. AlphaKeys.Select(k => k + CovarianceSuffix), KeyAlphaDefault,
         KeyProvenance, KeyRemarks,
     ];
@@ -142,6 +144,8 @@ internal sealed partial class FluidFileParser
         [KeyCriticalMolarVolume] = Quantity.MolarVolume,
         [KeyNormalBoilingPoint] = Quantity.Temperature,
         [KeyTriplePointTemperature] = Quantity.Temperature,
+        [KeyVolumeShiftPr] = Quantity.VolumeShift,
+        [KeyVolumeShiftSrk] = Quantity.VolumeShift,
     };
 
     internal const double AcentricFactorLowest = -0.5;
@@ -168,6 +172,7 @@ internal sealed partial class FluidFileParser
         MolarDensity,
         MolarVolume,
         Dimensionless,
+        VolumeShift,
     }
 
     /// <summary>A numeric entry as written: number and uncertainty in the file's unit.</summary>
@@ -563,7 +568,7 @@ internal sealed partial class FluidFileParser
             Quantity.Pressure => FluidUnits.Allowed(Dimension.Pressure),
             Quantity.MolarMass => FluidUnits.Allowed(Dimension.MolarMass),
             Quantity.MolarDensity => FluidUnits.Allowed(Dimension.AmountDensity),
-            Quantity.MolarVolume => FluidUnits.Allowed(Dimension.MolarVolume),
+            Quantity.MolarVolume or Quantity.VolumeShift => FluidUnits.Allowed(Dimension.MolarVolume),
             _ => [],
         };
 
@@ -603,10 +608,31 @@ internal sealed partial class FluidFileParser
             return;
         }
 
+        if (quantity == Quantity.VolumeShift)
+        {
+            return; // a translation may have either sign; the model bounds it by its co-volume
+        }
+
         if (number <= 0)
         {
             throw Fail(line, key, $"unphysical value {Show(number)}; must be greater than zero");
         }
+    }
+
+    /// <summary>The volume translations given for the cubic models, c in m³/mol (not inverted,
+    /// unlike a critical molar volume).</summary>
+    private IReadOnlyList<FluidVolumeShift> VolumeShifts()
+    {        var shifts = new List<FluidVolumeShift>();
+        foreach (var (key, model) in new[] { (KeyVolumeShiftPr, CubicModelKind.PengRobinson), (KeyVolumeShiftSrk, CubicModelKind.SoaveRedlichKwong) })
+        {
+            if (_quantities.TryGetValue(key, out RawQuantity? raw))
+            {
+                Unit unit = FluidUnits.Get(raw.Unit!);
+                shifts.Add(new FluidVolumeShift(model, new SourcedValue(unit.ToSi(raw.Number), raw.Source, raw.Uncertainty is double u ? unit.ToSi(u) : null)));
+            }
+        }
+
+        return shifts.AsReadOnly();
     }
 
     private Fluid Build()
@@ -674,6 +700,7 @@ internal sealed partial class FluidFileParser
             AlphaParameters = AlphaParametersWithCovariances(),
             PreferredAlpha = _preferredAlpha,
             VapourPressureEquation = _vapourPressureEquation,
+            VolumeShifts = VolumeShifts(),
             Provenance = _text.GetValueOrDefault(KeyProvenance),
             Remarks = _text.GetValueOrDefault(KeyRemarks),
             Origin = _origin,

@@ -86,6 +86,11 @@ public static class FluidFileWriter
             Line(text, "vapour_pressure_equation", $"reduce {Number(vp.Form.CriticalTemperature)} K {Number(vp.Form.CriticalPressure)} Pa terms {terms} | {vp.Source}");
         }
 
+        foreach (var shift in fluid.VolumeShifts)
+        {
+            Quantity(text, shift.Model == Models.CubicModelKind.SoaveRedlichKwong ? "volume_shift_srk" : "volume_shift_pr", shift.Shift, "m3/mol");
+        }
+
         foreach (var set in fluid.AlphaParameters)
         {
             string key = $"{Models.CubicModel.AlphaKeyStem(set.Form)}_{(set.Model == Models.CubicModelKind.SoaveRedlichKwong ? "srk" : "pr")}";

@@ -24,6 +24,10 @@ public sealed record TuningRequest
     /// <summary>The measured vapour pressures.</summary>
     public required IReadOnlyList<VapourPressurePoint> VapourPressures { get; init; }
 
+    /// <summary>Measured saturated-liquid densities (mol/m³), to which a constant volume
+    /// translation is fitted after the alpha function; empty for none.</summary>
+    public IReadOnlyList<LiquidDensityPoint> LiquidDensities { get; init; } = [];
+
     /// <summary>Where the data came from (file name and checksum), for the provenance.</summary>
     public string DataOrigin { get; init; } = "data given in process";
 
@@ -79,6 +83,9 @@ public sealed record TuningResult
 
     /// <summary>Each data point before and after.</summary>
     public required IReadOnlyList<TuningComparison> Comparisons { get; init; }
+
+    /// <summary>The volume translation fitted to the liquid densities, or null when none were given.</summary>
+    public VolumeShiftFit? VolumeShift { get; init; }
 
     /// <summary>Whether α is convex over 0 &lt; T ≤ Tc (reported; required for Twu).</summary>
     public required bool Convex { get; init; }
@@ -226,6 +233,20 @@ public static class AlphaTuner
         }
 
         var tunedModel = CubicModel.For(request.Kind, tuned);
+        VolumeShiftFit? shiftFit = null;
+        if (request.LiquidDensities.Count > 0)
+        {
+            // After the alpha function: the translation leaves Psat and every phase difference as tuned.
+            shiftFit = VolumeShiftTuner.Fit(tunedModel, request.LiquidDensities, minimum);
+            var own = request.Kind == CubicModelKind.SoaveRedlichKwong ? CubicModelKind.SoaveRedlichKwong : CubicModelKind.PengRobinson;
+            string shiftLabel = $"fitted by phaseslope tune to {request.LiquidDensities.Count} saturated-liquid densities ({request.DataOrigin}) on {date}; AAD of the liquid density "
+                + string.Create(CultureInfo.InvariantCulture, $"{shiftFit.AadBeforePercent:0.###} % before, {shiftFit.AadAfterPercent:0.###} % after");
+            tuned = tuned with
+            {
+                VolumeShifts = [.. tuned.VolumeShifts.Where(v => v.Model != own), new FluidVolumeShift(own, new SourcedValue(shiftFit.Shift, shiftLabel, shiftFit.StandardError))],
+            };
+        }
+
         var before = new CoexistenceSolver(baseModel, minimum);
         var after = new CoexistenceSolver(tunedModel, minimum);
         var sorted = data.OrderBy(d => d.Temperature).ToArray();
@@ -244,6 +265,7 @@ public static class AlphaTuner
             Fit = fit,
             Comparisons = comparisons,
             Convex = convex,
+            VolumeShift = shiftFit,
         };
         string statistics = string.Create(CultureInfo.InvariantCulture,
             $"AAD of P {result.AadBeforePercent:0.####} % before, {result.AadAfterPercent:0.####} % after; max {result.MaximumBeforePercent:0.####} % before, {result.MaximumAfterPercent:0.####} % after");

@@ -76,6 +76,45 @@ public sealed class TuneCommandTests : IDisposable
     }
 
     [Fact]
+    public void LiquidDensityColumn_FitsAVolumeTranslation_ThatCoexistUses()
+    {
+        // Water: IAPWS saturation pressures and saturated-liquid densities (Wagner & Pruss 1993
+        // equations, coefficients from memory) at 300, 350 and 400 K, as a user's file would hold them.
+        string data = _folder.File("w.csv");
+        File.WriteAllText(data, "T [K],P [kPa],rho_L [kg/m3]\n300,3.5368,996.51\n350,41.682,973.70\n400,245.77,937.49\n");
+        string fluid = _folder.File("w.fluid");
+        var result = Run("tune", data, "--fluid", "water", "--out", fluid, "--format", "json");
+        Assert.True(result.ExitCode == 0, result.ToString());
+        using var document = StrictJson.Parse(result.Stdout);
+        var shift = document.RootElement.GetProperty("volume_shift");
+        // Peng–Robinson water is ~16 % light here; the translation brings it within ~2 %.
+        Assert.True(shift.GetProperty("liquid_density_aad_before_percent").GetDouble() > 10);
+        Assert.True(shift.GetProperty("liquid_density_aad_after_percent").GetDouble() < 2);
+        var tuned = FluidFile.Parse(new StringReader(File.ReadAllText(fluid)), fluid);
+        AssertRelative(shift.GetProperty("value_m3_mol").GetDouble(), Assert.Single(tuned.VolumeShifts).Shift.Value, 1e-15, "volume_shift_pr in the file");
+
+        // coexist uses the file's translation by default and not with --volume-shift none; Psat is the same.
+        var own = RunJson("coexist", fluid, "-T", "350", "--format", "json");
+        var none = RunJson("coexist", fluid, "-T", "350", "--format", "json", "--volume-shift", "none");
+        // Equal in exact arithmetic; the translated cubic's terms are summed differently (1e-13 covers that rounding).
+        AssertRelative(none.GetProperty("pressure_Pa").GetDouble(), own.GetProperty("pressure_Pa").GetDouble(), 1e-13, "Psat with and without the translation");
+        double measured = 973.70 / 0.018015268;
+        double ownDensity = own.GetProperty("liquid").GetProperty("density_mol_m3").GetDouble();
+        double noneDensity = none.GetProperty("liquid").GetProperty("density_mol_m3").GetDouble();
+        Assert.True(Math.Abs(ownDensity / measured - 1) < Math.Abs(noneDensity / measured - 1) / 5, $"{ownDensity} vs {noneDensity}");
+    }
+
+    [Fact]
+    public void MassDensityWithoutMolarMass_IsADataFileError()
+    {
+        string data = _folder.File("d.csv");
+        File.WriteAllText(data, "T [K],P [kPa],rho_L [kg/m3]\n400,245.77,937.49\n450,932.2,890.3\n");
+        string fluid = _folder.File("d.fluid");
+        AssertFailure(Run("tune", data, "--tc", "647.096", "--pc", "22.064MPa", "--name", "w", "--out", fluid), ExitCodes.DataFile, "needs the molar mass");
+        Assert.False(File.Exists(fluid));
+    }
+
+    [Fact]
     public void OnePoint_TunesTheAcentricFactorOnly()
     {
         string data = _folder.File("one.csv");
