@@ -115,6 +115,20 @@ public sealed class TuneCommandTests : IDisposable
     }
 
     [Fact]
+    public void BaseAndTunedModels_PlotTogetherOverTheData()
+    {
+        // The figure of the job: the untuned and tuned models against the user's points.
+        string fluid = _folder.File("frc-p.fluid");
+        Assert.Equal(0, Run("tune", FitData.ExampleCsv, "--fluid", FitData.ExampleFluid, "--out", fluid).ExitCode);
+        string figure = _folder.File("overlay.svg");
+        var result = Run("plot", $"{FitData.ExampleFluid},{fluid}", "--diagram", "lnp-invt", "--data", FitData.ExampleCsv, "--out", figure);
+        Assert.True(result.ExitCode == 0, result.ToString());
+        string svg = File.ReadAllText(figure);
+        Assert.Contains("frc-7-tuned", svg, StringComparison.Ordinal);
+        Assert.Contains("measured", svg, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void OnePoint_TunesTheAcentricFactorOnly()
     {
         string data = _folder.File("one.csv");
