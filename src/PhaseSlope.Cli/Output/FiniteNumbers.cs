@@ -26,6 +26,24 @@ internal static class FiniteNumbers
     /// <summary>Writes an array element that must be finite; <paramref name="what"/> names it in the error.</summary>
     public static void WriteFiniteValue(this Utf8JsonWriter json, double value, string what) => json.WriteNumberValue(Check(value, what));
 
+    /// <summary>Writes a square matrix as an array of rows, every element finite.</summary>
+    public static void WriteFiniteMatrix(this Utf8JsonWriter json, string key, double[,] matrix)
+    {
+        json.WriteStartArray(key);
+        for (int i = 0; i < matrix.GetLength(0); i++)
+        {
+            json.WriteStartArray();
+            for (int j = 0; j < matrix.GetLength(1); j++)
+            {
+                json.WriteFiniteValue(matrix[i, j], key);
+            }
+
+            json.WriteEndArray();
+        }
+
+        json.WriteEndArray();
+    }
+
     /// <summary>Writes a member that may be undefined: a number when finite, else <c>null</c>.</summary>
     public static void WriteNumberOrNull(this Utf8JsonWriter json, string key, double? value)
     {

@@ -252,19 +252,7 @@ internal static class FitWriter
             }
 
             json.WriteEndObject();
-            json.WriteStartArray("covariance");
-            for (int i = 0; i < fit.Parameters.Count; i++)
-            {
-                json.WriteStartArray();
-                for (int j = 0; j < fit.Parameters.Count; j++)
-                {
-                    json.WriteFiniteValue(fit.Covariance[i, j], "covariance");
-                }
-
-                json.WriteEndArray();
-            }
-
-            json.WriteEndArray();
+            json.WriteFiniteMatrix("covariance", fit.Covariance);
             json.WriteNull("covariance_undefined_reason");
         }
         else
@@ -333,19 +321,7 @@ internal static class FitWriter
             }
 
             json.WriteEndObject();
-            json.WriteStartArray("covariance");
-            for (int i = 0; i < p; i++)
-            {
-                json.WriteStartArray();
-                for (int j = 0; j < p; j++)
-                {
-                    json.WriteFiniteValue(covariance[i, j], "covariance");
-                }
-
-                json.WriteEndArray();
-            }
-
-            json.WriteEndArray();
+            json.WriteFiniteMatrix("covariance", covariance);
         }
         else
         {

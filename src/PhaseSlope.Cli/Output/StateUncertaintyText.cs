@@ -24,13 +24,7 @@ internal sealed record StateUncertaintyText(StateUncertainty Values, Uncertainty
 
     public void WriteJson(Utf8JsonWriter json)
     {
-        json.WriteStartObject("standard_uncertainty");
-        json.WriteString("method", Summary.Choice.MethodName);
-        if (Summary.Choice.Method == PropagationMethod.MonteCarlo)
-        {
-            json.WriteNumber("samples", Summary.Choice.Samples);
-            json.WriteNumber("seed", Summary.Choice.Seed);
-        }
+        UncertaintyText.StartObject(json, Summary.Choice);
 
         foreach (var q in Quantities)
         {

@@ -109,19 +109,7 @@ internal static class TuneWriter
         json.WriteEndArray();
         if (result.Fit is { CovarianceDefined: true } fit)
         {
-            json.WriteStartArray("covariance");
-            for (int i = 0; i < fit.Parameters.Count; i++)
-            {
-                json.WriteStartArray();
-                for (int j = 0; j < fit.Parameters.Count; j++)
-                {
-                    json.WriteFiniteValue(fit.Covariance[i, j], "covariance");
-                }
-
-                json.WriteEndArray();
-            }
-
-            json.WriteEndArray();
+            json.WriteFiniteMatrix("covariance", fit.Covariance);
         }
         else
         {

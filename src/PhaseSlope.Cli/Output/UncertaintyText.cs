@@ -37,13 +37,7 @@ internal static class UncertaintyText
     /// <summary>The JSON member <c>standard_uncertainty</c> of one state.</summary>
     public static void WriteJson(Utf8JsonWriter json, CoexistenceUncertainty values, UncertaintySummary summary)
     {
-        json.WriteStartObject("standard_uncertainty");
-        json.WriteString("method", summary.Choice.MethodName);
-        if (summary.Choice.Method == PropagationMethod.MonteCarlo)
-        {
-            json.WriteNumber("samples", summary.Choice.Samples);
-            json.WriteNumber("seed", summary.Choice.Seed);
-        }
+        StartObject(json, summary.Choice);
 
         foreach (var q in Quantities)
         {
@@ -61,6 +55,19 @@ internal static class UncertaintyText
 
         WriteInputs(json, summary.Inputs);
         json.WriteEndObject();
+    }
+
+    /// <summary>Opens the <c>standard_uncertainty</c> object with the method (and, for Monte Carlo,
+    /// the samples and seed), as every state's uncertainty begins.</summary>
+    public static void StartObject(Utf8JsonWriter json, UncertaintyChoice choice)
+    {
+        json.WriteStartObject("standard_uncertainty");
+        json.WriteString("method", choice.MethodName);
+        if (choice.Method == PropagationMethod.MonteCarlo)
+        {
+            json.WriteNumber("samples", choice.Samples);
+            json.WriteNumber("seed", choice.Seed);
+        }
     }
 
     /// <summary>The array <c>inputs</c>: each uncertain input with its value, u and source.</summary>
