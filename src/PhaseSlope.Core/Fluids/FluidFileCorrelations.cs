@@ -356,10 +356,13 @@ internal sealed partial class FluidFileParser
             throw Fail(line, key, $"'{tokens[3]}' is not a positive critical pressure");
         }
 
-        if (!Units.UnitTable.TryFind(tokens[4], out var unit, Units.Dimension.Pressure) || unit is null)
+        string[] allowed = FluidUnits.Allowed(Units.Dimension.Pressure);
+        if (Array.IndexOf(allowed, tokens[4]) < 0)
         {
-            throw Fail(line, key, $"'{tokens[4]}' is not a pressure unit");
+            throw Fail(line, key, $"wrong pressure unit '{tokens[4]}'; allowed: {string.Join(", ", allowed)}");
         }
+
+        var unit = FluidUnits.Get(tokens[4]);
 
         double pc = unit.ToSi(pcNumber);
         var coefficients = new List<double>();

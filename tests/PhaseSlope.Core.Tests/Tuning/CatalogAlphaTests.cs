@@ -88,3 +88,32 @@ public sealed class CatalogAlphaTests(ITestOutputHelper output)
         }
     }
 }
+
+public sealed class VapourPressureEquationLineTests
+{
+    private const string Header = "format phaseslope-fluid 1\nname x\ncritical_temperature 647.096 K | t\ncritical_pressure 22.064 MPa | t\nacentric_factor 0.344 | t\n";
+
+    [Fact]
+    public void Line_ReadAndWrittenBack_GivesTheSamePressures()
+    {
+        // The IAPWS saturation equation (Wagner & Pruss 1993, coefficients from memory) written as a
+        // file line, read, written by the writer and read again: the same pressure to the bit.
+        string line = "vapour_pressure_equation reduce 647.096 K 22.064 MPa terms -7.85951783^1 1.84408259^1.5 -11.7866497^3 22.6807411^3.5 -15.9618719^4 1.80122502^7.5 | test\n";
+        var fluid = FluidFile.Parse(new StringReader(Header + line), "t.fluid");
+        var again = FluidFile.Parse(new StringReader(FluidFileWriter.Format(fluid)), "u.fluid");
+        // 101.418 kPa at 100 °C from the equation (the steam-table value, to its digits).
+        AssertClose.Relative(101418, fluid.VapourPressureEquation!.Pressure(373.15), 1e-5, "Psat at 100 °C");
+        Assert.Equal(fluid.VapourPressureEquation.Pressure(400), again.VapourPressureEquation!.Pressure(400));
+    }
+
+    [Theory]
+    [InlineData("reduce 647.096 K 22.064 mpa terms -7.8^1 | s", "wrong pressure unit 'mpa'")]
+    [InlineData("reduce 647.096 K 22.064 MPa terms -7.8 | s", "malformed term '-7.8'")]
+    [InlineData("reduce 647.096 K 22.064 MPa terms -7.8^0 | s", "positive exponent")]
+    [InlineData("647.096 K 22.064 MPa terms -7.8^1 | s", "malformed equation")]
+    public void BadLine_IsRefusedNamingTheProblem(string value, string message)
+    {
+        var ex = Assert.Throws<PhaseSlope.Core.Errors.FluidDataException>(() => FluidFile.Parse(new StringReader(Header + "vapour_pressure_equation " + value + "\n"), "t.fluid"));
+        Assert.Contains(message, ex.Message, StringComparison.Ordinal);
+    }
+}
