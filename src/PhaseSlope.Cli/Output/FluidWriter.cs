@@ -122,6 +122,8 @@ internal static class FluidWriter
         }
 
         json.WriteEndObject();
+        WriteModelData(json, fluid);
+        WriteOptional(json, "provenance", fluid.Provenance);
         WriteOptional(json, "remarks", fluid.Remarks);
         json.WriteString("origin", fluid.Origin);
         json.WriteEndObject();
@@ -231,12 +233,122 @@ internal static class FluidWriter
         {
             text.AppendLine($"ideal-gas heat capacity: {NumberText.Table(cp.MinimumTemperature)}-{NumberText.Table(cp.MaximumTemperature)} K; {cp.Source}");
         }
+        if (fluid.VapourPressureEquation is { } vp)
+        {
+            text.AppendLine($"vapour-pressure equation: ln(P/Pc) = (Tc/T) sum N_i tau^t_i, Tc = {NumberText.Table(vp.Form.CriticalTemperature)} K, Pc = {NumberText.Table(vp.Form.CriticalPressure / 1e3)} kPa, "
+                + $"N^t = {string.Join(" ", vp.Coefficients.Select((n, i) => $"{NumberText.RoundTrip(n)}^{NumberText.RoundTrip(vp.Form.Exponents[i])}"))}; {vp.Source}");
+        }
+
+        foreach (var set in fluid.AlphaParameters)
+        {
+            var names = CubicModel.AlphaParameterNames(set.Form);
+            text.AppendLine($"{CubicModel.AlphaName(set.Form)} alpha ({set.Model.Title()}): {string.Join(", ", set.Values.Select((v, i) => $"{names[i]} = {NumberText.RoundTrip(v)}"))}"
+                + $"{(set.Covariance is null ? "" : ", with covariance")}; {set.Source}");
+        }
+
+        if (fluid.PreferredAlpha != AlphaForm.Default)
+        {
+            text.AppendLine($"alpha used by default: {CubicModel.AlphaName(fluid.PreferredAlpha)}");
+        }
+
+        foreach (var shift in fluid.VolumeShifts)
+        {
+            text.AppendLine($"volume translation ({shift.Model.Title()}): c = {NumberText.Table(shift.Shift.Value * 1e6)} cm3/mol; {shift.Shift.Source}");
+        }
+
+        if (fluid.Provenance is not null)
+        {
+            text.AppendLine($"provenance: {fluid.Provenance}");
+        }
+
         if (fluid.Remarks is not null)
         {
             text.AppendLine($"remarks: {fluid.Remarks}");
         }
 
         return text.ToString();
+    }
+
+    /// <summary>The published vapour-pressure equation, fluid-specific alpha parameters and
+    /// volume translations, each with its source.</summary>
+    private static void WriteModelData(Utf8JsonWriter json, Fluid fluid)
+    {
+        if (fluid.VapourPressureEquation is { } vp)
+        {
+            json.WriteStartObject("vapour_pressure_equation");
+            json.WriteFinite("critical_temperature_K", vp.Form.CriticalTemperature);
+            json.WriteFinite("critical_pressure_Pa", vp.Form.CriticalPressure);
+            json.WriteStartArray("coefficients");
+            foreach (double n in vp.Coefficients)
+            {
+                json.WriteFiniteValue(n, "coefficients");
+            }
+
+            json.WriteEndArray();
+            json.WriteStartArray("exponents");
+            foreach (double t in vp.Form.Exponents)
+            {
+                json.WriteFiniteValue(t, "exponents");
+            }
+
+            json.WriteEndArray();
+            json.WriteString("source", vp.Source);
+            json.WriteEndObject();
+        }
+        else
+        {
+            json.WriteNull("vapour_pressure_equation");
+        }
+
+        json.WriteStartArray("alpha_parameters");
+        foreach (var set in fluid.AlphaParameters)
+        {
+            json.WriteStartObject();
+            json.WriteString("alpha", CubicModel.AlphaKeyStem(set.Form));
+            json.WriteString("eos", set.Model.Id());
+            json.WriteStartObject("values");
+            var names = CubicModel.AlphaParameterNames(set.Form);
+            for (int i = 0; i < set.Values.Count; i++)
+            {
+                json.WriteFinite(names[i], set.Values[i]);
+            }
+
+            json.WriteEndObject();
+            if (set.Covariance is { } covariance)
+            {
+                json.WriteFiniteMatrix("covariance", covariance);
+            }
+            else
+            {
+                json.WriteNull("covariance");
+            }
+
+            json.WriteString("source", set.Source);
+            json.WriteEndObject();
+        }
+
+        json.WriteEndArray();
+        if (fluid.PreferredAlpha != AlphaForm.Default)
+        {
+            json.WriteString("alpha_default", CubicModel.AlphaKeyStem(fluid.PreferredAlpha));
+        }
+        else
+        {
+            json.WriteNull("alpha_default");
+        }
+
+        json.WriteStartArray("volume_shifts");
+        foreach (var shift in fluid.VolumeShifts)
+        {
+            json.WriteStartObject();
+            json.WriteString("eos", shift.Model.Id());
+            json.WriteFinite("value_m3_mol", shift.Shift.Value);
+            json.WriteNumberOrNull("standard_uncertainty_m3_mol", shift.Shift.StandardUncertainty);
+            json.WriteString("source", shift.Shift.Source);
+            json.WriteEndObject();
+        }
+
+        json.WriteEndArray();
     }
 
     private static string DisplayUncertainty(Field field, double si, UnitSystem units, double molarMass)

@@ -182,3 +182,20 @@ public sealed class TuneCommandTests : IDisposable
         Assert.Equal("keep me", File.ReadAllText(fluid));
     }
 }
+
+public sealed class FluidShowModelDataTests
+{
+    [Fact]
+    public void Propane_ShowsItsPublishedEquationAndDerivedConstants()
+    {
+        var json = RunJson("fluids", "show", "propane", "--format", "json");
+        var equation = json.GetProperty("vapour_pressure_equation");
+        // Lemmon, McLinden & Wagner 2009 ancillary equation (coefficients from memory): five terms.
+        Assert.Equal(5, equation.GetProperty("coefficients").GetArrayLength());
+        Assert.Contains("Lemmon", equation.GetProperty("source").GetString(), StringComparison.Ordinal);
+        var sets = json.GetProperty("alpha_parameters").EnumerateArray().ToArray();
+        Assert.Equal(["pr", "srk"], sets.Select(s => s.GetProperty("eos").GetString()!).ToArray());
+        Assert.All(sets, s => Assert.Contains("derived by phaseslope tune", s.GetProperty("source").GetString(), StringComparison.Ordinal));
+        Assert.Equal(JsonValueKind.Null, json.GetProperty("alpha_default").ValueKind);
+    }
+}
