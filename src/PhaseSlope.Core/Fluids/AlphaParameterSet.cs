@@ -20,4 +20,12 @@ public sealed record AlphaParameterSet(AlphaForm Form, CubicModelKind Model, IRe
     /// <summary>The parameters' covariance matrix (from a fit to data, e.g. <c>phaseslope tune</c>),
     /// or null when the source gives none.</summary>
     public double[,]? Covariance { get; init; }
+
+    /// <summary>How the tuned parameters would move with the critical constants they were tuned
+    /// with, ∂θ_j/∂Tc (1/K) in column 0 and ∂θ_j/∂Pc (1/Pa) in column 1, or null. A tuning holds
+    /// Tc and Pc fixed; a different Tc or Pc would have given other parameters that reproduce the
+    /// same data, so in the propagation the parameters move with Tc and Pc (their covariance with
+    /// them is this sensitivity times u²), which keeps the uncertainty inside the data at the level
+    /// the data support.</summary>
+    public double[,]? CriticalSensitivity { get; init; }
 }

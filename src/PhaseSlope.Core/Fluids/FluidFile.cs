@@ -107,6 +107,7 @@ internal sealed partial class FluidFileParser
     private const string KeyAlphaSoavePr = "alpha_soave_pr";
     private const string KeyAlphaSoaveSrk = "alpha_soave_srk";
     private const string CovarianceSuffix = "_covariance";
+    private const string SensitivitySuffix = "_critical_sensitivity";
     private const string KeyAlphaDefault = "alpha_default";
     private const string KeyProvenance = "provenance";
     private const string KeyVapourPressureEquation = "vapour_pressure_equation";
@@ -125,7 +126,7 @@ internal sealed partial class FluidFileParser
         KeyMolarMass, KeyCriticalTemperature, KeyCriticalPressure, KeyAcentricFactor,
         KeyCriticalDensity, KeyCriticalMolarVolume, KeyNormalBoilingPoint,
         KeyTriplePointTemperature, KeyIdealGasCp, KeyVapourPressureEquation, KeyVolumeShiftPr, KeyVolumeShiftSrk,
-        .. AlphaKeys, .. AlphaKeys.Select(k => k + CovarianceSuffix), KeyAlphaDefault,
+        .. AlphaKeys, .. AlphaKeys.Select(k => k + CovarianceSuffix), .. AlphaKeys.Select(k => k + SensitivitySuffix), KeyAlphaDefault,
         KeyProvenance, KeyRemarks,
     ];
 
@@ -159,6 +160,7 @@ internal sealed partial class FluidFileParser
     private IdealGasHeatCapacity? _idealGasCp;
     private readonly List<AlphaParameterSet> _alphaParameters = [];
     private readonly Dictionary<string, (int Line, double[] UpperTriangle)> _alphaCovariances = new(StringComparer.Ordinal);
+    private readonly Dictionary<string, (int Line, double[] Values)> _alphaSensitivities = new(StringComparer.Ordinal);
     private AlphaForm _preferredAlpha = AlphaForm.Default;
     private PublishedVapourPressure? _vapourPressureEquation;
 
@@ -383,6 +385,9 @@ internal sealed partial class FluidFileParser
                 break;
             case KeyAlphaDefault:
                 _preferredAlpha = ReadAlphaDefault(line, key, rest);
+                break;
+            case var sensitivity when sensitivity.EndsWith(SensitivitySuffix, StringComparison.Ordinal):
+                _alphaSensitivities[key[..^SensitivitySuffix.Length]] = (line, ReadSensitivity(line, key, rest));
                 break;
             case var covariance when covariance.EndsWith(CovarianceSuffix, StringComparison.Ordinal):
                 _alphaCovariances[key[..^CovarianceSuffix.Length]] = (line, ReadCovariance(line, key, rest));

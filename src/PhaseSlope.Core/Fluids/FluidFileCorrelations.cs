@@ -274,6 +274,26 @@ internal sealed partial class FluidFileParser
         return values;
     }
 
+    /// <summary>Reads ∂θ_j/∂Tc (1/K) for every parameter, then ∂θ_j/∂Pc (1/Pa).</summary>
+    private double[] ReadSensitivity(int line, string key, string rest)
+    {
+        string stem = key[..^SensitivitySuffix.Length];
+        if (Array.IndexOf(AlphaKeys, stem) < 0)
+        {
+            throw Fail(line, key, "unknown key");
+        }
+
+        int count = 2 * CubicModel.AlphaParameterNames(AlphaKeyMeaning(stem).Form).Count;
+        _ = ReadSource(line, key, rest, out string body);
+        string[] tokens = body.Split((char[]?)null, StringSplitOptions.RemoveEmptyEntries);
+        if (tokens.Length != count)
+        {
+            throw Fail(line, key, $"expected {count} numbers (d parameter/d Tc in 1/K for each parameter, then d parameter/d Pc in 1/Pa), found {tokens.Length}");
+        }
+
+        return [.. tokens.Select((t, i) => ParseNumber(line, key, t, $"sensitivity {i + 1}"))];
+    }
+
     /// <summary>Reads <c>alpha_default soave|twu|mathias-copeman</c>.</summary>
     private AlphaForm ReadAlphaDefault(int line, string key, string rest) => rest switch
     {
@@ -327,6 +347,26 @@ internal sealed partial class FluidFileParser
             }
 
             sets[index] = sets[index] with { Covariance = matrix };
+        }
+
+        foreach (var (stem, (line, values)) in _alphaSensitivities)
+        {
+            var (form, model) = AlphaKeyMeaning(stem);
+            int index = sets.FindIndex(s => s.Form == form && s.Model == model);
+            if (index < 0)
+            {
+                throw Fail(line, stem + SensitivitySuffix, $"a sensitivity without its parameters: '{stem}' is not given");
+            }
+
+            int p = sets[index].Values.Count;
+            var matrix = new double[p, 2];
+            for (int j = 0; j < p; j++)
+            {
+                matrix[j, 0] = values[j];
+                matrix[j, 1] = values[p + j];
+            }
+
+            sets[index] = sets[index] with { CriticalSensitivity = matrix };
         }
 
         if (_preferredAlpha != AlphaForm.Default && !sets.Any(s => s.Form == _preferredAlpha))

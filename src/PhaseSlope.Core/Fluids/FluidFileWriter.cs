@@ -108,6 +108,13 @@ public static class FluidFileWriter
 
                 Line(text, key + "_covariance", $"{string.Join(' ', upper)} | {set.Source}");
             }
+
+            if (set.CriticalSensitivity is { } d)
+            {
+                var column = Enumerable.Range(0, set.Values.Count);
+                string values = string.Join(' ', column.Select(j => Number(d[j, 0])).Concat(column.Select(j => Number(d[j, 1]))));
+                Line(text, key + "_critical_sensitivity", $"{values} | how the tuned parameters move with Tc (1/K) and Pc (1/Pa) at the same data; {set.Source}");
+            }
         }
 
         if (fluid.PreferredAlpha != Models.AlphaForm.Default)

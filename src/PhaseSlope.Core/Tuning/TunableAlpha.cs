@@ -55,7 +55,10 @@ public abstract class TunableAlpha
                 family.Gradient(t, criticalTemperature, values, g);
                 family.SlopeGradient(t, criticalTemperature, values, gs);
                 return (g[k], gs[k]);
-            });
+            })
+        {
+            CriticalSensitivity = set.CriticalSensitivity is { } d ? Matrix<double>.Build.DenseOfArray(d) : null,
+        };
     }
 
     /// <summary>Starting parameters equivalent (or close) to the model's own alpha function for ω.</summary>

@@ -19,4 +19,9 @@ public sealed record AlphaParameterUncertainty(
     IReadOnlyList<UncertainInput> Parameters,
     Matrix<double> Covariance,
     Func<double, IReadOnlyList<double>, IAlphaFunction> Alpha,
-    Func<double, int, (double Value, double TemperatureDerivative)> Sensitivity);
+    Func<double, int, (double Value, double TemperatureDerivative)> Sensitivity)
+{
+    /// <summary>∂p_k/∂Tc (column 0) and ∂p_k/∂Pc (column 1) of a tuning, or null: the parameters
+    /// then covary with Tc and Pc (see <see cref="Fluids.AlphaParameterSet.CriticalSensitivity"/>).</summary>
+    public Matrix<double>? CriticalSensitivity { get; init; }
+}

@@ -75,6 +75,25 @@ public sealed class CubicParameterization
         if (alphaParameters is not null)
         {
             covariance.SetSubMatrix(3, 3, alphaParameters.Covariance);
+            if (alphaParameters.CriticalSensitivity is { } d)
+            {
+                // Tuned parameters follow Tc and Pc: θ = θ0 + D·(x − x0) + ε with ε the fit's own
+                // scatter, so Cov(θ, x) = D·Σx and Cov(θ, θ) = Σfit + D·Σx·Dᵀ (x = Tc, Pc).
+                for (int j = 0; j < extra; j++)
+                {
+                    for (int m = 0; m < 2; m++)
+                    {
+                        double cross = d[j, m] * covariance[m, m];
+                        covariance[3 + j, m] = cross;
+                        covariance[m, 3 + j] = cross;
+                    }
+
+                    for (int k = 0; k < extra; k++)
+                    {
+                        covariance[3 + j, 3 + k] += d[j, 0] * covariance[0, 0] * d[k, 0] + d[j, 1] * covariance[1, 1] * d[k, 1];
+                    }
+                }
+            }
         }
 
         Covariance = covariance;

@@ -72,7 +72,12 @@ public sealed class TuneCommandTests : IDisposable
         var row = document.RootElement[2].GetProperty("standard_uncertainty");
         string[] names = [.. row.GetProperty("inputs").EnumerateArray().Select(i => i.GetProperty("name").GetString()!)];
         Assert.Equal(["critical_temperature_K", "critical_pressure_Pa", "acentric_factor", "alpha_c1", "alpha_c2", "alpha_c3"], names);
-        Assert.True(row.GetProperty("pressure_Pa").GetDouble() > 0);
+        // Inside the data (row 2 is at 351 K; the data span 300-480 K) the tuned parameters follow
+        // Tc and Pc (their critical sensitivity), so u(P) stays at the level of the data's 0.3 %
+        // scatter over 14 points: measured 0.13 %; without the sensitivity it was 2.9 %, the
+        // family-default u(Tc) and u(Pc) taken as if the data did not pin Psat there.
+        double pressure = document.RootElement[2].GetProperty("pressure_Pa").GetDouble();
+        Assert.InRange(row.GetProperty("pressure_Pa").GetDouble() / pressure, 1e-4, 0.005);
     }
 
     [Fact]
