@@ -141,17 +141,27 @@ public sealed class CubicParameterization
         return CubicModel.For(Kind, FluidFor(values), _alpha, shift);
     }
 
-    /// <summary>The fluid with Tc, Pc and ω replaced by the first three values (everything else,
-    /// such as the ideal-gas heat capacity, kept).</summary>
+    /// <summary>The fluid with Tc, Pc and ω replaced by the first three values and, for uncertain
+    /// alpha parameters, its parameter set by the rest (everything else, such as the ideal-gas heat
+    /// capacity, kept).</summary>
     public Fluid FluidFor(IReadOnlyList<double> values)
     {
         ArgumentNullException.ThrowIfNull(values);
-        return _fluid with
+        var fluid = _fluid with
         {
             CriticalTemperature = _fluid.CriticalTemperature with { Value = values[0] },
             CriticalPressure = _fluid.CriticalPressure with { Value = values[1] },
             AcentricFactor = _fluid.AcentricFactor with { Value = values[2] },
         };
+        if (_alphaParameters is not null && CubicModel.FindParameters(_fluid, Kind, _alpha) is { } set)
+        {
+            // The fluid's own parameter set takes the sampled values too, so that a property
+            // engine built from this fluid uses the same model as Build.
+            double[] own = [.. values.Skip(3)];
+            fluid = fluid with { AlphaParameters = [.. _fluid.AlphaParameters.Select(s => ReferenceEquals(s, set) ? s with { Values = own } : s)] };
+        }
+
+        return fluid;
     }
 
     /// <summary>The exact derivatives of b, a·α(T), a·α′(T) and c of the nominal model with respect

@@ -204,3 +204,26 @@ public sealed class FluidShowModelDataTests
         Assert.Equal(JsonValueKind.Null, json.GetProperty("alpha_default").ValueKind);
     }
 }
+
+public sealed class TunedStateUncertaintyTests : IDisposable
+{
+    private readonly TempFolder _folder = new();
+
+    public void Dispose() => _folder.Dispose();
+
+    [Fact]
+    public void State_LinearAndMonteCarlo_AgreeForATunedFluid()
+    {
+        // Both methods must see the same inputs, the tuned parameters included: Monte Carlo
+        // (20 000 samples: the standard error of a standard deviation is 1/sqrt(2N) = 0.5 %) within
+        // 3 % of the linear value for the liquid density and residual enthalpy (invented FRC-7 data).
+        string fluid = _folder.File("s.fluid");
+        Assert.Equal(0, Run("tune", FitData.ExampleCsv, "--tc", "540", "--pc", "3.1MPa", "--name", "frc-s", "--out", fluid).ExitCode);
+        var linear = RunJson("state", fluid, "-T", "400", "-P", "1MPa", "--uncertainty", "linear", "--format", "json").GetProperty("standard_uncertainty");
+        var monte = RunJson("state", fluid, "-T", "400", "-P", "1MPa", "--uncertainty", "monte-carlo", "--samples", "20000", "--seed", "7", "--format", "json").GetProperty("standard_uncertainty");
+        foreach (string key in new[] { "density_mol_m3", "residual_enthalpy_J_mol" })
+        {
+            AssertRelative(linear.GetProperty(key).GetDouble(), monte.GetProperty(key).GetDouble(), 0.03, key);
+        }
+    }
+}
