@@ -53,7 +53,8 @@ internal static class StateCommand
                 var sample = point with { Fluid = parameters.FluidFor(x) };
                 var (_, s) = sample.Evaluate();
                 return new StateValues(s.Density, point.Pressure ?? s.Pressure, s.CompressibilityFactor, s.ResidualEnthalpy,
-                    s.ResidualEntropy ?? throw new Core.Errors.InvalidInputException("state", s.Density, "residual entropy undefined"));
+                    s.ResidualEntropy ?? throw new Core.Errors.InvalidInputException("state", s.Density, "residual entropy undefined"),
+                    s.IsobaricHeatCapacity, s.IsochoricHeatCapacity, s.IsothermalCompressibility, s.IsobaricExpansivity, s.JouleThomsonCoefficient);
             }, choice.Samples, choice.Seed, bar);
         }
 

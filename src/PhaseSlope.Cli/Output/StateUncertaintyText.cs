@@ -20,6 +20,11 @@ internal sealed record StateUncertaintyText(StateUncertainty Values, Uncertainty
         new("compressibility_factor", "u(Z)", null, u => u.CompressibilityFactor),
         new("residual_enthalpy_J_mol", "u(h_r)", DisplayQuantity.MolarEnergy, u => u.ResidualEnthalpy),
         new("residual_entropy_J_molK", "u(s_r)", DisplayQuantity.MolarEntropy, u => u.ResidualEntropy),
+        new("isobaric_heat_capacity_J_molK", "u(cp)", DisplayQuantity.MolarEntropy, u => u.IsobaricHeatCapacity),
+        new("isochoric_heat_capacity_J_molK", "u(cv)", DisplayQuantity.MolarEntropy, u => u.IsochoricHeatCapacity),
+        new("isothermal_compressibility_1_Pa", "u(kappa_T)", null, u => u.IsothermalCompressibility),
+        new("isobaric_expansivity_1_K", "u(alpha)", null, u => u.IsobaricExpansivity),
+        new("joule_thomson_coefficient_K_Pa", "u(mu_JT)", null, u => u.JouleThomsonCoefficient),
     ];
 
     public void WriteJson(Utf8JsonWriter json)
@@ -40,13 +45,22 @@ internal sealed record StateUncertaintyText(StateUncertainty Values, Uncertainty
             json.WriteNull("undefined_reason");
         }
 
+        if (Values.ResponseReason is string responseReason)
+        {
+            json.WriteString("response_functions_undefined_reason", responseReason);
+        }
+        else
+        {
+            json.WriteNull("response_functions_undefined_reason");
+        }
+
         UncertaintyText.WriteInputs(json, Summary.Inputs);
         json.WriteEndObject();
     }
 
-    public IEnumerable<string> CsvHeader => Quantities.Select(q => $"u_{q.Key}").Append("u_undefined_reason");
+    public IEnumerable<string> CsvHeader => Quantities.Select(q => $"u_{q.Key}").Append("u_undefined_reason").Append("u_response_functions_undefined_reason");
 
-    public IEnumerable<string> CsvCells => Quantities.Select(q => NumberText.RoundTripOrEmpty(Checked(q))).Append(Values.Reason ?? "");
+    public IEnumerable<string> CsvCells => Quantities.Select(q => NumberText.RoundTripOrEmpty(Checked(q))).Append(Values.Reason ?? "").Append(Values.ResponseReason ?? "");
 
     public string Table(UnitSystem units, double molarMass)
     {
@@ -66,6 +80,11 @@ internal sealed record StateUncertaintyText(StateUncertainty Values, Uncertainty
         if (Values.Reason is string reason)
         {
             text.AppendLine($"u undefined: {reason}");
+        }
+
+        if (Values.ResponseReason is string responseReason && Values.Reason is null)
+        {
+            text.AppendLine($"u(cp), u(cv), u(kappa_T), u(alpha), u(mu_JT) undefined: {responseReason}");
         }
 
         text.AppendLine("u(h_r) and u(s_r) are those of h and s whenever the reference state does not itself depend on the model (the ideal-gas reference).");

@@ -13,7 +13,26 @@ namespace PhaseSlope.Core.Uncertainty;
 /// <param name="ResidualEntropy">u(s_r), J/(mol·K), likewise.</param>
 /// <param name="Reason">Why the values are null, or null.</param>
 public sealed record StateUncertainty(PropagationMethod Method, double? Density, double? Pressure, double? CompressibilityFactor,
-    double? ResidualEnthalpy, double? ResidualEntropy, string? Reason);
+    double? ResidualEnthalpy, double? ResidualEntropy, string? Reason)
+{
+    /// <summary>u(cp), J/(mol·K), or null (see <see cref="ResponseReason"/>).</summary>
+    public double? IsobaricHeatCapacity { get; init; }
+
+    /// <summary>u(cv), J/(mol·K), or null.</summary>
+    public double? IsochoricHeatCapacity { get; init; }
+
+    /// <summary>u(κT), 1/Pa, or null.</summary>
+    public double? IsothermalCompressibility { get; init; }
+
+    /// <summary>u(α), 1/K, or null.</summary>
+    public double? IsobaricExpansivity { get; init; }
+
+    /// <summary>u(μJT), K/Pa, or null.</summary>
+    public double? JouleThomsonCoefficient { get; init; }
+
+    /// <summary>Why the response functions (cp, cv, κT, α, μJT) have no uncertainty, or null.</summary>
+    public string? ResponseReason { get; init; }
+}
 
 /// <summary>The residual quantities of one state that <see cref="StatePropagation"/> propagates.</summary>
 /// <param name="Density">ρ, mol/m³.</param>
@@ -21,7 +40,14 @@ public sealed record StateUncertainty(PropagationMethod Method, double? Density,
 /// <param name="CompressibilityFactor">Z.</param>
 /// <param name="ResidualEnthalpy">h_r, J/mol.</param>
 /// <param name="ResidualEntropy">s_r, J/(mol·K).</param>
-public readonly record struct StateValues(double Density, double Pressure, double CompressibilityFactor, double ResidualEnthalpy, double ResidualEntropy);
+/// <param name="IsobaricHeatCapacity">cp, J/(mol·K), or null (no ideal-gas cp°, or not evaluated).</param>
+/// <param name="IsochoricHeatCapacity">cv, J/(mol·K), or null.</param>
+/// <param name="IsothermalCompressibility">κT, 1/Pa, or null.</param>
+/// <param name="IsobaricExpansivity">α, 1/K, or null.</param>
+/// <param name="JouleThomsonCoefficient">μJT, K/Pa, or null.</param>
+public readonly record struct StateValues(double Density, double Pressure, double CompressibilityFactor, double ResidualEnthalpy, double ResidualEntropy,
+    double? IsobaricHeatCapacity = null, double? IsochoricHeatCapacity = null, double? IsothermalCompressibility = null,
+    double? IsobaricExpansivity = null, double? JouleThomsonCoefficient = null);
 
 /// <summary>Propagation of the input uncertainties into one single-phase state at a given
 /// (T, P) or (T, ρ).</summary>
@@ -34,6 +60,10 @@ public readonly record struct StateValues(double Density, double Pressure, doubl
 /// derivatives of the Helmholtz function are those of <see cref="LinearPropagation"/>.</remarks>
 public static class StatePropagation
 {
+    /// <summary>Why linear propagation gives no u(cp), u(cv), u(κT), u(α), u(μJT).</summary>
+    public const string LinearResponseReason =
+        "linear propagation covers rho, P, Z, h_r and s_r: cp, cv, kappa_T, alpha and the Joule-Thomson coefficient need second derivatives of the model with respect to its inputs, which are not implemented; --uncertainty monte-carlo gives them";
+
     private const double R = Constants.GasConstant;
 
     /// <summary>The sensitivities of (ρ, P, Z, h_r, s_r) to each input, one row per input.</summary>
@@ -89,7 +119,10 @@ public static class StatePropagation
         var sigma = parameters.Covariance;
         double U(Func<StateValues, double> pick) => LinearPropagation.Combine(rows.Select(pick).ToArray(), sigma);
         return new StateUncertainty(PropagationMethod.Linear, U(r => r.Density), U(r => r.Pressure), U(r => r.CompressibilityFactor),
-            U(r => r.ResidualEnthalpy), U(r => r.ResidualEntropy), null);
+            U(r => r.ResidualEnthalpy), U(r => r.ResidualEntropy), null)
+        {
+            ResponseReason = LinearResponseReason,
+        };
     }
 
     /// <summary>Monte Carlo standard uncertainties of one state: every sample's model evaluates
@@ -147,7 +180,23 @@ public static class StatePropagation
             return Math.Sqrt(squares / (samples - 1));
         }
 
-        return new StateUncertainty(PropagationMethod.MonteCarlo, Std(v => v.Density), Std(v => v.Pressure), Std(v => v.CompressibilityFactor),
-            Std(v => v.ResidualEnthalpy), Std(v => v.ResidualEntropy), null);
+        double? StdOrNull(Func<StateValues, double?> pick)
+            => values.All(v => pick(v!.Value) is double x && double.IsFinite(x)) ? Std(v => pick(v)!.Value) : null;
+
+        var result = new StateUncertainty(PropagationMethod.MonteCarlo, Std(v => v.Density), Std(v => v.Pressure), Std(v => v.CompressibilityFactor),
+            Std(v => v.ResidualEnthalpy), Std(v => v.ResidualEntropy), null)
+        {
+            IsobaricHeatCapacity = StdOrNull(v => v.IsobaricHeatCapacity),
+            IsochoricHeatCapacity = StdOrNull(v => v.IsochoricHeatCapacity),
+            IsothermalCompressibility = StdOrNull(v => v.IsothermalCompressibility),
+            IsobaricExpansivity = StdOrNull(v => v.IsobaricExpansivity),
+            JouleThomsonCoefficient = StdOrNull(v => v.JouleThomsonCoefficient),
+        };
+        return result with
+        {
+            ResponseReason = result.IsobaricHeatCapacity is null
+                ? "u(cp), u(cv) and u(mu_JT) need the ideal-gas heat capacity in every sample (the fluid has none, or a sample's state has no finite value)"
+                : null,
+        };
     }
 }

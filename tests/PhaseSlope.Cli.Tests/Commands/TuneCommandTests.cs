@@ -227,3 +227,23 @@ public sealed class TunedStateUncertaintyTests : IDisposable
         }
     }
 }
+
+public sealed class StateResponseUncertaintyTests
+{
+    [Fact]
+    public void MonteCarlo_GivesResponseFunctionUncertainties_LinearSaysWhyNot()
+    {
+        // Propane liquid at 300 K, 2 MPa with the alkane family defaults: the Monte Carlo spread of
+        // cp is positive and small against cp itself; linear propagation leaves it null with the reason.
+        var monte = RunJson("state", "propane", "-T", "300", "-P", "2MPa", "--uncertainty", "monte-carlo", "--samples", "2000", "--seed", "3", "--format", "json");
+        var u = monte.GetProperty("standard_uncertainty");
+        double cp = monte.GetProperty("isobaric_heat_capacity_J_molK").GetDouble();
+        Assert.InRange(u.GetProperty("isobaric_heat_capacity_J_molK").GetDouble() / cp, 1e-5, 0.2);
+        Assert.True(u.GetProperty("isothermal_compressibility_1_Pa").GetDouble() > 0);
+        Assert.Equal(JsonValueKind.Null, u.GetProperty("response_functions_undefined_reason").ValueKind);
+
+        var linear = RunJson("state", "propane", "-T", "300", "-P", "2MPa", "--uncertainty", "linear", "--format", "json").GetProperty("standard_uncertainty");
+        Assert.Equal(JsonValueKind.Null, linear.GetProperty("isobaric_heat_capacity_J_molK").ValueKind);
+        Assert.Contains("monte-carlo gives them", linear.GetProperty("response_functions_undefined_reason").GetString(), StringComparison.Ordinal);
+    }
+}
