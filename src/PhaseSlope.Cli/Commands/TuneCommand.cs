@@ -35,7 +35,7 @@ internal static class TuneCommand
             }
             catch (FluidDataException ex)
             {
-                throw new UsageException($"{(ex.Field == "name" ? "--name" : ex.Field)}: {ex.Problem}");
+                throw new UsageException($"{OptionOf(ex.Field)}: {ex.Problem}");
             }
 
             string report = TuneWriter.Report(result, request.Format, request.OutPath);
@@ -45,6 +45,18 @@ internal static class TuneCommand
         }));
         return command;
     }
+
+    /// <summary>The option that gave a fluid-file field of the tuned fluid (the others come from
+    /// --fluid's own file, which was read and checked before).</summary>
+    private static string OptionOf(string? field) => field switch
+    {
+        "name" => "--name",
+        "critical_temperature" => "--tc",
+        "critical_pressure" => "--pc",
+        "acentric_factor" => "--omega",
+        "molar_mass" => "--molar-mass",
+        _ => field ?? "the tuned fluid",
+    };
 }
 
 /// <summary>The checked inputs of <c>tune</c>.</summary>
@@ -72,7 +84,7 @@ internal sealed class TuneOptions
     public Option<string> Omega { get; } = new("--omega") { Description = "Acentric factor when no --fluid is given (the start of an alpha tuning; omit it to take it from the data point nearest 0.7 Tc)" };
 
     /// <summary>--molar-mass.</summary>
-    public Option<string> MolarMass { get; } = new("--molar-mass") { Description = "Molar mass when no --fluid is given, e.g. 86.18 g/mol (bare number: kg/mol); optional, needed later only for mass units" };
+    public Option<string> MolarMass { get; } = new("--molar-mass") { Description = "Molar mass with its unit when no --fluid is given, e.g. '86.18 g/mol' (bare number: refused, give g/mol or kg/mol); optional, needed later only for mass units" };
 
     /// <summary>--name.</summary>
     public Option<string> Name { get; } = new("--name") { Description = "Name of the tuned fluid, lower case (needed without --fluid; default with --fluid: its name with '-tuned')" };
@@ -172,6 +184,11 @@ internal sealed class TuneOptions
             {
                 omegaGiven = double.TryParse(o, NumberStyles.Float, CultureInfo.InvariantCulture, out double w) && double.IsFinite(w)
                     ? w : throw new UsageException($"--omega: '{o}' is not a number");
+                if (!(omegaGiven >= FluidFile.AcentricFactorLowest && omegaGiven <= FluidFile.AcentricFactorHighest))
+                {
+                    // The fluid files' range, checked here so that nothing is tuned from a start outside it.
+                    throw new UsageException($"--omega: unphysical value {o}; expected between {FluidFile.AcentricFactorLowest.ToString(CultureInfo.InvariantCulture)} and {FluidFile.AcentricFactorHighest.ToString(CultureInfo.InvariantCulture)}");
+                }
             }
 
             const string given = "given on the command line of phaseslope tune";

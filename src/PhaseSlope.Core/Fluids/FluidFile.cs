@@ -22,6 +22,12 @@ public static class FluidFile
     /// <summary>File name extension of fluid files, with the dot.</summary>
     public const string Extension = ".fluid";
 
+    /// <summary>Lowest accepted acentric factor (the range of a fluid file's acentric_factor).</summary>
+    public const double AcentricFactorLowest = FluidFileParser.AcentricFactorLowest;
+
+    /// <summary>Highest accepted acentric factor.</summary>
+    public const double AcentricFactorHighest = FluidFileParser.AcentricFactorHighest;
+
     /// <summary>Lowest accepted molar mass, kg/mol: 1 g/mol, below the lightest molecule (H2,
     /// 2.016 g/mol) and no lighter than a hydrogen atom.</summary>
     public const double MolarMassLowest = 1e-3;
