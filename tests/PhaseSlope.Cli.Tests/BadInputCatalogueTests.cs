@@ -80,6 +80,7 @@ public class BadInputCatalogueTests
         { ["tune", "{dir}/ok.csv", "--tc", "370", "--pc", "4.25MPa", "--name", "x", "--molar-mass", "100"], ExitCodes.Usage, "--molar-mass: no molar-mass unit in '100'" },
         { ["tune", "{dir}/ok.csv", "--tc", "370", "--pc", "4.25MPa", "--name", "Upper"], ExitCodes.Usage, "--name: the canonical name must be lower case" },
         { ["tune", "{dir}/ok.csv", "--fluid", "propane", "--eos", "vdw"], ExitCodes.Usage, "--eos: van der Waals (1873) has no alpha function to tune" },
+        { ["fluids", "check", "inline:tc=300K,pc=4MPa,omega=0.1"], ExitCodes.Usage, "FILE: fluids check checks a fluid file; an inline definition has no file" },
         { ["audit", "--form", "antoine", "--coefficients", "1,2"], ExitCodes.Usage, "--coefficients: the antoine form takes 3 coefficients (A,B,C), got 2" },
         { ["audit", "--form", "antoine", "--coefficients", "9.1,1872,-25", "--log-base", "7"], ExitCodes.Usage, "--log-base: unknown log base '7' (use 10 or e)" },
         { ["audit", "--form", "antoine", "--coefficients", "9.1,1872,-25", "--correlation-pressure-unit", "mmhg"], ExitCodes.Usage, "--correlation-pressure-unit: unknown pressure unit 'mmhg'; d" },

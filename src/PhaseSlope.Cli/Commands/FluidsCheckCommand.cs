@@ -166,6 +166,11 @@ internal sealed class FluidsCheckOptions
         var format = Common.OutputFormat(parse);
         var model = Common.BindModel(parse);
         string path = PathOf(parse);
+        if (Core.Fluids.InlineFluid.IsInline(path))
+        {
+            throw new Units.UsageException("FILE: fluids check checks a fluid file; an inline definition has no file (its values are checked as it is read; use fluids show to see them)");
+        }
+
         return new FluidsCheckRequest(path, FluidResolver.ReadFile(path), model, format);
     }
 }
