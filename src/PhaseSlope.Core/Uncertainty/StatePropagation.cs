@@ -1,3 +1,4 @@
+using PhaseSlope.Core.Models;
 using PhaseSlope.Core.Errors;
 
 namespace PhaseSlope.Core.Uncertainty;
@@ -62,11 +63,46 @@ public static class StatePropagation
 {
     /// <summary>Why linear propagation gives no u(cp), u(cv), u(κT), u(α), u(μJT).</summary>
     public const string LinearResponseReason =
-        "linear propagation covers rho, P, Z, h_r and s_r: cp, cv, kappa_T, alpha and the Joule-Thomson coefficient need second derivatives of the model with respect to its inputs, which are not implemented; --uncertainty monte-carlo gives them";
+        "linear propagation covers rho, P, Z, h_r, s_r, kappa_T and alpha: cp, cv and the Joule-Thomson coefficient need the second temperature derivative of the attraction with respect to the inputs, which is not implemented; --uncertainty monte-carlo gives them";
 
     private const double R = Constants.GasConstant;
 
-    /// <summary>The sensitivities of (ρ, P, Z, h_r, s_r) to each input, one row per input.</summary>
+    /// <summary>The parameter derivatives of the untranslated cubic's A_ρρ and A_Tρ at one (T, ρ),
+    /// as coefficients of ∂b, ∂g and ∂g_T, and A_Tρρ itself (for κT and α).</summary>
+    /// <remarks>With η = bρ, D = (1 + δ1η)(1 + δ2η), u = δ1 + δ2 + 2δ1δ2η (so ∂D/∂ρ = b·u):
+    /// A_ρρ = RT·b²/(1 − η)² + g·b·u/D², A_Tρ = R·b/(1 − η) − g_T/D, A_Tρρ = R·b²/(1 − η)² + g_T·b·u/D²;
+    /// ∂A_ρρ/∂b = 2RT·b/(1 − η)³ + g·[(u + 2δ1δ2η)/D² − 2η·u²/D³], ∂A_ρρ/∂g = b·u/D²,
+    /// ∂A_Tρ/∂b = R/(1 − η)² + g_T·ρ·u/D², ∂A_Tρ/∂g_T = −1/D.</remarks>
+    private readonly struct SecondPartials
+    {
+        private readonly double _rhoRhoB, _rhoRhoG, _tRhoB, _tRhoGT;
+
+        public SecondPartials(CubicModel model, double t, double rho, double gT)
+        {
+            double b = model.CovolumeB;
+            double d1 = model.Form.Delta1, d2 = model.Form.Delta2;
+            double eta = b * rho;
+            double one = 1 - eta;
+            double dd = (1 + d1 * eta) * (1 + d2 * eta);
+            double u = d1 + d2 + 2 * d1 * d2 * eta;
+            var alpha = model.Alpha.Evaluate(t);
+            double g = model.AttractionA * alpha.Value;
+            _rhoRhoB = 2 * R * t * b / (one * one * one) + g * ((u + 2 * d1 * d2 * eta) / (dd * dd) - 2 * eta * u * u / (dd * dd * dd));
+            _rhoRhoG = b * u / (dd * dd);
+            _tRhoB = R / (one * one) + gT * rho * u / (dd * dd);
+            _tRhoGT = -1 / dd;
+            TRhoRho = R * b * b / (one * one) + gT * b * u / (dd * dd);
+        }
+
+        /// <summary>A_Tρρ of the untranslated cubic.</summary>
+        public double TRhoRho { get; }
+
+        /// <summary>(∂A_ρρ/∂p, ∂A_Tρ/∂p) for one input.</summary>
+        public (double RhoRho, double TRho) Along(StructuralDerivative s)
+            => (_rhoRhoB * s.Covolume + _rhoRhoG * s.Attraction, _tRhoB * s.Covolume + _tRhoGT * s.AttractionSlope);
+    }
+
+    /// <summary>The sensitivities of (ρ, P, Z, h_r, s_r, κT, α) to each input, one row per input.</summary>
     /// <param name="parameters">The inputs.</param>
     /// <param name="temperature">T, K.</param>
     /// <param name="density">The state's density in the nominal (possibly translated) model, mol/m³.</param>
@@ -84,6 +120,11 @@ public static class StatePropagation
         double z = p / (density * R * t);
         var alpha = model.Alpha.Evaluate(t);
         var partials = new LinearPropagation.Partials(model, t, rhoC, model.AttractionA * alpha.Value, model.AttractionA * alpha.FirstDerivative);
+        var second = new SecondPartials(model, t, rhoC, model.AttractionA * alpha.FirstDerivative);
+        // κT and α of the untranslated cubic at ρc; a translation scales both by vc/v = ρ/ρc.
+        double pRho = d.PressureDRho, pT = d.PressureDT;
+        double kappaC = 1 / (rhoC * pRho), expansivityC = pT / (rhoC * pRho);
+        double ratio = density / rhoC;
         var structural = parameters.Derivatives(t);
         var result = new StateValues[structural.Length];
         for (int k = 0; k < structural.Length; k++)
@@ -106,7 +147,15 @@ public static class StatePropagation
             double dH = aP - t * aTP + rhoC * aRhoP + LinearPropagation.HDensity(d) * dRhoC - c * dP - p * s.VolumeShift;
             double dS = -aTP - d.DTRho * dRhoC + R * (dP / p - dRhoC / rhoC);
             double dZ = z * (dP / p - dRho / density);
-            result[k] = new StateValues(dRho, dP, dZ, dH, dS);
+            var (aRhoRhoP, aTRhoP) = second.Along(s);
+            double dPRho = 2 * rhoC * aRhoP + rhoC * rhoC * aRhoRhoP + d.PressureDRhoRho * dRhoC;
+            double dPT = rhoC * rhoC * aTRhoP + (R + 2 * rhoC * d.DTRho + rhoC * rhoC * second.TRhoRho) * dRhoC;
+            double dKappaC = -kappaC * (dRhoC / rhoC + dPRho / pRho);
+            double dExpansivityC = expansivityC * (dPT / pT - dRhoC / rhoC - dPRho / pRho);
+            double dRatio = ratio * (dRho / density - dRhoC / rhoC);
+            result[k] = new StateValues(dRho, dP, dZ, dH, dS,
+                IsothermalCompressibility: ratio * dKappaC + kappaC * dRatio,
+                IsobaricExpansivity: ratio * dExpansivityC + expansivityC * dRatio);
         }
 
         return result;
@@ -121,6 +170,8 @@ public static class StatePropagation
         return new StateUncertainty(PropagationMethod.Linear, U(r => r.Density), U(r => r.Pressure), U(r => r.CompressibilityFactor),
             U(r => r.ResidualEnthalpy), U(r => r.ResidualEntropy), null)
         {
+            IsothermalCompressibility = U(r => r.IsothermalCompressibility!.Value),
+            IsobaricExpansivity = U(r => r.IsobaricExpansivity!.Value),
             ResponseReason = LinearResponseReason,
         };
     }

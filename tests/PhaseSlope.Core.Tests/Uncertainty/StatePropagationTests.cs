@@ -23,7 +23,10 @@ public class StatePropagationTests
         }
 
         var state = PhaseState.Evaluate(model, t, rho);
-        return new StateValues(rho, pressure ?? state.Pressure, state.CompressibilityFactor, state.ResidualEnthalpy, state.ResidualEntropy);
+        // κT = 1/(ρ·(∂P/∂ρ)_T) and α = (∂P/∂T)_ρ/(ρ·(∂P/∂ρ)_T) of the (translated) model.
+        double kappa = 1 / (rho * state.PressureDensityDerivative);
+        return new StateValues(rho, pressure ?? state.Pressure, state.CompressibilityFactor, state.ResidualEnthalpy, state.ResidualEntropy,
+            IsothermalCompressibility: kappa, IsobaricExpansivity: state.PressureTemperatureDerivative * kappa);
     }
 
     [Theory]
@@ -57,6 +60,9 @@ public class StatePropagationTests
             // h_r and s_r scaled by RT and R: their natural size.
             Check(v => v.ResidualEnthalpy, Constants.GasConstant * t, "h_r");
             Check(v => v.ResidualEntropy, Constants.GasConstant, "s_r");
+            // κT and α relative to their own size.
+            Check(v => v.IsothermalCompressibility!.Value, nominal.IsothermalCompressibility!.Value, "kappa_T");
+            Check(v => v.IsobaricExpansivity!.Value, Math.Abs(nominal.IsobaricExpansivity!.Value), "alpha");
         }
     }
 
@@ -88,6 +94,8 @@ public class StatePropagationTests
         AssertClose.Relative(linear.Density!.Value, mc.Density!.Value, tolerance, "u(rho)");
         AssertClose.Relative(linear.ResidualEnthalpy!.Value, mc.ResidualEnthalpy!.Value, tolerance, "u(h_r)");
         AssertClose.Relative(linear.ResidualEntropy!.Value, mc.ResidualEntropy!.Value, tolerance, "u(s_r)");
+        AssertClose.Relative(linear.IsothermalCompressibility!.Value, mc.IsothermalCompressibility!.Value, tolerance, "u(kappa_T)");
+        AssertClose.Relative(linear.IsobaricExpansivity!.Value, mc.IsobaricExpansivity!.Value, tolerance, "u(alpha)");
         Assert.Equal(0, mc.Pressure);
     }
 }
