@@ -8,4 +8,7 @@ public sealed class ConstantAlpha : IAlphaFunction
 
     /// <inheritdoc />
     public AlphaValue Evaluate(double temperature) => new(1, 0, 0);
+
+    /// <inheritdoc />
+    public double ThirdDerivative(double temperature) => 0;
 }

@@ -98,4 +98,13 @@ public sealed class GeneralisedTwuAlpha : IAlphaFunction
             a0.FirstDerivative + w * (a1.FirstDerivative - a0.FirstDerivative),
             a0.SecondDerivative + w * (a1.SecondDerivative - a0.SecondDerivative));
     }
+
+    /// <inheritdoc />
+    public double ThirdDerivative(double temperature)
+    {
+        bool subcritical = temperature <= _criticalTemperature;
+        double a0 = (subcritical ? _subcritical0 : _supercritical0).ThirdDerivative(temperature);
+        double a1 = (subcritical ? _subcritical1 : _supercritical1).ThirdDerivative(temperature);
+        return a0 + AcentricFactor * (a1 - a0);
+    }
 }

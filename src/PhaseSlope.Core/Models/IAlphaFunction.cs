@@ -10,4 +10,8 @@ public interface IAlphaFunction
 
     /// <summary>α, dα/dT and d²α/dT² at temperature <paramref name="temperature"/> in K.</summary>
     AlphaValue Evaluate(double temperature);
+
+    /// <summary>d³α/dT³ at <paramref name="temperature"/> in K, 1/K³: the temperature sensitivity of
+    /// α″ that the exact uncertainty of cv and cp needs (∂α″/∂Tc = −(2α″ + T·α‴)/Tc for an α of T/Tc).</summary>
+    double ThirdDerivative(double temperature);
 }

@@ -23,4 +23,8 @@ public sealed class InverseRootAlpha : IAlphaFunction
         double alpha = Math.Sqrt(_criticalTemperature / temperature);
         return new AlphaValue(alpha, -alpha / (2 * temperature), 3 * alpha / (4 * temperature * temperature));
     }
+
+    /// <inheritdoc />
+    public double ThirdDerivative(double temperature)
+        => -15 * Math.Sqrt(_criticalTemperature / temperature) / (8 * temperature * temperature * temperature);
 }

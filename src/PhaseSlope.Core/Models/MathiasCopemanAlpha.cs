@@ -68,4 +68,24 @@ public sealed class MathiasCopemanAlpha : IAlphaFunction
         double second = (gx * h + g * gxx * s) / (2 * tc * tc * s * s * s);
         return new AlphaValue(g * g, -gx * g / (s * tc), second);
     }
+
+    /// <inheritdoc />
+    /// <remarks>α = g(x)², x = 1 − √Tr with x′ = −1/(2√(T·Tc)), x″ = −x′/(2T), x‴ = 3x′/(4T²):
+    /// g′ = g_x·x′, g″ = g_xx·x′² + g_x·x″, g‴ = g_xxx·x′³ + 3g_xx·x′x″ + g_x·x‴ and
+    /// α‴ = 2(3g′g″ + g·g‴). Above Tc only c1 acts, as in <see cref="Evaluate"/>.</remarks>
+    public double ThirdDerivative(double temperature)
+    {
+        double tc = _criticalTemperature;
+        bool subcritical = temperature <= tc;
+        double c1 = C1, c2 = subcritical ? C2 : 0, c3 = subcritical ? C3 : 0;
+        double s = Math.Sqrt(temperature / tc);
+        double x = 1 - s;
+        double x1 = -1 / (2 * s * tc), x2 = -x1 / (2 * temperature), x3 = 3 * x1 / (4 * temperature * temperature);
+        double g = 1 + x * (c1 + x * (c2 + x * c3));
+        double gx = c1 + x * (2 * c2 + 3 * c3 * x);
+        double gxx = 2 * c2 + 6 * c3 * x;
+        double gxxx = 6 * c3;
+        double g1 = gx * x1, g2 = gxx * x1 * x1 + gx * x2, g3 = gxxx * x1 * x1 * x1 + 3 * gxx * x1 * x2 + gx * x3;
+        return 2 * (3 * g1 * g2 + g * g3);
+    }
 }

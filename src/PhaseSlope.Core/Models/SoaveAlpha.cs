@@ -53,4 +53,8 @@ public sealed class SoaveAlpha : IAlphaFunction
         double tc = _criticalTemperature;
         return new AlphaValue(g * g, -m * g / (s * tc), m * (1 + m) / (2 * tc * tc * s * s * s));
     }
+
+    /// <inheritdoc />
+    /// <remarks>α″ ∝ s⁻³ = (T/Tc)^(−3/2), so α‴ = −(3/2)·α″/T.</remarks>
+    public double ThirdDerivative(double temperature) => -1.5 * Evaluate(temperature).SecondDerivative / temperature;
 }

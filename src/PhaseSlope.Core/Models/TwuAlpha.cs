@@ -62,4 +62,19 @@ public sealed class TwuAlpha : IAlphaFunction
         double gT = -(k + L * _q * _q * trq) / (temperature * temperature);   // d²ln α/dT²
         return new AlphaValue(alpha, alpha * g, alpha * (g * g + gT));
     }
+
+    /// <inheritdoc />
+    /// <remarks>With ℓ = ln α, K = N(M − 1) − L·NM·Tr^(NM) and Q = L(NM)²·Tr^(NM): ℓ′ = K/T,
+    /// ℓ″ = −(K + Q)/T², ℓ‴ = [2K + Q(3 − NM)]/T³, and α‴ = α(ℓ′³ + 3ℓ′ℓ″ + ℓ‴).</remarks>
+    public double ThirdDerivative(double temperature)
+    {
+        double tr = temperature / _criticalTemperature;
+        double trq = Math.Pow(tr, _q);
+        double alpha = Math.Pow(tr, _p) * Math.Exp(L * (1 - trq));
+        double k = _p - L * _q * trq;
+        double q = L * _q * _q * trq;
+        double t = temperature;
+        double l1 = k / t, l2 = -(k + q) / (t * t), l3 = (2 * k + q * (3 - _q)) / (t * t * t);
+        return alpha * (l1 * l1 * l1 + 3 * l1 * l2 + l3);
+    }
 }

@@ -39,6 +39,17 @@ public class AlphaFunctionTests
         AssertClose.Absolute(a.FirstDerivative, first, Tolerance * (Math.Abs(a.Value) / temperature + Math.Abs(a.FirstDerivative)), $"{what} dalpha/dT");
         AssertClose.Absolute(a.SecondDerivative, second,
             Tolerance * (Math.Abs(a.FirstDerivative) / temperature + Math.Abs(a.SecondDerivative)), $"{what} d2alpha/dT2");
+        double third = (plus.SecondDerivative - minus.SecondDerivative) / (2 * h);
+        AssertClose.Absolute(alpha.ThirdDerivative(temperature), third,
+            Tolerance * (Math.Abs(a.SecondDerivative) / temperature + Math.Abs(alpha.ThirdDerivative(temperature))), $"{what} d3alpha/dT3");
+    }
+
+    [Theory]
+    [MemberData(nameof(ReducedTemperatures))]
+    public void SoaveAndInverseRoot_AnalyticDerivatives_EqualCentralDifferences(double tr)
+    {
+        CheckDerivatives(new SoaveAlpha(0.6, Tc, "test value"), tr * Tc, $"Soave at Tr = {tr}");
+        CheckDerivatives(new InverseRootAlpha(Tc), tr * Tc, $"inverse root at Tr = {tr}");
     }
 
     [Theory]
