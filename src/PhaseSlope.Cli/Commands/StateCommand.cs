@@ -43,7 +43,7 @@ internal static class StateCommand
         }
         else if (choice.Method == PropagationMethod.Linear)
         {
-            values = StatePropagation.Linear(parameters, point.Temperature, state.Density, densityGiven);
+            values = StatePropagation.Linear(parameters, point.Temperature, state.Density, densityGiven, state.IsobaricHeatCapacity, state.IsobaricExpansivity);
         }
         else
         {

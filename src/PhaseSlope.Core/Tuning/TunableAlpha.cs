@@ -30,6 +30,9 @@ public abstract class TunableAlpha
     /// <summary>∂(dα/dT)/∂θ_j at <paramref name="temperature"/>, written into <paramref name="gradient"/>.</summary>
     public abstract void SlopeGradient(double temperature, double criticalTemperature, IReadOnlyList<double> parameters, Span<double> gradient);
 
+    /// <summary>∂(d²α/dT²)/∂θ_j at <paramref name="temperature"/>, written into <paramref name="gradient"/>.</summary>
+    public abstract void CurvatureGradient(double temperature, double criticalTemperature, IReadOnlyList<double> parameters, Span<double> gradient);
+
     /// <summary>The fluid's parameter set with its covariance as uncertain inputs for the
     /// propagation (<see cref="AlphaParameterUncertainty"/>): values, covariance, how to build α,
     /// and the exact ∂α/∂θ and ∂(dα/dT)/∂θ.</summary>
@@ -58,6 +61,12 @@ public abstract class TunableAlpha
             })
         {
             CriticalSensitivity = set.CriticalSensitivity is { } d ? Matrix<double>.Build.DenseOfArray(d) : null,
+            CurvatureSensitivity = (t, k) =>
+            {
+                var gc = new double[values.Length];
+                family.CurvatureGradient(t, criticalTemperature, values, gc);
+                return gc[k];
+            },
         };
     }
 
@@ -103,6 +112,15 @@ public abstract class TunableAlpha
             gradient[0] = 2 * dx * (1 + 2 * p[0] * x);
         }
 
+        public override void CurvatureGradient(double temperature, double tc, IReadOnlyList<double> p, Span<double> gradient)
+        {
+            // α″ = 2m²x′² + 2(1 + m·x)·m·x″: ∂α″/∂m = 4m·x′² + 2x″·(1 + 2m·x).
+            double s = Math.Sqrt(temperature / tc);
+            double x = 1 - s;
+            double x1 = -1 / (2 * s * tc), x2 = -x1 / (2 * temperature);
+            gradient[0] = 4 * p[0] * x1 * x1 + 2 * x2 * (1 + 2 * p[0] * x);
+        }
+
         public override double[] Start(CubicModelKind kind, double omega, double tc) => [OwnSlope(kind, omega, tc)];
     }
 
@@ -139,6 +157,34 @@ public abstract class TunableAlpha
             gradient[0] = 2 * dx * (x * gx + g);
             gradient[1] = subcritical ? 2 * dx * (x * x * gx + 2 * g * x) : 0;
             gradient[2] = subcritical ? 2 * dx * (x * x * x * gx + 3 * g * x * x) : 0;
+        }
+
+        public override void CurvatureGradient(double temperature, double tc, IReadOnlyList<double> p, Span<double> gradient)
+        {
+            // α″ = 2g′² + 2g·g″ with g′ = g_x·x′, g″ = g_xx·x′² + g_x·x″; for c_k:
+            // ∂g = x^k, ∂g′ = k·x^(k−1)·x′, ∂g″ = k(k−1)·x^(k−2)·x′² + k·x^(k−1)·x″.
+            double s = Math.Sqrt(temperature / tc);
+            double x = 1 - s;
+            double x1 = -1 / (2 * s * tc), x2 = -x1 / (2 * temperature);
+            bool subcritical = temperature <= tc;
+            double c2 = subcritical ? p[1] : 0, c3 = subcritical ? p[2] : 0;
+            double g = 1 + x * (p[0] + x * (c2 + x * c3));
+            double gx = p[0] + x * (2 * c2 + 3 * c3 * x);
+            double gxx = 2 * c2 + 6 * c3 * x;
+            double g1 = gx * x1, g2 = gxx * x1 * x1 + gx * x2;
+            for (int k = 1; k <= 3; k++)
+            {
+                if (k > 1 && !subcritical)
+                {
+                    gradient[k - 1] = 0;
+                    continue;
+                }
+
+                double dg = Math.Pow(x, k);
+                double dg1 = k * Math.Pow(x, k - 1) * x1;
+                double dg2 = (k > 1 ? k * (k - 1) * Math.Pow(x, k - 2) * x1 * x1 : 0) + k * Math.Pow(x, k - 1) * x2;
+                gradient[k - 1] = 4 * g1 * dg1 + 2 * dg * g2 + 2 * g * dg2;
+            }
         }
 
         // With c2 = c3 = 0 the Mathias–Copeman function is the Soave form with m = c1.
@@ -178,6 +224,29 @@ public abstract class TunableAlpha
             gradient[0] = da[0] * q + alpha * (-n * m * power / temperature);
             gradient[1] = da[1] * q + alpha * (n - l * n * power * (1 + m * n * lnTr)) / temperature;
             gradient[2] = da[2] * q + alpha * ((m - 1) - l * m * power * (1 + n * m * lnTr)) / temperature;
+        }
+
+        public override void CurvatureGradient(double temperature, double tc, IReadOnlyList<double> p, Span<double> gradient)
+        {
+            // α″ = α(ℓ′² + ℓ″), ℓ′ = K/T, ℓ″ = −(K + Q)/T², K = p − L·q·E, Q = L·q²·E, E = Tr^q,
+            // p = N(M − 1), q = NM; ∂α″/∂θ = ∂α/∂θ·(ℓ′² + ℓ″) + α·(2ℓ′·∂K/T − (∂K + ∂Q)/T²).
+            double l = p[0], m = p[1], n = p[2];
+            double t = temperature;
+            double lnTr = Math.Log(t / tc);
+            double q = n * m, pw = n * (m - 1);
+            double e = Math.Exp(q * lnTr);
+            double alpha = Math.Exp(pw * lnTr + l * (1 - e));
+            double k = pw - l * q * e, qq = l * q * q * e;
+            double l1 = k / t, l2 = -(k + qq) / (t * t);
+            Span<double> da = stackalloc double[3];
+            Gradient(temperature, tc, p, da);
+            // ∂K and ∂Q for L, M, N.
+            Span<double> dk = [-q * e, n - l * n * e * (1 + q * lnTr), (m - 1) - l * m * e * (1 + q * lnTr)];
+            Span<double> dq = [q * q * e, l * n * q * e * (2 + q * lnTr), l * m * q * e * (2 + q * lnTr)];
+            for (int j = 0; j < 3; j++)
+            {
+                gradient[j] = da[j] * (l1 * l1 + l2) + alpha * (2 * l1 * dk[j] / t - (dk[j] + dq[j]) / (t * t));
+            }
         }
 
         // The generalised Twu (1995) constants for Peng–Robinson below Tc, interpolated in ω as

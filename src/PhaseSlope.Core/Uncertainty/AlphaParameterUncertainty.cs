@@ -24,4 +24,8 @@ public sealed record AlphaParameterUncertainty(
     /// <summary>∂p_k/∂Tc (column 0) and ∂p_k/∂Pc (column 1) of a tuning, or null: the parameters
     /// then covary with Tc and Pc (see <see cref="Fluids.AlphaParameterSet.CriticalSensitivity"/>).</summary>
     public Matrix<double>? CriticalSensitivity { get; init; }
+
+    /// <summary>∂(d²α/dT²)/∂p_k at T for the nominal α (for the exact uncertainty of cv and cp), or
+    /// null: those uncertainties are then not propagated linearly.</summary>
+    public Func<double, int, double>? CurvatureSensitivity { get; init; }
 }

@@ -182,34 +182,37 @@ public sealed class CubicParameterization
         double aTc = 2 * a / tc;
         double alphaTc = -tr * alpha.FirstDerivative;
         double alphaSlopeTc = -tr * alpha.SecondDerivative - alpha.FirstDerivative / tc;
+        // α = f(T/Tc): ∂α″/∂Tc = −(2α″ + T·α‴)/Tc.
+        double alphaCurvatureTc = -(2 * alpha.SecondDerivative + temperature * m.Alpha.ThirdDerivative(temperature)) / tc;
         result[0] = new StructuralDerivative(b / tc, aTc * alpha.Value + a * alphaTc,
-            aTc * alpha.FirstDerivative + a * alphaSlopeTc, peneloux ? c / tc : 0);
+            aTc * alpha.FirstDerivative + a * alphaSlopeTc, peneloux ? c / tc : 0, aTc * alpha.SecondDerivative + a * alphaCurvatureTc);
 
         // Pc: a and b ∝ 1/Pc.
-        result[1] = new StructuralDerivative(-b / pc, -a * alpha.Value / pc, -a * alpha.FirstDerivative / pc, peneloux ? -c / pc : 0);
+        result[1] = new StructuralDerivative(-b / pc, -a * alpha.Value / pc, -a * alpha.FirstDerivative / pc, peneloux ? -c / pc : 0, -a * alpha.SecondDerivative / pc);
 
         // ω: through α (Soave-type m(ω), generalised Twu) and the Péneloux Z_RA = 0.29056 − 0.08775ω.
-        var (alphaOmega, alphaSlopeOmega) = OmegaSensitivity(temperature);
+        var (alphaOmega, alphaSlopeOmega, alphaCurvatureOmega) = OmegaSensitivity(temperature);
         double cOmega = peneloux && Kind.Entry().Peneloux is { } coefficients
             ? coefficients.Slope * 0.08775 * R * tc / pc
             : 0;
-        result[2] = new StructuralDerivative(0, a * alphaOmega, a * alphaSlopeOmega, cOmega);
+        result[2] = new StructuralDerivative(0, a * alphaOmega, a * alphaSlopeOmega, cOmega, a * alphaCurvatureOmega);
 
         for (int k = 3; k < result.Length; k++)
         {
             var (value, slope) = _alphaParameters!.Sensitivity(temperature, k - 3);
-            result[k] = new StructuralDerivative(0, a * value, a * slope, 0);
+            double curvature = _alphaParameters.CurvatureSensitivity is { } second ? second(temperature, k - 3) : double.NaN;
+            result[k] = new StructuralDerivative(0, a * value, a * slope, 0, a * curvature);
         }
 
         return result;
     }
 
-    /// <summary>∂α/∂ω and ∂α′/∂ω at T for the nominal alpha function.</summary>
-    private (double Value, double Slope) OmegaSensitivity(double temperature)
+    /// <summary>∂α/∂ω, ∂α′/∂ω and ∂α″/∂ω at T for the nominal alpha function.</summary>
+    private (double Value, double Slope, double Curvature) OmegaSensitivity(double temperature)
     {
         if (_alphaParameters is not null)
         {
-            return (0, 0);
+            return (0, 0, 0);
         }
 
         double tc = Nominal.CriticalTemperature;
@@ -225,7 +228,10 @@ public sealed class CubicParameterization
                 double x = 1 - s;
                 double g = 1 + slope * x;
                 double dm = SlopeDerivative(omega);
-                return (2 * g * x * dm, -(g + slope * x) / (s * tc) * dm);
+                // α″ = 2m²x′² + 2(1 + m·x)·m·x″ with x′ = −1/(2s·Tc), x″ = −x′/(2T):
+                // ∂α″/∂m = 4m·x′² + 2x″·(1 + 2m·x).
+                double x1 = -1 / (2 * s * tc), x2 = -x1 / (2 * temperature);
+                return (2 * g * x * dm, -(g + slope * x) / (s * tc) * dm, (4 * slope * x1 * x1 + 2 * x2 * (1 + 2 * slope * x)) * dm);
             }
 
             case GeneralisedTwuAlpha:
@@ -233,11 +239,11 @@ public sealed class CubicParameterization
                 // α = α0 + ω(α1 − α0): ∂α/∂ω = α(ω = 1) − α(ω = 0), exactly.
                 var one = new GeneralisedTwuAlpha(1, tc).Evaluate(temperature);
                 var zero = new GeneralisedTwuAlpha(0, tc).Evaluate(temperature);
-                return (one.Value - zero.Value, one.FirstDerivative - zero.FirstDerivative);
+                return (one.Value - zero.Value, one.FirstDerivative - zero.FirstDerivative, one.SecondDerivative - zero.SecondDerivative);
             }
 
             default:
-                return (0, 0);
+                return (0, 0, 0);
         }
     }
 

@@ -61,10 +61,6 @@ public readonly record struct StateValues(double Density, double Pressure, doubl
 /// derivatives of the Helmholtz function are those of <see cref="LinearPropagation"/>.</remarks>
 public static class StatePropagation
 {
-    /// <summary>Why linear propagation gives no u(cp), u(cv), u(κT), u(α), u(μJT).</summary>
-    public const string LinearResponseReason =
-        "linear propagation covers rho, P, Z, h_r, s_r, kappa_T and alpha: cp, cv and the Joule-Thomson coefficient need the second temperature derivative of the attraction with respect to the inputs, which is not implemented; --uncertainty monte-carlo gives them";
-
     private const double R = Constants.GasConstant;
 
     /// <summary>The parameter derivatives of the untranslated cubic's A_ρρ and A_Tρ at one (T, ρ),
@@ -75,7 +71,7 @@ public static class StatePropagation
     /// ∂A_Tρ/∂b = R/(1 − η)² + g_T·ρ·u/D², ∂A_Tρ/∂g_T = −1/D.</remarks>
     private readonly struct SecondPartials
     {
-        private readonly double _rhoRhoB, _rhoRhoG, _tRhoB, _tRhoGT;
+        private readonly double _rhoRhoB, _rhoRhoG, _tRhoB, _tRhoGT, _ttB, _ttGTT, _ttRho;
 
         public SecondPartials(CubicModel model, double t, double rho, double gT)
         {
@@ -92,7 +88,18 @@ public static class StatePropagation
             _tRhoB = R / (one * one) + gT * rho * u / (dd * dd);
             _tRhoGT = -1 / dd;
             TRhoRho = R * b * b / (one * one) + gT * b * u / (dd * dd);
+            // A_TT = −(g_TT/b)·f(η) (the repulsive term is linear in T): ∂/∂b = g_TT·f/b² − g_TT·ρ/(b·D),
+            // ∂/∂g_TT = −f/b, ∂/∂ρ = −g_TT/D (f′(η) = 1/D).
+            double f = d1 == d2 ? eta / (1 + d1 * eta) : Math.Log((1 + d1 * eta) / (1 + d2 * eta)) / (d1 - d2);
+            double gTT = model.AttractionA * alpha.SecondDerivative;
+            _ttB = gTT * f / (b * b) - gTT * rho / (b * dd);
+            _ttGTT = -f / b;
+            _ttRho = -gTT / dd;
         }
+
+        /// <summary>dA_TT/dp for one input, with the density moving by <paramref name="dRho"/>.</summary>
+        public double TemperatureTemperature(StructuralDerivative s, double dRho)
+            => _ttB * s.Covolume + _ttGTT * s.AttractionCurvature + _ttRho * dRho;
 
         /// <summary>A_Tρρ of the untranslated cubic.</summary>
         public double TRhoRho { get; }
@@ -125,6 +132,7 @@ public static class StatePropagation
         double pRho = d.PressureDRho, pT = d.PressureDT;
         double kappaC = 1 / (rhoC * pRho), expansivityC = pT / (rhoC * pRho);
         double ratio = density / rhoC;
+        double heatCapacityDifference = t * pT * pT / (rhoC * rhoC * pRho);
         var structural = parameters.Derivatives(t);
         var result = new StateValues[structural.Length];
         for (int k = 0; k < structural.Length; k++)
@@ -153,7 +161,13 @@ public static class StatePropagation
             double dKappaC = -kappaC * (dRhoC / rhoC + dPRho / pRho);
             double dExpansivityC = expansivityC * (dPT / pT - dRhoC / rhoC - dPRho / pRho);
             double dRatio = ratio * (dRho / density - dRhoC / rhoC);
+            // cv = cv° − T·A_TT (a translation leaves A_TT as it is); cp − cv = T·P_T²/(ρc²·P_ρc) is the
+            // same for the translated and the untranslated model.
+            double dCv = -t * second.TemperatureTemperature(s, dRhoC);
+            double dCp = dCv + heatCapacityDifference * (2 * dPT / pT - 2 * dRhoC / rhoC - dPRho / pRho);
             result[k] = new StateValues(dRho, dP, dZ, dH, dS,
+                IsobaricHeatCapacity: dCp,
+                IsochoricHeatCapacity: dCv,
                 IsothermalCompressibility: ratio * dKappaC + kappaC * dRatio,
                 IsobaricExpansivity: ratio * dExpansivityC + expansivityC * dRatio);
         }
@@ -162,17 +176,48 @@ public static class StatePropagation
     }
 
     /// <summary>First-order standard uncertainties of one state.</summary>
-    public static StateUncertainty Linear(CubicParameterization parameters, double temperature, double density, bool densityGiven)
+    /// <param name="parameters">The inputs.</param>
+    /// <param name="temperature">T, K.</param>
+    /// <param name="density">The state's density, mol/m³.</param>
+    /// <param name="densityGiven">True when the density was given, false when the pressure was.</param>
+    /// <param name="isobaricHeatCapacity">The state's cp in J/(mol·K) (for u(μJT)), or null when the
+    /// fluid has no ideal-gas heat capacity (then cp, cv and μJT have no uncertainty).</param>
+    /// <param name="isobaricExpansivity">The state's α in 1/K (for u(μJT)), or null.</param>
+    public static StateUncertainty Linear(CubicParameterization parameters, double temperature, double density, bool densityGiven,
+        double? isobaricHeatCapacity = null, double? isobaricExpansivity = null)
     {
         var rows = Sensitivities(parameters, temperature, density, densityGiven);
         var sigma = parameters.Covariance;
         double U(Func<StateValues, double> pick) => LinearPropagation.Combine(rows.Select(pick).ToArray(), sigma);
+        bool curvatureKnown = rows.All(r => double.IsFinite(r.IsochoricHeatCapacity!.Value));
+        double? cv = null, cp = null, jouleThomson = null;
+        string? reason = null;
+        if (isobaricHeatCapacity is not double cpNominal || isobaricExpansivity is not double expansivity)
+        {
+            reason = "cp, cv and the Joule-Thomson coefficient need the ideal-gas heat capacity, which the fluid does not give";
+        }
+        else if (!curvatureKnown)
+        {
+            reason = "the alpha parameters' effect on d2alpha/dT2 is not known for this input, so u(cp), u(cv) and u(mu_JT) are not propagated linearly; --uncertainty monte-carlo gives them";
+        }
+        else
+        {
+            cv = U(r => r.IsochoricHeatCapacity!.Value);
+            cp = U(r => r.IsobaricHeatCapacity!.Value);
+            // μJT = (T·α − 1)/(ρ·cp): dμ = T·dα/(ρ·cp) − μ·(dρ/ρ + dcp/cp).
+            double mu = (temperature * expansivity - 1) / (density * cpNominal);
+            jouleThomson = U(r => temperature * r.IsobaricExpansivity!.Value / (density * cpNominal) - mu * (r.Density / density + r.IsobaricHeatCapacity!.Value / cpNominal));
+        }
+
         return new StateUncertainty(PropagationMethod.Linear, U(r => r.Density), U(r => r.Pressure), U(r => r.CompressibilityFactor),
             U(r => r.ResidualEnthalpy), U(r => r.ResidualEntropy), null)
         {
             IsothermalCompressibility = U(r => r.IsothermalCompressibility!.Value),
             IsobaricExpansivity = U(r => r.IsobaricExpansivity!.Value),
-            ResponseReason = LinearResponseReason,
+            IsochoricHeatCapacity = cv,
+            IsobaricHeatCapacity = cp,
+            JouleThomsonCoefficient = jouleThomson,
+            ResponseReason = reason,
         };
     }
 

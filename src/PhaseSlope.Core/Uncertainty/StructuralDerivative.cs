@@ -7,4 +7,6 @@ namespace PhaseSlope.Core.Uncertainty;
 /// <param name="Attraction">∂(a·α)/∂p at fixed T.</param>
 /// <param name="AttractionSlope">∂(a·dα/dT)/∂p at fixed T.</param>
 /// <param name="VolumeShift">∂c/∂p.</param>
-public readonly record struct StructuralDerivative(double Covolume, double Attraction, double AttractionSlope, double VolumeShift);
+/// <param name="AttractionCurvature">∂(a·d²α/dT²)/∂p at fixed T (for cv and cp); NaN where the
+/// input's alpha sensitivity gives none.</param>
+public readonly record struct StructuralDerivative(double Covolume, double Attraction, double AttractionSlope, double VolumeShift, double AttractionCurvature = double.NaN);

@@ -207,8 +207,10 @@ public sealed class TunableAlphaDerivativeTests
         {
             var g = new double[theta.Length];
             var gs = new double[theta.Length];
+            var gc = new double[theta.Length];
             family.Gradient(t, tc, theta, g);
             family.SlopeGradient(t, tc, theta, gs);
+            family.CurvatureGradient(t, tc, theta, gc);
             for (int j = 0; j < theta.Length; j++)
             {
                 double h = 1e-6;
@@ -220,6 +222,7 @@ public sealed class TunableAlphaDerivativeTests
                 var b = family.Create(down, tc, "test").Evaluate(t);
                 AssertClose.Absolute((a.Value - b.Value) / (2 * h), g[j], 1e-8, $"{form} dα/dθ{j} at {t} K");
                 AssertClose.Absolute((a.FirstDerivative - b.FirstDerivative) / (2 * h), gs[j], 1e-10, $"{form} dα'/dθ{j} at {t} K");
+                AssertClose.Absolute((a.SecondDerivative - b.SecondDerivative) / (2 * h), gc[j], 1e-12, $"{form} dα''/dθ{j} at {t} K");
             }
         }
     }

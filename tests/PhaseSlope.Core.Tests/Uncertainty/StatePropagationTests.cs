@@ -23,9 +23,14 @@ public class StatePropagationTests
         }
 
         var state = PhaseState.Evaluate(model, t, rho);
-        // κT = 1/(ρ·(∂P/∂ρ)_T) and α = (∂P/∂T)_ρ/(ρ·(∂P/∂ρ)_T) of the (translated) model.
+        // κT = 1/(ρ·(∂P/∂ρ)_T) and α = (∂P/∂T)_ρ/(ρ·(∂P/∂ρ)_T) of the (translated) model; the
+        // residual cv_r = −T·A_TT and cp_r = cv_r + T·P_T²/(ρ²·P_ρ) − R (the ideal-gas cp° is exact
+        // in the propagation, so its sensitivities are those of the residual parts).
         double kappa = 1 / (rho * state.PressureDensityDerivative);
+        double cv = -t * state.Helmholtz.DTT;
+        double cp = cv + t * state.PressureTemperatureDerivative * state.PressureTemperatureDerivative / (rho * rho * state.PressureDensityDerivative);
         return new StateValues(rho, pressure ?? state.Pressure, state.CompressibilityFactor, state.ResidualEnthalpy, state.ResidualEntropy,
+            IsobaricHeatCapacity: cp, IsochoricHeatCapacity: cv,
             IsothermalCompressibility: kappa, IsobaricExpansivity: state.PressureTemperatureDerivative * kappa);
     }
 
@@ -63,6 +68,9 @@ public class StatePropagationTests
             // κT and α relative to their own size.
             Check(v => v.IsothermalCompressibility!.Value, nominal.IsothermalCompressibility!.Value, "kappa_T");
             Check(v => v.IsobaricExpansivity!.Value, Math.Abs(nominal.IsobaricExpansivity!.Value), "alpha");
+            // cv and cp scaled by R, their natural size.
+            Check(v => v.IsochoricHeatCapacity!.Value, Constants.GasConstant, "cv");
+            Check(v => v.IsobaricHeatCapacity!.Value, Constants.GasConstant, "cp");
         }
     }
 
@@ -85,7 +93,8 @@ public class StatePropagationTests
         };
         var parameters = new CubicParameterization(fluid, CubicModelKind.PengRobinson);
         var nominal = Evaluate(parameters.Nominal, 300, 3e6, null, true);
-        var linear = StatePropagation.Linear(parameters, 300, nominal.Density, densityGiven: false);
+        // cp and α are passed only to enable u(cp), u(cv), u(μJT); residual cp stands in for cp (cp° is exact).
+        var linear = StatePropagation.Linear(parameters, 300, nominal.Density, densityGiven: false, nominal.IsobaricHeatCapacity, nominal.IsobaricExpansivity);
         const int N = 20000;
         var mc = StatePropagation.MonteCarlo(parameters, x => Evaluate(parameters.Build(x), 300, 3e6, null, true), N, seed: 5);
 
@@ -96,6 +105,8 @@ public class StatePropagationTests
         AssertClose.Relative(linear.ResidualEntropy!.Value, mc.ResidualEntropy!.Value, tolerance, "u(s_r)");
         AssertClose.Relative(linear.IsothermalCompressibility!.Value, mc.IsothermalCompressibility!.Value, tolerance, "u(kappa_T)");
         AssertClose.Relative(linear.IsobaricExpansivity!.Value, mc.IsobaricExpansivity!.Value, tolerance, "u(alpha)");
+        AssertClose.Relative(linear.IsochoricHeatCapacity!.Value, mc.IsochoricHeatCapacity!.Value, tolerance, "u(cv)");
+        AssertClose.Relative(linear.IsobaricHeatCapacity!.Value, mc.IsobaricHeatCapacity!.Value, tolerance, "u(cp)");
         Assert.Equal(0, mc.Pressure);
     }
 }
