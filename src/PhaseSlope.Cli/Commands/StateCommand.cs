@@ -43,7 +43,7 @@ internal static class StateCommand
         }
         else if (choice.Method == PropagationMethod.Linear)
         {
-            values = StatePropagation.Linear(parameters, point.Temperature, state.Density, densityGiven, state.IsobaricHeatCapacity, state.IsobaricExpansivity);
+            values = StatePropagation.Linear(parameters, point.Temperature, state.Density, densityGiven, state.IsobaricHeatCapacity, state.IsobaricExpansivity, state.SpeedOfSound);
         }
         else
         {
@@ -54,7 +54,7 @@ internal static class StateCommand
                 var (_, s) = sample.Evaluate();
                 return new StateValues(s.Density, point.Pressure ?? s.Pressure, s.CompressibilityFactor, s.ResidualEnthalpy,
                     s.ResidualEntropy ?? throw new Core.Errors.InvalidInputException("state", s.Density, "residual entropy undefined"),
-                    s.IsobaricHeatCapacity, s.IsochoricHeatCapacity, s.IsothermalCompressibility, s.IsobaricExpansivity, s.JouleThomsonCoefficient);
+                    s.IsobaricHeatCapacity, s.IsochoricHeatCapacity, s.IsothermalCompressibility, s.IsobaricExpansivity, s.JouleThomsonCoefficient, s.SpeedOfSound);
             }, choice.Samples, choice.Seed, bar);
         }
 

@@ -25,6 +25,7 @@ internal sealed record StateUncertaintyText(StateUncertainty Values, Uncertainty
         new("isothermal_compressibility_1_Pa", "u(kappa_T)", null, u => u.IsothermalCompressibility),
         new("isobaric_expansivity_1_K", "u(alpha)", null, u => u.IsobaricExpansivity),
         new("joule_thomson_coefficient_K_Pa", "u(mu_JT)", null, u => u.JouleThomsonCoefficient),
+        new("speed_of_sound_m_s", "u(w)", DisplayQuantity.Speed, u => u.SpeedOfSound),
     ];
 
     public void WriteJson(Utf8JsonWriter json)
@@ -84,7 +85,7 @@ internal sealed record StateUncertaintyText(StateUncertainty Values, Uncertainty
 
         if (Values.ResponseReason is string responseReason && Values.Reason is null)
         {
-            text.AppendLine($"u(cp), u(cv), u(kappa_T), u(alpha), u(mu_JT) undefined: {responseReason}");
+            text.AppendLine($"u(cp), u(cv), u(mu_JT), u(w) undefined: {responseReason}");
         }
 
         text.AppendLine("u(h_r) and u(s_r) are those of h and s whenever the reference state does not itself depend on the model (the ideal-gas reference).");

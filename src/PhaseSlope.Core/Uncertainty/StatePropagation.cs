@@ -31,7 +31,10 @@ public sealed record StateUncertainty(PropagationMethod Method, double? Density,
     /// <summary>u(μJT), K/Pa, or null.</summary>
     public double? JouleThomsonCoefficient { get; init; }
 
-    /// <summary>Why the response functions (cp, cv, κT, α, μJT) have no uncertainty, or null.</summary>
+    /// <summary>u(w), m/s, or null.</summary>
+    public double? SpeedOfSound { get; init; }
+
+    /// <summary>Why the response functions (cp, cv, κT, α, μJT, w) have no uncertainty, or null.</summary>
     public string? ResponseReason { get; init; }
 }
 
@@ -46,9 +49,10 @@ public sealed record StateUncertainty(PropagationMethod Method, double? Density,
 /// <param name="IsothermalCompressibility">κT, 1/Pa, or null.</param>
 /// <param name="IsobaricExpansivity">α, 1/K, or null.</param>
 /// <param name="JouleThomsonCoefficient">μJT, K/Pa, or null.</param>
+/// <param name="SpeedOfSound">w, m/s, or null (no molar mass or cp°).</param>
 public readonly record struct StateValues(double Density, double Pressure, double CompressibilityFactor, double ResidualEnthalpy, double ResidualEntropy,
     double? IsobaricHeatCapacity = null, double? IsochoricHeatCapacity = null, double? IsothermalCompressibility = null,
-    double? IsobaricExpansivity = null, double? JouleThomsonCoefficient = null);
+    double? IsobaricExpansivity = null, double? JouleThomsonCoefficient = null, double? SpeedOfSound = null);
 
 /// <summary>Propagation of the input uncertainties into one single-phase state at a given
 /// (T, P) or (T, ρ).</summary>
@@ -108,6 +112,10 @@ public static class StatePropagation
         public (double RhoRho, double TRho) Along(StructuralDerivative s)
             => (_rhoRhoB * s.Covolume + _rhoRhoG * s.Attraction, _tRhoB * s.Covolume + _tRhoGT * s.AttractionSlope);
     }
+
+    /// <summary>κT of the nominal (translated) model at (T, ρ), 1/Pa.</summary>
+    private static double NominalCompressibility(CubicParameterization parameters, double temperature, double density)
+        => 1 / (density * parameters.Nominal.Residual(temperature, density).PressureDRho);
 
     /// <summary>The sensitivities of (ρ, P, Z, h_r, s_r, κT, α) to each input, one row per input.</summary>
     /// <param name="parameters">The inputs.</param>
@@ -183,14 +191,15 @@ public static class StatePropagation
     /// <param name="isobaricHeatCapacity">The state's cp in J/(mol·K) (for u(μJT)), or null when the
     /// fluid has no ideal-gas heat capacity (then cp, cv and μJT have no uncertainty).</param>
     /// <param name="isobaricExpansivity">The state's α in 1/K (for u(μJT)), or null.</param>
+    /// <param name="speedOfSound">The state's speed of sound w in m/s (for u(w)), or null.</param>
     public static StateUncertainty Linear(CubicParameterization parameters, double temperature, double density, bool densityGiven,
-        double? isobaricHeatCapacity = null, double? isobaricExpansivity = null)
+        double? isobaricHeatCapacity = null, double? isobaricExpansivity = null, double? speedOfSound = null)
     {
         var rows = Sensitivities(parameters, temperature, density, densityGiven);
         var sigma = parameters.Covariance;
         double U(Func<StateValues, double> pick) => LinearPropagation.Combine(rows.Select(pick).ToArray(), sigma);
         bool curvatureKnown = rows.All(r => double.IsFinite(r.IsochoricHeatCapacity!.Value));
-        double? cv = null, cp = null, jouleThomson = null;
+        double? cv = null, cp = null, jouleThomson = null, sound = null;
         string? reason = null;
         if (isobaricHeatCapacity is not double cpNominal || isobaricExpansivity is not double expansivity)
         {
@@ -207,6 +216,15 @@ public static class StatePropagation
             // μJT = (T·α − 1)/(ρ·cp): dμ = T·dα/(ρ·cp) − μ·(dρ/ρ + dcp/cp).
             double mu = (temperature * expansivity - 1) / (density * cpNominal);
             jouleThomson = U(r => temperature * r.IsobaricExpansivity!.Value / (density * cpNominal) - mu * (r.Density / density + r.IsobaricHeatCapacity!.Value / cpNominal));
+            if (speedOfSound is double w)
+            {
+                // w² = cp/(cv·κT·ρ·M): dw/w = ½(dcp/cp − dcv/cv − dκT/κT − dρ/ρ), with the nominal
+                // cv = cp − T·α²/(ρ·κT) and κT from the same rows' model.
+                double kappa = NominalCompressibility(parameters, temperature, density);
+                double cvNominal = cpNominal - temperature * expansivity * expansivity / (density * kappa);
+                sound = U(r => 0.5 * w * (r.IsobaricHeatCapacity!.Value / cpNominal - r.IsochoricHeatCapacity!.Value / cvNominal
+                    - r.IsothermalCompressibility!.Value / kappa - r.Density / density));
+            }
         }
 
         return new StateUncertainty(PropagationMethod.Linear, U(r => r.Density), U(r => r.Pressure), U(r => r.CompressibilityFactor),
@@ -217,6 +235,7 @@ public static class StatePropagation
             IsochoricHeatCapacity = cv,
             IsobaricHeatCapacity = cp,
             JouleThomsonCoefficient = jouleThomson,
+            SpeedOfSound = sound,
             ResponseReason = reason,
         };
     }
@@ -287,6 +306,7 @@ public static class StatePropagation
             IsothermalCompressibility = StdOrNull(v => v.IsothermalCompressibility),
             IsobaricExpansivity = StdOrNull(v => v.IsobaricExpansivity),
             JouleThomsonCoefficient = StdOrNull(v => v.JouleThomsonCoefficient),
+            SpeedOfSound = StdOrNull(v => v.SpeedOfSound),
         };
         return result with
         {

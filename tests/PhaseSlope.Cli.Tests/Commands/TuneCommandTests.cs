@@ -238,7 +238,7 @@ public sealed class StateResponseUncertaintyTests
         // (standard error of a standard deviation 1/sqrt(2N) = 0.8 %; held to 4 of them).
         var monte = RunJson("state", "propane", "-T", "300", "-P", "2MPa", "--uncertainty", "monte-carlo", "--samples", "8000", "--seed", "3", "--format", "json").GetProperty("standard_uncertainty");
         var linear = RunJson("state", "propane", "-T", "300", "-P", "2MPa", "--uncertainty", "linear", "--format", "json").GetProperty("standard_uncertainty");
-        foreach (string key in new[] { "isobaric_heat_capacity_J_molK", "isochoric_heat_capacity_J_molK", "isothermal_compressibility_1_Pa", "isobaric_expansivity_1_K", "joule_thomson_coefficient_K_Pa" })
+        foreach (string key in new[] { "isobaric_heat_capacity_J_molK", "isochoric_heat_capacity_J_molK", "isothermal_compressibility_1_Pa", "isobaric_expansivity_1_K", "joule_thomson_coefficient_K_Pa", "speed_of_sound_m_s" })
         {
             AssertRelative(monte.GetProperty(key).GetDouble(), linear.GetProperty(key).GetDouble(), 4 / Math.Sqrt(2 * 8000.0), key);
         }

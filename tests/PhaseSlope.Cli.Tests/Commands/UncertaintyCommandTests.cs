@@ -128,7 +128,7 @@ public class StateUncertaintyCommandTests
 
         Assert.Equal(first, RunText(args));
         string header = first.Split('\n')[0].TrimEnd('\r');
-        Assert.EndsWith("u_density_mol_m3,u_pressure_Pa,u_compressibility_factor,u_residual_enthalpy_J_mol,u_residual_entropy_J_molK,u_isobaric_heat_capacity_J_molK,u_isochoric_heat_capacity_J_molK,u_isothermal_compressibility_1_Pa,u_isobaric_expansivity_1_K,u_joule_thomson_coefficient_K_Pa,u_undefined_reason,u_response_functions_undefined_reason", header);
+        Assert.EndsWith("u_density_mol_m3,u_pressure_Pa,u_compressibility_factor,u_residual_enthalpy_J_mol,u_residual_entropy_J_molK,u_isobaric_heat_capacity_J_molK,u_isochoric_heat_capacity_J_molK,u_isothermal_compressibility_1_Pa,u_isobaric_expansivity_1_K,u_joule_thomson_coefficient_K_Pa,u_speed_of_sound_m_s,u_undefined_reason,u_response_functions_undefined_reason", header);
     }
 }
 
