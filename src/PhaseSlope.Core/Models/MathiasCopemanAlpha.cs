@@ -78,9 +78,7 @@ public sealed class MathiasCopemanAlpha : IAlphaFunction
         double tc = _criticalTemperature;
         bool subcritical = temperature <= tc;
         double c1 = C1, c2 = subcritical ? C2 : 0, c3 = subcritical ? C3 : 0;
-        double s = Math.Sqrt(temperature / tc);
-        double x = 1 - s;
-        double x1 = -1 / (2 * s * tc), x2 = -x1 / (2 * temperature), x3 = 3 * x1 / (4 * temperature * temperature);
+        var (x, x1, x2, x3) = RootTerm.At(temperature, tc);
         double g = 1 + x * (c1 + x * (c2 + x * c3));
         double gx = c1 + x * (2 * c2 + 3 * c3 * x);
         double gxx = 2 * c2 + 6 * c3 * x;

@@ -106,18 +106,14 @@ public abstract class TunableAlpha
         public override void SlopeGradient(double temperature, double tc, IReadOnlyList<double> p, Span<double> gradient)
         {
             // α′ = 2g·m·x′ with x′ = dx/dT = −1/(2√(T·Tc)): ∂α′/∂m = 2x′·(g + m·x) = 2x′·(1 + 2m·x).
-            double s = Math.Sqrt(temperature / tc);
-            double x = 1 - s;
-            double dx = -1 / (2 * s * tc);
+            var (x, dx, _, _) = RootTerm.At(temperature, tc);
             gradient[0] = 2 * dx * (1 + 2 * p[0] * x);
         }
 
         public override void CurvatureGradient(double temperature, double tc, IReadOnlyList<double> p, Span<double> gradient)
         {
             // α″ = 2m²x′² + 2(1 + m·x)·m·x″: ∂α″/∂m = 4m·x′² + 2x″·(1 + 2m·x).
-            double s = Math.Sqrt(temperature / tc);
-            double x = 1 - s;
-            double x1 = -1 / (2 * s * tc), x2 = -x1 / (2 * temperature);
+            var (x, x1, x2, _) = RootTerm.At(temperature, tc);
             gradient[0] = 4 * p[0] * x1 * x1 + 2 * x2 * (1 + 2 * p[0] * x);
         }
 
@@ -147,9 +143,7 @@ public abstract class TunableAlpha
         public override void SlopeGradient(double temperature, double tc, IReadOnlyList<double> p, Span<double> gradient)
         {
             // α′ = 2g·g_x·x′: ∂α′/∂ck = 2x′·(x^k·g_x + g·k·x^(k−1)); above Tc only c1 acts.
-            double s = Math.Sqrt(temperature / tc);
-            double x = 1 - s;
-            double dx = -1 / (2 * s * tc);
+            var (x, dx, _, _) = RootTerm.At(temperature, tc);
             bool subcritical = temperature <= tc;
             double c2 = subcritical ? p[1] : 0, c3 = subcritical ? p[2] : 0;
             double g = 1 + x * (p[0] + x * (c2 + x * c3));
@@ -163,9 +157,7 @@ public abstract class TunableAlpha
         {
             // α″ = 2g′² + 2g·g″ with g′ = g_x·x′, g″ = g_xx·x′² + g_x·x″; for c_k:
             // ∂g = x^k, ∂g′ = k·x^(k−1)·x′, ∂g″ = k(k−1)·x^(k−2)·x′² + k·x^(k−1)·x″.
-            double s = Math.Sqrt(temperature / tc);
-            double x = 1 - s;
-            double x1 = -1 / (2 * s * tc), x2 = -x1 / (2 * temperature);
+            var (x, x1, x2, _) = RootTerm.At(temperature, tc);
             bool subcritical = temperature <= tc;
             double c2 = subcritical ? p[1] : 0, c3 = subcritical ? p[2] : 0;
             double g = 1 + x * (p[0] + x * (c2 + x * c3));

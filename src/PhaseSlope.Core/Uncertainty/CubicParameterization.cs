@@ -230,7 +230,7 @@ public sealed class CubicParameterization
                 double dm = SlopeDerivative(omega);
                 // α″ = 2m²x′² + 2(1 + m·x)·m·x″ with x′ = −1/(2s·Tc), x″ = −x′/(2T):
                 // ∂α″/∂m = 4m·x′² + 2x″·(1 + 2m·x).
-                double x1 = -1 / (2 * s * tc), x2 = -x1 / (2 * temperature);
+                var (_, x1, x2, _) = RootTerm.At(temperature, tc);
                 return (2 * g * x * dm, -(g + slope * x) / (s * tc) * dm, (4 * slope * x1 * x1 + 2 * x2 * (1 + 2 * slope * x)) * dm);
             }
 
