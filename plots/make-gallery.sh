@@ -22,6 +22,11 @@ $ps plot r-134a,r-32,ammonia --diagram slope --units engineering --out $out/slop
 $ps plot $ex/frc-7.fluid --diagram latent --data $ex/frc-7-vapour-pressure.csv --units engineering --out $out/latent-frc7.png
 # Residuals of the three best correlations (by AICc) fitted to the FRC-7 data.
 $ps plot $ex/frc-7.fluid --diagram residuals --data $ex/frc-7-vapour-pressure.csv --out $out/residuals-frc7.png
+# The invented FRC-7 fluid file's model and the model tuned to the data (from Tc and Pc only),
+# each against the data.
+tuned=$(mktemp -d)/frc-7-tuned.fluid
+$ps tune $ex/frc-7-vapour-pressure.csv --tc 540K --pc 3.1MPa --name frc-7-tuned --out "$tuned" > /dev/null
+$ps plot $ex/frc-7.fluid,"$tuned" --diagram deviations --data $ex/frc-7-vapour-pressure.csv --out $out/deviations-frc7-tuned.png
 # Isotherms of carbon dioxide with the model's loops and the equal-area tie lines.
 $ps plot carbon-dioxide --diagram p-v --out $out/p-v-carbon-dioxide.png
 # T-s of water and P-h of R-134a in engineering units.

@@ -30,6 +30,10 @@ public enum DiagramKind
     /// <summary>Deviations of the measured vapour pressures from fitted correlations (the forms
     /// with the lowest AICc), with the data's stated uncertainties.</summary>
     Residuals,
+
+    /// <summary>Deviations of the measured vapour pressures from each fluid's model (for example a
+    /// fluid before and after <c>phaseslope tune</c>), with the data's stated uncertainties.</summary>
+    Deviations,
 }
 
 /// <summary>The command-line identifiers of the diagram kinds.</summary>
@@ -46,6 +50,7 @@ public static class DiagramKinds
         (DiagramKind.TemperatureEntropy, "t-s"),
         (DiagramKind.PressureEnthalpy, "p-h"),
         (DiagramKind.Residuals, "residuals"),
+        (DiagramKind.Deviations, "deviations"),
     ];
 
     /// <summary>Every identifier, in the order of <see cref="DiagramKind"/>.</summary>
@@ -73,7 +78,7 @@ public static class DiagramKinds
     /// <summary>Whether the kind can show several fluids on one chart.</summary>
     public static bool AllowsSeveralFluids(this DiagramKind kind)
         => kind is DiagramKind.PressureTemperature or DiagramKind.LnPressureInverseTemperature or DiagramKind.TemperatureDensity
-            or DiagramKind.Slope or DiagramKind.Latent;
+            or DiagramKind.Slope or DiagramKind.Latent or DiagramKind.Deviations;
 
     /// <summary>Whether the kind has a reduced-coordinate (corresponding-states) form.</summary>
     public static bool AllowsReduced(this DiagramKind kind)
@@ -87,5 +92,6 @@ public static class DiagramKinds
 
     /// <summary>Whether the kind can overlay measured vapour pressures.</summary>
     public static bool AllowsData(this DiagramKind kind)
-        => kind is DiagramKind.PressureTemperature or DiagramKind.LnPressureInverseTemperature or DiagramKind.Latent or DiagramKind.Residuals;
+        => kind is DiagramKind.PressureTemperature or DiagramKind.LnPressureInverseTemperature or DiagramKind.Latent or DiagramKind.Residuals
+            or DiagramKind.Deviations;
 }

@@ -241,4 +241,28 @@ public class DiagramDataTests
         var ex = Assert.Throws<InvalidInputException>(() => Diagram.Build(DiagramKind.Residuals, [TestFluids.Propane], new DiagramOptions()));
         Assert.Contains("--data", ex.Message, StringComparison.Ordinal);
     }
+
+    [Fact]
+    public void Deviations_are_each_models_pressure_against_the_data()
+    {
+        // The data are the PR model's own pressures moved by a fixed ±0.3 % pattern, so PR's line is
+        // that pattern reversed (−0.3, 0, +0.3 % relative to the moved value) and SRK's differs from it.
+        var data = TestFluids.ModelVapourPressures(TestFluids.Propane, 9);
+        var srk = TestFluids.Get("propane", Core.Models.CubicModelKind.SoaveRedlichKwong);
+        var model = DeviationsDiagram.Build([TestFluids.Propane, srk], new DiagramOptions { Data = data });
+        var lines = model.Series.OfType<LineSeries>().Where(l => l is not AreaSeries && !string.IsNullOrEmpty(l.Title)).ToArray();
+        Assert.Equal(2, lines.Length);
+        var solver = TestFluids.Propane.Solver();
+        for (int k = 0; k < data.Count; k++)
+        {
+            double expected = 100 * (solver.AtTemperature(data[k].Temperature).Pressure / data[k].Pressure - 1);
+            // Traced (neighbour starts) and cold solves agree to the solver's 1e-12 in pressure.
+            Assert.Equal(expected, lines[0].Points[k].Y, 1e-8);
+        }
+
+        Assert.Contains("AAD", lines[1].Title, StringComparison.Ordinal);
+        Assert.NotEqual(lines[0].Points[0].Y, lines[1].Points[0].Y);
+        Assert.Single(model.Series.OfType<AreaSeries>());
+        Assert.Throws<InvalidInputException>(() => Diagram.Build(DiagramKind.Deviations, [TestFluids.Propane], new DiagramOptions()));
+    }
 }

@@ -17,9 +17,16 @@ public class RenderingTests
     private static PlotModel Build(string id)
     {
         Assert.True(DiagramKinds.TryParse(id, out var kind));
-        // Few points keep the suite fast; the shapes are the same. The residuals kind needs data:
+        // Few points keep the suite fast; the shapes are the same. The residuals and deviations kinds need data:
         // the model's own saturation pressures with a 0.3 % scatter pattern and stated uncertainty.
-        var data = kind == DiagramKind.Residuals ? TestFluids.ModelVapourPressures(TestFluids.Propane, 12) : null;
+        // Deviations draw Peng–Robinson against Soave–Redlich–Kwong's pressures (a model against its
+        // own pressures would sit inside the ±u band and fill the plot with it).
+        var data = kind switch
+        {
+            DiagramKind.Residuals => TestFluids.ModelVapourPressures(TestFluids.Propane, 12),
+            DiagramKind.Deviations => TestFluids.ModelVapourPressures(TestFluids.Get("propane", Core.Models.CubicModelKind.SoaveRedlichKwong), 12),
+            _ => null,
+        };
         return Diagram.Build(kind, [TestFluids.Propane], new DiagramOptions { Points = 30, Data = data });
     }
 

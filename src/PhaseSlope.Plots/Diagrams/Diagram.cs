@@ -27,6 +27,7 @@ public static class Diagram
             DiagramKind.PressureVolume => PressureVolumeDiagram.Build(fluids[0], options),
             DiagramKind.TemperatureEntropy => TemperatureEntropyDiagram.Build(fluids[0], options),
             DiagramKind.Residuals => ResidualsDiagram.Build(fluids[0], options),
+            DiagramKind.Deviations => DeviationsDiagram.Build(fluids, options),
             _ => PressureEnthalpyDiagram.Build(fluids[0], options),
         };
     }
@@ -65,12 +66,12 @@ public static class Diagram
 
         if (options.Data is not null && !kind.AllowsData())
         {
-            throw new InvalidInputException("data", 1, $"the {id} diagram takes no data (p-t, lnp-invt, latent and residuals do)");
+            throw new InvalidInputException("data", 1, $"the {id} diagram takes no data (p-t, lnp-invt, latent, residuals and deviations do)");
         }
 
-        if (options.Data is null && kind == DiagramKind.Residuals)
+        if (options.Data is null && kind is DiagramKind.Residuals or DiagramKind.Deviations)
         {
-            throw new InvalidInputException("data", 0, "the residuals diagram needs measured vapour pressures (--data)");
+            throw new InvalidInputException("data", 0, $"the {id} diagram needs measured vapour pressures (--data)");
         }
 
         if (options.Data is not null && kind == DiagramKind.Latent && fluids.Count > 1)

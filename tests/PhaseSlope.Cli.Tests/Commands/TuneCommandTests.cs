@@ -126,11 +126,11 @@ public sealed class TuneCommandTests : IDisposable
         string fluid = _folder.File("frc-p.fluid");
         Assert.Equal(0, Run("tune", FitData.ExampleCsv, "--fluid", FitData.ExampleFluid, "--out", fluid).ExitCode);
         string figure = _folder.File("overlay.svg");
-        var result = Run("plot", $"{FitData.ExampleFluid},{fluid}", "--diagram", "lnp-invt", "--data", FitData.ExampleCsv, "--out", figure);
+        var result = Run("plot", $"{FitData.ExampleFluid},{fluid}", "--diagram", "deviations", "--data", FitData.ExampleCsv, "--out", figure);
         Assert.True(result.ExitCode == 0, result.ToString());
         string svg = File.ReadAllText(figure);
         Assert.Contains("frc-7-tuned", svg, StringComparison.Ordinal);
-        Assert.Contains("measured", svg, StringComparison.Ordinal);
+        Assert.Contains("AAD", svg, StringComparison.Ordinal);
     }
 
     [Fact]
