@@ -93,4 +93,25 @@ internal static class Chart
     /// <summary>"Peng-Robinson (1976)" when every fluid uses one model, else "several models".</summary>
     public static string Models(IReadOnlyList<PlotFluid> fluids)
         => fluids.Select(f => f.Model.Kind).Distinct().Count() == 1 ? ModelTitle(fluids[0]) : "several models";
+
+    /// <summary>The zero line of a deviation plot and, when every point states one, the data's
+    /// ±u(P)/P band around it (a curve that describes the data leaves about two thirds of the
+    /// points inside).</summary>
+    public static void AddDeviationBaseline(PlotModel model, IReadOnlyList<Core.Correlations.VapourPressurePoint> sorted, UnitScale units)
+    {
+        if (sorted.All(d => d.StandardUncertainty is not null))
+        {
+            var band = new AreaSeries { Title = "data uncertainty (1 u)", Color = OxyColors.Transparent, Color2 = OxyColors.Transparent, Fill = OxyColor.FromRgb(0xE3, 0xE3, 0xE3), StrokeThickness = 0 };
+            foreach (var d in sorted)
+            {
+                double u = 100 * d.StandardUncertainty!.Value / d.Pressure;
+                band.Points.Add(new DataPoint(units.Temperature(d.Temperature), u));
+                band.Points2.Add(new DataPoint(units.Temperature(d.Temperature), -u));
+            }
+
+            model.Series.Add(band);
+        }
+
+        model.Series.Add(Line(null, HouseStyle.Ink, [new DataPoint(units.Temperature(sorted[0].Temperature), 0), new DataPoint(units.Temperature(sorted[^1].Temperature), 0)], 1));
+    }
 }

@@ -22,21 +22,7 @@ public static class DeviationsDiagram
         var model = HouseStyle.NewModel($"Vapour pressure of the model{(fluids.Count > 1 ? "s" : "")} against {options.DataLabel}");
         model.Axes.Add(HouseStyle.Linear(AxisPosition.Bottom, "temperature T", units.TemperatureUnit));
         model.Axes.Add(HouseStyle.Linear(AxisPosition.Left, "deviation 100 (P_model - P_data)/P_data", "%"));
-        if (sorted.All(d => d.StandardUncertainty is not null))
-        {
-            // ±u(P)/P of the data: a model that describes them leaves about two thirds of the points inside.
-            var band = new AreaSeries { Title = "data uncertainty (1 u)", Color = OxyColors.Transparent, Color2 = OxyColors.Transparent, Fill = OxyColor.FromRgb(0xE3, 0xE3, 0xE3), StrokeThickness = 0 };
-            foreach (var d in sorted)
-            {
-                double u = 100 * d.StandardUncertainty!.Value / d.Pressure;
-                band.Points.Add(new DataPoint(units.Temperature(d.Temperature), u));
-                band.Points2.Add(new DataPoint(units.Temperature(d.Temperature), -u));
-            }
-
-            model.Series.Add(band);
-        }
-
-        model.Series.Add(Chart.Line(null, HouseStyle.Ink, [new DataPoint(units.Temperature(sorted[0].Temperature), 0), new DataPoint(units.Temperature(sorted[^1].Temperature), 0)], 1));
+        Chart.AddDeviationBaseline(model, sorted, units);
         MarkerType[] markers = [MarkerType.Circle, MarkerType.Square, MarkerType.Triangle, MarkerType.Diamond];
         for (int i = 0; i < fluids.Count; i++)
         {
