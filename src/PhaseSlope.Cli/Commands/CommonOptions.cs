@@ -135,9 +135,15 @@ internal sealed class CommonOptions
 
         if (string.Equals(t, "fluid", StringComparison.OrdinalIgnoreCase))
         {
-            // Peng–Robinson 1978 shares Peng–Robinson's translation (the same cubic form).
+            // Translations are fitted for Peng–Robinson and Soave–Redlich–Kwong; Peng–Robinson 1978
+            // shares Peng–Robinson's (the same cubic form). Other models have none.
+            if (fluid is null || !kind.Entry().AcceptsAlphaChoice)
+            {
+                return 0;
+            }
+
             var own = kind.Entry().Form == CubicForm.PengRobinson ? CubicModelKind.PengRobinson : CubicModelKind.SoaveRedlichKwong;
-            return fluid?.VolumeShifts.FirstOrDefault(s => s.Model == own && kind.Entry().AcceptsAlphaChoice)?.Shift.Value ?? 0;
+            return fluid.VolumeShifts.FirstOrDefault(s => s.Model == own)?.Shift.Value ?? 0;
         }
 
         if (string.Equals(t, "peneloux", StringComparison.OrdinalIgnoreCase))

@@ -207,6 +207,7 @@ internal sealed class TuneOptions
         }
 
         string dataPath = parse.GetValue(Data)!;
+        var today = DateOnly.FromDateTime(DateTime.UtcNow);
         var records = CorrelationOptions.ReadDataRecords(dataPath, parse.GetValue(TemperatureUnit), parse.GetValue(PressureUnit), minimumRows: 1);
         IReadOnlyList<VapourPressurePoint> data = [.. records.Select(r => new VapourPressurePoint(r.Temperature, r.Pressure, r.StandardUncertainty, r.Weight))];
         var densities = new List<LiquidDensityPoint>();
@@ -232,7 +233,7 @@ internal sealed class TuneOptions
                 // No ω given: the one-point tuning at the datum nearest 0.7·Tc (where ω is defined) gives the start.
                 double tc = baseFluid.CriticalTemperature.Value;
                 var nearest = data.MinBy(d => Math.Abs(d.Temperature - 0.7 * tc))!;
-                var start = AlphaTuner.Tune(new TuningRequest { BaseFluid = baseFluid, Kind = kind, VapourPressures = [nearest], Date = DateOnly.FromDateTime(DateTime.UtcNow) });
+                var start = AlphaTuner.Tune(new TuningRequest { BaseFluid = baseFluid, Kind = kind, VapourPressures = [nearest], Date = today });
                 baseFluid = baseFluid with { AcentricFactor = new SourcedValue(start.Tuned.AcentricFactor.Value, $"from the data point at {NumberText.Table(nearest.Temperature)} K (the one nearest 0.7 Tc), tuned by phaseslope tune") };
             }
         }
@@ -249,7 +250,7 @@ internal sealed class TuneOptions
             VapourPressures = data,
             LiquidDensities = densities,
             DataOrigin = $"{Path.GetFileName(dataPath)}, sha256 {Checksum(dataPath)}",
-            Date = DateOnly.FromDateTime(DateTime.UtcNow),
+            Date = today,
             Name = name,
         }, format, outPath);
     }

@@ -250,48 +250,32 @@ internal sealed partial class FluidFileParser
     /// <summary>Reads the upper triangle (row by row) of an alpha-parameter covariance matrix.</summary>
     private double[] ReadCovariance(int line, string key, string rest)
     {
-        string stem = key[..^CovarianceSuffix.Length];
-        if (Array.IndexOf(AlphaKeys, stem) < 0)
-        {
-            throw Fail(line, key, "unknown key");
-        }
-
-        int p = CubicModel.AlphaParameterNames(AlphaKeyMeaning(stem).Form).Count;
+        int p = ParameterCount(key[..^CovarianceSuffix.Length]);
         int count = p * (p + 1) / 2;
-        _ = ReadSource(line, key, rest, out string body);
-        string[] tokens = body.Split((char[]?)null, StringSplitOptions.RemoveEmptyEntries);
-        if (tokens.Length != count)
-        {
-            throw Fail(line, key, $"expected the {count} numbers of the upper triangle of a {p}x{p} covariance matrix, row by row, found {tokens.Length}");
-        }
-
-        var values = new double[count];
-        for (int i = 0; i < count; i++)
-        {
-            values[i] = ParseNumber(line, key, tokens[i], $"covariance element {i + 1}");
-        }
-
-        return values;
+        return ReadNumbers(line, key, rest, count, $"the {count} numbers of the upper triangle of a {p}x{p} covariance matrix, row by row", "covariance element");
     }
 
     /// <summary>Reads ∂θ_j/∂Tc (1/K) for every parameter, then ∂θ_j/∂Pc (1/Pa).</summary>
     private double[] ReadSensitivity(int line, string key, string rest)
     {
-        string stem = key[..^SensitivitySuffix.Length];
-        if (Array.IndexOf(AlphaKeys, stem) < 0)
-        {
-            throw Fail(line, key, "unknown key");
-        }
+        int count = 2 * ParameterCount(key[..^SensitivitySuffix.Length]);
+        return ReadNumbers(line, key, rest, count, $"{count} numbers (d parameter/d Tc in 1/K for each parameter, then d parameter/d Pc in 1/Pa)", "sensitivity");
+    }
 
-        int count = 2 * CubicModel.AlphaParameterNames(AlphaKeyMeaning(stem).Form).Count;
+    /// <summary>The number of parameters of the alpha form an alpha key names.</summary>
+    private static int ParameterCount(string alphaKey) => CubicModel.AlphaParameterNames(AlphaKeyMeaning(alphaKey).Form).Count;
+
+    /// <summary>Reads exactly <paramref name="count"/> numbers before the source.</summary>
+    private double[] ReadNumbers(int line, string key, string rest, int count, string expected, string element)
+    {
         _ = ReadSource(line, key, rest, out string body);
         string[] tokens = body.Split((char[]?)null, StringSplitOptions.RemoveEmptyEntries);
         if (tokens.Length != count)
         {
-            throw Fail(line, key, $"expected {count} numbers (d parameter/d Tc in 1/K for each parameter, then d parameter/d Pc in 1/Pa), found {tokens.Length}");
+            throw Fail(line, key, $"expected {expected}, found {tokens.Length}");
         }
 
-        return [.. tokens.Select((t, i) => ParseNumber(line, key, t, $"sensitivity {i + 1}"))];
+        return [.. tokens.Select((t, i) => ParseNumber(line, key, t, $"{element} {i + 1}"))];
     }
 
     /// <summary>Reads <c>alpha_default soave|twu|mathias-copeman</c>.</summary>
@@ -309,14 +293,16 @@ internal sealed partial class FluidFileParser
     private IReadOnlyList<AlphaParameterSet> AlphaParametersWithCovariances()
     {
         var sets = new List<AlphaParameterSet>(_alphaParameters);
-        foreach (var (stem, (line, upper)) in _alphaCovariances)
+        int IndexOf(string stem, int line, string suffix, string what)
         {
             var (form, model) = AlphaKeyMeaning(stem);
             int index = sets.FindIndex(s => s.Form == form && s.Model == model);
-            if (index < 0)
-            {
-                throw Fail(line, stem + CovarianceSuffix, $"a covariance without its parameters: '{stem}' is not given");
-            }
+            return index >= 0 ? index : throw Fail(line, stem + suffix, $"a {what} without its parameters: '{stem}' is not given");
+        }
+
+        foreach (var (stem, (line, upper)) in _alphaCovariances)
+        {
+            int index = IndexOf(stem, line, CovarianceSuffix, "covariance");
 
             int p = sets[index].Values.Count;
             var matrix = new double[p, p];
@@ -351,12 +337,7 @@ internal sealed partial class FluidFileParser
 
         foreach (var (stem, (line, values)) in _alphaSensitivities)
         {
-            var (form, model) = AlphaKeyMeaning(stem);
-            int index = sets.FindIndex(s => s.Form == form && s.Model == model);
-            if (index < 0)
-            {
-                throw Fail(line, stem + SensitivitySuffix, $"a sensitivity without its parameters: '{stem}' is not given");
-            }
+            int index = IndexOf(stem, line, SensitivitySuffix, "sensitivity");
 
             int p = sets[index].Values.Count;
             var matrix = new double[p, 2];

@@ -172,6 +172,7 @@ public static class AlphaTuner
         VapourPressureFit? fit = null;
         IReadOnlyList<(string, double, double?)> parameters;
         bool convex;
+        IReadOnlyList<CoexistencePoint>? tunedPoints = null;
         if (form == AlphaForm.Default)
         {
             if (data.Count != 1)
@@ -222,7 +223,8 @@ public static class AlphaTuner
 
             var modelKind = request.Kind == CubicModelKind.SoaveRedlichKwong ? CubicModelKind.SoaveRedlichKwong : CubicModelKind.PengRobinson;
             var set = new AlphaParameterSet(form, modelKind, [.. fit.Parameters], label) { Covariance = fit.CovarianceDefined ? fit.Covariance : null };
-            set = set with { CriticalSensitivity = CriticalSensitivity(fluid, request.Kind, set, fit) };
+            (var sensitivity, tunedPoints) = CriticalSensitivity(fluid, request.Kind, set, fit, minimum);
+            set = set with { CriticalSensitivity = sensitivity };
             tuned = fluid with
             {
                 AlphaParameters = [.. fluid.AlphaParameters.Where(s => !(s.Form == form && s.Model == modelKind)), set],
@@ -236,6 +238,7 @@ public static class AlphaTuner
         }
 
         var tunedModel = CubicModel.For(request.Kind, tuned);
+        var sorted = data.OrderBy(d => d.Temperature).ToArray();
         VolumeShiftFit? shiftFit = null;
         if (request.LiquidDensities.Count > 0)
         {
@@ -251,10 +254,10 @@ public static class AlphaTuner
         }
 
         var before = new CoexistenceSolver(baseModel, minimum);
-        var after = new CoexistenceSolver(tunedModel, minimum);
-        var sorted = data.OrderBy(d => d.Temperature).ToArray();
         var beforePoints = CoexistenceCurve.Through(before, [.. sorted.Select(d => d.Temperature)]);
-        var afterPoints = CoexistenceCurve.Through(after, [.. sorted.Select(d => d.Temperature)]);
+        // The tuned model's states at the data were solved once already for the sensitivity
+        // (the same model, the same sorted temperatures); the acentric-factor route solves them here.
+        var afterPoints = tunedPoints ?? CoexistenceCurve.Through(new CoexistenceSolver(tunedModel, minimum), [.. sorted.Select(d => d.Temperature)]);
         var comparisons = sorted.Select((d, i) => new TuningComparison(d.Temperature, d.Pressure, beforePoints[i].Pressure, afterPoints[i].Pressure,
             beforePoints[i].EnthalpyOfVaporization, afterPoints[i].EnthalpyOfVaporization)).ToArray();
         var result = new TuningResult
@@ -293,18 +296,18 @@ public static class AlphaTuner
     /// This is the Gauss–Newton form (the residual × second-derivative terms are dropped, as in
     /// the fit's covariance): exact for a fit through its data, off by about the size of the
     /// relative residuals otherwise (1.7e-3 for propane against its published equation).</summary>
-    private static double[,] CriticalSensitivity(Fluid fluid, CubicModelKind kind, AlphaParameterSet set, VapourPressureFit fit)
+    /// <returns>The sensitivity (p×2) and the tuned model's states at the data temperatures (in
+    /// increasing temperature), which the before/after comparison reuses.</returns>
+    private static (double[,] Sensitivity, IReadOnlyList<CoexistencePoint> Points) CriticalSensitivity(Fluid fluid, CubicModelKind kind, AlphaParameterSet set, VapourPressureFit fit, double minimum)
     {
         int p = set.Values.Count;
         var tuned = fluid with { AlphaParameters = [set], PreferredAlpha = set.Form };
         var hook = TunableAlpha.Uncertainty(set, set.Covariance ?? new double[p, p], fluid.CriticalTemperature.Value);
         var parameterization = new CubicParameterization(tuned, kind, set.Form, VolumeShiftRule.Fixed, 0, hook);
-        double minimum = Math.Min(parameterization.MinimumTemperature, fit.MinimumTemperature);
         var solver = new CoexistenceSolver(parameterization.Nominal, minimum);
         var points = CoexistenceCurve.Through(solver, [.. fit.Data.Select(d => d.Temperature)]);
         var jt = Matrix<double>.Build.Dense(points.Count, p);
         var jx = Matrix<double>.Build.Dense(points.Count, 2);
-        var w = Vector<double>.Build.Dense([.. fit.Weights]);
         for (int i = 0; i < points.Count; i++)
         {
             var s = LinearPropagation.Sensitivities(points[i], parameterization, atFixedPressure: false);
@@ -318,9 +321,9 @@ public static class AlphaTuner
             jx[i, 1] = s.Pressure[1] / pressure;
         }
 
-        var jtw = jt.Transpose() * Matrix<double>.Build.Diagonal(w.ToArray());
+        var jtw = jt.Transpose() * Matrix<double>.Build.Diagonal([.. fit.Weights]);
         var d = -(jtw * jt).Solve(jtw * jx);
-        return d.ToArray();
+        return (d.ToArray(), points);
     }
 
     /// <summary>The acentric factor that makes the model's own alpha function reproduce one vapour pressure.</summary>

@@ -77,16 +77,16 @@ public static class StatePropagation
     {
         private readonly double _rhoRhoB, _rhoRhoG, _tRhoB, _tRhoGT, _ttB, _ttGTT, _ttRho;
 
-        public SecondPartials(CubicModel model, double t, double rho, double gT)
+        public SecondPartials(CubicModel model, double t, double rho, AlphaValue alpha)
         {
+            double g = model.AttractionA * alpha.Value;
+            double gT = model.AttractionA * alpha.FirstDerivative;
             double b = model.CovolumeB;
             double d1 = model.Form.Delta1, d2 = model.Form.Delta2;
             double eta = b * rho;
             double one = 1 - eta;
             double dd = (1 + d1 * eta) * (1 + d2 * eta);
             double u = d1 + d2 + 2 * d1 * d2 * eta;
-            var alpha = model.Alpha.Evaluate(t);
-            double g = model.AttractionA * alpha.Value;
             _rhoRhoB = 2 * R * t * b / (one * one * one) + g * ((u + 2 * d1 * d2 * eta) / (dd * dd) - 2 * eta * u * u / (dd * dd * dd));
             _rhoRhoG = b * u / (dd * dd);
             _tRhoB = R / (one * one) + gT * rho * u / (dd * dd);
@@ -135,7 +135,7 @@ public static class StatePropagation
         double z = p / (density * R * t);
         var alpha = model.Alpha.Evaluate(t);
         var partials = new LinearPropagation.Partials(model, t, rhoC, model.AttractionA * alpha.Value, model.AttractionA * alpha.FirstDerivative);
-        var second = new SecondPartials(model, t, rhoC, model.AttractionA * alpha.FirstDerivative);
+        var second = new SecondPartials(model, t, rhoC, alpha);
         // κT and α of the untranslated cubic at ρc; a translation scales both by vc/v = ρ/ρc.
         double pRho = d.PressureDRho, pT = d.PressureDT;
         double kappaC = 1 / (rhoC * pRho), expansivityC = pT / (rhoC * pRho);
