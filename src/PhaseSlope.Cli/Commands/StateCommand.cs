@@ -1,18 +1,20 @@
 using System.CommandLine;
 using PhaseSlope.Cli.Output;
+using PhaseSlope.Cli.Units;
 using PhaseSlope.Core.Properties;
 using PhaseSlope.Core.Uncertainty;
 
 namespace PhaseSlope.Cli.Commands;
 
-/// <summary><c>phaseslope state FLUID --temperature V --pressure V | --density V</c>: one single-phase state.</summary>
+/// <summary><c>phaseslope state FLUID</c> with any two of T, P, ρ (or v), h, s, u and the quality:
+/// one equilibrium state, single-phase or two-phase.</summary>
 internal static class StateCommand
 {
     /// <summary>Builds the command; its action writes to <paramref name="io"/>.</summary>
     public static Command Create(CliIo io)
     {
         var options = new StateOptions();
-        var command = new Command("state", "Every single-phase property at a temperature and a pressure (or density)");
+        var command = new Command("state", "One state from any two of temperature, pressure, density (or volume), enthalpy, entropy, internal energy and quality: every property of a single phase, or the two-phase mixture and its saturated phases");
         options.AddTo(command, withUnits: true);
         var outFile = new OutputOption();
         outFile.AddTo(command);
@@ -22,8 +24,21 @@ internal static class StateCommand
         {
             var choice = uncertainty.Bind(parse);
             var request = options.Bind(parse);
-            var (engine, state) = request.Point.Evaluate();
-            var text = choice is null ? null : Uncertainty(io, choice, request.Point, state);
+            var spec = request.Point.Spec;
+            if (choice is not null && (spec.Temperature is null || (spec.Pressure is null && spec.Density is null)))
+            {
+                throw new UsageException("--uncertainty: propagates to a state given by --temperature with --pressure or --density");
+            }
+
+            var (engine, state) = request.Point.EvaluateAny();
+            StateUncertaintyText? text = null;
+            if (choice is not null)
+            {
+                var single = !state.Region.HasQuality() ? state.Single! : throw new Core.Errors.InvalidInputException("uncertainty", state.Quality ?? double.NaN,
+                    $"--uncertainty: the state is {state.Region.Id()}; uncertainties are propagated to single-phase states (see coexist --uncertainty for the saturated phases)");
+                text = Uncertainty(io, choice, request.Point, single);
+            }
+
             outFile.Emit(io, parse, StateWriter.State(engine, state, request.Output.Format, request.Output.Units, text), "the state");
         }));
         return command;
@@ -34,7 +49,7 @@ internal static class StateCommand
     private static StateUncertaintyText Uncertainty(CliIo io, UncertaintyChoice choice, StatePoint point, ThermodynamicState state)
     {
         var parameters = UncertaintyRun.Parameters(point.Model, point.Fluid);
-        bool densityGiven = point.Density is not null;
+        bool densityGiven = point.Spec.Pressure is null;
         StateUncertainty values;
         if (state.Critical)
         {
@@ -43,16 +58,16 @@ internal static class StateCommand
         }
         else if (choice.Method == PropagationMethod.Linear)
         {
-            values = StatePropagation.Linear(parameters, point.Temperature, state.Density, densityGiven, state.IsobaricHeatCapacity, state.IsobaricExpansivity, state.SpeedOfSound);
+            values = StatePropagation.Linear(parameters, state.Temperature, state.Density, densityGiven, state.IsobaricHeatCapacity, state.IsobaricExpansivity, state.SpeedOfSound);
         }
         else
         {
             using var bar = new ProgressBar(io, choice.Samples, "Monte Carlo");
             values = StatePropagation.MonteCarlo(parameters, x =>
             {
-                var sample = point with { Fluid = parameters.FluidFor(x) };
-                var (_, s) = sample.Evaluate();
-                return new StateValues(s.Density, point.Pressure ?? s.Pressure, s.CompressibilityFactor, s.ResidualEnthalpy,
+                var sample = point with { Setting = point.Setting with { Fluid = parameters.FluidFor(x) } };
+                var (_, s) = sample.Evaluate("a Monte Carlo sample of the state");
+                return new StateValues(s.Density, point.Spec.Pressure ?? s.Pressure, s.CompressibilityFactor, s.ResidualEnthalpy,
                     s.ResidualEntropy ?? throw new Core.Errors.InvalidInputException("state", s.Density, "residual entropy undefined"),
                     s.IsobaricHeatCapacity, s.IsochoricHeatCapacity, s.IsothermalCompressibility, s.IsobaricExpansivity, s.JouleThomsonCoefficient, s.SpeedOfSound);
             }, choice.Samples, choice.Seed, bar);

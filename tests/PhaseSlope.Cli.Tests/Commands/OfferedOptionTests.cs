@@ -344,6 +344,18 @@ public sealed class OfferedOptionTests : IDisposable
         // the vapour branch, which is refused as out of range (exit 4), naming what it is.
         yield return Refused(command, "--phase", [.. baseline[..^2], "--density", "100", "--phase", "liquid"], ExitCodes.OutOfRange);
         yield return Changes(command, "--reference", baseline, "--reference", "nbp");
+        // Any two properties: each replaces the temperature (propane at 1 MPa is liquid at 300 K;
+        // these values give superheated vapour on the ideal-gas reference).
+        string[] onIsobar = Replace(Replace(baseline, "-T", "--enthalpy"), "300", "2000");
+        yield return Differs(command, "--enthalpy", baseline, onIsobar);
+        yield return Differs(command, "--entropy", baseline, Replace(Replace(baseline, "-T", "--entropy"), "300", "-20"));
+        yield return Differs(command, "--internal-energy", baseline, Replace(Replace(baseline, "-T", "--internal-energy"), "300", "0"));
+        yield return Differs(command, "--volume", baseline, [.. baseline[..^2], "--volume", "0.01 m3/mol"]);
+        yield return Refused(command, "--volume", [.. baseline[..^2], "--volume", "0.01 m3/mol", "--density", "100"]);
+        // For derive, quality 0 and 1 are the saturated liquid and vapour (inside the dome a
+        // derivative is refused: it needs one phase).
+        yield return Differs(command, "--quality", [.. baseline[..^2], "--quality", command == "state" ? "0.2" : "0"], [.. baseline[..^2], "--quality", command == "state" ? "0.8" : "1"]);
+        yield return Refused(command, "--quality", [.. baseline, "--quality", "0.5"]);
     }
 
     private static string[] Replace(string[] args, string from, string to, int skip = 0)
