@@ -1,6 +1,8 @@
 using System.CommandLine;
 using PhaseSlope.Cli.Output;
+using PhaseSlope.Cli.Input;
 using PhaseSlope.Cli.Units;
+using PhaseSlope.Core.Errors;
 using PhaseSlope.Core.Properties;
 using PhaseSlope.Core.Uncertainty;
 
@@ -20,8 +22,15 @@ internal static class StateCommand
         outFile.AddTo(command);
         var uncertainty = new UncertaintyOptions();
         uncertainty.AddTo(command);
+        var batch = new Option<string>("--batch") { Description = "CSV of states, one per row: a header naming two property columns with units in brackets (e.g. 'P [bar],h [kJ/kg]'); writes one result per row, a bad row reported by line and column" };
+        command.Options.Add(batch);
         command.SetAction(parse => io.Guard(() =>
         {
+            if (parse.GetValue(batch) is string file)
+            {
+                return Batch(io, parse, options, outFile, file, uncertainty);
+            }
+
             var choice = uncertainty.Bind(parse);
             var request = options.Bind(parse);
             var spec = request.Point.Spec;
@@ -40,8 +49,57 @@ internal static class StateCommand
             }
 
             outFile.Emit(io, parse, StateWriter.State(engine, state, request.Output.Format, request.Output.Units, text), "the state");
+            return ExitCodes.Success;
         }));
         return command;
+    }
+
+    /// <summary><c>state --batch FILE</c>: every row of the file, each refused row named on
+    /// standard error and in its output row; exit <see cref="ExitCodes.BatchRowsFailed"/> when any was.</summary>
+    private static int Batch(CliIo io, ParseResult parse, StateOptions options, OutputOption outFile, string file, UncertaintyOptions uncertainty)
+    {
+        if (options.AnyPropertyGiven(parse))
+        {
+            throw new UsageException("--batch: the states come from the file; give no property options with it");
+        }
+
+        if (CommonOptions.Given(parse, options.Phase) || uncertainty.Bind(parse) is not null)
+        {
+            throw new UsageException($"--batch: {(CommonOptions.Given(parse, options.Phase) ? "--phase" : "--uncertainty")} applies to a single state, not to a batch");
+        }
+
+        var output = options.Common.BindOutput(parse);
+        var setting = options.BindSetting(parse);
+        output.RequireMolarMassFor(setting.Fluid);
+        var rows = BoundedInput.ReadDataFile(file, reader => StateBatchCsv.Read(reader, file, setting.Fluid));
+        var engine = setting.Engine();
+        var results = new List<StateBatchResult>(rows.Count);
+        foreach (var row in rows)
+        {
+            if (row.Spec is null)
+            {
+                results.Add(new StateBatchResult(row.Line, null, row.Error));
+                continue;
+            }
+
+            try
+            {
+                results.Add(new StateBatchResult(row.Line, row.Spec.Evaluate(engine, PhaseChoice.Stable), null));
+            }
+            catch (Exception ex) when (ex is InvalidInputException or ConvergenceException or FluidDataException)
+            {
+                results.Add(new StateBatchResult(row.Line, null, $"{file}:{row.Line}: {ex.Message}"));
+            }
+        }
+
+        outFile.Emit(io, parse, StateWriter.Batch(engine, results, output.Format, output.Units), "the states");
+        var failed = results.Where(r => r.Error is not null).ToList();
+        foreach (var failure in failed)
+        {
+            io.Fail(failure.Error!, ExitCodes.BatchRowsFailed);
+        }
+
+        return failed.Count == 0 ? ExitCodes.Success : ExitCodes.BatchRowsFailed;
     }
 
     /// <summary>The state's uncertainties: linear from the nominal state's density, or Monte

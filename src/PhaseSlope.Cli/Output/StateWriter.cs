@@ -231,4 +231,94 @@ internal static class StateWriter
         text.AppendLine(CoexistenceWriter.Caution);
         return text.ToString();
     }
+
+    /// <summary>Renders a batch of states: JSON an array of {line, error, state}; CSV one row per
+    /// state with <c>line</c> and <c>error</c> first and the flattened state JSON after; a table of
+    /// the main values in the chosen units.</summary>
+    public static string Batch(PropertyModel engine, IReadOnlyList<StateBatchResult> results, OutputFormat format, UnitSystem units)
+    {
+        switch (format)
+        {
+            case OutputFormat.Json:
+                return JsonText.Write(json =>
+                {
+                    json.WriteStartArray();
+                    foreach (var r in results)
+                    {
+                        json.WriteStartObject();
+                        json.WriteNumber("line", r.Line);
+                        WriteStringOrNull(json, "error", r.Error);
+                        json.WritePropertyName("state");
+                        if (r.State is { } state)
+                        {
+                            json.WriteRawValue(Json(engine, state));
+                        }
+                        else
+                        {
+                            json.WriteNullValue();
+                        }
+
+                        json.WriteEndObject();
+                    }
+
+                    json.WriteEndArray();
+                });
+            case OutputFormat.Csv:
+                return JsonColumns.Csv([.. results.Select(r =>
+                {
+                    List<(string, string)> row = [("line", r.Line.ToString(CultureInfo.InvariantCulture)), ("error", r.Error ?? "")];
+                    if (r.State is { } state)
+                    {
+                        row.AddRange(JsonColumns.Flatten(Json(engine, state)));
+                    }
+
+                    return row;
+                })]);
+            default:
+                double m = engine.MolarMass ?? double.NaN;
+                string Show(DisplayQuantity q, double? si) => si is double v ? NumberText.Table(UnitFormatter.Convert(q, v, units, m)) : "";
+                var table = new TextTable(
+                    ["line", "phase", $"T [{UnitFormatter.Label(DisplayQuantity.Temperature, units)}]", $"P [{UnitFormatter.Label(DisplayQuantity.Pressure, units)}]",
+                     $"rho [{UnitFormatter.Label(DisplayQuantity.Density, units)}]", $"h [{UnitFormatter.Label(DisplayQuantity.MolarEnergy, units)}]",
+                     $"s [{UnitFormatter.Label(DisplayQuantity.MolarEntropy, units)}]", "quality"],
+                    [true, false, true, true, true, true, true, true]);
+                foreach (var r in results)
+                {
+                    var s = r.State;
+                    table.Add(r.Line.ToString(CultureInfo.InvariantCulture), s?.Region.Id() ?? "refused",
+                        Show(DisplayQuantity.Temperature, s?.Temperature), Show(DisplayQuantity.Pressure, s?.Pressure), Show(DisplayQuantity.Density, s?.Density),
+                        Show(DisplayQuantity.MolarEnergy, s?.Enthalpy), Show(DisplayQuantity.MolarEntropy, s?.Entropy), s?.Quality is double x ? NumberText.Table(x) : "");
+                }
+
+                var text = new StringBuilder();
+                text.AppendLine($"{engine.Fluid.Name}, {ModelText.Describe(engine.Model)}: {results.Count} states, reference: {engine.Reference.Description}");
+                text.AppendLine();
+                text.Append(table.Render());
+                foreach (var r in results.Where(r => r.Error is not null))
+                {
+                    text.AppendLine($"refused: {r.Error}");
+                }
+
+                text.AppendLine(CoexistenceWriter.Caution);
+                return text.ToString();
+        }
+    }
+
+    private static void WriteStringOrNull(Utf8JsonWriter json, string name, string? value)
+    {
+        if (value is null)
+        {
+            json.WriteNull(name);
+        }
+        else
+        {
+            json.WriteString(name, value);
+        }
+    }
 }
+
+/// <summary>One result of <c>state --batch</c>: the row's line and its state or why it was refused.</summary>
+/// <param name="Line">1-based physical line in the batch file.</param>
+/// <param name="State">The state, or null when the row was refused.</param>
+/// <param name="Error">Why the row was refused (line and column named), or null.</param>
+internal sealed record StateBatchResult(int Line, FluidState? State, string? Error);

@@ -117,6 +117,9 @@ public sealed class OfferedOptionTests : IDisposable
             yield return row;
         }
 
+        yield return Differs("state", "--batch", ["state", "propane", "--batch", "{states1}"], ["state", "propane", "--batch", "{states2}"]);
+        yield return Refused("state", "--batch", ["state", "propane", "--batch", "{states1}", "-T", "300"]);
+
         string[] derive = ["derive", "propane", "--of", "U", "--by", "V", "--hold", "T", "-T", "300", "-P", "1MPa"];
         yield return Differs("derive", "--of", derive, ["derive", "propane", "--of", "H", "--by", "V", "--hold", "T", "-T", "300", "-P", "1MPa"]);
         yield return Differs("derive", "--by", derive, ["derive", "propane", "--of", "U", "--by", "P", "--hold", "T", "-T", "300", "-P", "1MPa"]);
@@ -525,7 +528,16 @@ public sealed class OfferedOptionTests : IDisposable
             File.WriteAllText(bare, BareData);
         }
 
-        return [.. args.Select(a => a.Replace("{dir}", folder.Path, StringComparison.Ordinal).Replace("{bare}", bare, StringComparison.Ordinal))];
+        // Two invented batches of states for state --batch.
+        string states1 = _data.File("states1.csv"), states2 = _data.File("states2.csv");
+        if (!File.Exists(states1))
+        {
+            File.WriteAllText(states1, "T [K],P [bar]\n300,1\n");
+            File.WriteAllText(states2, "T [K],P [bar]\n300,2\n");
+        }
+
+        return [.. args.Select(a => a.Replace("{dir}", folder.Path, StringComparison.Ordinal).Replace("{bare}", bare, StringComparison.Ordinal)
+            .Replace("{states1}", states1, StringComparison.Ordinal).Replace("{states2}", states2, StringComparison.Ordinal))];
     }
 
     /// <summary>What a successful run produced: exit code, stdout, stderr without timings, and
