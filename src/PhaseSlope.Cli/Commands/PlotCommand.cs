@@ -1,4 +1,5 @@
 using System.CommandLine;
+using OxyPlot;
 using PhaseSlope.Cli.Units;
 using PhaseSlope.Core.Errors;
 using PhaseSlope.Core.Properties;
@@ -22,7 +23,18 @@ internal static class PlotCommand
         command.SetAction(parse => io.Guard(() =>
         {
             var request = options.Bind(parse);
-            var model = Diagram.Build(request.Kind, request.Fluids, request.Options);
+            PlotModel model;
+            try
+            {
+                model = Diagram.Build(request.Kind, request.Fluids, request.Options);
+            }
+            catch (InvalidInputException ex) when (PlotOptions.OptionOf(ex.Field) is string option)
+            {
+                // Found only with the fluid's numbers (a range below its lowest pressure, a cycle whose
+                // throttled liquid misses the dome): still out of range (exit 4), named by its option.
+                throw new InvalidInputException(ex.Field, ex.Value, $"{option}: {ex.Message}");
+            }
+
             // Rendered into memory first: a rendering failure never touches the file system.
             using var figure = new MemoryStream();
             FigureExporter.Export(model, figure, request.Format, request.Width, request.Height);
@@ -156,6 +168,9 @@ internal sealed class PlotOptions
         command.Options.Add(EntropyRange);
         command.Options.Add(Cycle);
     }
+
+    /// <summary>The option a field of a refusal by <see cref="Diagram"/> comes from, or null.</summary>
+    public static string? OptionOf(string field) => FieldOptions.GetValueOrDefault(field);
 
     /// <summary>The option each field of <see cref="Diagram.Check"/>'s property-chart checks comes from.</summary>
     private static readonly Dictionary<string, string> FieldOptions = new(StringComparer.Ordinal)

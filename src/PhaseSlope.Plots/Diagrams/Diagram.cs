@@ -119,10 +119,10 @@ public static class Diagram
 
         double lowest = CoexistenceSolver.LowestValidTemperature(fluid.Fluid);
         double tc = fluid.Model.CriticalTemperature;
-        Lines(options.Isotherms, "isotherms", t => t < lowest ? $"{Chart.Number(t)} K is below the lowest valid temperature {Chart.Number(lowest)} K of {fluid.Name}" : null);
+        Lines(options.Isotherms, "isotherms", t => t < lowest ? $"the isotherm at {Chart.Number(t)} K is below the lowest valid temperature {Chart.Number(lowest)} K of {fluid.Name}" : null);
         Lines(options.Isobars, "isobars", _ => null);
         Lines(options.Isochores, "isochores", rho => rho >= fluid.Model.DensityBound(Core.Models.Composition.Pure)
-            ? $"{Chart.Number(rho)} mol/m³ is at or above the model's limit 1/b" : null, allowEmpty: true);
+            ? $"the isochore at {Chart.Number(rho)} mol/m³ is at or above the model's limit 1/b" : null, allowEmpty: true);
         foreach (var (range, field) in new[] { (options.TemperatureRange, "temperature range"), (options.PressureRange, "pressure range"),
             (options.EnthalpyRange, "enthalpy range"), (options.EntropyRange, "entropy range") })
         {
@@ -203,7 +203,7 @@ public static class Diagram
 
             if (problem(v) is string why)
             {
-                throw new InvalidInputException(field, v, $"{field}: {why}");
+                throw new InvalidInputException(field, v, why);
             }
         }
     }

@@ -103,7 +103,18 @@ public static class PressureEnthalpyDiagram
         model.Series.Add(Chart.Critical([Map(critical.Enthalpy!.Value, critical.Pressure)]));
         if (options.Cycle is not null)
         {
-            AddCycle(model, VapourCompressionCycle.Compute(properties, options.Cycle), units, Map);
+            VapourCompressionCycle cycle;
+            try
+            {
+                cycle = VapourCompressionCycle.Compute(properties, options.Cycle);
+            }
+            catch (Core.Errors.InvalidInputException ex)
+            {
+                // One field for every refusal of the cycle, so that a caller can say which option it came from.
+                throw new Core.Errors.InvalidInputException("cycle", ex.Value, ex.Message);
+            }
+
+            AddCycle(model, cycle, units, Map);
         }
 
         return model;
