@@ -20,7 +20,7 @@ namespace PhaseSlope.Core.Properties;
 /// <see cref="ThermodynamicState.IdealGasUnavailableReason"/>. A reference convention other than
 /// the base one needs cp° and is refused.</para>
 /// </remarks>
-public sealed class PropertyModel
+public sealed partial class PropertyModel
 {
     private const double R = Constants.GasConstant;
     private readonly IdealGasHeatCapacity? _heatCapacity;

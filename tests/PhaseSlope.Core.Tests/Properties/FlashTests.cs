@@ -1,0 +1,182 @@
+using PhaseSlope.Core.Errors;
+using PhaseSlope.Core.Fluids;
+using PhaseSlope.Core.Models;
+using PhaseSlope.Core.Properties;
+using PhaseSlope.Core.Tests.TestSupport;
+using Xunit.Abstractions;
+
+namespace PhaseSlope.Core.Tests.Properties;
+
+/// <summary>Flashes from any two properties: round trips against the direct (T, P) and (T, ρ)
+/// evaluations and the lever rule on the coexistence point. These are consistency checks of the
+/// model with itself, so they hold to the flash's convergence, not to a model's accuracy.</summary>
+public sealed class FlashTests(ITestOutputHelper output)
+{
+    // The flash promises 1e-10 relative (converged to 1e-12 in the property it matches). A
+    // temperature recovered from h at fixed P is off by δh/cp, so 1e-10 relative in T holds with
+    // margin away from the critical point; near it (cp large) the h residual is the check.
+    private const double Promise = 1e-10;
+
+    private static PropertyModel Engine(string name, ReferenceState? reference = null)
+        => PropertyModel.For(FluidCatalog.Embedded.Find(name), CubicModelKind.PengRobinson, reference);
+
+    private static double Relative(double expected, double actual, double scale) => Math.Abs(actual - expected) / Math.Max(Math.Abs(expected), scale);
+
+    [Theory]
+    [InlineData("propane")]
+    [InlineData("water")]
+    [InlineData("r-134a")]
+    [InlineData("carbon-dioxide")]
+    [InlineData("nitrogen")]
+    public void QualityStates_AreTheLeverRuleOnTheCoexistencePoint(string name)
+    {
+        var engine = Engine(name);
+        double t = 0.5 * (engine.Solver.MinimumTemperature + engine.Solver.CriticalTemperature);
+        var point = engine.Coexistence(engine.Solver.AtTemperature(t));
+        foreach (double x in new[] { 0.0, 0.25, 0.5, 0.9, 1.0 })
+        {
+            var state = engine.Flash(StateProperty.Temperature, t, StateProperty.Quality, x);
+            double hL = point.Liquid.State.Enthalpy!.Value, hV = point.Vapour.State.Enthalpy!.Value;
+            double sL = point.Liquid.State.Entropy!.Value, sV = point.Vapour.State.Entropy!.Value;
+            double vL = point.Liquid.State.MolarVolume, vV = point.Vapour.State.MolarVolume;
+            // Same coexistence point, same arithmetic: equal to rounding (1e-13 of the scale).
+            AssertClose.Absolute(hL + x * (hV - hL), state.Enthalpy!.Value, 1e-13 * Math.Abs(hV - hL) + 1e-9, $"h at x = {x}");
+            AssertClose.Absolute(sL + x * (sV - sL), state.Entropy!.Value, 1e-13 * Math.Abs(sV - sL) + 1e-12, $"s at x = {x}");
+            AssertClose.Relative(vL + x * (vV - vL), state.MolarVolume, 1e-13, $"v at x = {x}");
+            AssertClose.Relative(point.Point.Pressure, state.Pressure, 1e-15, "pressure");
+            Assert.Equal(x == 0 ? FluidRegion.SaturatedLiquid : x == 1 ? FluidRegion.SaturatedVapour : FluidRegion.TwoPhase, state.Region);
+
+            // Back from (P, h), (P, s), (T, ρ), (T, h) and (h, s): the same quality.
+            foreach (var (a, va, b, vb) in new[]
+                     {
+                         (StateProperty.Pressure, state.Pressure, StateProperty.Enthalpy, state.Enthalpy!.Value),
+                         (StateProperty.Pressure, state.Pressure, StateProperty.Entropy, state.Entropy!.Value),
+                         (StateProperty.Temperature, t, StateProperty.Density, state.Density),
+                         (StateProperty.Temperature, t, StateProperty.Enthalpy, state.Enthalpy!.Value),
+                         (StateProperty.Enthalpy, state.Enthalpy!.Value, StateProperty.Entropy, state.Entropy!.Value),
+                     })
+            {
+                if (a == StateProperty.Temperature && b == StateProperty.Density && x is 0 or 1)
+                {
+                    continue; // a saturated density at T is the single phase itself (tested below)
+                }
+
+                var back = engine.Flash(a, va, b, vb);
+                AssertClose.Absolute(x, back.Quality ?? double.NaN, 1e-9, $"quality from ({a}, {b}) at x = {x}");
+                AssertClose.Relative(t, back.Temperature, 1e-10, $"T from ({a}, {b}) at x = {x}");
+            }
+        }
+    }
+
+    [Theory]
+    [InlineData("propane")]
+    [InlineData("water")]
+    [InlineData("r-134a")]
+    [InlineData("methane")]
+    [InlineData("n-heptane")]
+    public void SinglePhaseStates_RoundTripThroughEveryPair(string name)
+    {
+        var engine = Engine(name);
+        double tc = engine.Solver.CriticalTemperature, pc = engine.Solver.CriticalPressure;
+        double tLow = engine.Solver.MinimumTemperature, tHigh = Math.Min(engine.FlashMaximumTemperature, 2 * tc);
+        int checkedStates = 0;
+        foreach (double tr in new[] { 0.05, 0.3, 0.6, 0.9, 0.999, 1.001, 1.3, 1.9 })
+        {
+            double t = tLow + tr / 1.9 * (tHigh - tLow);
+            foreach (double pr in new[] { 0.01, 0.2, 0.7, 0.999, 1.001, 1.5, 4 })
+            {
+                double p = pr * pc;
+                var direct = engine.Describe(engine.AtPressure(t, p));
+                var s = direct.Single!;
+                foreach (var (a, va, b, vb) in new[]
+                         {
+                             (StateProperty.Pressure, p, StateProperty.Enthalpy, s.Enthalpy!.Value),
+                             (StateProperty.Pressure, p, StateProperty.Entropy, s.Entropy!.Value),
+                             (StateProperty.Pressure, p, StateProperty.InternalEnergy, s.InternalEnergy!.Value),
+                             (StateProperty.Pressure, p, StateProperty.Density, s.Density),
+                             (StateProperty.Temperature, t, StateProperty.Density, s.Density),
+                             (StateProperty.Temperature, t, StateProperty.Entropy, s.Entropy!.Value),
+                             (StateProperty.Temperature, t, StateProperty.InternalEnergy, s.InternalEnergy!.Value),
+                             (StateProperty.Density, s.Density, StateProperty.InternalEnergy, s.InternalEnergy!.Value),
+                             (StateProperty.Enthalpy, s.Enthalpy!.Value, StateProperty.Entropy, s.Entropy!.Value),
+                         })
+                {
+                    var back = engine.Flash(a, va, b, vb);
+                    string what = $"{name} ({a}, {b}) at {t:G6} K, {p:G6} Pa ({direct.Region.Id()})";
+                    Assert.Null(back.Quality);
+                    Assert.Equal(direct.Region, back.Region);
+                    AssertClose.Relative(t, back.Temperature, Promise, $"T of {what}");
+                    AssertClose.Relative(p, back.Pressure, 1e-8, $"P of {what}");
+                    checkedStates++;
+                }
+            }
+        }
+
+        output.WriteLine($"{name}: {checkedStates} round trips");
+    }
+
+    [Fact]
+    public void RegionsAreNamedAsTheTradeNamesThem()
+    {
+        var engine = Engine("propane");
+        double tc = engine.Solver.CriticalTemperature, pc = engine.Solver.CriticalPressure;
+        Assert.Equal(FluidRegion.CompressedLiquid, engine.Describe(engine.AtPressure(250, 2e6)).Region);
+        Assert.Equal(FluidRegion.SuperheatedVapour, engine.Describe(engine.AtPressure(300, 1e5)).Region);
+        Assert.Equal(FluidRegion.Gas, engine.Describe(engine.AtPressure(1.1 * tc, 0.5 * pc)).Region);
+        Assert.Equal(FluidRegion.SupercriticalFluid, engine.Describe(engine.AtPressure(1.1 * tc, 1.5 * pc)).Region);
+        Assert.Equal(FluidRegion.CompressedLiquid, engine.Describe(engine.AtPressure(0.9 * tc, 1.5 * pc)).Region);
+
+        // Superheat and subcooling against the saturation temperature at the state's pressure.
+        var vapour = engine.Describe(engine.AtPressure(300, 1e5));
+        double tsat = engine.Solver.AtPressure(1e5).Temperature;
+        AssertClose.Relative(300 - tsat, vapour.Superheat!.Value, 1e-12, "superheat");
+        Assert.Null(vapour.Subcooling);
+        var liquid = engine.Describe(engine.AtPressure(250, 2e6));
+        AssertClose.Relative(engine.Solver.AtPressure(2e6).Temperature - 250, liquid.Subcooling!.Value, 1e-12, "subcooling");
+    }
+
+    [Fact]
+    public void TwoPhaseDensityAtTemperature_IsTheMixture()
+    {
+        // Before flashes, a (T, ρ) inside the dome was refused; it is the two-phase mixture.
+        var engine = Engine("water");
+        var point = engine.Solver.AtTemperature(400);
+        double v = 0.5 / point.Liquid.Density + 0.5 / point.Vapour.Density;
+        var state = engine.Flash(StateProperty.Temperature, 400, StateProperty.Density, 1 / v);
+        Assert.Equal(FluidRegion.TwoPhase, state.Region);
+        AssertClose.Absolute(0.5, state.Quality!.Value, 1e-13, "quality by the volume lever rule");
+    }
+
+    [Theory]
+    [InlineData(0.99)]
+    [InlineData(0.999)]
+    [InlineData(0.9999)]
+    public void NearTheCriticalPoint_PressureEnthalpyFlashesConverge(double reduced)
+    {
+        var engine = Engine("carbon-dioxide");
+        double tc = engine.Solver.CriticalTemperature;
+        var point = engine.Coexistence(engine.Solver.AtTemperature(reduced * tc));
+        foreach (double x in new[] { -0.01, 0.3, 1.01 })
+        {
+            // x outside 0..1: just off the dome edges on the same isobar, single phase.
+            double h = point.Liquid.State.Enthalpy!.Value + x * (point.Vapour.State.Enthalpy!.Value - point.Liquid.State.Enthalpy!.Value);
+            var state = engine.Flash(StateProperty.Pressure, point.Point.Pressure, StateProperty.Enthalpy, h);
+            Assert.True(Relative(h, state.Enthalpy!.Value, Constants.GasConstant * state.Temperature) <= Promise, $"h residual at {reduced} Tc, x {x}");
+            Assert.Equal(x is > 0 and < 1, state.Region == FluidRegion.TwoPhase);
+        }
+    }
+
+    [Fact]
+    public void UnreachableAndIllPosedSpecifications_AreRefusedWithTheReason()
+    {
+        var engine = Engine("propane");
+        double tc = engine.Solver.CriticalTemperature;
+        var above = Assert.Throws<InvalidInputException>(() => engine.Flash(StateProperty.Temperature, tc + 1, StateProperty.Quality, 0.5));
+        Assert.Contains("critical temperature", above.Message);
+        var high = Assert.Throws<InvalidInputException>(() => engine.Flash(StateProperty.Pressure, 1e5, StateProperty.Enthalpy, 1e7));
+        Assert.Contains("no state at", high.Message);
+        Assert.Throws<InvalidInputException>(() => engine.Flash(StateProperty.Enthalpy, 1e4, StateProperty.InternalEnergy, 8e3));
+        Assert.Throws<InvalidInputException>(() => engine.Flash(StateProperty.Pressure, 1e5, StateProperty.Pressure, 2e5));
+        Assert.Throws<InvalidInputException>(() => engine.Flash(StateProperty.Pressure, 1e5, StateProperty.Quality, 1.5));
+    }
+}
