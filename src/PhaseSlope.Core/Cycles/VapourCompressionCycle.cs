@@ -18,26 +18,23 @@ namespace PhaseSlope.Core.Cycles;
 /// </remarks>
 public sealed record VapourCompressionCycle
 {
-    /// <summary>Highest temperature searched for the compressor discharge, as a multiple of Tc.</summary>
-    public const double HighestReducedTemperature = 3;
-
     /// <summary>What was asked for.</summary>
     public required VapourCompressionSpecification Specification { get; init; }
 
     /// <summary>Evaporator-outlet state (compressor suction).</summary>
-    public required IsobaricPoint Suction { get; init; }
+    public required FluidState Suction { get; init; }
 
     /// <summary>Compressor discharge after isentropic compression (state 2s).</summary>
-    public required IsobaricPoint IsentropicDischarge { get; init; }
+    public required FluidState IsentropicDischarge { get; init; }
 
     /// <summary>Compressor discharge (state 2).</summary>
-    public required IsobaricPoint Discharge { get; init; }
+    public required FluidState Discharge { get; init; }
 
     /// <summary>Condenser outlet (state 3).</summary>
-    public required IsobaricPoint CondenserOutlet { get; init; }
+    public required FluidState CondenserOutlet { get; init; }
 
     /// <summary>Evaporator inlet after the throttle (state 4), two-phase.</summary>
-    public required IsobaricPoint EvaporatorInlet { get; init; }
+    public required FluidState EvaporatorInlet { get; init; }
 
     /// <summary>Saturation pressure at the evaporating temperature, Pa.</summary>
     public double EvaporatingPressure => Suction.Pressure;
@@ -46,13 +43,13 @@ public sealed record VapourCompressionCycle
     public double CondensingPressure => Discharge.Pressure;
 
     /// <summary>q_L = h1 − h4, J/mol.</summary>
-    public double RefrigeratingEffect => Suction.Enthalpy - EvaporatorInlet.Enthalpy;
+    public double RefrigeratingEffect => Suction.Enthalpy!.Value - EvaporatorInlet.Enthalpy!.Value;
 
     /// <summary>w = h2 − h1, J/mol.</summary>
-    public double CompressorWork => Discharge.Enthalpy - Suction.Enthalpy;
+    public double CompressorWork => Discharge.Enthalpy!.Value - Suction.Enthalpy!.Value;
 
     /// <summary>q_H = h2 − h3, J/mol.</summary>
-    public double HeatRejected => Discharge.Enthalpy - CondenserOutlet.Enthalpy;
+    public double HeatRejected => Discharge.Enthalpy!.Value - CondenserOutlet.Enthalpy!.Value;
 
     /// <summary>Coefficient of performance as a refrigerator, q_L / w.</summary>
     public double CoefficientOfPerformance => RefrigeratingEffect / CompressorWork;
@@ -61,7 +58,7 @@ public sealed record VapourCompressionCycle
     public double HeatingCoefficientOfPerformance => HeatRejected / CompressorWork;
 
     /// <summary>The states in cycle order with their labels: 1, 2s, 2, 3, 4.</summary>
-    public IReadOnlyList<(string Label, IsobaricPoint State)> States
+    public IReadOnlyList<(string Label, FluidState State)> States
         => [("1", Suction), ("2s", IsentropicDischarge), ("2", Discharge), ("3", CondenserOutlet), ("4", EvaporatorInlet)];
 
     /// <summary>Computes the cycle with <paramref name="properties"/> (its model and reference).</summary>
@@ -69,7 +66,8 @@ public sealed record VapourCompressionCycle
     /// (<see cref="VapourCompressionSpecification.Validate"/>); the condensing temperature is at or
     /// above the model's critical temperature; the evaporating or condenser-outlet temperature is
     /// below the lowest valid temperature; the throttled liquid falls outside the dome; the
-    /// discharge lies above <see cref="HighestReducedTemperature"/>·Tc.</exception>
+    /// discharge lies beyond the temperatures the flash searches
+    /// (<see cref="PropertyModel.FlashMaximumTemperature"/>).</exception>
     /// <exception cref="FluidDataException">The fluid has no ideal-gas heat capacity.</exception>
     public static VapourCompressionCycle Compute(PropertyModel properties, VapourCompressionSpecification specification)
     {
@@ -98,46 +96,33 @@ public sealed record VapourCompressionCycle
             }
         }
 
-        var evaporator = properties.Coexistence(solver.AtTemperature(spec.EvaporatingTemperature));
-        var condenser = properties.Coexistence(solver.AtTemperature(spec.CondensingTemperature));
-        double pEvap = evaporator.Point.Pressure;
-        double pCond = condenser.Point.Pressure;
-        double tHigh = HighestReducedTemperature * tc;
-
-        double t1 = spec.EvaporatingTemperature + spec.Superheat;
+        // Every state is a flash of the property model (PropertyModel.Flash): the saturated ends by
+        // (T, x), the superheated suction and the subcooled outlet by (T, P), the discharges by
+        // (P, s) and (P, h), the throttled state by (P, h).
         var suction = spec.Superheat == 0
-            ? Point(evaporator.Vapour.State, 1)
-            : Point(properties.AtPressure(t1, pEvap, t1 < tc ? PhaseChoice.Vapour : PhaseChoice.Stable), null);
+            ? properties.Flash(StateProperty.Temperature, spec.EvaporatingTemperature, StateProperty.Quality, 1)
+            : properties.Flash(StateProperty.Temperature, spec.EvaporatingTemperature + spec.Superheat, StateProperty.Pressure,
+                properties.Solver.AtTemperature(spec.EvaporatingTemperature).Pressure);
+        double pEvap = suction.Pressure;
+        var saturatedLiquid = properties.Flash(StateProperty.Temperature, spec.CondensingTemperature, StateProperty.Quality, 0);
+        double pCond = saturatedLiquid.Pressure;
         var outlet = spec.Subcooling == 0
-            ? Point(condenser.Liquid.State, 0)
-            : Point(properties.AtPressure(tOutlet, pCond, PhaseChoice.Liquid), null);
+            ? saturatedLiquid
+            : properties.Describe(properties.AtPressure(tOutlet, pCond, PhaseChoice.Liquid));
 
-        if (!IsobaricStates.TryAtEntropy(properties, pCond, suction.Entropy, tHigh, out var isentropic))
-        {
-            throw new InvalidInputException("condensing temperature", spec.CondensingTemperature,
-                $"no state at the condensing pressure {Preconditions.Format(pCond)} Pa has the suction entropy below {Preconditions.Format(tHigh)} K");
-        }
+        var isentropic = properties.Flash(StateProperty.Pressure, pCond, StateProperty.Entropy, suction.Entropy!.Value);
+        double h1 = suction.Enthalpy!.Value;
+        double h2 = h1 + (isentropic.Enthalpy!.Value - h1) / spec.IsentropicEfficiency;
+        var discharge = spec.IsentropicEfficiency < 1 ? properties.Flash(StateProperty.Pressure, pCond, StateProperty.Enthalpy, h2) : isentropic;
 
-        double h2 = suction.Enthalpy + (isentropic.Enthalpy - suction.Enthalpy) / spec.IsentropicEfficiency;
-        var discharge = isentropic;
-        if (spec.IsentropicEfficiency < 1 && !IsobaricStates.TryAtEnthalpy(properties, pCond, h2, tHigh, out discharge))
-        {
-            throw new InvalidInputException("efficiency", spec.IsentropicEfficiency,
-                $"the compressor discharge (efficiency {Preconditions.Format(spec.IsentropicEfficiency)}) would lie above {Preconditions.Format(tHigh)} K, beyond the range searched");
-        }
-
-        // The throttle: h4 = h3, at the evaporating pressure.
-        double hL = evaporator.Liquid.State.Enthalpy!.Value, hV = evaporator.Vapour.State.Enthalpy!.Value;
-        double x4 = (outlet.Enthalpy - hL) / (hV - hL);
-        if (!(x4 >= 0 && x4 < 1))
+        // The throttle: h4 = h3, at the evaporating pressure; it must land inside the dome.
+        var inlet = properties.Flash(StateProperty.Pressure, pEvap, StateProperty.Enthalpy, outlet.Enthalpy!.Value);
+        if (inlet.Region != FluidRegion.TwoPhase)
         {
             throw new InvalidInputException("subcooling", spec.Subcooling,
-                $"the throttled liquid (h = {Preconditions.Format(outlet.Enthalpy)} J/mol) lies outside the dome at the evaporating pressure (quality {Preconditions.Format(x4)}): reduce the subcooling");
+                $"the throttled liquid (h = {Preconditions.Format(outlet.Enthalpy!.Value)} J/mol) is not a two-phase state at the evaporating pressure {Preconditions.Format(pEvap)} Pa but {inlet.Region.Id()}: reduce the subcooling");
         }
 
-        double sL = evaporator.Liquid.State.Entropy!.Value, sV = evaporator.Vapour.State.Entropy!.Value;
-        var inlet = new IsobaricPoint(spec.EvaporatingTemperature, pEvap, outlet.Enthalpy, sL + x4 * (sV - sL),
-            1 / ((1 - x4) / evaporator.Liquid.State.Density + x4 / evaporator.Vapour.State.Density), x4);
         return new VapourCompressionCycle
         {
             Specification = spec,
@@ -148,7 +133,4 @@ public sealed record VapourCompressionCycle
             EvaporatorInlet = inlet,
         };
     }
-
-    private static IsobaricPoint Point(ThermodynamicState state, double? quality)
-        => new(state.Temperature, state.Pressure, state.Enthalpy!.Value, state.Entropy!.Value, state.Density, quality);
 }

@@ -1,6 +1,7 @@
 using OxyPlot;
 using OxyPlot.Axes;
 using PhaseSlope.Core.Cycles;
+using PhaseSlope.Core.Errors;
 using PhaseSlope.Core.Equilibrium;
 using PhaseSlope.Core.Properties;
 
@@ -202,7 +203,6 @@ public static class PressureEnthalpyDiagram
         // found off the dome is vapour or supercritical fluid.
         double sLow = critical.Entropy!.Value;
         double sHigh = saturated.Max(x => x.Vapour.State.Entropy!.Value) + 0.25 * saturated[0].EntropyOfVaporization;
-        double highest = 2 * Math.Max(tTop, properties.Solver.CriticalTemperature);
         var entropies = RoundValues.Linear(units.Entropy(sLow, m), units.Entropy(sHigh, m), MostLines)
             .Select(v => units.EntropyToSi(v, m)).Where(v => v >= sLow).ToList();
         bool first = true;
@@ -212,9 +212,19 @@ public static class PressureEnthalpyDiagram
             var segments = new List<List<DataPoint>> { new() };
             foreach (double p in LogSpaced(pMin, pMax, IsothermPoints))
             {
-                if (IsobaricStates.TryAtEntropy(properties, p, s, highest, out var state) && state.Quality is null)
+                // A flash outside what the model reaches (hotter than cp°'s range) ends the line there.
+                FluidState? state = null;
+                try
                 {
-                    segments[^1].Add(map(state.Enthalpy, p));
+                    state = properties.Flash(StateProperty.Pressure, p, StateProperty.Entropy, s);
+                }
+                catch (InvalidInputException)
+                {
+                }
+
+                if (state is { Quality: null })
+                {
+                    segments[^1].Add(map(state.Enthalpy!.Value, p));
                 }
                 else if (segments[^1].Count > 0)
                 {
@@ -238,7 +248,7 @@ public static class PressureEnthalpyDiagram
         bool first = true;
         foreach (double rho in densities)
         {
-            var points = IsochorePoints(properties, rho, tStart, tTop).Select(s => map(s.Enthalpy, s.Pressure)).ToList();
+            var points = IsochorePoints(properties, rho, tStart, tTop).Select(s => map(s.Enthalpy!.Value, s.Pressure)).ToList();
             if (points.Count < 2)
             {
                 continue;
@@ -257,63 +267,29 @@ public static class PressureEnthalpyDiagram
             : [.. RoundValues.Logarithmic(units.Density(saturated[0].Vapour.State.Density, m), units.Density(criticalDensity, m), MostLines)
                 .Select(v => units.DensityToSi(v, m))];
 
-    /// <summary>States along an isochore from <paramref name="tLow"/> to <paramref name="tHigh"/>:
-    /// inside the dome the two-phase mixture of that overall density (quality from the volumes).</summary>
-    internal static IEnumerable<IsobaricPoint> IsochorePoints(PropertyModel properties, double density, double tLow, double tHigh)
-    {
-        var solver = properties.Solver;
-        double tc = solver.CriticalTemperature;
-        foreach (double t in Enumerable.Range(0, IsothermPoints).Select(k => tLow + (tHigh - tLow) * k / (IsothermPoints - 1.0)))
-        {
-            ThermodynamicState? single = null;
-            IsobaricPoint? mixture = null;
-            if (t < tc)
-            {
-                var sat = properties.Coexistence(solver.AtTemperature(t));
-                var l = sat.Liquid.State;
-                var v = sat.Vapour.State;
-                if (density > v.Density && density < l.Density)
-                {
-                    double x = (1 / density - 1 / l.Density) / (1 / v.Density - 1 / l.Density);
-                    mixture = new IsobaricPoint(t, sat.Point.Pressure, l.Enthalpy!.Value + x * (v.Enthalpy!.Value - l.Enthalpy!.Value),
-                        l.Entropy!.Value + x * (v.Entropy!.Value - l.Entropy!.Value), density, x);
-                }
-                else
-                {
-                    single = properties.AtDensity(t, density, density <= v.Density ? PhaseChoice.Vapour : PhaseChoice.Liquid);
-                }
-            }
-            else
-            {
-                single = properties.AtDensity(t, density);
-            }
-
-            if (mixture is { } mix)
-            {
-                yield return mix;
-            }
-            else if (single is not null && single.Pressure > 0)
-            {
-                yield return new IsobaricPoint(t, single.Pressure, single.Enthalpy!.Value, single.Entropy!.Value, density, null);
-            }
-        }
-    }
+    /// <summary>States along an isochore from <paramref name="tLow"/> to <paramref name="tHigh"/>
+    /// (flashes at T and ρ: inside the dome the two-phase mixture of that overall density); states
+    /// at a pressure not above zero (a stretched liquid) are left out.</summary>
+    internal static IEnumerable<FluidState> IsochorePoints(PropertyModel properties, double density, double tLow, double tHigh)
+        => Enumerable.Range(0, IsothermPoints).Select(k => tLow + (tHigh - tLow) * k / (IsothermPoints - 1.0))
+            .Select(t => properties.Flash(StateProperty.Temperature, t, StateProperty.Density, density))
+            .Where(s => s.Pressure > 0);
 
     private static void AddCycle(PlotModel model, VapourCompressionCycle cycle, UnitScale units, Func<double, double, DataPoint> map)
     {
         // 1 → 2 (compressor, drawn straight: the real path is unknown), 2 → 3 along the condensing
         // isobar, 3 → 4 the throttle (constant h), 4 → 1 along the evaporating isobar.
         var path = new[] { cycle.Suction, cycle.Discharge, cycle.CondenserOutlet, cycle.EvaporatorInlet, cycle.Suction }
-            .Select(s => map(s.Enthalpy, s.Pressure)).ToList();
+            .Select(s => map(s.Enthalpy!.Value, s.Pressure)).ToList();
         string cop = $"cycle: COP {Chart.Number(cycle.CoefficientOfPerformance)} (heating {Chart.Number(cycle.HeatingCoefficientOfPerformance)}), "
             + $"{Chart.Number(units.Temperature(cycle.Specification.EvaporatingTemperature))}/{Chart.Number(units.Temperature(cycle.Specification.CondensingTemperature))} {units.TemperatureUnit}";
         model.Series.Add(Chart.Line(cop, CycleColour, path, Chart.Thick));
-        var isentropic = map(cycle.IsentropicDischarge.Enthalpy, cycle.IsentropicDischarge.Pressure);
+        var isentropic = map(cycle.IsentropicDischarge.Enthalpy!.Value, cycle.IsentropicDischarge.Pressure);
         model.Series.Add(Chart.Line(null, CycleColour, [path[0], isentropic], 1, LineStyle.Dot));
         var marks = new OxyPlot.Series.ScatterSeries { MarkerType = MarkerType.Circle, MarkerSize = 4, MarkerFill = CycleColour, Tag = new HouseStyle.BaseSize(4) };
         foreach (var (label, state) in cycle.States)
         {
-            var at = map(state.Enthalpy, state.Pressure);
+            var at = map(state.Enthalpy!.Value, state.Pressure);
             marks.Points.Add(new OxyPlot.Series.ScatterPoint(at.X, at.Y));
             bool right = label is "1" or "2" or "2s";
             Chart.Label(model, label, at, CycleColour, right ? HorizontalAlignment.Left : HorizontalAlignment.Right, label is "2s" ? VerticalAlignment.Bottom : VerticalAlignment.Top,

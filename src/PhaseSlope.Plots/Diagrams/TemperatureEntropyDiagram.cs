@@ -120,7 +120,7 @@ public static class TemperatureEntropyDiagram
             first = true;
             foreach (double rho in PressureEnthalpyDiagram.Isochores(options, units, m, saturated, solver.CriticalDensity))
             {
-                var points = PressureEnthalpyDiagram.IsochorePoints(properties, rho, tMin, tMax).Select(s => Map(s.Entropy, s.Temperature)).ToList();
+                var points = PressureEnthalpyDiagram.IsochorePoints(properties, rho, tMin, tMax).Select(s => Map(s.Entropy!.Value, s.Temperature)).ToList();
                 if (points.Count < 2)
                 {
                     continue;

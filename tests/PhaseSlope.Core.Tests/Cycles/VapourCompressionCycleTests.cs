@@ -70,14 +70,15 @@ public class VapourCompressionCycleTests
         AssertClose.Relative(310.15, c.CondenserOutlet.Temperature, 1e-12, "T3 = Tc - subcooling");
         AssertClose.Relative(m.Solver.AtTemperature(263.15).Pressure, c.Suction.Pressure, 1e-12, "P1 = Psat(Te)");
         AssertClose.Relative(m.Solver.AtTemperature(313.15).Pressure, c.Discharge.Pressure, 1e-12, "P2 = Psat(Tc)");
-        AssertClose.Relative(c.Suction.Entropy, c.IsentropicDischarge.Entropy, 1e-9, "s2s = s1");
-        AssertClose.Relative(0.75, (c.IsentropicDischarge.Enthalpy - c.Suction.Enthalpy) / (c.Discharge.Enthalpy - c.Suction.Enthalpy), 1e-8, "isentropic efficiency");
+        // The flash meets its specification to 1e-12 relative (PropertyModel.FlashTolerance).
+        AssertClose.Relative(c.Suction.Entropy!.Value, c.IsentropicDischarge.Entropy!.Value, 1e-10, "s2s = s1");
+        AssertClose.Relative(0.75, (c.IsentropicDischarge.Enthalpy!.Value - c.Suction.Enthalpy!.Value) / (c.Discharge.Enthalpy!.Value - c.Suction.Enthalpy!.Value), 1e-8, "isentropic efficiency");
         Assert.Equal(c.CondenserOutlet.Enthalpy, c.EvaporatorInlet.Enthalpy);
         Assert.InRange(c.EvaporatorInlet.Quality!.Value, 0.0, 1.0);
         // The discharge is hotter than the isentropic one, and each is a state of the model at its T and P.
         Assert.True(c.Discharge.Temperature > c.IsentropicDischarge.Temperature);
         var at2 = m.AtPressure(c.Discharge.Temperature, c.Discharge.Pressure);
-        AssertClose.Relative(at2.Enthalpy!.Value, c.Discharge.Enthalpy, 1e-9, "h2 from (T2, P2)");
+        AssertClose.Relative(at2.Enthalpy!.Value, c.Discharge.Enthalpy!.Value, 1e-9, "h2 from (T2, P2)");
         // Second law: no refrigerator beats a reversible one between the two saturation temperatures.
         Assert.True(c.CoefficientOfPerformance < 263.15 / (313.15 - 263.15), $"COP {c.CoefficientOfPerformance} below Carnot's");
         AssertClose.Relative(c.RefrigeratingEffect + c.CompressorWork, c.HeatRejected, 1e-12, "first law q_H = q_L + w");
@@ -103,7 +104,7 @@ public class VapourCompressionCycleTests
     [InlineData(263.15, 313.15, 0, 0, 0, "isentropic efficiency")]
     [InlineData(263.15, 313.15, 0, 0, 1.2, "isentropic efficiency")]
     [InlineData(150.0, 313.15, 0, 0, 1, "lowest valid temperature")]
-    [InlineData(263.15, 313.15, 0, 60, 1, "outside the dome")]
+    [InlineData(263.15, 313.15, 0, 60, 1, "is not a two-phase state at the evaporating pressure")]
     public void Impossible_cycles_are_refused(double te, double tc, double superheat, double subcooling, double efficiency, string message)
     {
         var ex = Assert.Throws<InvalidInputException>(() => VapourCompressionCycle.Compute(R134a(), new VapourCompressionSpecification(te, tc, superheat, subcooling, efficiency)));
