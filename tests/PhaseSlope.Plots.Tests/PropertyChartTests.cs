@@ -151,6 +151,25 @@ public class PropertyChartTests
     }
 
     [Fact]
+    public void An_isotherm_at_the_bottom_of_the_dome_runs_liquid_then_across_without_a_stray_point()
+    {
+        // The range starts at -40 °C, itself a round value: that isotherm meets the lowest pressure
+        // exactly at its saturation pressure. The line is the liquid down to Psat, then across the
+        // dome, ending at the saturated vapour; no point of the liquid branch may be a vapour state
+        // (at exactly Psat the stable root is either phase). The compressed liquid's h differs
+        // from the saturated liquid's by ∫v(1 − Tα)dP, about 10 kJ/kg at 3 Pc (122 bar); the vapour
+        // is ~200 kJ/kg away, so a band of ±20 kJ/kg tells them apart.
+        var model = PressureEnthalpyDiagram.Build(R134a, Engineering with { TemperatureRange = new ValueRange(233.15, 373.15), Isotherms = [233.15] });
+        var line = Titled(model, "isotherms (°C)");
+        var sat = Properties(ReferenceState.IdealGas).Coexistence(R134a.Solver().AtTemperature(233.15));
+        double hL = sat.Liquid.State.Enthalpy!.Value / M / 1e3, hV = sat.Vapour.State.Enthalpy!.Value / M / 1e3;
+        Assert.Equal(hV, line.Points[^1].X, 1e-9);
+        Assert.Equal(hL, line.Points[^2].X, 1e-9);
+        Assert.All(line.Points.SkipLast(1), p => Assert.InRange(p.X, hL - 20, hL + 20));
+        Assert.True(line.Points.Zip(line.Points.Skip(1)).All(p => p.Second.Y <= p.First.Y), "P falls along the isotherm");
+    }
+
+    [Fact]
     public void Titles_name_the_fluid_as_the_trade_writes_it_without_nested_brackets()
     {
         Assert.Equal("R-134a", R134a.Name);

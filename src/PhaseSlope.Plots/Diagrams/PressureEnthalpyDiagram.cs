@@ -95,7 +95,7 @@ public static class PressureEnthalpyDiagram
 
         AddQualityLines(model, saturated, critical, Map);
         AddIsotherms(model, properties, options, units, tStart, tTop, pMin, pMax, Map);
-        AddIsentropes(model, properties, units, m, saturated, critical, tTop, pMin, pMax, Map);
+        AddIsentropes(model, properties, units, m, saturated, critical, pMin, pMax, Map);
         if (options.Isochores is not null)
         {
             AddIsochores(model, properties, options, units, m, saturated, tStart, tTop, Map);
@@ -159,9 +159,10 @@ public static class PressureEnthalpyDiagram
             {
                 var sat = properties.Coexistence(solver.AtTemperature(t));
                 double pSat = sat.Point.Pressure;
+                // At exactly Psat the stable root is either phase: the saturated states stand in for it.
                 if (pSat < pMax)
                 {
-                    points.AddRange(LogSpaced(pMax, Math.Max(pSat, pMin), IsothermPoints).SkipLast(pSat > pMin ? 1 : 0)
+                    points.AddRange(LogSpaced(pMax, Math.Max(pSat, pMin), IsothermPoints).SkipLast(pSat >= pMin ? 1 : 0)
                         .Select(p => map(properties.AtPressure(t, p).Enthalpy!.Value, p)));
                 }
 
@@ -173,7 +174,7 @@ public static class PressureEnthalpyDiagram
 
                 if (pSat > pMin)
                 {
-                    points.AddRange(LogSpaced(Math.Min(pSat, pMax), pMin, IsothermPoints).Skip(pSat < pMax ? 1 : 0)
+                    points.AddRange(LogSpaced(Math.Min(pSat, pMax), pMin, IsothermPoints).Skip(pSat <= pMax ? 1 : 0)
                         .Select(p => map(properties.AtPressure(t, p).Enthalpy!.Value, p)));
                 }
             }
@@ -195,7 +196,7 @@ public static class PressureEnthalpyDiagram
     }
 
     private static void AddIsentropes(PlotModel model, PropertyModel properties, UnitScale units, double m,
-        List<CoexistenceProperties> saturated, ThermodynamicState critical, double tTop, double pMin, double pMax, Func<double, double, DataPoint> map)
+        List<CoexistenceProperties> saturated, ThermodynamicState critical, double pMin, double pMax, Func<double, double, DataPoint> map)
     {
         // Round values from the critical entropy to the highest of the saturated vapour plus a
         // quarter of the entropy of vaporization at the bottom of the dome: the region a compressor
