@@ -20,12 +20,19 @@ internal sealed class CliIo(TextWriter output, TextWriter error)
     /// <summary>Runs a command body and maps failures to one stderr line and an exit code.</summary>
     /// <remarks>The body writes its result to <see cref="Out"/> only after all computation is
     /// done, so a failure leaves standard output empty.</remarks>
-    public int Guard(Action body)
+    public int Guard(Action body) => Guard(() =>
+    {
+        body();
+        return ExitCodes.Success;
+    });
+
+    /// <summary>As <see cref="Guard(Action)"/> for a body that decides its own exit code (a batch
+    /// with refused rows).</summary>
+    public int Guard(Func<int> body)
     {
         try
         {
-            body();
-            return ExitCodes.Success;
+            return body();
         }
         catch (UsageException ex)
         {

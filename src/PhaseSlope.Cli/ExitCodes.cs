@@ -31,4 +31,8 @@ internal static class ExitCodes
 
     /// <summary>An audit check failed (<c>audit</c>): the correlation, as declared, should not be used.</summary>
     public const int AuditFailed = 8;
+
+    /// <summary><c>state --batch</c>: at least one row was refused (each named on standard error
+    /// and in its output row); every other row was computed and written.</summary>
+    public const int BatchRowsFailed = 9;
 }

@@ -50,6 +50,59 @@ public static class Counts
         }
     }
 
+    /// <summary>Prints model evaluations per (P, h) and (P, s) flash on a warm engine, over 100
+    /// single-phase states (0.5–1.5 Tc at 0.05–2 Pc) and 100 two-phase states (quality 0.1–0.9).</summary>
+    public static void PrintFlashes(TextWriter output)
+    {
+        var inv = CultureInfo.InvariantCulture;
+        output.WriteLine("| fluid | (P, h) single phase mean (max) | (P, s) single phase mean (max) | (P, h) two-phase mean (max) | (P, s) two-phase mean (max) |");
+        output.WriteLine("|---|---|---|---|---|");
+        foreach (string name in new[] { "propane", "water", "r-134a", "carbon dioxide" })
+        {
+            var fluid = FluidCatalog.Embedded.Find(name);
+            var counting = new CountingModel(CubicModel.For(CubicModelKind.PengRobinson, fluid));
+            var engine = new Core.Properties.PropertyModel(fluid, counting);
+            double tc = engine.Solver.CriticalTemperature, pc = engine.Solver.CriticalPressure;
+            var counts = new List<long>[4];
+            for (int k = 0; k < 4; k++)
+            {
+                counts[k] = [];
+            }
+
+            long Count(Core.Properties.StateProperty p, double value, double pressure)
+            {
+                counting.Reset();
+                _ = engine.Flash(Core.Properties.StateProperty.Pressure, pressure, p, value);
+                return counting.Evaluations;
+            }
+
+            _ = engine.Flash(Core.Properties.StateProperty.Pressure, 0.5 * pc, Core.Properties.StateProperty.Quality, 0.5); // warm
+            for (int i = 0; i < 10; i++)
+            {
+                for (int j = 0; j < 10; j++)
+                {
+                    double t = Math.Max(engine.Solver.MinimumTemperature, (0.5 + 0.1 * i + 0.005) * tc);
+                    double pressure = (0.05 + 0.2 * j) * pc;
+                    if (t >= engine.FlashMaximumTemperature)
+                    {
+                        continue;
+                    }
+
+                    var state = engine.AtPressure(t, pressure);
+                    counts[0].Add(Count(Core.Properties.StateProperty.Enthalpy, state.Enthalpy!.Value, pressure));
+                    counts[1].Add(Count(Core.Properties.StateProperty.Entropy, state.Entropy!.Value, pressure));
+                    double ts = engine.Solver.MinimumTemperature + (0.98 * tc - engine.Solver.MinimumTemperature) * (i + 0.5) / 10;
+                    var mixture = engine.Flash(Core.Properties.StateProperty.Temperature, ts, Core.Properties.StateProperty.Quality, 0.1 + 0.08 * j);
+                    counts[2].Add(Count(Core.Properties.StateProperty.Enthalpy, mixture.Enthalpy!.Value, mixture.Pressure));
+                    counts[3].Add(Count(Core.Properties.StateProperty.Entropy, mixture.Entropy!.Value, mixture.Pressure));
+                }
+            }
+
+            output.WriteLine(string.Create(inv,
+                $"| {name} | {counts[0].Average():F1} ({counts[0].Max()}) | {counts[1].Average():F1} ({counts[1].Max()}) | {counts[2].Average():F1} ({counts[2].Max()}) | {counts[3].Average():F1} ({counts[3].Max()}) |"));
+        }
+    }
+
     private static long Curve(CountingModel counting, CoexistenceSolver solver, int points)
     {
         counting.Reset();

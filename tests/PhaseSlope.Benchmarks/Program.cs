@@ -16,6 +16,8 @@ public static class Program
         if (args is ["counts"])
         {
             Counts.Print(Console.Out);
+            Console.Out.WriteLine();
+            Counts.PrintFlashes(Console.Out);
             return;
         }
 

@@ -80,19 +80,7 @@ internal sealed class CorrelationOptions
     public static IReadOnlyList<VapourPressureRecord> ReadDataRecords(string path, string? temperatureUnit, string? pressureUnit, int minimumRows = VapourPressureCsv.MinimumRows)
     {
         var options = new VapourPressureCsvOptions(temperatureUnit, pressureUnit, minimumRows);
-        try
-        {
-            using var reader = new StreamReader(BoundedInput.Open(path, BoundedInput.DataFileLimit));
-            return VapourPressureCsv.Read(reader, path, options);
-        }
-        catch (Exception ex) when (ex is FileNotFoundException or DirectoryNotFoundException)
-        {
-            throw new DataFileException(path, null, null, "data file not found", ex);
-        }
-        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException)
-        {
-            throw new DataFileException(path, null, null, $"cannot read data file: {ex.Message}", ex);
-        }
+        return BoundedInput.ReadDataFile(path, reader => VapourPressureCsv.Read(reader, path, options));
     }
 
     /// <summary>The fluid, when --fluid is given. A fluid brings its own Tc and Pc, so --tc or

@@ -18,7 +18,7 @@ internal static class DeriveCommand
         command.SetAction(parse => io.Guard(() =>
         {
             var request = options.Bind(parse);
-            var (engine, state) = request.Point.Evaluate();
+            var (engine, state) = request.Point.Evaluate("a partial derivative");
             if (PartialDerivatives.NeedsIdealGas(state, request.Of, request.By, request.Hold))
             {
                 // Decided from the Jacobian's dependence on cv and s, not from a list.

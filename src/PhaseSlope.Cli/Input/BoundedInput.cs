@@ -43,6 +43,25 @@ internal static class BoundedInput
         }
     }
 
+    /// <summary>Opens a data file within <see cref="DataFileLimit"/> and reads it with
+    /// <paramref name="read"/>; a missing or unreadable file is a <see cref="DataFileException"/>.</summary>
+    public static T ReadDataFile<T>(string path, Func<TextReader, T> read)
+    {
+        try
+        {
+            using var reader = new StreamReader(Open(path, DataFileLimit));
+            return read(reader);
+        }
+        catch (Exception ex) when (ex is FileNotFoundException or DirectoryNotFoundException)
+        {
+            throw new DataFileException(path, null, null, "data file not found", ex);
+        }
+        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException)
+        {
+            throw new DataFileException(path, null, null, $"cannot read data file: {ex.Message}", ex);
+        }
+    }
+
     /// <summary>A byte count in the largest binary unit that keeps it whole enough to read.</summary>
     public static string Size(long bytes) => bytes switch
     {

@@ -93,7 +93,9 @@ internal static class CoexistenceWriter
 
     private static readonly HashSet<string> PointKeys = ["temperature_K", "pressure_Pa"];
 
-    private static void WritePhase(Utf8JsonWriter json, string name, PhaseState phase, SaturatedPhase? full, double? molarMass)
+    /// <summary>A saturated phase as a JSON object: its full properties and slopes along the line
+    /// with cp°, the residual ones without.</summary>
+    internal static void WritePhase(Utf8JsonWriter json, string name, PhaseState phase, SaturatedPhase? full, double? molarMass)
     {
         json.WriteStartObject(name);
         if (full is null)

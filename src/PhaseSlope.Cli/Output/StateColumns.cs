@@ -33,6 +33,8 @@ internal static class StateColumns
         new("isochoric_heat_capacity_J_molK", "isochoric heat capacity cv", DisplayQuantity.MolarEntropy, s => s.IsochoricHeatCapacity),
         new("heat_capacity_difference_J_molK", "cp - cv", DisplayQuantity.MolarEntropy, s => s.HeatCapacityDifference),
         new("ideal_gas_heat_capacity_J_molK", "ideal-gas heat capacity cp0", DisplayQuantity.MolarEntropy, s => s.IdealGasHeatCapacity),
+        new("heat_capacity_ratio", "heat capacity ratio cp/cv", null, s => s.HeatCapacityRatio),
+        new("isentropic_exponent", "isentropic exponent -(v/P)(dP/dv)_s", null, s => s.IsentropicExponent),
         new("speed_of_sound_m_s", "speed of sound", DisplayQuantity.Speed, s => s.SpeedOfSound),
         new("isobaric_expansivity_1_K", "isobaric expansivity", DisplayQuantity.Expansivity, s => s.IsobaricExpansivity),
         new("isothermal_compressibility_1_Pa", "isothermal compressibility", DisplayQuantity.Compressibility, s => s.IsothermalCompressibility),
@@ -61,6 +63,41 @@ internal static class StateColumns
         json.WriteNumberOrNull("density_kg_m3", state.Density * state.MolarMass);
         json.WriteBoolean("ideal_gas_extrapolated", state.IdealGasExtrapolated);
     }
+
+    /// <summary>The value of a column for a two-phase mixture: T, P, ρ, v, Z and the lever-rule
+    /// u, h, s with a = u − Ts and g = h − Ts; null for the properties a mixture does not have
+    /// as one phase (heat capacities, sound speed, compressibilities, …).</summary>
+    public static double? MixtureValue(string key, FluidState state) => key switch
+    {
+        "temperature_K" => state.Temperature,
+        "pressure_Pa" => state.Pressure,
+        "density_mol_m3" => state.Density,
+        "molar_volume_m3_mol" => state.MolarVolume,
+        "compressibility_factor" => state.Pressure / (state.Density * Core.Constants.GasConstant * state.Temperature),
+        "internal_energy_J_mol" => state.InternalEnergy,
+        "enthalpy_J_mol" => state.Enthalpy,
+        "entropy_J_molK" => state.Entropy,
+        "helmholtz_energy_J_mol" => state.HelmholtzEnergy,
+        "gibbs_energy_J_mol" => state.GibbsEnergy,
+        _ => null,
+    };
+
+    /// <summary>Writes every property of a two-phase mixture as a JSON member, with the same keys
+    /// as a single phase (<see cref="MixtureValue"/>; null where a mixture has none).</summary>
+    public static void WriteMixture(Utf8JsonWriter json, FluidState state)
+    {
+        foreach (var column in All)
+        {
+            json.WriteNumberOrNull(column.Key, MixtureValue(column.Key, state));
+        }
+
+        json.WriteNumberOrNull("density_kg_m3", state.Density * state.MolarMass);
+        json.WriteBoolean("ideal_gas_extrapolated", state.Liquid!.IdealGasExtrapolated);
+    }
+
+    /// <summary>Display text of a value of a column in a unit system.</summary>
+    public static string Display(Column column, double value, double? molarMass, UnitSystem units)
+        => NumberText.Table(column.Quantity is DisplayQuantity q ? UnitFormatter.Convert(q, value, units, molarMass ?? double.NaN) : value);
 
     /// <summary>Unit label of a column in a unit system ("-" when dimensionless).</summary>
     public static string Unit(Column column, UnitSystem units)

@@ -59,10 +59,6 @@ internal sealed record StateUncertaintyText(StateUncertainty Values, Uncertainty
         json.WriteEndObject();
     }
 
-    public IEnumerable<string> CsvHeader => Quantities.Select(q => $"u_{q.Key}").Append("u_undefined_reason").Append("u_response_functions_undefined_reason");
-
-    public IEnumerable<string> CsvCells => Quantities.Select(q => NumberText.RoundTripOrEmpty(Checked(q))).Append(Values.Reason ?? "").Append(Values.ResponseReason ?? "");
-
     public string Table(UnitSystem units, double molarMass)
     {
         var text = new StringBuilder();

@@ -10,24 +10,40 @@ namespace PhaseSlope.Cli.Output;
 /// <summary>Renders single-phase states (<c>state</c>) and partial derivatives (<c>derive</c>).</summary>
 internal static class StateWriter
 {
-    /// <summary>Renders a state.</summary>
-    public static string State(PropertyModel engine, ThermodynamicState state, OutputFormat format, UnitSystem units, StateUncertaintyText? uncertainty = null)
+    /// <summary>Renders a state, single-phase or two-phase.</summary>
+    public static string State(PropertyModel engine, FluidState state, OutputFormat format, UnitSystem units, StateUncertaintyText? uncertainty = null)
         => format switch
         {
-            OutputFormat.Json => JsonText.Write(json =>
-            {
-                json.WriteStartObject();
-                WriteHeader(json, engine, state);
-                StateColumns.WriteMembers(json, state);
-                uncertainty?.WriteJson(json);
-                json.WriteEndObject();
-            }),
-            OutputFormat.Csv => CsvText.Write(
-                [.. StateColumns.All.Select(c => c.Key), .. uncertainty?.CsvHeader ?? []],
-                [[.. StateColumns.All.Select(c => c.Value(state) is double v && double.IsFinite(v) ? NumberText.RoundTrip(v) : ""), .. uncertainty?.CsvCells ?? []]]),
+            OutputFormat.Json => Json(engine, state, uncertainty),
+            OutputFormat.Csv => JsonColumns.Csv([JsonColumns.Flatten(Json(engine, state, uncertainty))]),
             // Without a molar mass only SI tables are allowed (engineering units were refused), which do not use it.
-            _ => StateTable(engine, state, units) + (uncertainty?.Table(units, engine.MolarMass ?? double.NaN) ?? ""),
+            _ => (!state.Region.HasQuality() ? StateTable(engine, state, state.Single!, units) : TwoPhaseTable(engine, state, units))
+                 + (uncertainty?.Table(units, engine.MolarMass ?? double.NaN) ?? ""),
         };
+
+    /// <summary>The JSON object of a state (one line of a batch, or the whole output).</summary>
+    public static string Json(PropertyModel engine, FluidState state, StateUncertaintyText? uncertainty = null)
+        => JsonText.Write(json =>
+        {
+            json.WriteStartObject();
+            WriteHeader(json, engine, state);
+            if (!state.Region.HasQuality())
+            {
+                StateColumns.WriteMembers(json, state.Single!);
+                json.WriteNull("liquid");
+                json.WriteNull("vapour");
+            }
+            else
+            {
+                StateColumns.WriteMixture(json, state);
+                var point = state.Coexistence!;
+                CoexistenceWriter.WritePhase(json, "liquid", point.Liquid, state.Saturation?.Liquid, engine.MolarMass);
+                CoexistenceWriter.WritePhase(json, "vapour", point.Vapour, state.Saturation?.Vapour, engine.MolarMass);
+            }
+
+            uncertainty?.WriteJson(json);
+            json.WriteEndObject();
+        });
 
     /// <summary>Renders a derivative value.</summary>
     public static string Derivative(PropertyModel engine, ThermodynamicState state, StateVariable of, StateVariable by, StateVariable hold, double value, OutputFormat format)
@@ -60,19 +76,38 @@ internal static class StateWriter
     }
 
     private static void WriteHeader(Utf8JsonWriter json, PropertyModel engine, ThermodynamicState state)
+        => WriteHeader(json, engine, engine.Describe(state));
+
+    private static void WriteHeader(Utf8JsonWriter json, PropertyModel engine, FluidState state)
     {
         json.WriteString("fluid", engine.Fluid.Name);
         ModelText.WriteJson(json, engine.Model.Identity);
         json.WriteString("reference", engine.Reference.Id);
-        json.WriteString("phase", state.Phase.ToString().ToLowerInvariant());
-        json.WriteBoolean("metastable", state.Metastable);
-        json.WriteBoolean("critical", state.Critical);
-        if (state.UndefinedReason is string reason)
+        json.WriteString("phase", state.Region.Id());
+        if (!state.Region.HasQuality())
+        {
+            var single = state.Single!;
+            // The model's density root the single phase is on (liquid, vapour or supercritical).
+            json.WriteString("branch", single.Phase.ToString().ToLowerInvariant());
+        }
+        else
+        {
+            json.WriteNull("branch");
+        }
+
+        json.WriteNumberOrNull("quality", state.Quality);
+        json.WriteBoolean("metastable", state.Single?.Metastable ?? false);
+        json.WriteBoolean("critical", state.Region == FluidRegion.CriticalPoint);
+        json.WriteNumberOrNull("saturation_temperature_K", state.SaturationTemperature);
+        json.WriteNumberOrNull("superheat_K", state.Superheat);
+        json.WriteNumberOrNull("subcooling_K", state.Subcooling);
+        var any = state.Single ?? state.Liquid!;
+        if (any.UndefinedReason is string reason)
         {
             json.WriteString("undefined_reason", reason);
         }
 
-        if (state.IdealGasUnavailableReason is string missing)
+        if (any.IdealGasUnavailableReason is string missing)
         {
             // The properties that are null for this reason are the ones that need cp°.
             json.WriteString("ideal_gas_unavailable_reason", missing);
@@ -86,10 +121,37 @@ internal static class StateWriter
     }
 
     private static string Title(PropertyModel engine, ThermodynamicState state)
-        => $"{engine.Fluid.Name}, {ModelText.Describe(engine.Model)}: {state.Phase.ToString().ToLowerInvariant()}{(state.Metastable ? " (metastable)" : "")} at "
+        => Title(engine, engine.Describe(state));
+
+    private static string Title(PropertyModel engine, FluidState state)
+        => $"{engine.Fluid.Name}, {ModelText.Describe(engine.Model)}: {state.Region.Id()}"
+           + (state.Quality is double x && state.Region == FluidRegion.TwoPhase ? $", quality {NumberText.Table(x)}" : "") + " at "
            + $"{NumberText.Table(state.Temperature)} K, {NumberText.Table(UnitFormatter.Pressure(state.Pressure, UnitSystem.Si))} {UnitFormatter.PressureLabel(UnitSystem.Si)}";
 
-    private static string StateTable(PropertyModel engine, ThermodynamicState state, UnitSystem units)
+    /// <summary>The lines on the saturation temperature and the superheat or subcooling under a
+    /// single phase's title (none above Pc or below the lowest valid saturation pressure).</summary>
+    private static string SaturationLines(FluidState state, UnitSystem units)
+    {
+        if (state.SaturationTemperature is not double ts)
+        {
+            return "";
+        }
+
+        string Temperature(double kelvin) => $"{NumberText.Table(UnitFormatter.Convert(DisplayQuantity.Temperature, kelvin, units, double.NaN))} {UnitFormatter.Label(DisplayQuantity.Temperature, units)}";
+        string line = $"saturation temperature at this pressure: {Temperature(ts)}";
+        if (state.Superheat is double superheat)
+        {
+            line += $"; superheat {NumberText.Table(superheat)} K";
+        }
+        else if (state.Subcooling is double subcooling)
+        {
+            line += $"; subcooling {NumberText.Table(subcooling)} K";
+        }
+
+        return line + Environment.NewLine;
+    }
+
+    private static string StateTable(PropertyModel engine, FluidState described, ThermodynamicState state, UnitSystem units)
     {
         var table = new TextTable(["property", "value", "unit"], [false, true, false]);
         foreach (var column in StateColumns.All)
@@ -98,7 +160,8 @@ internal static class StateWriter
         }
 
         var text = new StringBuilder();
-        text.AppendLine(Title(engine, state));
+        text.AppendLine(Title(engine, described));
+        text.Append(SaturationLines(described, units));
         text.AppendLine(state.IdealGasUnavailableReason is null
             ? $"reference: {engine.Reference.Description}"
             : "reference: none (absolute h, s, u, a and g need the ideal-gas heat capacity cp°, which this fluid does not give)");
@@ -129,4 +192,133 @@ internal static class StateWriter
         text.AppendLine(CoexistenceWriter.Caution);
         return text.ToString();
     }
+
+    private static string TwoPhaseTable(PropertyModel engine, FluidState state, UnitSystem units)
+    {
+        var liquid = state.Liquid!;
+        var vapour = state.Vapour!;
+        var mixture = new TextTable(["mixture property", "value", "unit"], [false, true, false]);
+        mixture.Add("quality (vapour fraction)", NumberText.Table(state.Quality!.Value), "-");
+        foreach (var column in StateColumns.All)
+        {
+            if (StateColumns.MixtureValue(column.Key, state) is { } value)
+            {
+                mixture.Add(column.Title, StateColumns.Display(column, value, state.MolarMass, units), StateColumns.Unit(column, units));
+            }
+        }
+
+        var phases = new TextTable(["saturated phase", "liquid", "vapour", "unit"], [false, true, true, false]);
+        foreach (var column in StateColumns.All.Where(c => c.Key is not ("temperature_K" or "pressure_Pa")))
+        {
+            phases.Add(column.Title, StateColumns.Display(column, liquid, units), StateColumns.Display(column, vapour, units), StateColumns.Unit(column, units));
+        }
+
+        var text = new StringBuilder();
+        text.AppendLine(Title(engine, state));
+        text.AppendLine(liquid.IdealGasUnavailableReason is null
+            ? $"reference: {engine.Reference.Description}"
+            : "reference: none (absolute h, s, u, a and g need the ideal-gas heat capacity cp°, which this fluid does not give)");
+        text.AppendLine();
+        text.Append(mixture.Render());
+        text.AppendLine();
+        text.Append(phases.Render());
+        text.AppendLine("note: inside the dome the mixture's v, h, s and u are the lever rule on the saturated phases; cp, w and the compressibilities belong to each phase, not to the mixture");
+        if (StateColumns.IdealGasNote(liquid) is string unavailable)
+        {
+            text.AppendLine(unavailable);
+        }
+
+        text.AppendLine(CoexistenceWriter.Caution);
+        return text.ToString();
+    }
+
+    /// <summary>Renders a batch of states: JSON an array of {line, error, state}; CSV one row per
+    /// state with <c>line</c> and <c>error</c> first and the flattened state JSON after; a table of
+    /// the main values in the chosen units.</summary>
+    public static string Batch(PropertyModel engine, IReadOnlyList<StateBatchResult> results, OutputFormat format, UnitSystem units)
+    {
+        switch (format)
+        {
+            case OutputFormat.Json:
+                return JsonText.Write(json =>
+                {
+                    json.WriteStartArray();
+                    foreach (var r in results)
+                    {
+                        json.WriteStartObject();
+                        json.WriteNumber("line", r.Line);
+                        WriteStringOrNull(json, "error", r.Error);
+                        json.WritePropertyName("state");
+                        if (r.State is { } state)
+                        {
+                            json.WriteRawValue(Json(engine, state));
+                        }
+                        else
+                        {
+                            json.WriteNullValue();
+                        }
+
+                        json.WriteEndObject();
+                    }
+
+                    json.WriteEndArray();
+                });
+            case OutputFormat.Csv:
+                return JsonColumns.Csv([.. results.Select(r =>
+                {
+                    List<(string, string)> row = [("line", r.Line.ToString(CultureInfo.InvariantCulture)), ("error", r.Error ?? "")];
+                    if (r.State is { } state)
+                    {
+                        row.AddRange(JsonColumns.Flatten(Json(engine, state)));
+                    }
+
+                    return row;
+                })]);
+            default:
+                double m = engine.MolarMass ?? double.NaN;
+                string Show(DisplayQuantity q, double? si) => si is double v ? NumberText.Table(UnitFormatter.Convert(q, v, units, m)) : "";
+                var table = new TextTable(
+                    ["line", "phase", $"T [{UnitFormatter.Label(DisplayQuantity.Temperature, units)}]", $"P [{UnitFormatter.Label(DisplayQuantity.Pressure, units)}]",
+                     $"rho [{UnitFormatter.Label(DisplayQuantity.Density, units)}]", $"h [{UnitFormatter.Label(DisplayQuantity.MolarEnergy, units)}]",
+                     $"s [{UnitFormatter.Label(DisplayQuantity.MolarEntropy, units)}]", "quality"],
+                    [true, false, true, true, true, true, true, true]);
+                foreach (var r in results)
+                {
+                    var s = r.State;
+                    table.Add(r.Line.ToString(CultureInfo.InvariantCulture), s?.Region.Id() ?? "refused",
+                        Show(DisplayQuantity.Temperature, s?.Temperature), Show(DisplayQuantity.Pressure, s?.Pressure), Show(DisplayQuantity.Density, s?.Density),
+                        Show(DisplayQuantity.MolarEnergy, s?.Enthalpy), Show(DisplayQuantity.MolarEntropy, s?.Entropy), s?.Quality is double x ? NumberText.Table(x) : "");
+                }
+
+                var text = new StringBuilder();
+                text.AppendLine($"{engine.Fluid.Name}, {ModelText.Describe(engine.Model)}: {results.Count} states, reference: {engine.Reference.Description}");
+                text.AppendLine();
+                text.Append(table.Render());
+                foreach (var r in results.Where(r => r.Error is not null))
+                {
+                    text.AppendLine($"refused: {r.Error}");
+                }
+
+                text.AppendLine(CoexistenceWriter.Caution);
+                return text.ToString();
+        }
+    }
+
+    private static void WriteStringOrNull(Utf8JsonWriter json, string name, string? value)
+    {
+        if (value is null)
+        {
+            json.WriteNull(name);
+        }
+        else
+        {
+            json.WriteString(name, value);
+        }
+    }
 }
+
+/// <summary>One result of <c>state --batch</c>: the row's line and its state or why it was refused.</summary>
+/// <param name="Line">1-based physical line in the batch file.</param>
+/// <param name="State">The state, or null when the row was refused.</param>
+/// <param name="Error">Why the row was refused (line and column named), or null.</param>
+internal sealed record StateBatchResult(int Line, FluidState? State, string? Error);

@@ -131,6 +131,57 @@ internal static class QuantityParser
         return double.IsFinite(shift) ? shift : throw Fail(optionName, text, "molar volume is too large", null);
     }
 
+    /// <summary>Parses an energy (h or u), an entropy or a volume per mole or per kilogram and
+    /// returns it per mole.</summary>
+    /// <param name="text">The user's text: a bare number (the molar SI unit), a molar unit, or a
+    /// specific unit (per kg, multiplied by <paramref name="molarMass"/>).</param>
+    /// <param name="optionName">The option the text came from; it starts every error message.</param>
+    /// <param name="kind">Which quantity.</param>
+    /// <param name="molarMass">Molar mass of the fluid in kg/mol; null when it gives none (a
+    /// specific value is then refused).</param>
+    /// <returns>The molar value in SI (J/mol, J/(mol·K), m³/mol); finite; a volume above zero.</returns>
+    /// <exception cref="UsageException">Empty, malformed, unknown unit, a specific value without a
+    /// molar mass, or a volume not above zero.</exception>
+    public static double ParseMolarOrSpecific(string text, string optionName, MolarQuantity kind, double? molarMass)
+    {
+        var (quantity, molar, specific) = kind switch
+        {
+            MolarQuantity.Energy => ("energy", Dimension.MolarEnergy, Dimension.SpecificEnergy),
+            MolarQuantity.Entropy => ("entropy", Dimension.MolarEntropy, Dimension.SpecificEntropy),
+            _ => ("volume", Dimension.MolarVolume, Dimension.SpecificVolume),
+        };
+        ParsedQuantity parsed = Parse(text, optionName, quantity, [molar, specific]);
+        if (parsed.Unit.Dimension == specific && molarMass is null)
+        {
+            throw Fail(optionName, text, $"a value in {parsed.Unit.Symbol} needs the fluid's molar mass, which the fluid does not give", $"(give it per mole, in {UnitTable.Si(molar).Symbol})");
+        }
+
+        double value = parsed.Unit.Dimension == specific ? parsed.Value * molarMass!.Value : parsed.Value;
+        if (!double.IsFinite(value))
+        {
+            throw Fail(optionName, text, $"{quantity} is too large", null);
+        }
+
+        if (kind == MolarQuantity.Volume && value <= 0)
+        {
+            throw Fail(optionName, text, "volume is not above zero", "(a volume must be > 0)");
+        }
+
+        return value;
+    }
+
+    /// <summary>Parses a vapour quality, a bare fraction from 0 to 1.</summary>
+    /// <exception cref="UsageException">Not a number, or outside 0 to 1.</exception>
+    public static double ParseQuality(string text, string optionName)
+    {
+        if (!double.TryParse(text.Trim(), NumberStyles.Float, CultureInfo.InvariantCulture, out double x) || !double.IsFinite(x))
+        {
+            throw Fail(optionName, text, "not a number", "(a quality is a vapour fraction from 0 to 1, e.g. 0.35)");
+        }
+
+        return x is >= 0 and <= 1 ? x : throw Fail(optionName, text, "quality is outside 0 to 1", "(the vapour fraction of a liquid-vapour mixture)");
+    }
+
     private static ParsedQuantity Parse(string? text, string optionName, string quantity, Dimension[] dimensions)
     {
         ArgumentException.ThrowIfNullOrWhiteSpace(optionName);
@@ -152,4 +203,17 @@ internal static class QuantityParser
     private static string Clean(string text) => Input.DataFileException.OneLine(text);
 
     private static string Format(double value) => value.ToString("G6", CultureInfo.InvariantCulture);
+}
+
+/// <summary>A quantity given per mole or per kilogram.</summary>
+internal enum MolarQuantity
+{
+    /// <summary>Enthalpy or internal energy: J/mol, kJ/mol, J/kg, kJ/kg.</summary>
+    Energy,
+
+    /// <summary>Entropy: J/(mol·K), J/(kg·K), kJ/(kg·K).</summary>
+    Entropy,
+
+    /// <summary>Molar or specific volume: m3/mol, L/mol, cm3/mol, m3/kg, L/kg, cm3/g.</summary>
+    Volume,
 }

@@ -48,13 +48,14 @@ public sealed record FluidState
     /// <summary>Molar Gibbs energy h − Ts, J/mol; null without cp°.</summary>
     public double? GibbsEnergy => Enthalpy - Temperature * Entropy;
 
-    /// <summary>The single phase with all its properties; null on or inside the dome.</summary>
+    /// <summary>The single phase with all its properties: the state itself outside the dome, the
+    /// saturated phase on its edge (quality 0 or 1); null inside it.</summary>
     public ThermodynamicState? Single { get; init; }
 
-    /// <summary>The saturated liquid on or inside the dome; null for a single phase.</summary>
+    /// <summary>The saturated liquid on or inside the dome; null outside it.</summary>
     public ThermodynamicState? Liquid { get; init; }
 
-    /// <summary>The saturated vapour on or inside the dome; null for a single phase.</summary>
+    /// <summary>The saturated vapour on or inside the dome; null outside it.</summary>
     public ThermodynamicState? Vapour { get; init; }
 
     /// <summary>The coexistence point on or inside the dome (with its solver report); null for a single phase.</summary>

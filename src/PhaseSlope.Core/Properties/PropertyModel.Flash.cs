@@ -28,6 +28,10 @@ public sealed partial class PropertyModel
     /// moves.</summary>
     private const double SaturationRounding = 1e-10;
 
+    /// <summary>Newton steps along an isobar before the iteration only bisects its bracket (from
+    /// there 50 bisections shrink any bracket below 1e-13 of T); Newton needs 3–6 steps.</summary>
+    private const int NewtonIterations = 30;
+
     private double? _bottomPressure;
 
     /// <summary>The lowest temperature a flash searches: the fluid's lowest valid temperature.</summary>
@@ -186,6 +190,8 @@ public sealed partial class PropertyModel
             Enthalpy = Lever(liquid.Enthalpy, vapour.Enthalpy),
             Entropy = Lever(liquid.Entropy, vapour.Entropy),
             InternalEnergy = Lever(liquid.InternalEnergy, vapour.InternalEnergy),
+            // On the dome's edge the state is also that saturated phase itself.
+            Single = quality == 0 ? liquid : quality == 1 ? vapour : null,
             Liquid = liquid,
             Vapour = vapour,
             Coexistence = point,
@@ -443,7 +449,7 @@ public sealed partial class PropertyModel
             return (p == StateProperty.Density ? s.Density * s.Density * d : d) / scale;
         }
 
-        for (int iteration = 0; iteration < 200; iteration++)
+        for (int iteration = 0; iteration < NewtonIterations + 100; iteration++)
         {
             var state = At(t);
             double f = F(state);
@@ -463,12 +469,15 @@ public sealed partial class PropertyModel
 
             double slope = state.MechanicallyStable ? Slope(state) : double.NaN;
             double next = t - f / slope;
-            if (!(next > a && next < b))
+            if (!(next > a && next < b) || iteration >= NewtonIterations)
             {
                 next = 0.5 * (a + b);
             }
 
-            if (Math.Abs(next - t) <= 1e-15 * t || b - a <= 1e-15 * t)
+            // A step below 1e-13 of T fixes T far inside the promised 1e-10 where the residual
+            // itself cannot fall below the tolerance: near the critical point h(T) along an
+            // isobar carries the rounding of a nearly triple density root (about 1e-10 relative).
+            if (Math.Abs(next - t) <= 1e-13 * t || b - a <= 1e-13 * t)
             {
                 return Single(At(next), saturationTemperature);
             }
@@ -476,7 +485,7 @@ public sealed partial class PropertyModel
             t = next;
         }
 
-        throw new ConvergenceException($"the state at {Preconditions.Format(pressure)} Pa with {Name(p)} {Preconditions.Format(value)} did not converge", 200, double.NaN);
+        throw new ConvergenceException($"the state at {Preconditions.Format(pressure)} Pa with {Name(p)} {Preconditions.Format(value)} did not converge", NewtonIterations + 100, double.NaN);
     }
 
     /// <summary>A state on the dome given its quality and one more property (ρ, h, s or u): every

@@ -139,6 +139,14 @@ public sealed record ThermodynamicState
     /// <summary>Isentropic compressibility κS = κT·cv/cp, 1/Pa; null where the state is not <see cref="MechanicallyStable"/>.</summary>
     public double? IsentropicCompressibility => IsothermalCompressibility * IsochoricHeatCapacity / IsobaricHeatCapacity;
 
+    /// <summary>Ratio of the heat capacities γ = cp/cv; null where cp is (see <see cref="IsobaricHeatCapacity"/>).</summary>
+    public double? HeatCapacityRatio => IsobaricHeatCapacity / IsochoricHeatCapacity;
+
+    /// <summary>Isentropic exponent k = −(v/P)(∂P/∂v)_s = γ/(P·κT), the exponent of P·v^k = const
+    /// along an isentrope through the state (equal to γ for an ideal gas); null where γ is, and
+    /// where P ≤ 0.</summary>
+    public double? IsentropicExponent => Pressure > 0 ? HeatCapacityRatio / (Pressure * IsothermalCompressibility) : null;
+
     /// <summary>Joule–Thomson coefficient (∂T/∂P)_H = (T·α − 1)/(ρ·cp), K/Pa; null where the state is not <see cref="MechanicallyStable"/>.</summary>
     public double? JouleThomsonCoefficient => (Temperature * IsobaricExpansivity - 1) / (Density * IsobaricHeatCapacity);
 

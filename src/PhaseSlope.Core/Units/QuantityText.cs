@@ -66,7 +66,7 @@ public static partial class QuantityText
                 || unsigned.StartsWith('\u221E');
             (problem, hint) = nonFinite
                 ? ("NaN and infinity are not accepted", "(give a finite number)")
-                : ($"expected a {quantity} starting with a number", "(use a dot as the decimal separator, e.g. '1.5')");
+                : ($"expected {("aeiou".Contains(quantity[0], StringComparison.Ordinal) ? "an" : "a")} {quantity} starting with a number", "(use a dot as the decimal separator, e.g. '1.5')");
             return false;
         }
 

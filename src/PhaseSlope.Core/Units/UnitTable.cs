@@ -90,6 +90,8 @@ public static class UnitTable
 
         // Specific volume
         U("m3/kg", Dimension.SpecificVolume, 1m, SiBrochure, "m³/kg"),
+        U("L/kg", Dimension.SpecificVolume, 1e-3m, $"{SiBrochure}, litre = dm³", "dm3/kg", "dm³/kg"),
+        U("cm3/g", Dimension.SpecificVolume, 1e-3m, SiPrefix, "cm³/g"),
 
         // Molar and specific energy
         U("J/mol", Dimension.MolarEnergy, 1m, SiBrochure),

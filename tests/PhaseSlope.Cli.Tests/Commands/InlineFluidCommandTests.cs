@@ -94,9 +94,9 @@ public class InlineFluidCommandTests
         Assert.Contains("note: n/a: needs the ideal-gas heat capacity cp°", table, StringComparison.Ordinal);
         Assert.Contains("note: n/a: the speed of sound and mass-based values need the molar mass", table, StringComparison.Ordinal);
 
-        string[] lines = RunText("state", PropaneNoMass, "-T", "300", "-P", "2e6", "--format", "csv").TrimEnd().Split('\n');
-        string[] keys = lines[0].TrimEnd('\r').Split(',');
-        string[] cells = lines[1].TrimEnd('\r').Split(',');
+        var rows = CurveCommandTests.ParseCsv(RunText("state", PropaneNoMass, "-T", "300", "-P", "2e6", "--format", "csv"));
+        string[] keys = rows[0];
+        string[] cells = rows[1];
         Assert.Equal("", cells[Array.IndexOf(keys, "enthalpy_J_mol")]);
         Assert.Equal("", cells[Array.IndexOf(keys, "speed_of_sound_m_s")]);
         Assert.NotEqual("", cells[Array.IndexOf(keys, "residual_enthalpy_J_mol")]);

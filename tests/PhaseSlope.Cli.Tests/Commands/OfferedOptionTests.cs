@@ -117,6 +117,9 @@ public sealed class OfferedOptionTests : IDisposable
             yield return row;
         }
 
+        yield return Differs("state", "--batch", ["state", "propane", "--batch", "{states1}"], ["state", "propane", "--batch", "{states2}"]);
+        yield return Refused("state", "--batch", ["state", "propane", "--batch", "{states1}", "-T", "300"]);
+
         string[] derive = ["derive", "propane", "--of", "U", "--by", "V", "--hold", "T", "-T", "300", "-P", "1MPa"];
         yield return Differs("derive", "--of", derive, ["derive", "propane", "--of", "H", "--by", "V", "--hold", "T", "-T", "300", "-P", "1MPa"]);
         yield return Differs("derive", "--by", derive, ["derive", "propane", "--of", "U", "--by", "P", "--hold", "T", "-T", "300", "-P", "1MPa"]);
@@ -370,6 +373,18 @@ public sealed class OfferedOptionTests : IDisposable
         // the vapour branch, which is refused as out of range (exit 4), naming what it is.
         yield return Refused(command, "--phase", [.. baseline[..^2], "--density", "100", "--phase", "liquid"], ExitCodes.OutOfRange);
         yield return Changes(command, "--reference", baseline, "--reference", "nbp");
+        // Any two properties: each replaces the temperature (propane at 1 MPa is liquid at 300 K;
+        // these values give superheated vapour on the ideal-gas reference).
+        string[] onIsobar = Replace(Replace(baseline, "-T", "--enthalpy"), "300", "2000");
+        yield return Differs(command, "--enthalpy", baseline, onIsobar);
+        yield return Differs(command, "--entropy", baseline, Replace(Replace(baseline, "-T", "--entropy"), "300", "-20"));
+        yield return Differs(command, "--internal-energy", baseline, Replace(Replace(baseline, "-T", "--internal-energy"), "300", "0"));
+        yield return Differs(command, "--volume", baseline, [.. baseline[..^2], "--volume", "0.01 m3/mol"]);
+        yield return Refused(command, "--volume", [.. baseline[..^2], "--volume", "0.01 m3/mol", "--density", "100"]);
+        // For derive, quality 0 and 1 are the saturated liquid and vapour (inside the dome a
+        // derivative is refused: it needs one phase).
+        yield return Differs(command, "--quality", [.. baseline[..^2], "--quality", command == "state" ? "0.2" : "0"], [.. baseline[..^2], "--quality", command == "state" ? "0.8" : "1"]);
+        yield return Refused(command, "--quality", [.. baseline, "--quality", "0.5"]);
     }
 
     private static string[] Replace(string[] args, string from, string to, int skip = 0)
@@ -539,7 +554,16 @@ public sealed class OfferedOptionTests : IDisposable
             File.WriteAllText(bare, BareData);
         }
 
-        return [.. args.Select(a => a.Replace("{dir}", folder.Path, StringComparison.Ordinal).Replace("{bare}", bare, StringComparison.Ordinal))];
+        // Two invented batches of states for state --batch.
+        string states1 = _data.File("states1.csv"), states2 = _data.File("states2.csv");
+        if (!File.Exists(states1))
+        {
+            File.WriteAllText(states1, "T [K],P [bar]\n300,1\n");
+            File.WriteAllText(states2, "T [K],P [bar]\n300,2\n");
+        }
+
+        return [.. args.Select(a => a.Replace("{dir}", folder.Path, StringComparison.Ordinal).Replace("{bare}", bare, StringComparison.Ordinal)
+            .Replace("{states1}", states1, StringComparison.Ordinal).Replace("{states2}", states2, StringComparison.Ordinal))];
     }
 
     /// <summary>What a successful run produced: exit code, stdout, stderr without timings, and

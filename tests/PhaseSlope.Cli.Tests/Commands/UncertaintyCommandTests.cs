@@ -128,7 +128,12 @@ public class StateUncertaintyCommandTests
 
         Assert.Equal(first, RunText(args));
         string header = first.Split('\n')[0].TrimEnd('\r');
-        Assert.EndsWith("u_density_mol_m3,u_pressure_Pa,u_compressibility_factor,u_residual_enthalpy_J_mol,u_residual_entropy_J_molK,u_isobaric_heat_capacity_J_molK,u_isochoric_heat_capacity_J_molK,u_isothermal_compressibility_1_Pa,u_isobaric_expansivity_1_K,u_joule_thomson_coefficient_K_Pa,u_speed_of_sound_m_s,u_undefined_reason,u_response_functions_undefined_reason", header);
+        // CSV is the flattened JSON: the standard_uncertainty object's members, prefixed.
+        string[] columns = header.Split(',');
+        foreach (string key in new[] { "method", "samples", "seed", "density_mol_m3", "pressure_Pa", "compressibility_factor", "residual_enthalpy_J_mol", "residual_entropy_J_molK", "isobaric_heat_capacity_J_molK", "isochoric_heat_capacity_J_molK", "isothermal_compressibility_1_Pa", "isobaric_expansivity_1_K", "joule_thomson_coefficient_K_Pa", "speed_of_sound_m_s", "undefined_reason", "response_functions_undefined_reason", "inputs" })
+        {
+            Assert.Contains($"standard_uncertainty_{key}", columns);
+        }
     }
 }
 

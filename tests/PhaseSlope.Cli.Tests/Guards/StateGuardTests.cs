@@ -7,20 +7,26 @@ namespace PhaseSlope.Cli.Tests.Guards;
 public class StateGuardTests
 {
     [Fact]
-    public void State_DensityInsideTheDome_RefusedNamingTheSaturatedDensities()
+    public void State_DensityInsideTheDome_IsTheTwoPhaseMixture()
     {
         // R-134a at 0 degC, 100 kg/m3: between the saturated vapour (about 14 kg/m3) and liquid
-        // (about 1300 kg/m3) densities; it used to print "vapour, 1175.6 kPa" with exit 0.
-        var result = Run("state", "r134a", "-T", "0degC", "--density", "100 kg/m3");
-        AssertFailure(result, 4, "lies between the saturated vapour and liquid densities");
-        Assert.Contains("two phases at", result.Stderr, StringComparison.Ordinal);
+        // (about 1300 kg/m3) densities; it once printed "vapour, 1175.6 kPa" with exit 0, then was
+        // refused; now it is the two-phase state with its quality by the lever rule on volume.
+        var json = RunJson("state", "r134a", "-T", "0degC", "--density", "100 kg/m3", "--format", "json");
+        Assert.Equal("two-phase", json.GetProperty("phase").GetString());
+        double vL = json.GetProperty("liquid").GetProperty("molar_volume_m3_mol").GetDouble();
+        double vV = json.GetProperty("vapour").GetProperty("molar_volume_m3_mol").GetDouble();
+        double v = json.GetProperty("molar_volume_m3_mol").GetDouble();
+        // Same arithmetic on the same saturated volumes: equal to rounding.
+        Assert.Equal((v - vL) / (vV - vL), json.GetProperty("quality").GetDouble(), 1e-13);
     }
 
     [Fact]
     public void State_DensityOnTheVapourBranchWithPhase_FlaggedMetastable()
     {
         var json = RunJson("state", "r134a", "-T", "0degC", "--density", "100 kg/m3", "--phase", "vapour", "--format", "json");
-        Assert.Equal("vapour", json.GetProperty("phase").GetString());
+        Assert.Equal("metastable-vapour", json.GetProperty("phase").GetString());
+        Assert.Equal("vapour", json.GetProperty("branch").GetString());
         Assert.True(json.GetProperty("metastable").GetBoolean());
         Assert.False(json.GetProperty("critical").GetBoolean());
     }

@@ -86,6 +86,9 @@ public class ThermodynamicIdentityTests(ITestOutputHelper output)
         double kappaS = -D(s, V, P, S) / v;
         Check(kappaT * cv / cp, kappaS, IdentityTolerance, "kappaS = kappaT cv/cp");
         Check(kappaS, s.IsentropicCompressibility!.Value, IdentityTolerance, "IsentropicCompressibility");
+        // Isentropic exponent k = −(v/P)(∂P/∂v)_S against the Jacobian, and γ = cp/cv.
+        Check(-v / p / D(s, V, P, S), s.IsentropicExponent!.Value, IdentityTolerance, "isentropic exponent = -(v/P)(dP/dv)_S");
+        Check(cp / cv, s.HeatCapacityRatio!.Value, IdentityTolerance, "heat capacity ratio = cp/cv");
         double w = s.SpeedOfSound!.Value;
         Check(kappaS, 1 / (s.Density * s.MolarMass!.Value * w * w), IdentityTolerance, "kappaS = 1/(rho w^2)");
         // Joule–Thomson: (∂T/∂P)_H = (Tα − 1)v/cp.
