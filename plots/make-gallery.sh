@@ -29,9 +29,13 @@ $ps tune $ex/frc-7-vapour-pressure.csv --tc 540K --pc 3.1MPa --name frc-7-tuned 
 $ps plot $ex/frc-7.fluid,"$tuned" --diagram deviations --data $ex/frc-7-vapour-pressure.csv --out $out/deviations-frc7-tuned.png
 # Isotherms of carbon dioxide with the model's loops and the equal-area tie lines.
 $ps plot carbon-dioxide --diagram p-v --out $out/p-v-carbon-dioxide.png
-# T-s of water and P-h of R-134a in engineering units.
+# T-s of water and P-h of R-134a in engineering units (P-h on the refrigeration reference, with isochores).
 $ps plot water --diagram t-s --units engineering --out $out/t-s-water.png
-$ps plot r-134a --diagram p-h --units engineering --out $out/p-h-r134a.png
+$ps plot r-134a --diagram p-h --units engineering --reference refrigeration --isochores auto --out $out/p-h-r134a.png
+# An invented operating point (not a measured or published system): R-134a evaporating at -10 degC,
+# condensing at 40 degC, 5 K superheat, 3 K subcooling, compressor isentropic efficiency 0.75.
+$ps plot r-134a --diagram p-h --units engineering --reference refrigeration --t-range "-40,120 degC" --p-range "0.5,60 bar" --h-range "150,480 kJ/kg" \
+    --cycle "evaporating=-10 degC,condensing=40 degC,superheat=5 K,subcooling=3 K,efficiency=0.75" --out $out/p-h-r134a-cycle.png
 # One vector figure, to show the SVG output.
 $ps plot propane,n-butane --diagram t-rho --out $out/t-rho-propane-butane.svg
 

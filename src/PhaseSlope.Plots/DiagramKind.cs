@@ -21,10 +21,11 @@ public enum DiagramKind
     /// <summary>Isotherms in pressure–molar volume with their loops and the tie lines.</summary>
     PressureVolume,
 
-    /// <summary>The temperature–entropy dome with isobars.</summary>
+    /// <summary>The temperature–entropy dome with isobars, lines of constant quality and optional isochores.</summary>
     TemperatureEntropy,
 
-    /// <summary>The log pressure–enthalpy dome with isotherms and lines of constant quality.</summary>
+    /// <summary>The log pressure–enthalpy dome with isotherms, isentropes, lines of constant quality,
+    /// optional isochores and an optional vapour-compression cycle.</summary>
     PressureEnthalpy,
 
     /// <summary>Deviations of the measured vapour pressures from fitted correlations (the forms

@@ -31,15 +31,21 @@ internal readonly record struct UnitScale(PlotUnits Units)
 
     public double Temperature(double kelvin) => Si ? kelvin : Celsius.FromSi(kelvin);
 
+    public double TemperatureToSi(double shown) => Si ? shown : Celsius.ToSi(shown);
+
     public string PressureUnit => Si ? "kPa" : "bar";
 
     public double Pressure(double pascal) => Si ? Kilopascal.FromSi(pascal) : Bar.FromSi(pascal);
+
+    public double PressureToSi(double shown) => Si ? Kilopascal.ToSi(shown) : Bar.ToSi(shown);
 
     public string SlopeUnit => Si ? "kPa/K" : "bar/K";
 
     public string DensityUnit => Si ? "mol/m³" : "kg/m³";
 
     public double Density(double molPerM3, double molarMass) => Si ? molPerM3 : molPerM3 * molarMass;
+
+    public double DensityToSi(double shown, double molarMass) => Si ? shown : shown / molarMass;
 
     // cm³/mol rather than m³/mol: tick labels such as 50 and 2000 instead of 5e-05 and 0.002.
     public string VolumeUnit => Si ? "cm³/mol" : "m³/kg";
@@ -53,4 +59,6 @@ internal readonly record struct UnitScale(PlotUnits Units)
     public string EntropyUnit => Si ? "J/(mol·K)" : "kJ/(kg·K)";
 
     public double Entropy(double jPerMolK, double molarMass) => Si ? jPerMolK : KilojoulePerKilogramKelvin.FromSi(jPerMolK / molarMass);
+
+    public double EntropyToSi(double shown, double molarMass) => Si ? shown : KilojoulePerKilogramKelvin.ToSi(shown) * molarMass;
 }

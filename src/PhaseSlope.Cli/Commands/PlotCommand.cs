@@ -1,6 +1,9 @@
 using System.CommandLine;
+using OxyPlot;
 using PhaseSlope.Cli.Units;
 using PhaseSlope.Core.Errors;
+using PhaseSlope.Core.Properties;
+using PhaseSlope.Core.Units;
 using PhaseSlope.Plots;
 using PhaseSlope.Plots.Diagrams;
 
@@ -20,7 +23,18 @@ internal static class PlotCommand
         command.SetAction(parse => io.Guard(() =>
         {
             var request = options.Bind(parse);
-            var model = Diagram.Build(request.Kind, request.Fluids, request.Options);
+            PlotModel model;
+            try
+            {
+                model = Diagram.Build(request.Kind, request.Fluids, request.Options);
+            }
+            catch (InvalidInputException ex) when (PlotOptions.OptionOf(ex.Field) is string option)
+            {
+                // Found only with the fluid's numbers (a range below its lowest pressure, a cycle whose
+                // throttled liquid misses the dome): still out of range (exit 4), named by its option.
+                throw new InvalidInputException(ex.Field, ex.Value, $"{option}: {ex.Message}");
+            }
+
             // Rendered into memory first: a rendering failure never touches the file system.
             using var figure = new MemoryStream();
             FigureExporter.Export(model, figure, request.Format, request.Width, request.Height);
@@ -84,6 +98,49 @@ internal sealed class PlotOptions
         DefaultValueFactory = _ => "si",
     };
 
+    /// <summary>--reference (p-h and t-s).</summary>
+    public Option<string> Reference { get; } = ReferenceOption.Create();
+
+    /// <summary>--isotherms (p-h).</summary>
+    public Option<string> Isotherms { get; } = new("--isotherms")
+    {
+        Description = "Temperatures of the isotherms on p-h, comma-separated, one unit at the end for all (e.g. \"-20,0,20,40 degC\"); default: round values over the chart's temperatures",
+    };
+
+    /// <summary>--isobars (t-s).</summary>
+    public Option<string> Isobars { get; } = new("--isobars")
+    {
+        Description = "Pressures of the isobars on t-s, comma-separated, one unit at the end for all (e.g. \"1,2,5,10 bar\"); default: round values (1, 2, 5 x 10^k) up to 2 Pc",
+    };
+
+    /// <summary>--isochores (p-h, t-s).</summary>
+    public Option<string> Isochores { get; } = new("--isochores")
+    {
+        Description = "Draw isochores on p-h or t-s: 'auto' (round densities from the saturated vapour at the lowest temperature to the critical density) or a list such as \"5,20,100 kg/m3\"",
+    };
+
+    /// <summary>--t-range (p-h, t-s).</summary>
+    public Option<string> TemperatureRange { get; } = new("--t-range")
+    {
+        Description = "Temperatures the chart spans, 'LOW,HIGH UNIT' (e.g. \"-40,120 degC\"): the dome starts at LOW; p-h draws isotherms up to HIGH, t-s's temperature axis ends there",
+    };
+
+    /// <summary>--p-range (p-h).</summary>
+    public Option<string> PressureRange { get; } = new("--p-range") { Description = "Pressure axis of p-h, 'LOW,HIGH UNIT' (e.g. \"0.5,50 bar\")" };
+
+    /// <summary>--h-range (p-h).</summary>
+    public Option<string> EnthalpyRange { get; } = new("--h-range") { Description = "Enthalpy axis of p-h on the chosen --reference, 'LOW,HIGH UNIT' (e.g. \"100,480 kJ/kg\"; bare numbers J/mol)" };
+
+    /// <summary>--s-range (t-s).</summary>
+    public Option<string> EntropyRange { get; } = new("--s-range") { Description = "Entropy axis of t-s on the chosen --reference, 'LOW,HIGH UNIT' (e.g. \"0.8,2.0 kJ/(kg K)\"; bare numbers J/(mol K))" };
+
+    /// <summary>--cycle (p-h).</summary>
+    public Option<string> Cycle { get; } = new(CycleOption.Name)
+    {
+        Description = "Draw a simple vapour-compression cycle on p-h with its COP: \"evaporating=-10 degC,condensing=40 degC,superheat=5 K,subcooling=3 K,efficiency=0.75\" "
+            + "(evaporating and condensing saturation temperatures required; superheat and subcooling in K, default 0; compressor isentropic efficiency, default 1)",
+    };
+
     /// <summary>Adds every option to the command.</summary>
     public void AddTo(Command command)
     {
@@ -101,7 +158,33 @@ internal sealed class PlotOptions
         command.Options.Add(Common.Alpha);
         command.Options.Add(Common.VolumeShift);
         command.Options.Add(Units);
+        command.Options.Add(Reference);
+        command.Options.Add(Isotherms);
+        command.Options.Add(Isobars);
+        command.Options.Add(Isochores);
+        command.Options.Add(TemperatureRange);
+        command.Options.Add(PressureRange);
+        command.Options.Add(EnthalpyRange);
+        command.Options.Add(EntropyRange);
+        command.Options.Add(Cycle);
     }
+
+    /// <summary>The option a field of a refusal by <see cref="Diagram"/> comes from, or null.</summary>
+    public static string? OptionOf(string field) => FieldOptions.GetValueOrDefault(field);
+
+    /// <summary>The option each field of <see cref="Diagram.Check"/>'s property-chart checks comes from.</summary>
+    private static readonly Dictionary<string, string> FieldOptions = new(StringComparer.Ordinal)
+    {
+        ["reference"] = "--reference",
+        ["isotherms"] = "--isotherms",
+        ["isobars"] = "--isobars",
+        ["isochores"] = "--isochores",
+        ["temperature range"] = "--t-range",
+        ["pressure range"] = "--p-range",
+        ["enthalpy range"] = "--h-range",
+        ["entropy range"] = "--s-range",
+        ["cycle"] = CycleOption.Name,
+    };
 
     /// <summary>Parses and checks every option, resolves the fluids, checks that the diagram can
     /// be drawn for them, then reads the data file.</summary>
@@ -153,15 +236,39 @@ internal sealed class PlotOptions
             }
         }
 
-        var probe = new DiagramOptions { Reduced = parse.GetValue(Reduced), Logarithmic = parse.GetValue(Log), Units = axisUnits, Data = dataPath is null ? null : [] };
+        if (CommonOptions.Given(parse, Reference) && kind is not (DiagramKind.PressureEnthalpy or DiagramKind.TemperatureEntropy))
+        {
+            throw new UsageException($"--reference: the {kind.Id()} diagram draws no enthalpy or entropy (p-h and t-s do)");
+        }
+
+        var reference = ReferenceOption.Parse(parse.GetValue(Reference) ?? ReferenceState.IdealGas.Id);
+        var lines = Lines.Bind(this, parse);
+        var probe = new DiagramOptions
+        {
+            Reduced = parse.GetValue(Reduced),
+            Logarithmic = parse.GetValue(Log),
+            Units = axisUnits,
+            Data = dataPath is null ? null : [],
+            Reference = reference,
+            Isotherms = lines.Isotherms,
+            Isobars = lines.Isobars,
+            TemperatureRange = lines.Temperatures,
+            PressureRange = lines.Pressures,
+            Cycle = lines.Cycle,
+            // Densities, enthalpies and entropies may be per mass: set once the fluid is known.
+            Isochores = lines.Isochores is null ? null : [],
+            EnthalpyRange = lines.Enthalpies is null ? null : new ValueRange(0, 1),
+            EntropyRange = lines.Entropies is null ? null : new ValueRange(0, 1),
+        };
         var fluids = names.Select(FluidResolver.Resolve).Select(f => new PlotFluid(f, Common.Model(parse, f)) { Alpha = Common.BindModel(parse).Alpha }).ToList();
         try
         {
+            probe = lines.WithFluid(probe, fluids[0].Fluid);
             Diagram.Check(kind, fluids, probe);
         }
         catch (InvalidInputException ex)
         {
-            throw new UsageException(ex.Message);
+            throw new UsageException(FieldOptions.TryGetValue(ex.Field, out string? option) ? $"{option}: {ex.Message}" : ex.Message);
         }
 
         var diagramOptions = probe with
@@ -170,5 +277,78 @@ internal sealed class PlotOptions
             DataLabel = dataPath is null ? "data" : Path.GetFileName(dataPath),
         };
         return new PlotRequest(kind, path, figureFormat, w, h, fluids, diagramOptions);
+    }
+}
+
+/// <summary>The line and range options of the p-h and t-s charts, parsed before any fluid is
+/// read; the per-mass ones are converted with the fluid's molar mass in <see cref="WithFluid"/>.</summary>
+internal sealed record Lines(IReadOnlyList<double>? Isotherms, IReadOnlyList<double>? Isobars, IReadOnlyList<ParsedQuantity>? Isochores,
+    ValueRange? Temperatures, ValueRange? Pressures, (ParsedQuantity Low, ParsedQuantity High)? Enthalpies, (ParsedQuantity Low, ParsedQuantity High)? Entropies,
+    Core.Cycles.VapourCompressionSpecification? Cycle)
+{
+    /// <summary>Parses the options (syntax, units and order; the fluid-dependent checks are
+    /// <see cref="Diagram.Check"/>'s).</summary>
+    public static Lines Bind(PlotOptions options, ParseResult parse)
+    {
+        IReadOnlyList<double>? List(Option<string> option, Func<string, string, double> read)
+            => parse.GetValue(option) is string text ? [.. QuantityList.Items(text, option.Name, Diagram.MaximumLines).Select(i => read(i, option.Name))] : null;
+        ValueRange? Range(Option<string> option, Func<string, string, double> read)
+            => parse.GetValue(option) is string text ? QuantityList.Range(text, option.Name, read) is var (low, high) ? new ValueRange(low, high) : null : null;
+        (ParsedQuantity, ParsedQuantity)? Caloric(Option<string> option, string quantity, Dimension molar, Dimension perMass)
+        {
+            if (parse.GetValue(option) is not string text)
+            {
+                return null;
+            }
+
+            var items = QuantityList.Items(text, option.Name, 3);
+            if (items.Count != 2)
+            {
+                throw new UsageException($"{option.Name}: give the low and the high end separated by a comma, such as '100,480 kJ/kg', got '{Input.DataFileException.OneLine(text)}'");
+            }
+
+            var low = QuantityList.Parse(items[0], option.Name, quantity, molar, perMass);
+            var high = QuantityList.Parse(items[1], option.Name, quantity, molar, perMass);
+            if (low.Unit.Dimension != high.Unit.Dimension || !(low.Value < high.Value))
+            {
+                throw new UsageException($"{option.Name}: the low end '{items[0]}' must be below the high end '{items[1]}', both molar or both per mass");
+            }
+
+            return (low, high);
+        }
+
+        IReadOnlyList<ParsedQuantity>? isochores = null;
+        if (parse.GetValue(options.Isochores) is string rho)
+        {
+            isochores = string.Equals(rho.Trim(), "auto", StringComparison.OrdinalIgnoreCase) ? []
+                : [.. QuantityList.Items(rho, options.Isochores.Name, Diagram.MaximumLines)
+                    .Select(i => QuantityList.Parse(i, options.Isochores.Name, "density", Dimension.AmountDensity, Dimension.MassDensity))];
+        }
+
+        return new Lines(
+            List(options.Isotherms, QuantityParser.ParseTemperature),
+            List(options.Isobars, QuantityParser.ParsePressure),
+            isochores,
+            Range(options.TemperatureRange, QuantityParser.ParseTemperature),
+            Range(options.PressureRange, QuantityParser.ParsePressure),
+            Caloric(options.EnthalpyRange, "enthalpy", Dimension.MolarEnergy, Dimension.SpecificEnergy),
+            Caloric(options.EntropyRange, "entropy", Dimension.MolarEntropy, Dimension.SpecificEntropy),
+            parse.GetValue(options.Cycle) is string cycle ? CycleOption.Parse(cycle) : null);
+    }
+
+    /// <summary>The options with the densities, enthalpies and entropies in molar SI units.</summary>
+    /// <exception cref="FluidDataException">A per-mass value and a fluid without molar mass.</exception>
+    public DiagramOptions WithFluid(DiagramOptions options, Core.Fluids.Fluid fluid)
+    {
+        double MolarMass() => fluid.RequireMolarMass("a per-mass value on a plot option");
+        static ValueRange? Molar((ParsedQuantity Low, ParsedQuantity High)? range, Dimension perMass, Func<double> mass)
+            => range is { } r ? new ValueRange(QuantityList.Molar(r.Low, perMass, mass), QuantityList.Molar(r.High, perMass, mass)) : null;
+        return options with
+        {
+            Isochores = Isochores is null ? null
+                : [.. Isochores.Select(q => q.Unit.Dimension == Dimension.MassDensity ? q.Value / MolarMass() : q.Value)],
+            EnthalpyRange = Molar(Enthalpies, Dimension.SpecificEnergy, MolarMass),
+            EntropyRange = Molar(Entropies, Dimension.SpecificEntropy, MolarMass),
+        };
     }
 }

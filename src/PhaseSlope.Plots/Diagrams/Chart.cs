@@ -1,4 +1,5 @@
 using OxyPlot;
+using OxyPlot.Annotations;
 using OxyPlot.Series;
 using PhaseSlope.Core.Equilibrium;
 
@@ -73,6 +74,36 @@ internal static class Chart
         };
         series.Points.AddRange(points.Select(p => new ScatterPoint(p.X, p.Y)));
         return series;
+    }
+
+    /// <summary>A small text label on a line of the chart (its value), in the line's colour.</summary>
+    public static void Label(PlotModel model, string text, DataPoint at, OxyColor colour,
+        HorizontalAlignment horizontal = HorizontalAlignment.Center, VerticalAlignment vertical = VerticalAlignment.Bottom, double dx = 0, double dy = 0)
+        => model.Annotations.Add(new TextAnnotation
+        {
+            Text = text,
+            TextPosition = at,
+            TextHorizontalAlignment = horizontal,
+            TextVerticalAlignment = vertical,
+            Offset = new ScreenVector(dx, dy),
+            Stroke = OxyColors.Undefined,
+            Background = OxyColor.FromAColor(190, OxyColors.White),
+            Padding = new OxyThickness(1),
+            FontSize = HouseStyle.BaseLabelFontSize,
+            TextColor = colour,
+        });
+
+    /// <summary>The title's second line for the property charts: the model and the zero of h and s.</summary>
+    public static string ModelAndReference(PlotFluid fluid, Core.Properties.ReferenceState reference)
+        => $"{ModelTitle(fluid)}; reference: {reference.Description}";
+
+    /// <summary>A new chart with its title and, on a second line, what it was computed with (so
+    /// the title holds no brackets inside brackets).</summary>
+    public static PlotModel NewModel(string title, string subtitle)
+    {
+        var model = HouseStyle.NewModel(title);
+        model.Subtitle = subtitle;
+        return model;
     }
 
     /// <summary>The whole saturation curve of a fluid, ending at its critical point.</summary>

@@ -1,5 +1,7 @@
 using OxyPlot;
+using PhaseSlope.Core.Equilibrium;
 using PhaseSlope.Core.Errors;
+using PhaseSlope.Core.Properties;
 
 namespace PhaseSlope.Plots.Diagrams;
 
@@ -82,6 +84,127 @@ public static class Diagram
         if (options.Points < 2 || options.Points > 2000)
         {
             throw new InvalidInputException("points", options.Points, $"points along a curve must be 2 to 2000, got {options.Points}");
+        }
+
+        CheckPropertyChart(kind, fluids[0], options);
+    }
+
+    /// <summary>Most lines of one family a user may list.</summary>
+    public const int MaximumLines = 40;
+
+    /// <summary>The options of the p-h and t-s charts: only there, and sensible for the fluid.
+    /// Each failure names its field: reference, isotherms, isobars, isochores, temperature range,
+    /// pressure range, enthalpy range, entropy range, cycle.</summary>
+    private static void CheckPropertyChart(DiagramKind kind, PlotFluid fluid, DiagramOptions options)
+    {
+        string id = kind.Id();
+        bool ph = kind == DiagramKind.PressureEnthalpy, ts = kind == DiagramKind.TemperatureEntropy;
+        void Only(bool given, bool allowed, string field, string where)
+        {
+            if (given && !allowed)
+            {
+                throw new InvalidInputException(field, 1, $"the {id} diagram has no {field} ({where})");
+            }
+        }
+
+        Only(options.Reference != ReferenceState.IdealGas, ph || ts, "reference", "p-h and t-s draw enthalpy or entropy");
+        Only(options.Isotherms is not null, ph, "isotherms", "p-h has; t-s draws isobars");
+        Only(options.Isobars is not null, ts, "isobars", "t-s has; p-h draws isotherms");
+        Only(options.Isochores is not null, ph || ts, "isochores", "p-h and t-s have");
+        Only(options.TemperatureRange is not null, ph || ts, "temperature range", "p-h and t-s have");
+        Only(options.PressureRange is not null, ph, "pressure range", "p-h has");
+        Only(options.EnthalpyRange is not null, ph, "enthalpy range", "p-h has");
+        Only(options.EntropyRange is not null, ts, "entropy range", "t-s has");
+        Only(options.Cycle is not null, ph, "cycle", "p-h has");
+
+        double lowest = CoexistenceSolver.LowestValidTemperature(fluid.Fluid);
+        double tc = fluid.Model.CriticalTemperature;
+        Lines(options.Isotherms, "isotherms", t => t < lowest ? $"the isotherm at {Chart.Number(t)} K is below the lowest valid temperature {Chart.Number(lowest)} K of {fluid.Name}" : null);
+        Lines(options.Isobars, "isobars", _ => null);
+        Lines(options.Isochores, "isochores", rho => rho >= fluid.Model.DensityBound(Core.Models.Composition.Pure)
+            ? $"the isochore at {Chart.Number(rho)} mol/m³ is at or above the model's limit 1/b" : null, allowEmpty: true);
+        foreach (var (range, field) in new[] { (options.TemperatureRange, "temperature range"), (options.PressureRange, "pressure range"),
+            (options.EnthalpyRange, "enthalpy range"), (options.EntropyRange, "entropy range") })
+        {
+            if (range is { } r && !r.IsValid)
+            {
+                throw new InvalidInputException(field, r.Low, $"the {field} needs a low end below the high end, got {Chart.Number(r.Low)} to {Chart.Number(r.High)} (SI)");
+            }
+        }
+
+        if (options.TemperatureRange is { } tr)
+        {
+            if (tr.Low < lowest)
+            {
+                throw new InvalidInputException("temperature range", tr.Low, $"the temperature range starts at {Chart.Number(tr.Low)} K, below the lowest valid temperature {Chart.Number(lowest)} K of {fluid.Name}");
+            }
+
+            if (tr.Low >= tc)
+            {
+                throw new InvalidInputException("temperature range", tr.Low, $"the temperature range starts at {Chart.Number(tr.Low)} K, at or above the critical temperature {Chart.Number(tc)} K of {fluid.Name}: the chart needs part of the dome");
+            }
+        }
+
+        if (options.PressureRange is { } pr && !(pr.Low > 0))
+        {
+            throw new InvalidInputException("pressure range", pr.Low, $"the pressure range must start above zero, got {Chart.Number(pr.Low)} Pa");
+        }
+
+        if (options.Cycle is { } cycle)
+        {
+            try
+            {
+                cycle.Validate();
+            }
+            catch (InvalidInputException ex)
+            {
+                throw new InvalidInputException("cycle", ex.Value, ex.Message);
+            }
+
+            if (cycle.CondensingTemperature >= tc)
+            {
+                throw new InvalidInputException("cycle", cycle.CondensingTemperature,
+                    $"the condensing temperature {Chart.Number(cycle.CondensingTemperature)} K is at or above the critical temperature {Chart.Number(tc)} K of {fluid.Name} (a subcritical cycle needs a condenser)");
+            }
+
+            if (cycle.EvaporatingTemperature < lowest || cycle.CondensingTemperature - cycle.Subcooling < lowest)
+            {
+                throw new InvalidInputException("cycle", cycle.EvaporatingTemperature,
+                    $"the evaporating or the condenser-outlet temperature is below the lowest valid temperature {Chart.Number(lowest)} K of {fluid.Name}");
+            }
+        }
+    }
+
+    /// <summary>A list of line values: not empty (unless allowed), at most <see cref="MaximumLines"/>, positive and finite, and
+    /// each accepted by <paramref name="problem"/> (null for none).</summary>
+    private static void Lines(IReadOnlyList<double>? values, string field, Func<double, string?> problem, bool allowEmpty = false)
+    {
+        if (values is null)
+        {
+            return;
+        }
+
+        if (values.Count == 0 && !allowEmpty)
+        {
+            throw new InvalidInputException(field, 0, $"no {field} given");
+        }
+
+        if (values.Count > MaximumLines)
+        {
+            throw new InvalidInputException(field, values.Count, $"at most {MaximumLines} {field}, got {values.Count}");
+        }
+
+        foreach (double v in values)
+        {
+            if (!(v > 0) || !double.IsFinite(v))
+            {
+                throw new InvalidInputException(field, v, $"{field} need positive finite values, got {Chart.Number(v)}");
+            }
+
+            if (problem(v) is string why)
+            {
+                throw new InvalidInputException(field, v, why);
+            }
         }
     }
 }

@@ -21,7 +21,7 @@ public static class LatentDiagram
         ArgumentNullException.ThrowIfNull(fluids);
         ArgumentNullException.ThrowIfNull(options);
         var units = new UnitScale(options.Units);
-        var model = HouseStyle.NewModel($"Enthalpy of vaporization of {Chart.Names(fluids)} ({Chart.Models(fluids)})");
+        var model = HouseStyle.NewModel($"Enthalpy of vaporization of {Chart.Names(fluids)} — {Chart.Models(fluids)}");
         model.Axes.Add(HouseStyle.Linear(AxisPosition.Bottom, "temperature T", units.TemperatureUnit));
         model.Axes.Add(HouseStyle.Linear(AxisPosition.Left, "enthalpy of vaporization Δh", units.EnthalpyUnit));
 

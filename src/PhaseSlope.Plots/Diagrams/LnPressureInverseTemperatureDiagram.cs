@@ -13,7 +13,7 @@ public static class LnPressureInverseTemperatureDiagram
         ArgumentNullException.ThrowIfNull(fluids);
         ArgumentNullException.ThrowIfNull(options);
         var units = new UnitScale(options.Units);
-        var model = HouseStyle.NewModel($"Vapour pressure of {Chart.Names(fluids)} against inverse temperature ({Chart.Models(fluids)})");
+        var model = HouseStyle.NewModel($"Vapour pressure of {Chart.Names(fluids)} against inverse temperature — {Chart.Models(fluids)}");
         model.Axes.Add(options.Reduced
             ? HouseStyle.Linear(AxisPosition.Bottom, "inverse reduced temperature Tc/T", null)
             : HouseStyle.Linear(AxisPosition.Bottom, "inverse temperature 1000/T", "1/K"));

@@ -15,7 +15,7 @@ public static class PressureTemperatureDiagram
         ArgumentNullException.ThrowIfNull(options);
         var units = new UnitScale(options.Units);
         var model = SaturationLineChart.Build(fluids, options,
-            $"Saturation pressure of {Chart.Names(fluids)} ({Chart.Models(fluids)})",
+            $"Saturation pressure of {Chart.Names(fluids)} — {Chart.Models(fluids)}",
             ("saturation pressure Psat", "reduced pressure P/Pc"), units.PressureUnit,
             c => c.Pressure, (p, _, pc) => p / pc, units.Pressure);
 

@@ -31,7 +31,7 @@ public static class PressureVolumeDiagram
         double m = Chart.MolarMass(fluid, options);
         DataPoint Map(double v, double p) => options.Reduced ? new(v / vc, p / pc) : new(units.Volume(v, m), units.Pressure(p));
 
-        var model = HouseStyle.NewModel($"Isotherms of {fluid.Name} in P–v ({Chart.ModelTitle(fluid)})");
+        var model = HouseStyle.NewModel($"Isotherms of {fluid.Name} in P–v — {Chart.ModelTitle(fluid)}");
         var vAxis = options.Reduced
             ? HouseStyle.Logarithmic(AxisPosition.Bottom, "reduced molar volume v/vc", null)
             : HouseStyle.Logarithmic(AxisPosition.Bottom, "volume v", units.VolumeUnit);

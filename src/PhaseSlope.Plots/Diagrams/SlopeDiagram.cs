@@ -14,7 +14,7 @@ public static class SlopeDiagram
         ArgumentNullException.ThrowIfNull(options);
         var units = new UnitScale(options.Units);
         var model = SaturationLineChart.Build(fluids, options,
-            $"Clapeyron slope of {Chart.Names(fluids)} ({Chart.Models(fluids)})",
+            $"Clapeyron slope of {Chart.Names(fluids)} — {Chart.Models(fluids)}",
             ("slope dPsat/dT", "reduced slope d(Psat/Pc)/d(T/Tc)"), units.SlopeUnit,
             c => c.Slope, (slope, tc, pc) => slope * tc / pc, units.Pressure);
         return model;

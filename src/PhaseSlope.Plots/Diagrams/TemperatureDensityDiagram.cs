@@ -13,7 +13,7 @@ public static class TemperatureDensityDiagram
         ArgumentNullException.ThrowIfNull(fluids);
         ArgumentNullException.ThrowIfNull(options);
         var units = new UnitScale(options.Units);
-        var model = HouseStyle.NewModel($"Coexistence dome of {Chart.Names(fluids)} ({Chart.Models(fluids)})");
+        var model = HouseStyle.NewModel($"Coexistence dome of {Chart.Names(fluids)} — {Chart.Models(fluids)}");
         model.Axes.Add(options.Reduced
             ? HouseStyle.Linear(AxisPosition.Bottom, "reduced density ρ/ρc", null)
             : HouseStyle.Linear(AxisPosition.Bottom, "density ρ", units.DensityUnit));

@@ -260,6 +260,32 @@ public sealed class OfferedOptionTests : IDisposable
         yield return Changes("plot", "--alpha", plot, "--alpha", "twu");
         yield return Changes("plot", "--volume-shift", dome, "--volume-shift", "peneloux");
         yield return Changes("plot", "--units", plot, "--units", "engineering");
+        // The p-h and t-s options (each changes the SVG; each refused where it would change nothing).
+        string[] ph = ["plot", "r-134a", "--diagram", "p-h", "--out", "{dir}/out.svg"];
+        string[] ts = ["plot", "r-134a", "--diagram", "t-s", "--out", "{dir}/out.svg"];
+        yield return Changes("plot", "--reference", ph, "--reference", "refrigeration");
+        yield return Changes("plot", "--reference", ts, "--reference", "minus40");
+        yield return Refused("plot", "--reference", [.. plot, "--reference", "nbp"]);
+        yield return Changes("plot", "--isotherms", ph, "--isotherms", "-20,0,20,40 degC");
+        yield return Refused("plot", "--isotherms", [.. ts, "--isotherms", "-20,0,20 degC"]);
+        yield return Changes("plot", "--isobars", ts, "--isobars", "1,2,5,10 bar");
+        yield return Refused("plot", "--isobars", [.. ph, "--isobars", "1,2 bar"]);
+        yield return Changes("plot", "--isochores", ph, "--isochores", "auto");
+        yield return Changes("plot", "--isochores", ts, "--isochores", "5,20,100 kg/m3");
+        yield return Refused("plot", "--isochores", [.. plot, "--isochores", "auto"]);
+        yield return Changes("plot", "--t-range", ph, "--t-range", "-40,120 degC");
+        yield return Changes("plot", "--t-range", ts, "--t-range", "-40,120 degC");
+        yield return Refused("plot", "--t-range", [.. plot, "--t-range", "-40,120 degC"]);
+        yield return Changes("plot", "--p-range", ph, "--p-range", "0.5,50 bar");
+        yield return Refused("plot", "--p-range", [.. ts, "--p-range", "0.5,50 bar"]);
+        yield return Changes("plot", "--h-range", ph, "--h-range", "100,480 kJ/kg");
+        yield return Refused("plot", "--h-range", [.. ts, "--h-range", "100,480 kJ/kg"]);
+        yield return Changes("plot", "--s-range", ts, "--s-range", "-1,1 kJ/(kg*K)");
+        yield return Refused("plot", "--s-range", [.. ph, "--s-range", "-1,1 kJ/(kg*K)"]);
+        yield return Changes("plot", "--cycle", ph, "--cycle", "evaporating=-10 degC,condensing=40 degC");
+        yield return Differs("plot", "--cycle", [.. ph, "--cycle", "evaporating=-10 degC,condensing=40 degC"],
+            [.. ph, "--cycle", "evaporating=-10 degC,condensing=40 degC,superheat=5 K,subcooling=3 K,efficiency=0.75"]);
+        yield return Refused("plot", "--cycle", [.. ts, "--cycle", "evaporating=-10 degC,condensing=40 degC"]);
 
         string[] list = ["fluids", "list"];
         yield return Changes("fluids list", "--family", list, "--family", "alkane");

@@ -51,6 +51,28 @@ public class PlotCommandTests
         Assert.Contains("measured (vp.csv)", texts);
     }
 
+    [Fact]
+    public void P_h_chart_with_reference_lines_and_cycle_names_the_fluid_and_the_COP()
+    {
+        using var folder = new TempFolder();
+        string path = folder.File("ph.svg");
+        CliHarness.RunText("plot", "r-134a", "--diagram", "p-h", "--units", "engineering", "--reference", "refrigeration",
+            "--isotherms", "-20,0,20,40 degC", "--isochores", "auto", "--t-range", "-40,100 degC", "--h-range", "150,480 kJ/kg",
+            "--cycle", "evaporating=-10 degC,condensing=40 degC,superheat=5 K,subcooling=3 K,efficiency=75 %", "--out", path);
+        var svg = XDocument.Load(path);
+        XNamespace ns = "http://www.w3.org/2000/svg";
+        var texts = svg.Descendants(ns + "text").Select(t => t.Value.Trim()).ToList();
+        Assert.Contains("P–h diagram of R-134a", texts);
+        Assert.DoesNotContain(texts, t => t.Contains("r-134a", StringComparison.Ordinal));
+        Assert.Contains(texts, t => t.StartsWith("Peng-Robinson (1976); reference: saturated liquid at 0 degC", StringComparison.Ordinal));
+        Assert.Contains(texts, t => t.StartsWith("cycle: COP ", StringComparison.Ordinal));
+        // The isotherms asked for, labelled in °C, and the quality lines' labels.
+        foreach (string label in new[] { "-20", "0", "20", "40", "x = 0.1", "0.9", "2s" })
+        {
+            Assert.Contains(label, texts);
+        }
+    }
+
     [Theory]
     [InlineData("--diagram", "p-x", "unknown diagram")]
     [InlineData("--width", "100", "--width")]

@@ -1,0 +1,79 @@
+using System.Globalization;
+using PhaseSlope.Cli.Units;
+using PhaseSlope.Core.Cycles;
+using PhaseSlope.Core.Errors;
+
+namespace PhaseSlope.Cli.Commands;
+
+/// <summary>The <c>--cycle</c> value of <c>plot</c>: a simple vapour-compression cycle as
+/// <c>key=value</c> items separated by commas, such as
+/// <c>evaporating=-10 degC,condensing=40 degC,superheat=5 K,subcooling=3 K,efficiency=0.75</c>.</summary>
+/// <remarks>evaporating and condensing (saturation temperatures, any temperature unit; a bare
+/// number is K) are required; superheat and subcooling (temperature differences in K) default to
+/// 0; efficiency (the compressor's isentropic efficiency, a fraction in (0, 1] or a percentage
+/// such as 75 %) defaults to 1.</remarks>
+internal static class CycleOption
+{
+    /// <summary>The option's name.</summary>
+    public const string Name = "--cycle";
+
+    /// <summary>The keys, in the order written in messages.</summary>
+    public static readonly IReadOnlyList<string> Keys = ["evaporating", "condensing", "superheat", "subcooling", "efficiency"];
+
+    /// <summary>Parses and checks the value (everything that needs no fluid).</summary>
+    /// <exception cref="UsageException">Malformed item, unknown or repeated key, a missing
+    /// required key, a bad value, or an impossible combination.</exception>
+    public static VapourCompressionSpecification Parse(string text)
+    {
+        var values = new Dictionary<string, string>(StringComparer.Ordinal);
+        foreach (string item in text.Split(',', StringSplitOptions.TrimEntries))
+        {
+            int eq = item.IndexOf('=', StringComparison.Ordinal);
+            string key = eq < 0 ? item : item[..eq].Trim().ToLowerInvariant();
+            if (eq < 0 || !Keys.Contains(key))
+            {
+                throw new UsageException($"{Name}: '{Input.DataFileException.OneLine(item)}' is not key=value with a key of {string.Join(", ", Keys)}");
+            }
+
+            if (!values.TryAdd(key, item[(eq + 1)..].Trim()))
+            {
+                throw new UsageException($"{Name}: '{key}' is given twice");
+            }
+        }
+
+        foreach (string required in Keys.Take(2))
+        {
+            if (!values.ContainsKey(required))
+            {
+                throw new UsageException($"{Name}: '{required}' (a saturation temperature) is required, e.g. '{required}={(required == "evaporating" ? "-10" : "40")} degC'");
+            }
+        }
+
+        double evaporating = QuantityParser.ParseTemperature(values["evaporating"], $"{Name} evaporating");
+        double condensing = QuantityParser.ParseTemperature(values["condensing"], $"{Name} condensing");
+        double superheat = values.TryGetValue("superheat", out string? sh) ? QuantityList.TemperatureDifference(sh, $"{Name} superheat") : 0;
+        double subcooling = values.TryGetValue("subcooling", out string? sc) ? QuantityList.TemperatureDifference(sc, $"{Name} subcooling") : 0;
+        double efficiency = values.TryGetValue("efficiency", out string? eff) ? Efficiency(eff) : 1;
+        var specification = new VapourCompressionSpecification(evaporating, condensing, superheat, subcooling, efficiency);
+        try
+        {
+            specification.Validate();
+        }
+        catch (InvalidInputException ex)
+        {
+            throw new UsageException($"{Name}: {ex.Message}");
+        }
+
+        return specification;
+    }
+
+    private static double Efficiency(string text)
+    {
+        string t = text.Trim();
+        bool percent = t.EndsWith('%');
+        string number = percent ? t[..^1].Trim() : t;
+        return double.TryParse(number, NumberStyles.Float, CultureInfo.InvariantCulture, out double value) && double.IsFinite(value)
+            ? (percent ? value / 100 : value)
+            : throw new UsageException($"{Name} efficiency: expected a fraction such as 0.75 or a percentage such as 75 %, got '{Input.DataFileException.OneLine(text)}'");
+    }
+}
