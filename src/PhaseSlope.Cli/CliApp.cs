@@ -37,6 +37,7 @@ internal static class CliApp
         root.Subcommands.Add(CoexistCommand.Create(io));
         root.Subcommands.Add(CurveCommand.Create(io));
         root.Subcommands.Add(StateCommand.Create(io));
+        root.Subcommands.Add(CycleCommand.Create(io));
         root.Subcommands.Add(DeriveCommand.Create(io));
         root.Subcommands.Add(FitCommand.Create(io));
         root.Subcommands.Add(LatentCommand.Create(io));

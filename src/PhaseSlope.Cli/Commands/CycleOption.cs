@@ -23,7 +23,12 @@ internal static class CycleOption
     /// <summary>Parses and checks the value (everything that needs no fluid).</summary>
     /// <exception cref="UsageException">Malformed item, unknown or repeated key, a missing
     /// required key, a bad value, or an impossible combination.</exception>
-    public static VapourCompressionSpecification Parse(string text)
+    public static VapourCompressionSpecification Parse(string text) => Parse(text, Name);
+
+    /// <summary>Parses and checks the value, naming <paramref name="name"/> (an option or an
+    /// argument) in messages.</summary>
+    /// <exception cref="UsageException">As <see cref="Parse(string)"/>.</exception>
+    public static VapourCompressionSpecification Parse(string text, string name)
     {
         var values = new Dictionary<string, string>(StringComparer.Ordinal);
         foreach (string item in text.Split(',', StringSplitOptions.TrimEntries))
@@ -32,12 +37,12 @@ internal static class CycleOption
             string key = eq < 0 ? item : item[..eq].Trim().ToLowerInvariant();
             if (eq < 0 || !Keys.Contains(key))
             {
-                throw new UsageException($"{Name}: '{Input.DataFileException.OneLine(item)}' is not key=value with a key of {string.Join(", ", Keys)}");
+                throw new UsageException($"{name}: '{Input.DataFileException.OneLine(item)}' is not key=value with a key of {string.Join(", ", Keys)}");
             }
 
             if (!values.TryAdd(key, item[(eq + 1)..].Trim()))
             {
-                throw new UsageException($"{Name}: '{key}' is given twice");
+                throw new UsageException($"{name}: '{key}' is given twice");
             }
         }
 
@@ -45,15 +50,15 @@ internal static class CycleOption
         {
             if (!values.ContainsKey(required))
             {
-                throw new UsageException($"{Name}: '{required}' (a saturation temperature) is required, e.g. '{required}={(required == "evaporating" ? "-10" : "40")} degC'");
+                throw new UsageException($"{name}: '{required}' (a saturation temperature) is required, e.g. '{required}={(required == "evaporating" ? "-10" : "40")} degC'");
             }
         }
 
-        double evaporating = QuantityParser.ParseTemperature(values["evaporating"], $"{Name} evaporating");
-        double condensing = QuantityParser.ParseTemperature(values["condensing"], $"{Name} condensing");
-        double superheat = values.TryGetValue("superheat", out string? sh) ? QuantityList.TemperatureDifference(sh, $"{Name} superheat") : 0;
-        double subcooling = values.TryGetValue("subcooling", out string? sc) ? QuantityList.TemperatureDifference(sc, $"{Name} subcooling") : 0;
-        double efficiency = values.TryGetValue("efficiency", out string? eff) ? Efficiency(eff) : 1;
+        double evaporating = QuantityParser.ParseTemperature(values["evaporating"], $"{name} evaporating");
+        double condensing = QuantityParser.ParseTemperature(values["condensing"], $"{name} condensing");
+        double superheat = values.TryGetValue("superheat", out string? sh) ? QuantityList.TemperatureDifference(sh, $"{name} superheat") : 0;
+        double subcooling = values.TryGetValue("subcooling", out string? sc) ? QuantityList.TemperatureDifference(sc, $"{name} subcooling") : 0;
+        double efficiency = values.TryGetValue("efficiency", out string? eff) ? Efficiency(eff, name) : 1;
         var specification = new VapourCompressionSpecification(evaporating, condensing, superheat, subcooling, efficiency);
         try
         {
@@ -61,19 +66,19 @@ internal static class CycleOption
         }
         catch (InvalidInputException ex)
         {
-            throw new UsageException($"{Name}: {ex.Message}");
+            throw new UsageException($"{name}: {ex.Message}");
         }
 
         return specification;
     }
 
-    private static double Efficiency(string text)
+    private static double Efficiency(string text, string name)
     {
         string t = text.Trim();
         bool percent = t.EndsWith('%');
         string number = percent ? t[..^1].Trim() : t;
         return double.TryParse(number, NumberStyles.Float, CultureInfo.InvariantCulture, out double value) && double.IsFinite(value)
             ? (percent ? value / 100 : value)
-            : throw new UsageException($"{Name} efficiency: expected a fraction such as 0.75 or a percentage such as 75 %, got '{Input.DataFileException.OneLine(text)}'");
+            : throw new UsageException($"{name} efficiency: expected a fraction such as 0.75 or a percentage such as 75 %, got '{Input.DataFileException.OneLine(text)}'");
     }
 }

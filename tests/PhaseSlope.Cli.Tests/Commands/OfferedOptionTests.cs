@@ -117,6 +117,14 @@ public sealed class OfferedOptionTests : IDisposable
             yield return row;
         }
 
+        string[] cycle = ["cycle", "r-134a", "evaporating=-10 degC,condensing=40 degC"];
+        yield return Changes("cycle", "--reference", cycle, "--reference", "refrigeration");
+        yield return Changes("cycle", "--out", cycle, "--out", "{dir}/cycle.txt");
+        foreach (var row in ModelAndOutputRows("cycle", cycle, units: true))
+        {
+            yield return row;
+        }
+
         yield return Differs("state", "--batch", ["state", "propane", "--batch", "{states1}"], ["state", "propane", "--batch", "{states2}"]);
         yield return Refused("state", "--batch", ["state", "propane", "--batch", "{states1}", "-T", "300"]);
 
