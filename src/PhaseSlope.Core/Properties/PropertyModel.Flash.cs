@@ -128,6 +128,19 @@ public sealed partial class PropertyModel
 
     private static string Field(StateProperty p) => Name(p);
 
+    /// <summary>A property's value with its molar SI unit, for messages ("enthalpy 48641.22 J/mol").</summary>
+    private static string Show(StateProperty p, double value) => $"{Name(p)} {Preconditions.Format(value)}{Unit(p)}";
+
+    private static string Unit(StateProperty p) => p switch
+    {
+        StateProperty.Temperature => " K",
+        StateProperty.Pressure => " Pa",
+        StateProperty.Density => " mol/m3",
+        StateProperty.Enthalpy or StateProperty.InternalEnergy => " J/mol",
+        StateProperty.Entropy => " J/(mol K)",
+        _ => "",
+    };
+
     private static void CheckValue(StateProperty p, double value)
     {
         Preconditions.Finite(value, Field(p));
@@ -298,7 +311,7 @@ public sealed partial class PropertyModel
             return Single(roots[0], SaturationTemperatureAt(roots[0].Pressure));
         }
 
-        string spec = $"{Name(p)} {Preconditions.Format(value)}";
+        string spec = Show(p, value);
         if (roots.Count == 0)
         {
             throw new InvalidInputException(Field(p), value,
@@ -409,7 +422,7 @@ public sealed partial class PropertyModel
             double reachLow = p == StateProperty.Density ? low.Density : Lever(low, p);
             double reachHigh = p == StateProperty.Density ? high.Density : Lever(high, p);
             throw new InvalidInputException(Field(p), value,
-                $"no state at {Preconditions.Format(pressure)} Pa has {Name(p)} {Preconditions.Format(value)}: between {Preconditions.Format(tLow)} and {Preconditions.Format(tHigh)} K on this side of the dome the model reaches {Preconditions.Format(reachLow)} to {Preconditions.Format(reachHigh)}"
+                $"no state at {Preconditions.Format(pressure)} Pa has {Show(p, value)}: between {Preconditions.Format(tLow)} and {Preconditions.Format(tHigh)} K on this side of the dome the model reaches {Preconditions.Format(reachLow)} to {Preconditions.Format(reachHigh)}{Unit(p)}"
                 + (fHigh < 0 && highState is null ? $" (the search stops at {Preconditions.Format(tHigh)} K, {(_heatCapacity is null ? "ten times the critical temperature" : "the upper end of the ideal-gas heat capacity's range")})" : "")
                 + (fLow > 0 && lowState is null ? $" (the lowest valid temperature is {Preconditions.Format(tLow)} K)" : ""));
         }
@@ -485,7 +498,7 @@ public sealed partial class PropertyModel
             t = next;
         }
 
-        throw new ConvergenceException($"the state at {Preconditions.Format(pressure)} Pa with {Name(p)} {Preconditions.Format(value)} did not converge", NewtonIterations + 100, double.NaN);
+        throw new ConvergenceException($"the state at {Preconditions.Format(pressure)} Pa with {Show(p, value)} did not converge", NewtonIterations + 100, double.NaN);
     }
 
     /// <summary>A state on the dome given its quality and one more property (ρ, h, s or u): every
@@ -545,7 +558,7 @@ public sealed partial class PropertyModel
             roots.Add(previous);
         }
 
-        string spec = $"{given} and {Name(p)} {Preconditions.Format(value)}";
+        string spec = $"{given} and {Show(p, value)}";
         return roots.Count switch
         {
             1 => roots[0],
