@@ -105,7 +105,7 @@ internal sealed class CoexistOptions
         }
 
         var model = Common.BindModel(parse); // reject a bad --eos, --alpha or --volume-shift before the fluid is resolved
-        var output = Common.BindOutput(parse);
+        var output = Common.BindOutput(parse, csvUnits: true);
         double? t = tText is null ? null : QuantityParser.ParseTemperature(tText, "--temperature");
         double? p = pText is null ? null : QuantityParser.ParsePressure(pText, "--pressure");
         var reference = ReferenceOption.Parse(parse.GetValue(Reference)!);

@@ -102,14 +102,14 @@ internal static class UncertaintyText
     /// <summary>Table cell of a u column ("undefined" when null).</summary>
     public static string Cell(Quantity q, CoexistenceUncertainty? values, UnitSystem units, double molarMass)
         => values is not null && Checked(q.Value(values), q.Key) is double v
-            ? NumberText.Table(q.Display == DisplayQuantity.Temperature ? v : UnitFormatter.Convert(q.Display, v, units, molarMass))
+            ? NumberText.Uncertainty(q.Display == DisplayQuantity.Temperature ? v : UnitFormatter.Convert(q.Display, v, units, molarMass))
             : "undefined";
 
     /// <summary>Lines naming the method and each input with its uncertainty and source.</summary>
     public static void DescribeInputs(StringBuilder text, UncertaintySummary summary)
     {
         text.AppendLine($"standard uncertainties (u): {summary.Choice.Describe()}, from "
-            + string.Join(", ", summary.Inputs.Select(i => $"{i.Name} = {NumberText.Table(i.Value)} +/- {NumberText.Table(i.StandardUncertainty)}")));
+            + string.Join(", ", summary.Inputs.Select(i => $"{i.Name} = {NumberText.Table(i.Value)} +/- {NumberText.Uncertainty(i.StandardUncertainty)}")));
         foreach (string source in summary.Inputs.Select(i => i.UncertaintySource).Distinct())
         {
             string names = string.Join(", ", summary.Inputs.Where(i => i.UncertaintySource == source).Select(i => i.Name));
