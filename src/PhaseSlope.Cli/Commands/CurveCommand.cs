@@ -168,7 +168,15 @@ internal static class CurveCommand
         var points = new List<CoexistencePoint>(pressures.Count);
         foreach (double p in pressures)
         {
-            points.Add(solver.AtPressure(p, points.Count > 0 ? points[^1] : null));
+            try
+            {
+                points.Add(solver.AtPressure(p, points.Count > 0 ? points[^1] : null));
+            }
+            catch (Core.Errors.InvalidInputException ex)
+            {
+                // The solver names the pressure and the limit; the option is named here.
+                throw new Core.Errors.InvalidInputException(ex.Field, ex.Value, $"--pressures: {ex.Message}");
+            }
         }
 
         return points;

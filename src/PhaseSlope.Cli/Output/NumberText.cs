@@ -28,6 +28,10 @@ internal static class NumberText
     /// GUM, JCGM 100:2008 section 7.2.6, recommends at most).</summary>
     public const int UncertaintyDigits = 2;
 
+    /// <summary>Significant digits of a given value (<see cref="Given"/>): more than any data
+    /// file in the catalog carries, far fewer than the 15 a double holds exactly.</summary>
+    public const int GivenDigits = 10;
+
     /// <summary>Below this fraction of its column's scale a cancellation prints as 0 (see the remarks).</summary>
     public const double ZeroTolerance = 1e-9;
 
@@ -38,6 +42,13 @@ internal static class NumberText
     /// <summary><see cref="Digits"/> significant digits, for tables read by people.</summary>
     /// <exception cref="NonFiniteResultException">The value is not finite.</exception>
     public static string Table(double value) => Significant(value, Digits);
+
+    /// <summary>A value the user or a data file gave (a catalog constant), with up to
+    /// <see cref="GivenDigits"/> significant digits: the digits as written (44.09562 g/mol), where
+    /// <see cref="Table(double)"/> would drop the seventh; binary noise, at the sixteenth digit,
+    /// never shows.</summary>
+    /// <exception cref="NonFiniteResultException">The value is not finite.</exception>
+    public static string Given(double value) => Significant(value, GivenDigits);
 
     /// <summary>As <see cref="Table(double)"/>, but 0 for a value below <see cref="ZeroTolerance"/>
     /// times <paramref name="scale"/> (the largest magnitude of its column; 0 for no such rule).</summary>

@@ -186,15 +186,17 @@ internal static class QuantityParser
 
         QuantityText.TrySplit(items[^1], out _, out string unit);
         var values = new double[items.Length];
-        for (int i = 0; i < items.Length; i++)
+        // The last entry first: it carries the unit, whose errors then quote it as written.
+        values[^1] = parse(items[^1], optionName);
+        for (int i = 0; i < items.Length - 1; i++)
         {
-            if (i < items.Length - 1 && (!QuantityText.TrySplit(items[i], out _, out string own) || own.Length > 0))
+            if (!QuantityText.TrySplit(items[i], out _, out string own) || own.Length > 0)
             {
                 throw Fail(optionName, text, $"'{items[i].Trim()}' is not a bare number",
                     $"(give numbers separated by commas and one unit after the last, which applies to all, e.g. '{example}')");
             }
 
-            values[i] = parse(i < items.Length - 1 ? $"{items[i].Trim()} {unit}" : items[i], optionName);
+            values[i] = parse($"{items[i].Trim()} {unit}", optionName);
         }
 
         return values;
