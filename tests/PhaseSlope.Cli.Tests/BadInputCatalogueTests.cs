@@ -44,6 +44,7 @@ public class BadInputCatalogueTests
         { ["curve", "propane", "--from", "250", "--to", "300", "--step", "-5 K"], ExitCodes.Usage, "--step: the step is not above zero in '-5 K' (give a positi" },
         { ["curve", "propane", "--step", "5", "--points", "10"], ExitCodes.Usage, "--step: conflicts with --points (give the number of states" },
         { ["curve", "propane", "--step", "1e-4 K"], ExitCodes.Usage, "--step: 0.0001 K from 110.967 K to 369.89 K gives more than" },
+        { ["curve", "propane", "--step", "1e-300 K"], ExitCodes.Usage, "--step: 1E-300 K from 110.967 K to 369.89 K gives more than" },
         { ["curve", "propane", "--step", "5 furlong"], ExitCodes.Usage, "--step: unknown temperature difference unit 'furlong' in '5" },
         { ["curve", "propane", "--temperatures", "250,300", "--from", "200"], ExitCodes.Usage, "--temperatures: conflicts with --from (the list gives every" },
         { ["curve", "propane", "--temperatures", "300,250"], ExitCodes.Usage, "--temperatures: the values must increase, but value 2 (250 K" },

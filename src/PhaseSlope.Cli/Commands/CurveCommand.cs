@@ -131,12 +131,20 @@ internal static class CurveCommand
     /// tool reads or prints, and far above the accumulated rounding of 1e5 decimal sums).</remarks>
     internal static IReadOnlyList<double> Stepped(double start, double end, double step)
     {
-        decimal first = Exact(start), increment = Exact(step), last = Exact(end);
-        decimal count = decimal.Floor((last - first) / increment + 1e-12m);
-        if (count + 2 > MaxPoints)
+        // The count is checked in double first, so a step too small (or too large) for decimal
+        // arithmetic never reaches it: a step at or above the range gives its two ends.
+        if ((end - start) / step > MaxPoints - 1)
         {
             throw new UsageException($"--step: {NumberText.Table(step)} K from {NumberText.Table(start)} K to {NumberText.Table(end)} K gives more than {MaxPoints} states (the limit of --points)");
         }
+
+        if (step >= end - start)
+        {
+            return [start, end];
+        }
+
+        decimal first = Exact(start), increment = Exact(step), last = Exact(end);
+        decimal count = decimal.Floor((last - first) / increment + 1e-12m);
 
         var temperatures = new List<double>((int)count + 2);
         for (int i = 0; i <= (int)count; i++)

@@ -31,9 +31,13 @@ internal static class CoexistenceWriter
             _ => single ? SingleTable(rows[0], fluid, model, reference, units, uncertainty) : CurveTable(rows, fluid, model, reference, units, uncertainty, byPressure),
         };
 
-    /// <summary>Each row's JSON object flattened to (key, value) fields, in JSON order.</summary>
-    internal static IReadOnlyList<IReadOnlyList<FlatField>> Flat(IReadOnlyList<CoexistenceRow> rows, Fluid fluid, IResidualModel model, ReferenceState? reference, UncertaintySummary? uncertainty)
-        => [.. rows.Select(row => JsonFlattener.Flatten(json => WriteObject(json, row, fluid, model, reference, uncertainty)))];
+    /// <summary>Each row's JSON object flattened to (key, value) fields, in JSON order, as the
+    /// rows are enumerated (lazily: one buffer, reused).</summary>
+    internal static IEnumerable<IReadOnlyList<FlatField>> Flat(IReadOnlyList<CoexistenceRow> rows, Fluid fluid, IResidualModel model, ReferenceState? reference, UncertaintySummary? uncertainty)
+    {
+        var flattener = new JsonFlattener();
+        return rows.Select(row => flattener.Flatten(json => WriteObject(json, row, fluid, model, reference, uncertainty)));
+    }
 
     /// <summary>Objects whose temperatures are differences (kept in K in engineering CSV).</summary>
     private static readonly HashSet<string> Differences = ["standard_uncertainty"];

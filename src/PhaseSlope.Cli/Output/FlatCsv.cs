@@ -44,59 +44,119 @@ internal static class FlatCsv
         new("_K", DisplayQuantity.Temperature),
     ];
 
-    /// <summary>Renders the rows.</summary>
-    /// <param name="rows">Flattened rows.</param>
-    /// <param name="units">SI: the JSON keys and digits. Engineering: converted as described.</param>
-    /// <param name="molarMass">Molar mass in kg/mol for the mass-based units (unused in SI).</param>
-    /// <param name="differences">Names of objects whose temperatures are differences.</param>
-    public static string Write(IReadOnlyList<IReadOnlyList<FlatField>> rows, UnitSystem units, double? molarMass, IReadOnlySet<string>? differences = null)
+    /// <summary>Renders the rows (see <see cref="Write(TextWriter, IEnumerable{IReadOnlyList{FlatField}}, UnitSystem, double?, IReadOnlySet{string}?)"/>).</summary>
+    /// <remarks>Rows of one table usually share their keys: the header is first taken from the
+    /// first row and the rows written in one pass; only if a later row has a key the first lacks
+    /// is the text discarded and written in two passes (the union of the keys first).</remarks>
+    public static string Write(IEnumerable<IReadOnlyList<FlatField>> rows, UnitSystem units, double? molarMass, IReadOnlySet<string>? differences = null)
     {
-        var converted = rows.Select(row => Convert(row, units, molarMass ?? double.NaN, differences)).ToArray();
-        var header = new List<string>();
-        var seen = new HashSet<string>(StringComparer.Ordinal);
-        foreach (var row in converted)
+        var columns = new Columns(units, differences);
+        using (var text = new StringWriter(CultureInfo.InvariantCulture))
         {
-            foreach (var (key, _) in row)
+            var first = rows.Take(1).ToArray();
+            if (TryWrite(text, rows, columns, columns.Header(first), molarMass))
             {
-                if (seen.Add(key))
-                {
-                    header.Add(key);
-                }
+                return text.ToString();
             }
         }
 
-        return CsvText.Write(header, converted.Select(row =>
+        using var again = new StringWriter(CultureInfo.InvariantCulture);
+        Write(again, rows, units, molarMass, differences);
+        return again.ToString();
+    }
+
+    /// <summary>Writes the rows as CSV to <paramref name="output"/> (left open).</summary>
+    /// <param name="output">Where the text goes.</param>
+    /// <param name="rows">Flattened rows. Enumerated twice: once for the header (the union of the
+    /// rows' keys), once for the cells, so a long table is never held as fields; a lazy source
+    /// flattens each row twice.</param>
+    /// <param name="units">SI: the JSON keys and digits. Engineering: converted as described.</param>
+    /// <param name="molarMass">Molar mass in kg/mol for the mass-based units (unused in SI).</param>
+    /// <param name="differences">Names of objects whose temperatures are differences.</param>
+    public static void Write(TextWriter output, IEnumerable<IReadOnlyList<FlatField>> rows, UnitSystem units, double? molarMass, IReadOnlySet<string>? differences = null)
+    {
+        var columns = new Columns(units, differences);
+        TryWrite(output, rows, columns, columns.Header(rows), molarMass);
+    }
+
+    /// <summary>The column of each key (its header and unit suffix), computed once per key.</summary>
+    private sealed class Columns(UnitSystem units, IReadOnlySet<string>? differences)
+    {
+        private readonly Dictionary<string, (string Header, Suffix? Suffix)> _byKey = new(StringComparer.Ordinal);
+
+        public (string Header, Suffix? Suffix) Of(FlatField field)
         {
-            var cells = new Dictionary<string, string>(StringComparer.Ordinal);
-            foreach (var (key, text) in row)
+            if (!_byKey.TryGetValue(field.Key, out var column))
             {
-                cells.TryAdd(key, text);
+                var suffix = Find(field, units, differences);
+                column = (suffix is null ? field.Key : field.Key[..^suffix.Text.Length] + KeyUnit(suffix, units), suffix);
+                _byKey.Add(field.Key, column);
             }
 
-            return (IReadOnlyList<string>)[.. header.Select(h => cells.TryGetValue(h, out string? text) ? text : "")];
-        }));
+            return column;
+        }
+
+        public UnitSystem Units => units;
+
+        /// <summary>The headers of the rows' keys, in the order they first appear, with their index.</summary>
+        public (List<string> Names, Dictionary<string, int> Index) Header(IEnumerable<IReadOnlyList<FlatField>> rows)
+        {
+            var names = new List<string>();
+            var index = new Dictionary<string, int>(StringComparer.Ordinal);
+            foreach (var field in rows.SelectMany(row => row))
+            {
+                string name = Of(field).Header;
+                if (index.TryAdd(name, names.Count))
+                {
+                    names.Add(name);
+                }
+            }
+
+            return (names, index);
+        }
+    }
+
+    /// <summary>Writes the header and the rows; false (with part of the text written) when a row
+    /// has a key that is not in the header.</summary>
+    private static bool TryWrite(TextWriter output, IEnumerable<IReadOnlyList<FlatField>> rows, Columns columns, (List<string> Names, Dictionary<string, int> Index) header,
+        double? molarMass)
+    {
+        double m = molarMass ?? double.NaN;
+        bool complete = true;
+        IEnumerable<IReadOnlyList<string>> Cells()
+        {
+            foreach (var row in rows)
+            {
+                var cells = new string?[header.Names.Count];
+                foreach (var field in row)
+                {
+                    var (name, suffix) = columns.Of(field);
+                    if (!header.Index.TryGetValue(name, out int i))
+                    {
+                        complete = false;
+                        yield break;
+                    }
+
+                    // Where two keys name one column (a molar density converted to kg/m3 beside the
+                    // JSON's own density_kg_m3), the first is written.
+                    cells[i] ??= suffix is null || field.Kind != JsonValueKind.Number
+                        ? field.Text
+                        // Every quantity but the temperature (never per kelvin, never a difference
+                        // here) is a pure factor, so a slope per kelvin converts as its quantity does.
+                        : NumberText.RoundTrip(UnitFormatter.Convert(suffix.Quantity, double.Parse(field.Text, NumberStyles.Float, CultureInfo.InvariantCulture), columns.Units, m));
+                }
+
+                yield return [.. cells.Select(c => c ?? "")];
+            }
+        }
+
+        CsvText.Write(output, header.Names, Cells());
+        return complete;
     }
 
     /// <summary>The CSV header of one field in a unit system (see the remarks of the class).</summary>
     public static string Header(FlatField field, UnitSystem units, IReadOnlySet<string>? differences = null)
         => Find(field, units, differences) is { } s ? field.Key[..^s.Text.Length] + KeyUnit(s, units) : field.Key;
-
-    private static IEnumerable<(string Key, string Text)> Convert(IReadOnlyList<FlatField> row, UnitSystem units, double molarMass, IReadOnlySet<string>? differences)
-    {
-        foreach (var field in row)
-        {
-            if (Find(field, units, differences) is not { } suffix || field.Kind != JsonValueKind.Number)
-            {
-                yield return (Header(field, units, differences), field.Text);
-                continue;
-            }
-
-            double si = double.Parse(field.Text, NumberStyles.Float, CultureInfo.InvariantCulture);
-            // Every quantity but the temperature (never per kelvin, never a difference here) is a pure
-            // factor, so a slope per kelvin or a difference converts as its quantity does.
-            yield return (Header(field, units, differences), NumberText.RoundTrip(UnitFormatter.Convert(suffix.Quantity, si, units, molarMass)));
-        }
-    }
 
     /// <summary>The unit suffix of a field to convert, or null to write it as it is (SI output,
     /// no unit suffix, or a temperature difference).</summary>

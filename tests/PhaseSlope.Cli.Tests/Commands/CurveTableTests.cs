@@ -64,6 +64,16 @@ public class CurveTableTests
         Assert.Equal([250.0, 265, 280, 295, 300], json.EnumerateArray().Select(r => Number(r, "temperature_K")).ToArray());
     }
 
+    [Theory]
+    [InlineData("1e6")]
+    [InlineData("1e30 degF")] // beyond decimal's range: the step is compared with the range first
+    public void Step_AtLeastTheRange_GivesItsTwoEnds(string step)
+    {
+        var json = RunJson("curve", "propane", "--from", "300", "--to", "310", "--step", step, "--format", "json");
+
+        Assert.Equal([300.0, 310], json.EnumerateArray().Select(r => Number(r, "temperature_K")).ToArray());
+    }
+
     [Fact]
     public void Step_NoTo_EndsAtTheCriticalPoint()
     {

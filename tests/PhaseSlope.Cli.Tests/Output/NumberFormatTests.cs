@@ -46,7 +46,7 @@ public class NumberFormatTests
     public void Given_DigitsAsWritten(double value, string expected)
         => Assert.Equal(expected, NumberText.Given(value));
 
-    private static IReadOnlyList<FlatField> Sample() => JsonFlattener.Flatten(json =>
+    private static IReadOnlyList<FlatField> Sample() => new JsonFlattener().Flatten(json =>
     {
         json.WriteStartObject();
         json.WriteString("fluid", "propane, \"demo\"");
@@ -113,6 +113,29 @@ public class NumberFormatTests
         Assert.Equal(0.5 / 0.04409562 / 1e3, double.Parse(cells[4], System.Globalization.CultureInfo.InvariantCulture), 1e-15);
         Assert.Equal("", cells[5]);
         Assert.Equal("0.25", cells[7]);
+    }
+
+    [Fact]
+    public void FlatCsv_RowsWithDifferentKeys_HeaderIsTheUnionInOrderOfFirstAppearance()
+    {
+        var flattener = new JsonFlattener();
+        IReadOnlyList<FlatField> Row(bool twoPhase) => flattener.Flatten(json =>
+        {
+            json.WriteStartObject();
+            json.WriteString("phase", twoPhase ? "two-phase" : "liquid");
+            if (twoPhase)
+            {
+                json.WriteNumber("quality", 0.25);
+            }
+
+            json.WriteNumber("temperature_K", 300);
+            json.WriteEndObject();
+        });
+
+        // The second row has a key the first lacks: the one-pass attempt is discarded and the
+        // header is the union; the first row's cell for it is empty.
+        Assert.Equal("phase,temperature_K,quality\nliquid,300,\ntwo-phase,300,0.25\n", FlatCsv.Write([Row(false), Row(true)], UnitSystem.Si, null));
+        Assert.Equal("phase,quality,temperature_K\ntwo-phase,0.25,300\nliquid,,300\n", FlatCsv.Write([Row(true), Row(false)], UnitSystem.Si, null));
     }
 
     private static string[] ParseLine(string line) => PhaseSlope.Cli.Tests.Commands.CurveCommandTests.ParseCsv(line)[0];
