@@ -89,6 +89,7 @@ internal sealed class CoexistOptions
         command.Options.Add(Pressure);
         command.Options.Add(Reference);
         Common.AddTo(command, withEos: true);
+        Common.Units.Description = CommonOptions.UnitsWithCsvDescription;
         Out.AddTo(command);
         Diagnostics.AddTo(command);
         Uncertainty.AddTo(command);

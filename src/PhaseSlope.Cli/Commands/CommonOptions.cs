@@ -51,6 +51,10 @@ internal sealed class CommonOptions
     public static Argument<string> FluidArgument()
         => new("FLUID") { Description = "Catalog name or synonym, the path of a .fluid file, or inline critical constants, e.g. inline:tc=369.89K,pc=4.2512MPa,omega=0.152[,molar_mass=44.1g/mol][,name=...]" };
 
+    /// <summary>The --units description of a command whose CSV is converted too (coexist, curve).</summary>
+    public const string UnitsWithCsvDescription =
+        "Units of the table and the CSV: si (K, kPa, mol/m3, J/mol; CSV: the SI keys) or engineering (degC, bar, kg/m3, kJ/kg; CSV headers name each unit); JSON is always SI";
+
     /// <summary>Adds the options a command honours: <paramref name="withEos"/> adds --eos, --alpha
     /// and --volume-shift; <paramref name="withUnits"/> adds --units (only for commands whose
     /// tables have a display unit choice). --format is always added.</summary>

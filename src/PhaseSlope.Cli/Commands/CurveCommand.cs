@@ -294,6 +294,7 @@ internal sealed class CurveOptions
         command.Options.Add(Out);
         command.Options.Add(Reference);
         Common.AddTo(command, withEos: true);
+        Common.Units.Description = CommonOptions.UnitsWithCsvDescription;
         Diagnostics.AddTo(command);
         Uncertainty.AddTo(command);
     }
