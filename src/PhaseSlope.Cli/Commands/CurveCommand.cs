@@ -74,8 +74,9 @@ internal static class CurveCommand
 
                 if (t > tc)
                 {
+                    var (given, limit) = Apart(t, tc);
                     throw new Core.Errors.InvalidInputException("temperatures", t,
-                        $"--temperatures: {NumberText.Table(t)} K is above the critical temperature {NumberText.Table(tc)} K of {data.Name}");
+                        $"--temperatures: {given} K is above the critical temperature {limit} K of {data.Name}");
                 }
             }
 

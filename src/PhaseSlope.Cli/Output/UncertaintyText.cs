@@ -19,7 +19,7 @@ internal sealed record LatentBandText(UncertaintyChoice? Choice, IReadOnlyList<U
 }
 
 /// <summary>Writes propagated standard uncertainties of coexistence states: the JSON member
-/// <c>standard_uncertainty</c>, the CSV <c>u_</c> columns and the table columns and lines.</summary>
+/// <c>standard_uncertainty</c> (which the CSV carries flattened) and the table columns and lines.</summary>
 internal static class UncertaintyText
 {
     /// <summary>One quantity: key (as the value's own key), table title, display quantity, value.</summary>
@@ -86,14 +86,6 @@ internal static class UncertaintyText
 
         json.WriteEndArray();
     }
-
-    /// <summary>CSV header names of the u_ columns.</summary>
-    public static IEnumerable<string> CsvHeader => Quantities.Select(q => $"u_{q.Key}").Append("u_undefined_reason");
-
-    /// <summary>CSV cells of the u_ columns (empty where undefined, the reason in the last).</summary>
-    public static IEnumerable<string> CsvCells(CoexistenceUncertainty? values)
-        => Quantities.Select(q => values is null ? "" : NumberText.RoundTripOrEmpty(Checked(q.Value(values), q.Key)))
-            .Append(values?.Reason ?? "");
 
     /// <summary>Table header of a u column; u(T) is a temperature difference and shown in K.</summary>
     public static string Header(Quantity q, UnitSystem units)
