@@ -48,7 +48,7 @@ internal static class CurveCommand
             else
             {
                 AtomicFile.WriteAllText(outPath, text);
-                io.Note($"wrote {curve.Count} coexistence states to {outPath}");
+                io.Note($"wrote {curve.Count} coexistence state{(curve.Count == 1 ? "" : "s")} to {outPath}");
             }
 
             options.Diagnostics.End(io, curve);

@@ -164,7 +164,7 @@ internal static class CoexistenceWriter
 
         var text = new StringBuilder();
         string kind = byPressure ? "Saturation table by pressure" : "Saturation curve";
-        text.AppendLine($"{kind} of {fluid.Name}, {ModelText.Describe(model)}; {rows.Count} states{(rows[^1].Point.IsCritical ? ", the last one the critical point" : "")}");
+        text.AppendLine($"{kind} of {fluid.Name}, {ModelText.Describe(model)}; {rows.Count} state{(rows.Count == 1 ? "" : "s")}{(rows[^1].Point.IsCritical ? ", the last one the critical point" : "")}");
         text.AppendLine(ReferenceLine(rows, reference));
         if (uncertainty is not null)
         {

@@ -100,6 +100,25 @@ public class UncertaintyCommandTests
     }
 
     [Fact]
+    public void Curve_Table_UncertaintiesWithTwoSignificantDigits()
+    {
+        var table = Assert.Single(TableLayout.Find(RunText("curve", "propane", "-n", "5", "--uncertainty", "linear")));
+        int[] columns = [.. table.HeaderCells.Select((h, i) => (h, i)).Where(c => c.h.StartsWith("u(", StringComparison.Ordinal)).Select(c => c.i)];
+
+        Assert.Equal(4, columns.Length);
+        foreach (var row in table.Rows.SkipLast(1)) // the last row is the critical point: "undefined"
+        {
+            foreach (int i in columns)
+            {
+                // Two significant digits (GUM, JCGM 100:2008 7.2.6): the digits after leading zeros,
+                // before any exponent, trailing zeros of an integer part not counted.
+                string mantissa = table.Cells(row)[i].Split('E')[0].Replace("-", "").Replace(".", "").TrimStart('0').TrimEnd('0');
+                Assert.InRange(mantissa.Length, 1, 2);
+            }
+        }
+    }
+
+    [Fact]
     public void Coexist_WithoutUncertainty_HasNoUncertaintyMember()
     {
         var json = RunJson("coexist", "propane", "-T", "300", "--format", "json");
