@@ -16,8 +16,10 @@ namespace PhaseSlope.Cli.Output;
 /// <c>_mol_m3K</c> becomes <c>_kg_m3K</c>, <c>_J_molK2</c> becomes <c>_kJ_kgK2</c> (a
 /// temperature difference of 1 K is 1 degC). Keys without a unit suffix (dimensionless numbers,
 /// counts, text) and keys already mass-based (<c>_kg_m3</c>, <c>_kg_mol</c>) are written as they
-/// are. Temperatures inside an object named in <c>differences</c> (standard uncertainties) are
-/// temperature differences and stay in K. Where a converted key equals another key of the row
+/// are. A temperature difference must be named in <c>differences</c>, by the name of an object
+/// holding such temperatures (<c>standard_uncertainty</c>) or by its own member name (a
+/// superheat <c>T - Tsat</c>): it stays in K, since 1 K is 1 degC as a difference; any other
+/// <c>_K</c> key is an absolute temperature and gets the Celsius offset. Where a converted key equals another key of the row
 /// (<c>density_mol_m3</c> in engineering units is <c>density_kg_m3</c>, which the JSON also
 /// carries), the two hold the same quantity and one column is written, the first.</para>
 /// </remarks>
@@ -72,7 +74,8 @@ internal static class FlatCsv
     /// flattens each row twice.</param>
     /// <param name="units">SI: the JSON keys and digits. Engineering: converted as described.</param>
     /// <param name="molarMass">Molar mass in kg/mol for the mass-based units (unused in SI).</param>
-    /// <param name="differences">Names of objects whose temperatures are differences.</param>
+    /// <param name="differences">Names of objects whose temperatures are differences, and of members
+    /// that are temperature differences.</param>
     public static void Write(TextWriter output, IEnumerable<IReadOnlyList<FlatField>> rows, UnitSystem units, double? molarMass, IReadOnlySet<string>? differences = null)
     {
         var columns = new Columns(units, differences);
@@ -172,7 +175,8 @@ internal static class FlatCsv
     }
 
     private static bool IsDifference(FlatField field, IReadOnlySet<string>? differences)
-        => differences is not null && field.Parents.Any(differences.Contains);
+        => differences is not null && (field.Parents.Any(differences.Contains)
+            || differences.Any(name => field.Key == name || field.Key.EndsWith("_" + name, StringComparison.Ordinal)));
 
     /// <summary>"_" and the display unit's symbol as a key: '/' becomes '_', brackets and the
     /// middle dot go (kJ/(kg·K) is kJ_kgK); per kelvin appends K, or 2 after a K.</summary>

@@ -138,5 +138,21 @@ public class NumberFormatTests
         Assert.Equal("phase,quality,temperature_K\ntwo-phase,0.25,300\nliquid,,300\n", FlatCsv.Write([Row(true), Row(false)], UnitSystem.Si, null));
     }
 
+    [Fact]
+    public void FlatCsv_Engineering_ANamedTemperatureDifferenceStaysInKelvin()
+    {
+        var row = new JsonFlattener().Flatten(json =>
+        {
+            json.WriteStartObject();
+            json.WriteNumber("temperature_K", 278.15);
+            json.WriteNumber("superheat_K", 5);
+            json.WriteEndObject();
+        });
+
+        // 278.15 K is 5 degC; a superheat T - Tsat of 5 K is 5 K (a difference has no offset), not -268.15.
+        Assert.Equal("temperature_degC,superheat_K\n5,5\n", FlatCsv.Write([row], UnitSystem.Engineering, 0.1, new HashSet<string> { "superheat_K" }));
+        Assert.Equal("temperature_degC,superheat_degC\n5,-268.15\n", FlatCsv.Write([row], UnitSystem.Engineering, 0.1));
+    }
+
     private static string[] ParseLine(string line) => PhaseSlope.Cli.Tests.Commands.CurveCommandTests.ParseCsv(line)[0];
 }
