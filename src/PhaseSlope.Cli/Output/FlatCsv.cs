@@ -19,9 +19,10 @@ namespace PhaseSlope.Cli.Output;
 /// are. A temperature difference must be named in <c>differences</c>, by the name of an object
 /// holding such temperatures (<c>standard_uncertainty</c>) or by its own member name (a
 /// superheat <c>T - Tsat</c>): it stays in K, since 1 K is 1 degC as a difference; any other
-/// <c>_K</c> key is an absolute temperature and gets the Celsius offset. Where a converted key equals another key of the row
-/// (<c>density_mol_m3</c> in engineering units is <c>density_kg_m3</c>, which the JSON also
-/// carries), the two hold the same quantity and one column is written, the first.</para>
+/// <c>_K</c> key is an absolute temperature and gets the Celsius offset. Where a converted key
+/// equals another key of the row (<c>density_mol_m3</c> in engineering units is
+/// <c>density_kg_m3</c>, which the JSON also carries), the two hold the same quantity and one
+/// column is written, the first.</para>
 /// </remarks>
 internal static class FlatCsv
 {
@@ -156,10 +157,6 @@ internal static class FlatCsv
         CsvText.Write(output, header.Names, Cells());
         return complete;
     }
-
-    /// <summary>The CSV header of one field in a unit system (see the remarks of the class).</summary>
-    public static string Header(FlatField field, UnitSystem units, IReadOnlySet<string>? differences = null)
-        => Find(field, units, differences) is { } s ? field.Key[..^s.Text.Length] + KeyUnit(s, units) : field.Key;
 
     /// <summary>The unit suffix of a field to convert, or null to write it as it is (SI output,
     /// no unit suffix, or a temperature difference).</summary>
