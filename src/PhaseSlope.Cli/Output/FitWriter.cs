@@ -456,7 +456,7 @@ internal static class FitWriter
         {
             foreach (var input in band.Inputs)
             {
-                text.AppendLine($"  {input.Name} = {NumberText.Given(input.Value)} +/- {NumberText.Uncertainty(input.StandardUncertainty)}: {input.UncertaintySource}");
+                text.AppendLine($"  {input.Name} = {NumberText.Given(input.Value)} +/- {NumberText.Given(input.StandardUncertainty)}: {input.UncertaintySource}");
             }
         }
         if (!fit.CovarianceDefined)

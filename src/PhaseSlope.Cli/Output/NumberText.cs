@@ -60,7 +60,7 @@ internal static class NumberText
     public static double Scale(IEnumerable<double> values) => values.Where(double.IsFinite).Select(Math.Abs).DefaultIfEmpty(0).Max();
 
     /// <summary>An uncertainty or standard error with <see cref="UncertaintyDigits"/> significant
-    /// digits, without an exponent from 1e-4 up to 1e6 (1200, not 1.2E+03).</summary>
+    /// digits, without an exponent from 1e-4 up to 1e6 (1200, not 1.2E+03; 3.0, not 3).</summary>
     /// <exception cref="NonFiniteResultException">The value is not finite.</exception>
     public static string Uncertainty(double value)
     {
@@ -72,9 +72,10 @@ internal static class NumberText
 
         // Rounded to two digits first, so 99.6 is 100 (three figures, no exponent), not 1E+02.
         double rounded = double.Parse(v.ToString("G" + UncertaintyDigits.ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);
+        // Fixed notation from 1e-4 up to 1e6 keeps a significant trailing zero (3.0, 0.050).
         int exponent = (int)Math.Floor(Math.Log10(Math.Abs(rounded)));
-        return exponent >= UncertaintyDigits && exponent < 6
-            ? rounded.ToString("F0", CultureInfo.InvariantCulture)
+        return exponent >= -4 && exponent < 6
+            ? rounded.ToString("F" + Math.Max(0, UncertaintyDigits - 1 - exponent).ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture)
             : Significant(rounded, UncertaintyDigits);
     }
 

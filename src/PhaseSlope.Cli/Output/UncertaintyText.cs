@@ -101,7 +101,7 @@ internal static class UncertaintyText
     public static void DescribeInputs(StringBuilder text, UncertaintySummary summary)
     {
         text.AppendLine($"standard uncertainties (u): {summary.Choice.Describe()}, from "
-            + string.Join(", ", summary.Inputs.Select(i => $"{i.Name} = {NumberText.Given(i.Value)} +/- {NumberText.Uncertainty(i.StandardUncertainty)}")));
+            + string.Join(", ", summary.Inputs.Select(i => $"{i.Name} = {NumberText.Given(i.Value)} +/- {NumberText.Given(i.StandardUncertainty)}")));
         foreach (string source in summary.Inputs.Select(i => i.UncertaintySource).Distinct())
         {
             string names = string.Join(", ", summary.Inputs.Where(i => i.UncertaintySource == source).Select(i => i.Name));

@@ -37,6 +37,8 @@ public class NumberFormatTests
     [InlineData(1.5e7, "1.5E+07")]
     [InlineData(6.75e-5, "6.8E-05")]
     [InlineData(0.0, "0")]
+    [InlineData(2.96, "3.0")]                   // the second digit is significant, zero or not
+    [InlineData(0.0497, "0.050")]
     public void Uncertainty_TwoSignificantDigits(double value, string expected)
         => Assert.Equal(expected, NumberText.Uncertainty(value));
 
