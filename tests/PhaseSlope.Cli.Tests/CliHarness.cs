@@ -76,6 +76,11 @@ internal static class CliHarness
         => Assert.True(BitConverter.DoubleToInt64Bits(expected) == BitConverter.DoubleToInt64Bits(actual),
             $"{what}: expected {expected:R}, got {actual:R}");
 
+    /// <summary>Relative tolerance of a number read back from a table: tables print
+    /// <see cref="PhaseSlope.Cli.Output.NumberText.Digits"/> (6) significant digits, and rounding
+    /// to six moves a value by at most half a unit in the sixth, 5e-6 of it.</summary>
+    public const double TableDigits = 5e-6;
+
     /// <summary>Asserts |actual − expected| ≤ tolerance·|expected|.</summary>
     public static void AssertRelative(double expected, double actual, double tolerance, string what)
         => Assert.True(Math.Abs(actual - expected) <= tolerance * Math.Abs(expected),

@@ -89,6 +89,7 @@ internal sealed class CoexistOptions
         command.Options.Add(Pressure);
         command.Options.Add(Reference);
         Common.AddTo(command, withEos: true);
+        Common.Units.Description = CommonOptions.UnitsWithCsvDescription;
         Out.AddTo(command);
         Diagnostics.AddTo(command);
         Uncertainty.AddTo(command);
@@ -105,7 +106,7 @@ internal sealed class CoexistOptions
         }
 
         var model = Common.BindModel(parse); // reject a bad --eos, --alpha or --volume-shift before the fluid is resolved
-        var output = Common.BindOutput(parse);
+        var output = Common.BindOutput(parse, csvUnits: true);
         double? t = tText is null ? null : QuantityParser.ParseTemperature(tText, "--temperature");
         double? p = pText is null ? null : QuantityParser.ParsePressure(pText, "--pressure");
         var reference = ReferenceOption.Parse(parse.GetValue(Reference)!);

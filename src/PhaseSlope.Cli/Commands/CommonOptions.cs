@@ -51,6 +51,10 @@ internal sealed class CommonOptions
     public static Argument<string> FluidArgument()
         => new("FLUID") { Description = "Catalog name or synonym, the path of a .fluid file, or inline critical constants, e.g. inline:tc=369.89K,pc=4.2512MPa,omega=0.152[,molar_mass=44.1g/mol][,name=...]" };
 
+    /// <summary>The --units description of a command whose CSV is converted too (coexist, curve).</summary>
+    public const string UnitsWithCsvDescription =
+        "Units of the table and the CSV: si (K, kPa, mol/m3, J/mol; CSV: the SI keys) or engineering (degC, bar, kg/m3, kJ/kg; CSV headers name each unit); JSON is always SI";
+
     /// <summary>Adds the options a command honours: <paramref name="withEos"/> adds --eos, --alpha
     /// and --volume-shift; <paramref name="withUnits"/> adds --units (only for commands whose
     /// tables have a display unit choice). --format is always added.</summary>
@@ -95,21 +99,25 @@ internal sealed class CommonOptions
         return new ModelChoice(kind, alpha, shiftText);
     }
 
-    /// <summary>Binds --format and, when offered, --units. --units changes table units only, so
-    /// giving it with csv or json output (always SI) is refused rather than ignored.</summary>
-    public OutputChoice BindOutput(ParseResult parse, OutputFormat format)
+    /// <summary>Binds --format and, when offered, --units. --units changes table units (and, where
+    /// <paramref name="csvUnits"/>, CSV units); giving it with an output that is always SI (JSON,
+    /// and CSV elsewhere) is refused rather than ignored.</summary>
+    public OutputChoice BindOutput(ParseResult parse, OutputFormat format, bool csvUnits = false)
     {
         var units = Offered(parse, Units) ? UnitSystem(parse) : Cli.Units.UnitSystem.Si;
-        if (format != Output.OutputFormat.Table && Offered(parse, Units) && Given(parse, Units))
+        bool honoured = format == Output.OutputFormat.Table || (csvUnits && format == Output.OutputFormat.Csv);
+        if (!honoured && Offered(parse, Units) && Given(parse, Units))
         {
-            throw new UsageException($"--units: applies to tables only; {format.ToString().ToLowerInvariant()} output is always in SI units");
+            throw new UsageException(csvUnits
+                ? $"--units: applies to tables and CSV only; {format.ToString().ToLowerInvariant()} output is always in SI units"
+                : $"--units: applies to tables only; {format.ToString().ToLowerInvariant()} output is always in SI units");
         }
 
         return new OutputChoice(format, units);
     }
 
-    /// <summary>Binds --format and, when offered, --units.</summary>
-    public OutputChoice BindOutput(ParseResult parse) => BindOutput(parse, OutputFormat(parse));
+    /// <summary>Binds --format and, when offered, --units (see <see cref="BindOutput(ParseResult, OutputFormat, bool)"/>).</summary>
+    public OutputChoice BindOutput(ParseResult parse, bool csvUnits = false) => BindOutput(parse, OutputFormat(parse), csvUnits);
 
     /// <summary>The chosen model.</summary>
     public CubicModelKind ModelKind(ParseResult parse)

@@ -7,7 +7,8 @@ using PhaseSlope.Core.Properties;
 
 namespace PhaseSlope.Cli.Commands;
 
-/// <summary><c>phaseslope curve FLUID [--from V] [--to V] [--points N] [--out FILE]</c>: a saturation table.</summary>
+/// <summary><c>phaseslope curve FLUID [--from V] [--to V] [--points N | --step V] | --temperatures LIST | --pressures LIST [--out FILE]</c>:
+/// a saturation table.</summary>
 internal static class CurveCommand
 {
     /// <summary>Largest accepted --points.</summary>
@@ -25,54 +26,21 @@ internal static class CurveCommand
             var (data, zero, outPath) = (request.Fluid, request.Reference, request.OutPath);
             var context = CoexistenceContext.Create(data, options.Diagnostics.Begin(request.Diagnostics, request.Model.For(data)), zero);
             var solver = context.Solver;
-            double tc = solver.CriticalTemperature;
-            double start = request.From ?? solver.MinimumTemperature;
-            double end = request.To ?? tc;
-            // A value below the limit only by rounding (0.01 degC is 273.15999999999997 K, below a
-            // 273.16 K triple point) is accepted, as the solver itself accepts it (1e-12 relative).
-            if (start < solver.MinimumTemperature * (1 - 1e-12))
-            {
-                var (given, limit) = Apart(start, solver.MinimumTemperature);
-                throw new Core.Errors.InvalidInputException("from temperature", start,
-                    $"--from: {given} K is below the lowest valid temperature {limit} K of {data.Name}");
-            }
-
-            if (start >= tc)
-            {
-                throw new Core.Errors.InvalidInputException("from temperature", start,
-                    $"--from: {NumberText.Table(start)} K is at or above the critical temperature {NumberText.Table(tc)} K of {data.Name}");
-            }
-
-            if (end > tc)
-            {
-                throw new Core.Errors.InvalidInputException("to temperature", end,
-                    $"--to: {NumberText.Table(end)} K is above the critical temperature {NumberText.Table(tc)} K of {data.Name}");
-            }
-
-            if (end < solver.MinimumTemperature * (1 - 1e-12))
-            {
-                var (given, limit) = Apart(end, solver.MinimumTemperature);
-                throw new Core.Errors.InvalidInputException("to temperature", end,
-                    $"--to: {given} K is below the lowest valid temperature {limit} K of {data.Name}");
-            }
-
-            if (!(start < end))
-            {
-                throw new UsageException($"--from ({NumberText.Table(start)} K) must be below --to ({NumberText.Table(end)} K)");
-            }
-
-            var curve = CoexistenceCurve.Trace(solver, start, end, request.Points);
+            var curve = request.Pressures is { } pressures ? ByPressure(solver, pressures) : ByTemperature(request, solver, data);
             var rows = curve.Select(context.Row).ToArray();
             UncertaintySummary? summary = null;
             if (request.Uncertainty is { } choice)
             {
                 var parameters = UncertaintyRun.Parameters(request.Model, data);
-                var values = UncertaintyRun.AtTemperatures(io, choice, parameters, curve);
+                var values = request.Pressures is null
+                    ? UncertaintyRun.AtTemperatures(io, choice, parameters, curve)
+                    : curve.Select(point => UncertaintyRun.AtPressure(io, choice, parameters, point)).ToArray();
                 rows = rows.Select((r, i) => r with { Uncertainty = values[i] }).ToArray();
                 summary = UncertaintyRun.Summary(choice, parameters);
             }
 
-            string text = CoexistenceWriter.Render(rows, single: false, request.Output.Format, data, solver.Model, zero, request.Output.Units, summary);
+            string text = CoexistenceWriter.Render(rows, single: false, request.Output.Format, data, solver.Model, zero, request.Output.Units, summary,
+                byPressure: request.Pressures is not null);
             if (outPath is null)
             {
                 io.Out.Write(text);
@@ -80,12 +48,147 @@ internal static class CurveCommand
             else
             {
                 AtomicFile.WriteAllText(outPath, text);
-                io.Note($"wrote {curve.Count} coexistence states to {outPath}");
+                io.Note($"wrote {curve.Count} coexistence state{(curve.Count == 1 ? "" : "s")} to {outPath}");
             }
 
             options.Diagnostics.End(io, curve);
         }));
         return command;
+    }
+
+    /// <summary>The states at the temperatures of the table, increasing: the explicit list, the
+    /// stepped range or the --points spacing, each checked against the fluid's limits.</summary>
+    private static IReadOnlyList<CoexistencePoint> ByTemperature(CurveRequest request, CoexistenceSolver solver, Fluid data)
+    {
+        double tc = solver.CriticalTemperature;
+        if (request.Temperatures is { } list)
+        {
+            foreach (double t in list)
+            {
+                if (t < solver.MinimumTemperature * (1 - 1e-12))
+                {
+                    var (given, limit) = Apart(t, solver.MinimumTemperature);
+                    throw new Core.Errors.InvalidInputException("temperatures", t,
+                        $"--temperatures: {given} K is below the lowest valid temperature {limit} K of {data.Name}");
+                }
+
+                if (t > tc)
+                {
+                    var (given, limit) = Apart(t, tc);
+                    throw new Core.Errors.InvalidInputException("temperatures", t,
+                        $"--temperatures: {given} K is above the critical temperature {limit} K of {data.Name}");
+                }
+            }
+
+            return CoexistenceCurve.Through(solver, list);
+        }
+
+        double start = request.From ?? solver.MinimumTemperature;
+        double end = request.To ?? tc;
+        // A value below the limit only by rounding (0.01 degC is 273.15999999999997 K, below a
+        // 273.16 K triple point) is accepted, as the solver itself accepts it (1e-12 relative).
+        if (start < solver.MinimumTemperature * (1 - 1e-12))
+        {
+            var (given, limit) = Apart(start, solver.MinimumTemperature);
+            throw new Core.Errors.InvalidInputException("from temperature", start,
+                $"--from: {given} K is below the lowest valid temperature {limit} K of {data.Name}");
+        }
+
+        if (start >= tc)
+        {
+            throw new Core.Errors.InvalidInputException("from temperature", start,
+                $"--from: {NumberText.Table(start)} K is at or above the critical temperature {NumberText.Table(tc)} K of {data.Name}");
+        }
+
+        if (end > tc)
+        {
+            throw new Core.Errors.InvalidInputException("to temperature", end,
+                $"--to: {NumberText.Table(end)} K is above the critical temperature {NumberText.Table(tc)} K of {data.Name}");
+        }
+
+        if (end < solver.MinimumTemperature * (1 - 1e-12))
+        {
+            var (given, limit) = Apart(end, solver.MinimumTemperature);
+            throw new Core.Errors.InvalidInputException("to temperature", end,
+                $"--to: {given} K is below the lowest valid temperature {limit} K of {data.Name}");
+        }
+
+        if (!(start < end))
+        {
+            throw new UsageException($"--from ({NumberText.Table(start)} K) must be below --to ({NumberText.Table(end)} K)");
+        }
+
+        return request.Step is double step
+            ? CoexistenceCurve.Through(solver, Stepped(start, end, step))
+            : CoexistenceCurve.Trace(solver, start, end, request.Points);
+    }
+
+    /// <summary>start, start + step, … up to <paramref name="end"/>, which is always the last state:
+    /// where the steps do not land on it, it is added as a shorter last step.</summary>
+    /// <remarks>The sums are formed in decimal from the shortest text of each double, so
+    /// -40 degC + 5 K is the double nearest 238.15 K (shown as -35 degC), not a sum carrying
+    /// the binary error of 233.15. A step within 1e-9 K of the end counts as landing on it (a
+    /// step in degF is not a finite decimal in K; 1e-9 K is far below any temperature the
+    /// tool reads or prints, and far above the accumulated rounding of 1e5 decimal sums).</remarks>
+    internal static IReadOnlyList<double> Stepped(double start, double end, double step)
+    {
+        // The count is checked in double first, so a step too small (or too large) for decimal
+        // arithmetic never reaches it: a step at or above the range gives its two ends.
+        if ((end - start) / step > MaxPoints - 1)
+        {
+            throw new UsageException($"--step: {NumberText.Table(step)} K from {NumberText.Table(start)} K to {NumberText.Table(end)} K gives more than {MaxPoints} states (the limit of --points)");
+        }
+
+        if (step >= end - start)
+        {
+            return [start, end];
+        }
+
+        decimal first = Exact(start), increment = Exact(step), last = Exact(end);
+        decimal count = decimal.Floor((last - first) / increment + 1e-12m);
+
+        var temperatures = new List<double>((int)count + 2);
+        for (int i = 0; i <= (int)count; i++)
+        {
+            temperatures.Add(Nearest(first + i * increment));
+        }
+
+        if (Math.Abs(temperatures[^1] - end) <= 1e-9)
+        {
+            temperatures[^1] = end;
+        }
+        else
+        {
+            temperatures.Add(end);
+        }
+
+        return temperatures;
+    }
+
+    private static decimal Exact(double value) => decimal.Parse(value.ToString("R", System.Globalization.CultureInfo.InvariantCulture), System.Globalization.NumberStyles.Float, System.Globalization.CultureInfo.InvariantCulture);
+
+    private static double Nearest(decimal value) => double.Parse(value.ToString(System.Globalization.CultureInfo.InvariantCulture), System.Globalization.CultureInfo.InvariantCulture);
+
+    /// <summary>The coexistence states at the given pressures (Pa, increasing), each started from its
+    /// predecessor; a pressure at or above the critical pressure or below the lowest valid
+    /// temperature's is refused by the solver (exit 4).</summary>
+    private static IReadOnlyList<CoexistencePoint> ByPressure(CoexistenceSolver solver, IReadOnlyList<double> pressures)
+    {
+        var points = new List<CoexistencePoint>(pressures.Count);
+        foreach (double p in pressures)
+        {
+            try
+            {
+                points.Add(solver.AtPressure(p, points.Count > 0 ? points[^1] : null));
+            }
+            catch (Core.Errors.InvalidInputException ex)
+            {
+                // The solver names the pressure and the limit; the option is named here.
+                throw new Core.Errors.InvalidInputException(ex.Field, ex.Value, $"--pressures: {ex.Message}");
+            }
+        }
+
+        return points;
     }
 
     /// <summary>The format implied by the extension of an --out path.</summary>
@@ -117,8 +220,12 @@ internal static class CurveCommand
 /// <param name="Output">The output format and units.</param>
 /// <param name="Diagnostics">Whether --diagnostics was given.</param>
 /// <param name="Uncertainty">How to propagate input uncertainties, or null for none.</param>
+/// <param name="Step">The --step temperature difference in K, or null for --points spacing.</param>
+/// <param name="Temperatures">The --temperatures list in K (increasing), or null.</param>
+/// <param name="Pressures">The --pressures list in Pa (increasing), or null.</param>
 internal sealed record CurveRequest(Fluid Fluid, double? From, double? To, int Points, string? OutPath, ReferenceState Reference,
-    ModelChoice Model, OutputChoice Output, bool Diagnostics, UncertaintyChoice? Uncertainty = null);
+    ModelChoice Model, OutputChoice Output, bool Diagnostics, UncertaintyChoice? Uncertainty = null,
+    double? Step = null, IReadOnlyList<double>? Temperatures = null, IReadOnlyList<double>? Pressures = null);
 
 /// <summary>The options of <c>curve</c>, bound to a <see cref="CurveRequest"/>.</summary>
 internal sealed class CurveOptions
@@ -137,6 +244,27 @@ internal sealed class CurveOptions
     {
         Description = $"Number of states, 2 to {CurveCommand.MaxPoints}; spaced evenly in sqrt(Tc - T) so the near-critical region is resolved",
         DefaultValueFactory = _ => CoexistenceCurve.DefaultPoints,
+    };
+
+    /// <summary>--step.</summary>
+    public Option<string> Step { get; } = new("--step")
+    {
+        Description = "Temperature step instead of --points, a difference: 5 (K), 5 K, 5 degC = 5 K, 10 degF = 10/1.8 K; rows from --from in equal steps, "
+            + "the last row always --to (a shorter last step where the steps do not land on it)",
+    };
+
+    /// <summary>--temperatures.</summary>
+    public Option<string> Temperatures { get; } = new("--temperatures")
+    {
+        Description = "A table at these temperatures, increasing, separated by commas, one unit after the last for all: \"-40,-30,-20 degC\" (bare: K); "
+            + "the critical temperature gives the critical point",
+    };
+
+    /// <summary>--pressures.</summary>
+    public Option<string> Pressures { get; } = new("--pressures")
+    {
+        Description = "A table by pressure: the coexistence state at each of these pressures, increasing, separated by commas, "
+            + "one unit after the last for all: \"1,2,5,10 bar\" (bare: Pa); each below the critical pressure",
     };
 
     /// <summary>--out (its format follows the extension when --format is not given).</summary>
@@ -161,9 +289,13 @@ internal sealed class CurveOptions
         command.Options.Add(From);
         command.Options.Add(To);
         command.Options.Add(Points);
+        command.Options.Add(Step);
+        command.Options.Add(Temperatures);
+        command.Options.Add(Pressures);
         command.Options.Add(Out);
         command.Options.Add(Reference);
         Common.AddTo(command, withEos: true);
+        Common.Units.Description = CommonOptions.UnitsWithCsvDescription;
         Diagnostics.AddTo(command);
         Uncertainty.AddTo(command);
     }
@@ -174,15 +306,41 @@ internal sealed class CurveOptions
     {
         var model = Common.BindModel(parse); // reject a bad --eos, --alpha or --volume-shift before the fluid is resolved
         string? outPath = parse.GetValue(Out);
-        var output = Common.BindOutput(parse, Common.FormatGiven(parse) || outPath is null ? Common.OutputFormat(parse) : CurveCommand.FormatFromExtension(outPath));
+        var output = Common.BindOutput(parse, Common.FormatGiven(parse) || outPath is null ? Common.OutputFormat(parse) : CurveCommand.FormatFromExtension(outPath), csvUnits: true);
         int n = parse.GetValue(Points);
         if (n < 2 || n > CurveCommand.MaxPoints)
         {
             throw new UsageException($"--points: must be between 2 and {CurveCommand.MaxPoints}, got {n}");
         }
 
+        // One way of choosing the rows: a range (--from/--to with --points or --step), or a list.
+        bool pointsGiven = CommonOptions.Given(parse, Points);
+        string? stepText = parse.GetValue(Step), tList = parse.GetValue(Temperatures), pList = parse.GetValue(Pressures);
+        if (stepText is not null && pointsGiven)
+        {
+            throw new UsageException("--step: conflicts with --points (give the number of states or the step, not both)");
+        }
+
+        if (tList is not null && pList is not null)
+        {
+            throw new UsageException("--pressures: conflicts with --temperatures (a table is by temperature or by pressure)");
+        }
+
+        if ((tList ?? pList) is not null)
+        {
+            string list = tList is not null ? "--temperatures" : "--pressures";
+            string? other = parse.GetValue(From) is not null ? "--from" : parse.GetValue(To) is not null ? "--to" : pointsGiven ? "--points" : stepText is not null ? "--step" : null;
+            if (other is not null)
+            {
+                throw new UsageException($"{list}: conflicts with {other} (the list gives every row)");
+            }
+        }
+
         double? tFrom = parse.GetValue(From) is string f ? QuantityParser.ParseTemperature(f, "--from") : null;
         double? tTo = parse.GetValue(To) is string tt ? QuantityParser.ParseTemperature(tt, "--to") : null;
+        double? step = stepText is null ? null : QuantityParser.ParseTemperatureDifference(stepText, "--step");
+        var temperatures = tList is null ? null : Increasing(QuantityParser.ParseTemperatureList(tList, "--temperatures"), "--temperatures", "K");
+        var pressures = pList is null ? null : Increasing(QuantityParser.ParsePressureList(pList, "--pressures"), "--pressures", "Pa");
         if (outPath is not null && string.IsNullOrWhiteSpace(outPath))
         {
             throw new UsageException("--out: the file name is empty");
@@ -192,6 +350,27 @@ internal sealed class CurveOptions
         var uncertainty = Uncertainty.Bind(parse);
         var fluid = FluidResolver.Resolve(parse.GetValue(Fluid)!);
         output.RequireMolarMassFor(fluid);
-        return new CurveRequest(fluid, tFrom, tTo, n, outPath, reference, model, output, Diagnostics.Given(parse), uncertainty);
+        return new CurveRequest(fluid, tFrom, tTo, n, outPath, reference, model, output, Diagnostics.Given(parse), uncertainty, step, temperatures, pressures);
+    }
+
+    /// <summary>A list of at most <see cref="CurveCommand.MaxPoints"/> values, strictly increasing
+    /// (the table is traced in order, each state started from the one before; a repeated or
+    /// unsorted value is more likely a typing error than a wish).</summary>
+    private static IReadOnlyList<double> Increasing(IReadOnlyList<double> values, string option, string unit)
+    {
+        if (values.Count > CurveCommand.MaxPoints)
+        {
+            throw new UsageException($"{option}: {values.Count} values, more than the limit of {CurveCommand.MaxPoints}");
+        }
+
+        for (int i = 1; i < values.Count; i++)
+        {
+            if (!(values[i] > values[i - 1]))
+            {
+                throw new UsageException($"{option}: the values must increase, but value {i + 1} ({NumberText.Table(values[i])} {unit}) is not above value {i} ({NumberText.Table(values[i - 1])} {unit})");
+            }
+        }
+
+        return values;
     }
 }

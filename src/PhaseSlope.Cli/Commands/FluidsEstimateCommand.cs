@@ -266,7 +266,7 @@ internal static class FluidsEstimateCommand
         {
             if (computed is double c && Math.Abs(m - c) > MolarMassTolerance * c)
             {
-                throw new UsageException($"--molar-mass: {NumberText.Table(m * 1000)} g/mol is not the molar mass of {formula}, {NumberText.Table(c * 1000)} g/mol (more than {NumberText.Table(MolarMassTolerance * 100)} % apart)");
+                throw new UsageException($"--molar-mass: {NumberText.Given(m * 1000)} g/mol is not the molar mass of {formula}, {NumberText.Given(c * 1000)} g/mol (more than {NumberText.Table(MolarMassTolerance * 100)} % apart)");
             }
 
             return (formula, new SourcedValue(m, Given));

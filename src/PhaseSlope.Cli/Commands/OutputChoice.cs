@@ -5,14 +5,14 @@ namespace PhaseSlope.Cli.Commands;
 
 /// <summary>The output named by --format and --units.</summary>
 /// <param name="Format">Table, CSV or JSON.</param>
-/// <param name="Units">Display units of tables (CSV and JSON are always SI).</param>
+/// <param name="Units">Display units of tables (and of CSV where the command converts it; JSON is always SI).</param>
 internal sealed record OutputChoice(OutputFormat Format, UnitSystem Units)
 {
-    /// <summary>Refuses per-kilogram table units for a fluid that gives no molar mass.</summary>
+    /// <summary>Refuses per-kilogram units for a fluid that gives no molar mass.</summary>
     /// <exception cref="Core.Errors.FluidDataException">--units engineering and no molar mass.</exception>
     public void RequireMolarMassFor(Core.Fluids.Fluid fluid)
     {
-        if (Format == OutputFormat.Table && Units == UnitSystem.Engineering)
+        if (Format != OutputFormat.Json && Units == UnitSystem.Engineering)
         {
             fluid.RequireMolarMass("--units engineering (per-kilogram units)");
         }

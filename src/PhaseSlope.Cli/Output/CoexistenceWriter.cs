@@ -17,14 +17,30 @@ internal static class CoexistenceWriter
         "Model estimates. Before use for pressure equipment, relief sizing or flammable or toxic service, verify against measured data and follow local codes and licensed engineering practice.";
 
     /// <summary>Renders rows in a format; <paramref name="single"/> prints one object instead of an array.</summary>
+    /// <remarks>CSV is the JSON flattened (<see cref="JsonFlattener"/>): one column per JSON key,
+    /// the phase objects' keys prefixed <c>liquid_</c> and <c>vapour_</c>; in engineering units
+    /// converted with the unit in each header (<see cref="FlatCsv"/>). JSON is always SI.
+    /// <paramref name="byPressure"/> marks a table traced at given pressures (u(P) is then zero
+    /// and u(T) is not).</remarks>
     public static string Render(IReadOnlyList<CoexistenceRow> rows, bool single, OutputFormat format, Fluid fluid, IResidualModel model, ReferenceState? reference, UnitSystem units,
-        UncertaintySummary? uncertainty = null)
+        UncertaintySummary? uncertainty = null, bool byPressure = false)
         => format switch
         {
             OutputFormat.Json => Json(rows, single, fluid, model, reference, uncertainty),
-            OutputFormat.Csv => Csv(rows, uncertainty),
-            _ => single ? SingleTable(rows[0], fluid, model, reference, units, uncertainty) : CurveTable(rows, fluid, model, reference, units, uncertainty),
+            OutputFormat.Csv => Csv(rows, fluid, model, reference, units, uncertainty),
+            _ => single ? SingleTable(rows[0], fluid, model, reference, units, uncertainty) : CurveTable(rows, fluid, model, reference, units, uncertainty, byPressure),
         };
+
+    /// <summary>Each row's JSON object flattened to (key, value) fields, in JSON order, as the
+    /// rows are enumerated (lazily: one buffer, reused).</summary>
+    internal static IEnumerable<IReadOnlyList<FlatField>> Flat(IReadOnlyList<CoexistenceRow> rows, Fluid fluid, IResidualModel model, ReferenceState? reference, UncertaintySummary? uncertainty)
+    {
+        var flattener = new JsonFlattener();
+        return rows.Select(row => flattener.Flatten(json => WriteObject(json, row, fluid, model, reference, uncertainty)));
+    }
+
+    /// <summary>Objects whose temperatures are differences (kept in K in engineering CSV).</summary>
+    private static readonly HashSet<string> Differences = ["standard_uncertainty"];
 
     private static string Json(IReadOnlyList<CoexistenceRow> rows, bool single, Fluid fluid, IResidualModel model, ReferenceState? reference, UncertaintySummary? uncertainty)
     {
@@ -122,40 +138,35 @@ internal static class CoexistenceWriter
         json.WriteEndObject();
     }
 
-    private static string Csv(IReadOnlyList<CoexistenceRow> rows, UncertaintySummary? uncertainty)
-    {
-        var columns = CoexistenceColumns.For(rows);
-        var header = columns.Select(c => c.Key);
-        if (uncertainty is not null)
-        {
-            header = header.Concat(UncertaintyText.CsvHeader);
-        }
+    private static string Csv(IReadOnlyList<CoexistenceRow> rows, Fluid fluid, IResidualModel model, ReferenceState? reference, UnitSystem units, UncertaintySummary? uncertainty)
+        => FlatCsv.Write(Flat(rows, fluid, model, reference, uncertainty), units, fluid.MolarMass?.Value, Differences);
 
-        return CsvText.Write(
-            header.ToArray(),
-            rows.Select(r =>
-            {
-                var cells = columns.Select(c => NumberText.RoundTrip(Finite(c.Value(r), c.Key)));
-                return (uncertainty is null ? cells : cells.Concat(UncertaintyText.CsvCells(r.Uncertainty))).ToArray();
-            }));
-    }
-
-    private static string CurveTable(IReadOnlyList<CoexistenceRow> rows, Fluid fluid, IResidualModel model, ReferenceState? reference, UnitSystem units, UncertaintySummary? uncertainty)
+    private static string CurveTable(IReadOnlyList<CoexistenceRow> rows, Fluid fluid, IResidualModel model, ReferenceState? reference, UnitSystem units, UncertaintySummary? uncertainty,
+        bool byPressure)
     {
         var columns = CoexistenceColumns.For(rows).Where(c => c.InCurveTable).ToArray();
-        // A curve is traced at given temperatures: u(T) is zero on every row and not shown.
-        var uColumns = uncertainty is null ? [] : UncertaintyText.Quantities.Where(q => q.Display != DisplayQuantity.Temperature).ToArray();
+        // A curve is traced at given temperatures (or pressures): u(T) (or u(P)) is zero on every row and not shown.
+        var given = byPressure ? DisplayQuantity.Pressure : DisplayQuantity.Temperature;
+        var uColumns = uncertainty is null ? [] : UncertaintyText.Quantities.Where(q => q.Display != given).ToArray();
         var headers = columns.Select(c => CoexistenceColumns.Header(c, units)).Concat(uColumns.Select(q => UncertaintyText.Header(q, units))).ToArray();
         var table = new TextTable(headers, headers.Select(_ => true).ToArray());
         double m = fluid.MolarMass?.Value ?? double.NaN; // SI tables do not use it; engineering units were refused without it
-        foreach (var row in rows)
+        var values = rows.Select(row => columns.Select(c => CoexistenceColumns.Display(c, row, units, m)).ToArray()).ToArray();
+        // Energies and entropies may be a zero to rounding (at the reference state, or h_V - h_L at
+        // the critical point): each is printed against the largest of its kind in the table (h_L
+        // against h_V and the latent heat, of which it is a difference), see NumberText.Table.
+        var scales = columns.Select(c => HasArbitraryZero(c.Quantity)
+            ? NumberText.Scale(columns.Select((other, j) => (other, j)).Where(o => o.other.Quantity == c.Quantity).SelectMany(o => values.Select(v => v[o.j])))
+            : 0).ToArray();
+        for (int i = 0; i < rows.Count; i++)
         {
-            table.Add(columns.Select(c => NumberText.Table(CoexistenceColumns.Display(c, row, units, m)))
-                .Concat(uColumns.Select(q => UncertaintyText.Cell(q, row.Uncertainty, units, m))).ToArray());
+            table.Add(values[i].Select((v, j) => NumberText.Table(v, scales[j]))
+                .Concat(uColumns.Select(q => UncertaintyText.Cell(q, rows[i].Uncertainty, units, m))).ToArray());
         }
 
         var text = new StringBuilder();
-        text.AppendLine($"Saturation curve of {fluid.Name}, {ModelText.Describe(model)}; {rows.Count} states{(rows[^1].Point.IsCritical ? ", the last one the critical point" : "")}");
+        string kind = byPressure ? "Saturation table by pressure" : "Saturation curve";
+        text.AppendLine($"{kind} of {fluid.Name}, {ModelText.Describe(model)}; {rows.Count} state{(rows.Count == 1 ? "" : "s")}{(rows[^1].Point.IsCritical ? ", the last one the critical point" : "")}");
         text.AppendLine(ReferenceLine(rows, reference));
         if (uncertainty is not null)
         {
@@ -189,9 +200,15 @@ internal static class CoexistenceWriter
         var phases = new TextTable(["phase property", "liquid", "vapour", "unit"], [false, true, true, false]);
         if (row.Full is { } full)
         {
+            // Energies and entropies are read against the largest of their kind in the table (h_L at
+            // its reference state is 0 beside h_V; g = h - Ts is a difference of such terms).
+            var shown = StateColumns.All.Where(c => HasArbitraryZero(c.Quantity))
+                .SelectMany(c => new[] { full.Liquid.State, full.Vapour.State }.Select(s => (c.Quantity, Value: StateColumns.Shown(c, s, units) ?? 0)))
+                .ToArray();
             foreach (var column in StateColumns.All.Where(c => !PointKeys.Contains(c.Key)))
             {
-                phases.Add(column.Title, StateColumns.Display(column, full.Liquid.State, units), StateColumns.Display(column, full.Vapour.State, units), StateColumns.Unit(column, units));
+                double scale = HasArbitraryZero(column.Quantity) ? NumberText.Scale(shown.Where(s => s.Quantity == column.Quantity).Select(s => s.Value)) : 0;
+                phases.Add(column.Title, StateColumns.Display(column, full.Liquid.State, units, scale), StateColumns.Display(column, full.Vapour.State, units, scale), StateColumns.Unit(column, units));
             }
 
             string Slope(double? value, DisplayQuantity q) => value is double v ? NumberText.Table(UnitFormatter.Convert(q, v, units, m)) : "undefined";
@@ -247,6 +264,10 @@ internal static class CoexistenceWriter
         text.AppendLine(Caution);
         return text.ToString();
     }
+
+    /// <summary>Whether a quantity's zero is a cancellation (energies and entropies are differences
+    /// from a reference state, or between the phases), so that a zero may come out as round-off.</summary>
+    internal static bool HasArbitraryZero(DisplayQuantity? quantity) => quantity is DisplayQuantity.MolarEnergy or DisplayQuantity.MolarEntropy;
 
     /// <summary>"PressureIteration" → "pressure-iteration".</summary>
     public static string Kebab(string pascal)

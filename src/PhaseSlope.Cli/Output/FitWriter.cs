@@ -366,7 +366,7 @@ internal static class FitWriter
             for (int i = 0; i < fit.Parameters.Count; i++)
             {
                 parameters.Add(fit.Form.ParameterNames[i], NumberText.RoundTrip(fit.Parameters[i]),
-                    fit.CovarianceDefined ? NumberText.Table(fit.StandardErrors[i]) : "undefined");
+                    fit.CovarianceDefined ? NumberText.Uncertainty(fit.StandardErrors[i]) : "undefined");
             }
 
             text.Append(parameters.Render());
@@ -389,7 +389,7 @@ internal static class FitWriter
             {
                 bool given = i >= fit.Parameters.Count; // a Wagner form's Tc and Pc
                 table.Add(names[i], NumberText.RoundTrip(c.Coefficients[i]),
-                    given ? "given" : printed.StandardError(i) is double se ? NumberText.Table(se) : "undefined");
+                    given ? "given" : printed.StandardError(i) is double se ? NumberText.Uncertainty(se) : "undefined");
             }
 
             text.Append(table.Render());
@@ -438,8 +438,8 @@ internal static class FitWriter
         foreach (var p in points)
         {
             table.Add(NumberText.Table(p.Temperature), NumberText.Table(UnitFormatter.Pressure(p.Pressure, UnitSystem.Si)), NumberText.Table(p.CompressibilityChange),
-                NumberText.Table(p.EnthalpyOfVaporization), NumberText.TableOrUndefined(p.StandardUncertainty),
-                NumberText.TableOrUndefined(p.FitUncertainty), NumberText.Table(p.CriticalPointUncertainty), NumberText.TableOrUndefined(p.VolumeModelUncertainty),
+                NumberText.Table(p.EnthalpyOfVaporization), NumberText.UncertaintyOrUndefined(p.StandardUncertainty),
+                NumberText.UncertaintyOrUndefined(p.FitUncertainty), NumberText.Uncertainty(p.CriticalPointUncertainty), NumberText.UncertaintyOrUndefined(p.VolumeModelUncertainty),
                 (p.BandHeldAtDataEnd ? "+" : "") + (p.Extrapolated ? "*" : ""));
         }
 
@@ -456,7 +456,7 @@ internal static class FitWriter
         {
             foreach (var input in band.Inputs)
             {
-                text.AppendLine($"  {input.Name} = {NumberText.Table(input.Value)} +/- {NumberText.Table(input.StandardUncertainty)}: {input.UncertaintySource}");
+                text.AppendLine($"  {input.Name} = {NumberText.Given(input.Value)} +/- {NumberText.Given(input.StandardUncertainty)}: {input.UncertaintySource}");
             }
         }
         if (!fit.CovarianceDefined)

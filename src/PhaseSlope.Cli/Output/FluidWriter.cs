@@ -154,7 +154,7 @@ internal static class FluidWriter
                 .. Fields.Select(f => f.Get(fluid) is SourcedValue v ? NumberText.RoundTrip(v.Value) : "")]));
 
     private static string Display(Field field, double si, UnitSystem units, double molarMass)
-        => field.Quantity is DisplayQuantity q ? NumberText.Table(UnitFormatter.Convert(q, si, units, molarMass)) : NumberText.Table(field.Key == "molar_mass_kg_mol" ? Core.Units.UnitTable.Get("g/mol").FromSi(si) : si);
+        => field.Quantity is DisplayQuantity q ? NumberText.Given(UnitFormatter.Convert(q, si, units, molarMass)) : NumberText.Given(field.Key == "molar_mass_kg_mol" ? Core.Units.UnitTable.Get("g/mol").FromSi(si) : si);
 
     private static string Unit(Field field, UnitSystem units)
         => field.Quantity is DisplayQuantity q ? UnitFormatter.Label(q, units) : field.Key == "molar_mass_kg_mol" ? "g/mol" : "-";
@@ -356,7 +356,7 @@ internal static class FluidWriter
         // An uncertainty is a difference: temperature offsets (degC) must not shift it.
         if (field.Quantity == DisplayQuantity.Temperature)
         {
-            return NumberText.Table(si);
+            return NumberText.Given(si);
         }
 
         return Display(field, si, units, molarMass);

@@ -104,15 +104,27 @@ internal static class StateColumns
         => column.Quantity is DisplayQuantity q ? UnitFormatter.Label(q, units) : "-";
 
     /// <summary>Display text of a column ("undefined" where the property is; <see cref="Unavailable"/>
-    /// where it needs the cp° or the molar mass the fluid does not give).</summary>
-    public static string Display(Column column, ThermodynamicState state, UnitSystem units)
+    /// where it needs the cp° or the molar mass the fluid does not give); <paramref name="scale"/>
+    /// is the scale of <see cref="NumberText.Table(double, double)"/> (0: none).</summary>
+    public static string Display(Column column, ThermodynamicState state, UnitSystem units, double scale = 0)
     {
         if (column.Value(state) is not double value || !double.IsFinite(value))
         {
             return NeedsMissingData(column, state) ? Unavailable : "undefined";
         }
 
-        return NumberText.Table(column.Quantity is DisplayQuantity q ? UnitFormatter.Convert(q, value, units, state.MolarMass ?? double.NaN) : value);
+        return NumberText.Table(Shown(column, state, units) ?? value, scale);
+    }
+
+    /// <summary>The value of a column in display units, or null where it is undefined.</summary>
+    public static double? Shown(Column column, ThermodynamicState state, UnitSystem units)
+    {
+        if (column.Value(state) is not double value || !double.IsFinite(value))
+        {
+            return null;
+        }
+
+        return column.Quantity is DisplayQuantity q ? UnitFormatter.Convert(q, value, units, state.MolarMass ?? double.NaN) : value;
     }
 
     /// <summary>Whether a null property is null because the fluid lacks cp° or the molar mass,

@@ -68,7 +68,7 @@ internal sealed record StateUncertaintyText(StateUncertainty Values, Uncertainty
         foreach (var q in Quantities)
         {
             string cell = Checked(q) is double v
-                ? NumberText.Table(q.Display is DisplayQuantity d ? UnitFormatter.Convert(d, v, units, molarMass) : v)
+                ? NumberText.Uncertainty(q.Display is DisplayQuantity d ? UnitFormatter.Convert(d, v, units, molarMass) : v)
                 : "undefined";
             table.Add(q.Title, cell, q.Display is DisplayQuantity dq ? UnitFormatter.Label(dq, units) : "-");
         }

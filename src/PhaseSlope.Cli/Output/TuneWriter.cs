@@ -43,14 +43,14 @@ internal static class TuneWriter
         if (result.VolumeShift is { } shift)
         {
             text.AppendLine(string.Create(CultureInfo.InvariantCulture,
-                $"volume translation: c = {NumberText.Table(shift.Shift * 1e6)} cm3/mol{(shift.StandardError is double e ? $" (standard error {NumberText.Table(e * 1e6)} cm3/mol)" : "")}, fitted to {shift.Comparisons.Count} liquid densities: AAD {shift.AadBeforePercent:0.###} % before, {shift.AadAfterPercent:0.###} % after (Psat and latent heats unchanged)"));
+                $"volume translation: c = {NumberText.Table(shift.Shift * 1e6)} cm3/mol{(shift.StandardError is double e ? $" (standard error {NumberText.Uncertainty(e * 1e6)} cm3/mol)" : "")}, fitted to {shift.Comparisons.Count} liquid densities: AAD {shift.AadBeforePercent:0.###} % before, {shift.AadAfterPercent:0.###} % after (Psat and latent heats unchanged)"));
         }
 
         text.AppendLine();
         var parameters = new TextTable(["parameter", "value", "standard error"], [false, true, true]);
         foreach (var (name, value, error) in result.Parameters)
         {
-            parameters.Add(name, NumberText.RoundTrip(value), error is double e ? NumberText.Table(e) : "-");
+            parameters.Add(name, NumberText.RoundTrip(value), error is double e ? NumberText.Uncertainty(e) : "-");
         }
 
         text.Append(parameters.Render());

@@ -19,7 +19,7 @@ internal sealed record LatentBandText(UncertaintyChoice? Choice, IReadOnlyList<U
 }
 
 /// <summary>Writes propagated standard uncertainties of coexistence states: the JSON member
-/// <c>standard_uncertainty</c>, the CSV <c>u_</c> columns and the table columns and lines.</summary>
+/// <c>standard_uncertainty</c> (which the CSV carries flattened) and the table columns and lines.</summary>
 internal static class UncertaintyText
 {
     /// <summary>One quantity: key (as the value's own key), table title, display quantity, value.</summary>
@@ -87,14 +87,6 @@ internal static class UncertaintyText
         json.WriteEndArray();
     }
 
-    /// <summary>CSV header names of the u_ columns.</summary>
-    public static IEnumerable<string> CsvHeader => Quantities.Select(q => $"u_{q.Key}").Append("u_undefined_reason");
-
-    /// <summary>CSV cells of the u_ columns (empty where undefined, the reason in the last).</summary>
-    public static IEnumerable<string> CsvCells(CoexistenceUncertainty? values)
-        => Quantities.Select(q => values is null ? "" : NumberText.RoundTripOrEmpty(Checked(q.Value(values), q.Key)))
-            .Append(values?.Reason ?? "");
-
     /// <summary>Table header of a u column; u(T) is a temperature difference and shown in K.</summary>
     public static string Header(Quantity q, UnitSystem units)
         => $"{q.Title} [{(q.Display == DisplayQuantity.Temperature ? "K" : UnitFormatter.Label(q.Display, units))}]";
@@ -102,14 +94,14 @@ internal static class UncertaintyText
     /// <summary>Table cell of a u column ("undefined" when null).</summary>
     public static string Cell(Quantity q, CoexistenceUncertainty? values, UnitSystem units, double molarMass)
         => values is not null && Checked(q.Value(values), q.Key) is double v
-            ? NumberText.Table(q.Display == DisplayQuantity.Temperature ? v : UnitFormatter.Convert(q.Display, v, units, molarMass))
+            ? NumberText.Uncertainty(q.Display == DisplayQuantity.Temperature ? v : UnitFormatter.Convert(q.Display, v, units, molarMass))
             : "undefined";
 
     /// <summary>Lines naming the method and each input with its uncertainty and source.</summary>
     public static void DescribeInputs(StringBuilder text, UncertaintySummary summary)
     {
         text.AppendLine($"standard uncertainties (u): {summary.Choice.Describe()}, from "
-            + string.Join(", ", summary.Inputs.Select(i => $"{i.Name} = {NumberText.Table(i.Value)} +/- {NumberText.Table(i.StandardUncertainty)}")));
+            + string.Join(", ", summary.Inputs.Select(i => $"{i.Name} = {NumberText.Given(i.Value)} +/- {NumberText.Given(i.StandardUncertainty)}")));
         foreach (string source in summary.Inputs.Select(i => i.UncertaintySource).Distinct())
         {
             string names = string.Join(", ", summary.Inputs.Where(i => i.UncertaintySource == source).Select(i => i.Name));

@@ -182,6 +182,77 @@ internal static class QuantityParser
         return x is >= 0 and <= 1 ? x : throw Fail(optionName, text, "quality is outside 0 to 1", "(the vapour fraction of a liquid-vapour mixture)");
     }
 
+    /// <summary>Parses a temperature difference (a step) and returns it in kelvin: a bare number is
+    /// K, and a unit scales without its offset (<c>5 degC</c> is 5 K, <c>10 degF</c> is 10/1.8 K).</summary>
+    /// <param name="text">The user's text, e.g. <c>5</c>, <c>5 K</c>, <c>10 degF</c>.</param>
+    /// <param name="optionName">The option the text came from; it starts every error message.</param>
+    /// <returns>The difference in K, finite and greater than zero.</returns>
+    /// <exception cref="UsageException">Empty, malformed, unknown unit, or not above zero.</exception>
+    public static double ParseTemperatureDifference(string text, string optionName)
+    {
+        ParsedQuantity parsed = Parse(text, optionName, "temperature difference", [Dimension.Temperature]);
+        QuantityText.TrySplit(text, out string number, out _);
+        // A difference has no offset: the unit's scale alone, converted exactly in decimal.
+        double kelvin = QuantityText.Convert(number, double.Parse(number, NumberStyles.Float, CultureInfo.InvariantCulture), parsed.Unit with { Offset = 0m });
+        if (!double.IsFinite(kelvin))
+        {
+            throw Fail(optionName, text, "temperature difference is too large", null);
+        }
+
+        if (!(kelvin > 0.0))
+        {
+            throw Fail(optionName, text, "the step is not above zero", "(give a positive temperature difference, e.g. '5 K')");
+        }
+
+        return kelvin;
+    }
+
+    /// <summary>Parses a list of temperatures, <c>-40,-30,-20 degC</c>: numbers separated by commas
+    /// and one unit after the last number, which applies to all (none: K).</summary>
+    /// <param name="text">The user's text.</param>
+    /// <param name="optionName">The option the text came from; it starts every error message.</param>
+    /// <returns>The temperatures in K, in the order given.</returns>
+    /// <exception cref="UsageException">An entry is empty or malformed, carries its own unit, or is
+    /// not above absolute zero.</exception>
+    public static IReadOnlyList<double> ParseTemperatureList(string text, string optionName)
+        => ParseList(text, optionName, "temperature", "-40,-30,-20 degC", ParseTemperature);
+
+    /// <summary>Parses a list of absolute pressures, <c>1,2,5,10 bar</c>, written as
+    /// <see cref="ParseTemperatureList"/> (none: Pa).</summary>
+    /// <param name="text">The user's text.</param>
+    /// <param name="optionName">The option the text came from; it starts every error message.</param>
+    /// <returns>The pressures in Pa, in the order given.</returns>
+    /// <exception cref="UsageException">An entry is empty or malformed, carries its own unit, or is
+    /// not above zero.</exception>
+    public static IReadOnlyList<double> ParsePressureList(string text, string optionName)
+        => ParseList(text, optionName, "pressure", "1,2,5,10 bar", ParsePressure);
+
+    private static IReadOnlyList<double> ParseList(string text, string optionName, string quantity, string example, Func<string, string, double> parse)
+    {
+        string[] items = text.Split(',');
+        if (string.IsNullOrWhiteSpace(text) || items.Any(string.IsNullOrWhiteSpace))
+        {
+            throw Fail(optionName, text, $"empty entry in the {quantity} list", $"(give numbers separated by commas and one unit at the end, e.g. '{example}')");
+        }
+
+        QuantityText.TrySplit(items[^1], out _, out string unit);
+        var values = new double[items.Length];
+        // The last entry first: it carries the unit, whose errors then quote it as written.
+        values[^1] = parse(items[^1], optionName);
+        for (int i = 0; i < items.Length - 1; i++)
+        {
+            if (!QuantityText.TrySplit(items[i], out _, out string own) || own.Length > 0)
+            {
+                throw Fail(optionName, text, $"'{items[i].Trim()}' is not a bare number",
+                    $"(give numbers separated by commas and one unit after the last, which applies to all, e.g. '{example}')");
+            }
+
+            values[i] = parse($"{items[i].Trim()} {unit}", optionName);
+        }
+
+        return values;
+    }
+
     private static ParsedQuantity Parse(string? text, string optionName, string quantity, Dimension[] dimensions)
     {
         ArgumentException.ThrowIfNullOrWhiteSpace(optionName);

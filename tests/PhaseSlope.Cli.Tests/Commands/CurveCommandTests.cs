@@ -11,14 +11,82 @@ namespace PhaseSlope.Cli.Tests.Commands;
 
 public class CurveCommandTests
 {
-    private static readonly string[] CsvHeader =
-    [
-        "temperature_K", "pressure_Pa", "liquid_density_mol_m3", "vapour_density_mol_m3",
-        "liquid_molar_volume_m3_mol", "vapour_molar_volume_m3_mol", "liquid_compressibility_factor",
-        "vapour_compressibility_factor", "enthalpy_of_vaporization_J_mol", "entropy_of_vaporization_J_molK",
-        "internal_energy_change_J_mol", "volume_change_m3_mol", "slope_Pa_K",
-        "liquid_enthalpy_J_mol", "vapour_enthalpy_J_mol", "liquid_entropy_J_molK", "vapour_entropy_J_molK",
-    ];
+    /// <summary>The keys of a JSON object flattened as the CSV names its columns: nested member
+    /// names joined with '_', array elements by their index. Written here independently of the
+    /// tool's flattener, so the two cannot share a mistake.</summary>
+    internal static List<string> FlatKeys(JsonElement element, string prefix = "")
+    {
+        var keys = new List<string>();
+        string Join(string name) => prefix.Length == 0 ? name : prefix + "_" + name;
+        if (element.ValueKind == JsonValueKind.Object)
+        {
+            foreach (var member in element.EnumerateObject())
+            {
+                keys.AddRange(FlatKeys(member.Value, Join(member.Name)));
+            }
+        }
+        else if (element.ValueKind == JsonValueKind.Array)
+        {
+            int i = 0;
+            foreach (var item in element.EnumerateArray())
+            {
+                keys.AddRange(FlatKeys(item, Join((i++).ToString(CultureInfo.InvariantCulture))));
+            }
+        }
+        else
+        {
+            keys.Add(prefix);
+        }
+
+        return keys;
+    }
+
+    /// <summary>The flattened leaves of a JSON object: key and the JSON text of the value (numbers as
+    /// written, strings unquoted, null empty).</summary>
+    internal static Dictionary<string, string> FlatValues(JsonElement element, string prefix = "")
+    {
+        var values = new Dictionary<string, string>();
+        string Join(string name) => prefix.Length == 0 ? name : prefix + "_" + name;
+        switch (element.ValueKind)
+        {
+            case JsonValueKind.Object:
+                foreach (var member in element.EnumerateObject())
+                {
+                    foreach (var pair in FlatValues(member.Value, Join(member.Name)))
+                    {
+                        values.Add(pair.Key, pair.Value);
+                    }
+                }
+
+                break;
+            case JsonValueKind.Array:
+                int i = 0;
+                foreach (var item in element.EnumerateArray())
+                {
+                    foreach (var pair in FlatValues(item, Join((i++).ToString(CultureInfo.InvariantCulture))))
+                    {
+                        values.Add(pair.Key, pair.Value);
+                    }
+                }
+
+                break;
+            case JsonValueKind.String:
+                values.Add(prefix, element.GetString()!);
+                break;
+            case JsonValueKind.Null:
+                values.Add(prefix, "");
+                break;
+            default:
+                values.Add(prefix, element.GetRawText());
+                break;
+        }
+
+        return values;
+    }
+
+    /// <summary>The CSV header that the JSON of the same command line flattens to.</summary>
+    private static List<string> ExpectedHeader(params string[] args)
+        => FlatKeys(RunJson([.. args, "--format", "json"])[0]);
 
     /// <summary>Parses CSV text with CsvHelper (RFC 4180) into rows of fields.</summary>
     internal static List<string[]> ParseCsv(string text)
@@ -125,11 +193,11 @@ public class CurveCommandTests
         {
             var cells = table.Cells(table.Rows[i]).Select(c => double.Parse(c, CultureInfo.InvariantCulture)).ToArray();
             Assert.Equal(core[i].Temperature - 273.15, cells[0], 1e-4);
-            AssertRelative(core[i].Pressure / 1e5, cells[1], 1e-6, "bar");
-            AssertRelative(core[i].Liquid.Density * fluid.MolarMass!.Value, cells[2], 1e-6, "kg/m3");
+            AssertRelative(core[i].Pressure / 1e5, cells[1], TableDigits, "bar");
+            AssertRelative(core[i].Liquid.Density * fluid.MolarMass!.Value, cells[2], TableDigits, "kg/m3");
             if (i < 4)
             {
-                AssertRelative(core[i].EnthalpyOfVaporization / fluid.MolarMass.Value / 1e3, cells[4], 1e-6, "kJ/kg");
+                AssertRelative(core[i].EnthalpyOfVaporization / fluid.MolarMass.Value / 1e3, cells[4], TableDigits, "kJ/kg");
             }
         }
 
@@ -145,14 +213,15 @@ public class CurveCommandTests
 
         var rows = ParseCsv(text);
         Assert.Equal(7, rows.Count);
-        Assert.Equal(CsvHeader, rows[0]);
+        Assert.Equal(ExpectedHeader("curve", "r-134a", "--points", "6"), rows[0]);
+        double Cell(int row, string key) => double.Parse(rows[row][Array.IndexOf(rows[0], key)], CultureInfo.InvariantCulture);
         for (int i = 0; i < 6; i++)
         {
-            Assert.Equal(CsvHeader.Length, rows[i + 1].Length);
-            AssertSameDouble(core[i].Temperature, double.Parse(rows[i + 1][0], CultureInfo.InvariantCulture), "T");
-            AssertSameDouble(core[i].Pressure, double.Parse(rows[i + 1][1], CultureInfo.InvariantCulture), "P");
-            AssertSameDouble(core[i].Vapour.Density, double.Parse(rows[i + 1][3], CultureInfo.InvariantCulture), "rho_V");
-            AssertSameDouble(core[i].Slope, double.Parse(rows[i + 1][12], CultureInfo.InvariantCulture), "slope");
+            Assert.Equal(rows[0].Length, rows[i + 1].Length);
+            AssertSameDouble(core[i].Temperature, Cell(i + 1, "temperature_K"), "T");
+            AssertSameDouble(core[i].Pressure, Cell(i + 1, "pressure_Pa"), "P");
+            AssertSameDouble(core[i].Vapour.Density, Cell(i + 1, "vapour_density_mol_m3"), "rho_V");
+            AssertSameDouble(core[i].Slope, Cell(i + 1, "slope_Pa_K"), "slope");
         }
     }
 
@@ -171,9 +240,8 @@ public class CurveCommandTests
         Assert.Equal(RunText("curve", "propane", "--points", "12", "--format", "csv"), text);
         var rows = ParseCsv(text);
         Assert.Equal(13, rows.Count);
-        Assert.Equal(CsvHeader, rows[0]);
-        Assert.All(rows.Skip(1), row => Assert.All(row, cell => double.Parse(cell, NumberStyles.Float, CultureInfo.InvariantCulture)));
-        Assert.Equal("369.89", rows[^1][0]);
+        Assert.Equal(ExpectedHeader("curve", "propane", "--points", "12"), rows[0]);
+        Assert.Equal("369.89", rows[^1][Array.IndexOf(rows[0], "temperature_K")]);
         Assert.EndsWith("\n", text, StringComparison.Ordinal);
         Assert.Equal(["propane.csv"], folder.Entries());
     }
@@ -210,7 +278,7 @@ public class CurveCommandTests
 
         Assert.Equal(0, Run("curve", "ethane", "--points", "5", "--format", "csv", "--out", path).ExitCode);
 
-        Assert.Equal(CsvHeader, ParseCsv(File.ReadAllText(path))[0]);
+        Assert.Equal(ExpectedHeader("curve", "ethane", "--points", "5"), ParseCsv(File.ReadAllText(path))[0]);
     }
 
     [Fact]

@@ -72,6 +72,7 @@ public sealed class OfferedOptionTests : IDisposable
             yield return row;
         }
 
+        yield return Changes("coexist", "--units", [.. coexist, "--format", "csv"], "--units", "engineering");
         yield return Changes("coexist", "--reference", coexist, "--reference", "nbp");
         yield return Changes("coexist", "--diagnostics", coexist, "--diagnostics");
         foreach (var row in UncertaintyRows("coexist", coexist))
@@ -89,7 +90,17 @@ public sealed class OfferedOptionTests : IDisposable
         yield return Changes("curve", "--to", curve, "--to", "350");
         yield return Differs("curve", "--points", curve, ["curve", "propane", "--points", "6"]);
         yield return Changes("curve", "--out", curve, "--out", "{dir}/out.csv");
-        yield return Refused("curve", "--units", [.. curve, "--out", "{dir}/out.csv", "--units", "engineering"]);
+        // --units converts CSV too (headers carry the unit); JSON stays SI and refuses it (ModelAndOutputRows).
+        yield return Changes("curve", "--units", [.. curve, "--out", "{dir}/out.csv"], "--units", "engineering");
+        string[] range = ["curve", "propane", "--from", "250", "--to", "300"];
+        yield return Changes("curve", "--step", range, "--step", "10");
+        yield return Refused("curve", "--step", [.. curve, "--step", "10"]);
+        yield return Refused("curve", "--step", [.. range, "--step", "0"]);
+        yield return Differs("curve", "--temperatures", curve, ["curve", "propane", "--temperatures", "250,300"]);
+        yield return Refused("curve", "--temperatures", [.. range, "--temperatures", "250,300"]);
+        yield return Refused("curve", "--temperatures", ["curve", "propane", "--temperatures", "300,250"]);
+        yield return Differs("curve", "--pressures", curve, ["curve", "propane", "--pressures", "1,2 bar"]);
+        yield return Refused("curve", "--pressures", ["curve", "propane", "--temperatures", "250,300", "--pressures", "1,2 bar"]);
         yield return Changes("curve", "--reference", curve, "--reference", "nbp");
         yield return Changes("curve", "--diagnostics", curve, "--diagnostics");
         foreach (var row in UncertaintyRows("curve", curve))

@@ -74,13 +74,17 @@ public class UncertaintyCommandTests
     [Fact]
     public void Curve_Csv_HasUColumns_EmptyWithAReasonWhereUndefined()
     {
-        string[] lines = RunText("curve", "propane", "-n", "5", "--uncertainty", "linear", "--format", "csv").TrimEnd().Split('\n');
-        string[] header = lines[0].TrimEnd('\r').Split(',');
+        var rows = CurveCommandTests.ParseCsv(RunText("curve", "propane", "-n", "5", "--uncertainty", "linear", "--format", "csv"));
+        string[] keys = ["standard_uncertainty_temperature_K", "standard_uncertainty_pressure_Pa", "standard_uncertainty_enthalpy_of_vaporization_J_mol",
+            "standard_uncertainty_liquid_density_mol_m3", "standard_uncertainty_vapour_density_mol_m3"];
+        int[] columns = [.. keys.Select(k => Array.IndexOf(rows[0], k))];
+        int reason = Array.IndexOf(rows[0], "standard_uncertainty_undefined_reason");
 
-        Assert.Equal(["u_temperature_K", "u_pressure_Pa", "u_enthalpy_of_vaporization_J_mol", "u_liquid_density_mol_m3", "u_vapour_density_mol_m3", "u_undefined_reason"], header[^6..]);
-        Assert.DoesNotContain(",,", lines[1]);
-        Assert.Contains(",,,,,", lines[^1]);
-        Assert.Contains("critical point", lines[^1]);
+        Assert.All(columns, c => Assert.True(c >= 0));
+        Assert.All(columns, c => Assert.NotEqual("", rows[1][c]));
+        Assert.Equal("", rows[1][reason]);
+        Assert.All(columns, c => Assert.Equal("", rows[^1][c]));
+        Assert.Contains("critical point", rows[^1][reason]);
     }
 
     [Fact]
@@ -93,6 +97,25 @@ public class UncertaintyCommandTests
         Assert.Contains("u(dH_vap) [J/mol]", text);
         Assert.Contains("critical_temperature_K = 369.89 +/- 0.3", text);
         Assert.Contains("u undefined: at or next to the critical point", text);
+    }
+
+    [Fact]
+    public void Curve_Table_UncertaintiesWithTwoSignificantDigits()
+    {
+        var table = Assert.Single(TableLayout.Find(RunText("curve", "propane", "-n", "5", "--uncertainty", "linear")));
+        int[] columns = [.. table.HeaderCells.Select((h, i) => (h, i)).Where(c => c.h.StartsWith("u(", StringComparison.Ordinal)).Select(c => c.i)];
+
+        Assert.Equal(4, columns.Length);
+        foreach (var row in table.Rows.SkipLast(1)) // the last row is the critical point: "undefined"
+        {
+            foreach (int i in columns)
+            {
+                // Two significant digits (GUM, JCGM 100:2008 7.2.6): the digits after leading zeros,
+                // before any exponent, trailing zeros of an integer part not counted.
+                string mantissa = table.Cells(row)[i].Split('E')[0].Replace("-", "").Replace(".", "").TrimStart('0').TrimEnd('0');
+                Assert.InRange(mantissa.Length, 1, 2);
+            }
+        }
     }
 
     [Fact]

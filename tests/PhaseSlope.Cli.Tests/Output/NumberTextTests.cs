@@ -18,6 +18,9 @@ public class NumberTextTests
         { ["curve", "water", "--points", "6", "--format", "csv"] },
         { ["curve", "water", "--points", "6"] },
         { ["curve", "water", "--points", "6", "--units", "engineering"] },
+        { ["curve", "water", "--points", "6", "--format", "csv", "--units", "engineering"] },
+        { ["curve", "r-134a", "--from", "-40 degC", "--to", "80 degC", "--step", "7.5", "--units", "engineering"] },
+        { ["curve", "water", "--pressures", "0.5,1,2 bar", "--uncertainty", "linear"] },
         { ["fluids", "list"] },
         { ["fluids", "list", "--format", "csv"] },
         { ["fluids", "show", "r-134a"] },
@@ -76,8 +79,10 @@ public class NumberTextTests
 
         var csv = RunIn("de-DE", ["curve", "propane", "--points", "3", "--format", "csv"]);
         var rows = PhaseSlope.Cli.Tests.Commands.CurveCommandTests.ParseCsv(csv.Stdout);
-        Assert.All(rows, row => Assert.Equal(17, row.Length));
-        Assert.All(rows.Skip(1).SelectMany(r => r), cell => Assert.Matches(@"^-?[0-9]+(\.[0-9]+)?(E[-+][0-9]+)?$", cell));
+        Assert.All(rows, row => Assert.Equal(rows[0].Length, row.Length));
+        int t = Array.IndexOf(rows[0], "temperature_K");
+        Assert.All(rows.Skip(1), row => Assert.Matches(@"^-?[0-9]+(\.[0-9]+)?(E[-+][0-9]+)?$", row[t]));
+        Assert.All(rows.Skip(1).SelectMany(r => r), cell => Assert.DoesNotMatch(@"^-?[0-9]+,[0-9]+$", cell));
 
         var table = RunIn("de-DE", ["coexist", "propane", "--temperature", "300.5"]);
         Assert.Contains("saturation temperature  300.5 K\n", table.Stdout, StringComparison.Ordinal);

@@ -176,7 +176,7 @@ public class OutputFileTests
         var result = Run("curve", "propane", "--points", "3", "--format", "csv", "-o", folder.File("link.csv"));
 
         Assert.True(result.ExitCode == 0, result.ToString());
-        Assert.StartsWith("temperature_K,", File.ReadAllText(folder.File("made.csv")), StringComparison.Ordinal);
+        Assert.StartsWith("fluid,eos,", File.ReadAllText(folder.File("made.csv")), StringComparison.Ordinal);
         Assert.NotNull(new FileInfo(folder.File("link.csv")).LinkTarget);
     }
 
