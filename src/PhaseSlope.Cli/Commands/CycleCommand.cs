@@ -33,7 +33,7 @@ internal static class CycleCommand
         outFile.AddTo(command);
         command.SetAction(parse => io.Guard(() =>
         {
-            var output = common.BindOutput(parse);
+            var output = common.BindOutput(parse, csvUnits: true);
             var specification = CycleOption.Parse(parse.GetValue(spec)!, "CYCLE");
             var model = common.BindModel(parse);
             var zero = ReferenceOption.Parse(parse.GetValue(reference)!);
@@ -49,12 +49,9 @@ internal static class CycleCommand
     private static string Render(PropertyModel engine, VapourCompressionCycle cycle, OutputChoice output) => output.Format switch
     {
         OutputFormat.Json => Json(engine, cycle),
-        OutputFormat.Csv => JsonColumns.Csv([.. cycle.States.Select(s =>
-        {
-            List<(string, string)> row = [("state", s.Label)];
-            row.AddRange(JsonColumns.Flatten(StateWriter.Json(engine, s.State)));
-            return row;
-        })]),
+        OutputFormat.Csv => FlatCsv.Write(cycle.States.Select(s =>
+            (IReadOnlyList<FlatField>)[new FlatField("state", [], JsonValueKind.String, s.Label), .. StateWriter.Flat(engine, s.State)]),
+            output.Units, engine.MolarMass, StateWriter.Differences),
         _ => Table(engine, cycle, output.Units),
     };
 

@@ -68,7 +68,7 @@ internal static class StateCommand
             throw new UsageException($"--batch: {(CommonOptions.Given(parse, options.Phase) ? "--phase" : "--uncertainty")} applies to a single state, not to a batch");
         }
 
-        var output = options.Common.BindOutput(parse);
+        var output = options.Common.BindOutput(parse, csvUnits: true);
         var setting = options.BindSetting(parse);
         output.RequireMolarMassFor(setting.Fluid);
         var rows = BoundedInput.ReadDataFile(file, reader => StateBatchCsv.Read(reader, file, setting.Fluid));

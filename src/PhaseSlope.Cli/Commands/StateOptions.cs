@@ -76,7 +76,7 @@ internal sealed class StateOptions
     /// <summary>Binds --format and --units, then the state (see <see cref="BindPoint"/>).</summary>
     public StateRequest Bind(ParseResult parse)
     {
-        var output = Common.BindOutput(parse);
+        var output = Common.BindOutput(parse, csvUnits: true);
         var point = BindPoint(parse);
         output.RequireMolarMassFor(point.Setting.Fluid);
         return new StateRequest(point, output);

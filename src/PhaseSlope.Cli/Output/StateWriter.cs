@@ -15,35 +15,44 @@ internal static class StateWriter
         => format switch
         {
             OutputFormat.Json => Json(engine, state, uncertainty),
-            OutputFormat.Csv => JsonColumns.Csv([JsonColumns.Flatten(Json(engine, state, uncertainty))]),
+            OutputFormat.Csv => FlatCsv.Write([Flat(engine, state, uncertainty)], units, engine.MolarMass, Differences),
             // Without a molar mass only SI tables are allowed (engineering units were refused), which do not use it.
             _ => (!state.Region.HasQuality() ? StateTable(engine, state, state.Single!, units) : TwoPhaseTable(engine, state, units))
                  + (uncertainty?.Table(units, engine.MolarMass ?? double.NaN) ?? ""),
         };
 
-    /// <summary>The JSON object of a state (one line of a batch, or the whole output).</summary>
-    public static string Json(PropertyModel engine, FluidState state, StateUncertaintyText? uncertainty = null)
-        => JsonText.Write(json =>
-        {
-            json.WriteStartObject();
-            WriteHeader(json, engine, state);
-            if (!state.Region.HasQuality())
-            {
-                StateColumns.WriteMembers(json, state.Single!);
-                json.WriteNull("liquid");
-                json.WriteNull("vapour");
-            }
-            else
-            {
-                StateColumns.WriteMixture(json, state);
-                var point = state.Coexistence!;
-                CoexistenceWriter.WritePhase(json, "liquid", point.Liquid, state.Saturation?.Liquid, engine.MolarMass);
-                CoexistenceWriter.WritePhase(json, "vapour", point.Vapour, state.Saturation?.Vapour, engine.MolarMass);
-            }
+    /// <summary>Keys of a state that are temperature differences (in K in every unit system).</summary>
+    public static IReadOnlySet<string> Differences { get; } = new HashSet<string>(StringComparer.Ordinal) { "standard_uncertainty", "superheat_K", "subcooling_K" };
 
-            uncertainty?.WriteJson(json);
-            json.WriteEndObject();
-        });
+    /// <summary>The state's JSON object flattened into CSV fields.</summary>
+    public static IReadOnlyList<FlatField> Flat(PropertyModel engine, FluidState state, StateUncertaintyText? uncertainty = null)
+        => new JsonFlattener().Flatten(json => WriteObject(json, engine, state, uncertainty));
+
+    /// <summary>The JSON object of a state (one element of a batch, or the whole output).</summary>
+    public static string Json(PropertyModel engine, FluidState state, StateUncertaintyText? uncertainty = null)
+        => JsonText.Write(json => WriteObject(json, engine, state, uncertainty));
+
+    private static void WriteObject(Utf8JsonWriter json, PropertyModel engine, FluidState state, StateUncertaintyText? uncertainty)
+    {
+        json.WriteStartObject();
+        WriteHeader(json, engine, state);
+        if (!state.Region.HasQuality())
+        {
+            StateColumns.WriteMembers(json, state.Single!);
+            json.WriteNull("liquid");
+            json.WriteNull("vapour");
+        }
+        else
+        {
+            StateColumns.WriteMixture(json, state);
+            var point = state.Coexistence!;
+            CoexistenceWriter.WritePhase(json, "liquid", point.Liquid, state.Saturation?.Liquid, engine.MolarMass);
+            CoexistenceWriter.WritePhase(json, "vapour", point.Vapour, state.Saturation?.Vapour, engine.MolarMass);
+        }
+
+        uncertainty?.WriteJson(json);
+        json.WriteEndObject();
+    }
 
     /// <summary>Renders a derivative value.</summary>
     public static string Derivative(PropertyModel engine, ThermodynamicState state, StateVariable of, StateVariable by, StateVariable hold, double value, OutputFormat format)
@@ -264,16 +273,21 @@ internal static class StateWriter
                     json.WriteEndArray();
                 });
             case OutputFormat.Csv:
-                return JsonColumns.Csv([.. results.Select(r =>
+                var flattener = new JsonFlattener();
+                return FlatCsv.Write(results.Select(r =>
                 {
-                    List<(string, string)> row = [("line", r.Line.ToString(CultureInfo.InvariantCulture)), ("error", r.Error ?? "")];
+                    List<FlatField> row =
+                    [
+                        new("line", [], JsonValueKind.Number, r.Line.ToString(CultureInfo.InvariantCulture)),
+                        new("error", [], r.Error is null ? JsonValueKind.Null : JsonValueKind.String, r.Error ?? ""),
+                    ];
                     if (r.State is { } state)
                     {
-                        row.AddRange(JsonColumns.Flatten(Json(engine, state)));
+                        row.AddRange(flattener.Flatten(json => WriteObject(json, engine, state, null)));
                     }
 
-                    return row;
-                })]);
+                    return (IReadOnlyList<FlatField>)row;
+                }), units, engine.MolarMass, Differences);
             default:
                 double m = engine.MolarMass ?? double.NaN;
                 string Show(DisplayQuantity q, double? si) => si is double v ? NumberText.Table(UnitFormatter.Convert(q, v, units, m)) : "";

@@ -71,6 +71,19 @@ public class StateFlashCommandTests
     }
 
     [Fact]
+    public void Csv_EngineeringUnits_ConvertsAbsoluteTemperatures_KeepsDifferencesInKelvin()
+    {
+        var json = RunJson("state", "propane", "-T", "330", "-P", "1MPa", "--format", "json");
+        var rows = CurveCommandTests.ParseCsv(RunText("state", "propane", "-T", "330", "-P", "1MPa", "--format", "csv", "--units", "engineering"));
+        string Cell(string key) => rows[1][Array.IndexOf(rows[0], key)];
+        // 330 K is 56.85 degC exactly (the offset 273.15 in decimal); the superheat is a difference.
+        Assert.Equal(330 - 273.15, double.Parse(Cell("temperature_degC"), CultureInfo.InvariantCulture), 1e-12);
+        Assert.Equal(json.GetProperty("superheat_K").GetDouble(), double.Parse(Cell("superheat_K"), CultureInfo.InvariantCulture));
+        AssertRelative(json.GetProperty("enthalpy_J_mol").GetDouble() / json.GetProperty("molar_mass_kg_mol").GetDouble() / 1000,
+            double.Parse(Cell("enthalpy_kJ_kg"), CultureInfo.InvariantCulture), 1e-14, "enthalpy in kJ/kg");
+    }
+
+    [Fact]
     public void Batch_EveryRowComputed_BadRowsNamedByLineAndColumn_ExitSays()
     {
         string dir = Directory.CreateTempSubdirectory("phaseslope-batch").FullName;

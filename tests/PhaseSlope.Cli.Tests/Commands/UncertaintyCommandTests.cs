@@ -153,7 +153,7 @@ public class StateUncertaintyCommandTests
         string header = first.Split('\n')[0].TrimEnd('\r');
         // CSV is the flattened JSON: the standard_uncertainty object's members, prefixed.
         string[] columns = header.Split(',');
-        foreach (string key in new[] { "method", "samples", "seed", "density_mol_m3", "pressure_Pa", "compressibility_factor", "residual_enthalpy_J_mol", "residual_entropy_J_molK", "isobaric_heat_capacity_J_molK", "isochoric_heat_capacity_J_molK", "isothermal_compressibility_1_Pa", "isobaric_expansivity_1_K", "joule_thomson_coefficient_K_Pa", "speed_of_sound_m_s", "undefined_reason", "response_functions_undefined_reason", "inputs" })
+        foreach (string key in new[] { "method", "samples", "seed", "density_mol_m3", "pressure_Pa", "compressibility_factor", "residual_enthalpy_J_mol", "residual_entropy_J_molK", "isobaric_heat_capacity_J_molK", "isochoric_heat_capacity_J_molK", "isothermal_compressibility_1_Pa", "isobaric_expansivity_1_K", "joule_thomson_coefficient_K_Pa", "speed_of_sound_m_s", "undefined_reason", "response_functions_undefined_reason", "inputs_0_name" })
         {
             Assert.Contains($"standard_uncertainty_{key}", columns);
         }
