@@ -56,8 +56,8 @@ internal static class CycleOption
 
         double evaporating = QuantityParser.ParseTemperature(values["evaporating"], $"{name} evaporating");
         double condensing = QuantityParser.ParseTemperature(values["condensing"], $"{name} condensing");
-        double superheat = values.TryGetValue("superheat", out string? sh) ? QuantityList.TemperatureDifference(sh, $"{name} superheat") : 0;
-        double subcooling = values.TryGetValue("subcooling", out string? sc) ? QuantityList.TemperatureDifference(sc, $"{name} subcooling") : 0;
+        double superheat = values.TryGetValue("superheat", out string? sh) ? QuantityParser.ParseTemperatureDifference(sh, $"{name} superheat", allowZero: true) : 0;
+        double subcooling = values.TryGetValue("subcooling", out string? sc) ? QuantityParser.ParseTemperatureDifference(sc, $"{name} subcooling", allowZero: true) : 0;
         double efficiency = values.TryGetValue("efficiency", out string? eff) ? Efficiency(eff, name) : 1;
         var specification = new VapourCompressionSpecification(evaporating, condensing, superheat, subcooling, efficiency);
         try

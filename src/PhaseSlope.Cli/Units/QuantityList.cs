@@ -1,4 +1,3 @@
-using System.Globalization;
 using PhaseSlope.Core.Units;
 
 namespace PhaseSlope.Cli.Units;
@@ -54,28 +53,11 @@ internal static class QuantityList
     /// mass is known.</summary>
     /// <exception cref="UsageException">Malformed, unknown unit, not finite.</exception>
     public static ParsedQuantity Parse(string text, string optionName, string quantity, Dimension molar, Dimension perMass)
-        => QuantityText.TryParse(text, quantity, [molar, perMass], out ParsedQuantity parsed, out string problem, out string? hint)
-            ? parsed
-            : throw new UsageException(hint is null ? $"{optionName}: {problem} in '{Clean(text)}'"
-                : hint.StartsWith(';') ? $"{optionName}: {problem} in '{Clean(text)}'{hint}" : $"{optionName}: {problem} in '{Clean(text)}' {hint}");
+        => QuantityParser.ParseQuantity(text, optionName, quantity, molar, perMass);
 
     /// <summary>The molar value of a parsed energy or entropy (J/mol or J/(mol·K)).</summary>
     public static double Molar(ParsedQuantity parsed, Dimension perMass, Func<double> molarMass)
         => parsed.Unit.Dimension == perMass ? parsed.Value * molarMass() : parsed.Value;
-
-    /// <summary>A temperature difference in K (a bare number or one in K; a difference in °C is
-    /// ambiguous with a temperature and is refused).</summary>
-    /// <exception cref="UsageException">Malformed, another unit, not finite.</exception>
-    public static double TemperatureDifference(string text, string optionName)
-    {
-        if (!QuantityText.TrySplit(text, out string number, out string unit) || (unit.Length > 0 && unit != "K")
-            || !double.TryParse(number, NumberStyles.Float, CultureInfo.InvariantCulture, out double value) || !double.IsFinite(value))
-        {
-            throw new UsageException($"{optionName}: expected a temperature difference in K such as '5 K', got '{Clean(text)}'");
-        }
-
-        return value;
-    }
 
     private static string Clean(string text) => Input.DataFileException.OneLine(text);
 }

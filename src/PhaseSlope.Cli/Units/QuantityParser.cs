@@ -188,7 +188,13 @@ internal static class QuantityParser
     /// <param name="optionName">The option the text came from; it starts every error message.</param>
     /// <returns>The difference in K, finite and greater than zero.</returns>
     /// <exception cref="UsageException">Empty, malformed, unknown unit, or not above zero.</exception>
-    public static double ParseTemperatureDifference(string text, string optionName)
+    public static double ParseTemperatureDifference(string text, string optionName) => ParseTemperatureDifference(text, optionName, allowZero: false);
+
+    /// <summary>Parses a temperature difference as <see cref="ParseTemperatureDifference(string, string)"/>;
+    /// with <paramref name="allowZero"/> (a superheat or subcooling) zero is accepted and only a
+    /// negative difference refused.</summary>
+    /// <exception cref="UsageException">Empty, malformed, unknown unit, or below the allowed range.</exception>
+    public static double ParseTemperatureDifference(string text, string optionName, bool allowZero)
     {
         ParsedQuantity parsed = Parse(text, optionName, "temperature difference", [Dimension.Temperature]);
         QuantityText.TrySplit(text, out string number, out _);
@@ -199,9 +205,11 @@ internal static class QuantityParser
             throw Fail(optionName, text, "temperature difference is too large", null);
         }
 
-        if (!(kelvin > 0.0))
+        if (allowZero ? kelvin < 0.0 : !(kelvin > 0.0))
         {
-            throw Fail(optionName, text, "the step is not above zero", "(give a positive temperature difference, e.g. '5 K')");
+            throw allowZero
+                ? Fail(optionName, text, "the temperature difference is negative", "(give 0 K or more, e.g. '5 K')")
+                : Fail(optionName, text, "the step is not above zero", "(give a positive temperature difference, e.g. '5 K')");
         }
 
         return kelvin;
@@ -229,29 +237,19 @@ internal static class QuantityParser
 
     private static IReadOnlyList<double> ParseList(string text, string optionName, string quantity, string example, Func<string, string, double> parse)
     {
-        string[] items = text.Split(',');
-        if (string.IsNullOrWhiteSpace(text) || items.Any(string.IsNullOrWhiteSpace))
+        if (string.IsNullOrWhiteSpace(text) || text.Split(',').Any(string.IsNullOrWhiteSpace))
         {
             throw Fail(optionName, text, $"empty entry in the {quantity} list", $"(give numbers separated by commas and one unit at the end, e.g. '{example}')");
         }
 
-        QuantityText.TrySplit(items[^1], out _, out string unit);
-        var values = new double[items.Length];
-        // The last entry first: it carries the unit, whose errors then quote it as written.
-        values[^1] = parse(items[^1], optionName);
-        for (int i = 0; i < items.Length - 1; i++)
-        {
-            if (!QuantityText.TrySplit(items[i], out _, out string own) || own.Length > 0)
-            {
-                throw Fail(optionName, text, $"'{items[i].Trim()}' is not a bare number",
-                    $"(give numbers separated by commas and one unit after the last, which applies to all, e.g. '{example}')");
-            }
-
-            values[i] = parse($"{items[i].Trim()} {unit}", optionName);
-        }
-
-        return values;
+        return [.. QuantityList.Items(text, optionName, int.MaxValue).Select(item => parse(item, optionName))];
     }
+
+    /// <summary>Parses a number with a unit of one of the dimensions, or throws the one-line error
+    /// naming the option (the one place where option text becomes a quantity).</summary>
+    /// <exception cref="UsageException">Empty, malformed or an unknown unit.</exception>
+    internal static ParsedQuantity ParseQuantity(string text, string optionName, string quantity, params Dimension[] dimensions)
+        => Parse(text, optionName, quantity, dimensions);
 
     private static ParsedQuantity Parse(string? text, string optionName, string quantity, Dimension[] dimensions)
     {
