@@ -1,4 +1,3 @@
-using System.Globalization;
 using System.Text.RegularExpressions;
 using CsvHelper;
 using PhaseSlope.Cli.Commands;
@@ -55,17 +54,7 @@ internal static partial class StateBatchCsv
     /// exactly two property columns or with an unknown unit, no rows, or too many.</exception>
     public static IReadOnlyList<StateBatchRow> Read(TextReader reader, string origin, Fluid fluid)
     {
-        var options = new CsvReaderOptions
-        {
-            HasHeader = false,
-            Separator = ',',
-            CommentPrefix = '#',
-            TrimWhitespace = true,
-            SkipEmptyLines = true,
-            TrackLineNumbers = true,
-            DetectSeparatorHint = false,
-            FormatProvider = CultureInfo.InvariantCulture,
-        };
+        var options = VapourPressureCsv.ReaderOptions();
         Column[]? columns = null;
         var rows = new List<StateBatchRow>();
         try
@@ -73,8 +62,7 @@ internal static partial class StateBatchCsv
             using var csv = CsvReader.Create(reader, options, true);
             while (csv.Read())
             {
-                var raw = csv.RawRecord.TrimStart(" \t"u8);
-                if (raw.IsEmpty || raw[0] == (byte)'#')
+                if (VapourPressureCsv.IsCommentOrBlank(csv.RawRecord))
                 {
                     continue;
                 }

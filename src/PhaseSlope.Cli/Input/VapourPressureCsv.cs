@@ -89,19 +89,7 @@ internal static partial class VapourPressureCsv
         Unit? defaultTemperature = OptionTemperatureUnit(options.TemperatureUnit);
         Unit? defaultPressure = OptionPressureUnit(options.PressureUnit);
 
-        var csvOptions = new CsvReaderOptions
-        {
-            // The header is found by this reader, after the comments it skips itself (those with
-            // blanks before the '#').
-            HasHeader = false,
-            Separator = ',',
-            CommentPrefix = '#',
-            TrimWhitespace = true,
-            SkipEmptyLines = true,
-            TrackLineNumbers = true,
-            DetectSeparatorHint = false,
-            FormatProvider = CultureInfo.InvariantCulture,
-        };
+        var csvOptions = ReaderOptions();
 
         Layout? layout = null;
         var records = new List<VapourPressureRecord>();
@@ -165,8 +153,23 @@ internal static partial class VapourPressureCsv
         return records;
     }
 
+    /// <summary>The reader settings of every data file (vapour pressures, batches of states): comma
+    /// separated, invariant numbers, '#' comments, line numbers tracked; the header is found by the
+    /// caller, after the comments it skips itself (those with blanks before the '#').</summary>
+    internal static CsvReaderOptions ReaderOptions() => new()
+    {
+        HasHeader = false,
+        Separator = ',',
+        CommentPrefix = '#',
+        TrimWhitespace = true,
+        SkipEmptyLines = true,
+        TrackLineNumbers = true,
+        DetectSeparatorHint = false,
+        FormatProvider = CultureInfo.InvariantCulture,
+    };
+
     /// <summary>Whether a record is a comment (first non-blank character '#') or blank.</summary>
-    private static bool IsCommentOrBlank(ReadOnlySpan<byte> raw)
+    internal static bool IsCommentOrBlank(ReadOnlySpan<byte> raw)
     {
         ReadOnlySpan<byte> text = raw.TrimStart(" \t"u8);
         return text.IsEmpty || text[0] == (byte)'#';

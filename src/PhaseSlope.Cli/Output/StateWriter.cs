@@ -160,6 +160,11 @@ internal static class StateWriter
         return line + Environment.NewLine;
     }
 
+    private static string ReferenceLine(PropertyModel engine, ThermodynamicState state)
+        => state.IdealGasUnavailableReason is null
+            ? $"reference: {engine.Reference.Description}"
+            : "reference: none (absolute h, s, u, a and g need the ideal-gas heat capacity cp°, which this fluid does not give)";
+
     private static string StateTable(PropertyModel engine, FluidState described, ThermodynamicState state, UnitSystem units)
     {
         var table = new TextTable(["property", "value", "unit"], [false, true, false]);
@@ -171,9 +176,7 @@ internal static class StateWriter
         var text = new StringBuilder();
         text.AppendLine(Title(engine, described));
         text.Append(SaturationLines(described, units));
-        text.AppendLine(state.IdealGasUnavailableReason is null
-            ? $"reference: {engine.Reference.Description}"
-            : "reference: none (absolute h, s, u, a and g need the ideal-gas heat capacity cp°, which this fluid does not give)");
+        text.AppendLine(ReferenceLine(engine, state));
         text.AppendLine();
         text.Append(table.Render());
         if (state.IdealGasExtrapolated)
@@ -224,9 +227,7 @@ internal static class StateWriter
 
         var text = new StringBuilder();
         text.AppendLine(Title(engine, state));
-        text.AppendLine(liquid.IdealGasUnavailableReason is null
-            ? $"reference: {engine.Reference.Description}"
-            : "reference: none (absolute h, s, u, a and g need the ideal-gas heat capacity cp°, which this fluid does not give)");
+        text.AppendLine(ReferenceLine(engine, liquid));
         text.AppendLine();
         text.Append(mixture.Render());
         text.AppendLine();
