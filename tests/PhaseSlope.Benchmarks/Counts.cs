@@ -55,8 +55,8 @@ public static class Counts
     public static void PrintFlashes(TextWriter output)
     {
         var inv = CultureInfo.InvariantCulture;
-        output.WriteLine("| fluid | (P, h) single phase mean (max) | (P, s) single phase mean (max) | (P, h) two-phase mean (max) | (P, s) two-phase mean (max) |");
-        output.WriteLine("|---|---|---|---|---|");
+        output.WriteLine("| fluid | (P, h) single phase mean (max) | (P, s) single phase mean (max) | (P, h) two-phase mean (max) | (P, s) two-phase mean (max) | slowest (P, h) state |");
+        output.WriteLine("|---|---|---|---|---|---|");
         foreach (string name in new[] { "propane", "water", "r-134a", "carbon dioxide" })
         {
             var fluid = FluidCatalog.Embedded.Find(name);
@@ -64,6 +64,7 @@ public static class Counts
             var engine = new Core.Properties.PropertyModel(fluid, counting);
             double tc = engine.Solver.CriticalTemperature, pc = engine.Solver.CriticalPressure;
             var counts = new List<long>[4];
+            (long Count, double T, double P) worst = (0, 0, 0);
             for (int k = 0; k < 4; k++)
             {
                 counts[k] = [];
@@ -90,6 +91,11 @@ public static class Counts
 
                     var state = engine.AtPressure(t, pressure);
                     counts[0].Add(Count(Core.Properties.StateProperty.Enthalpy, state.Enthalpy!.Value, pressure));
+                    if (counts[0][^1] > worst.Count)
+                    {
+                        worst = (counts[0][^1], t / tc, pressure / pc);
+                    }
+
                     counts[1].Add(Count(Core.Properties.StateProperty.Entropy, state.Entropy!.Value, pressure));
                     double ts = engine.Solver.MinimumTemperature + (0.98 * tc - engine.Solver.MinimumTemperature) * (i + 0.5) / 10;
                     var mixture = engine.Flash(Core.Properties.StateProperty.Temperature, ts, Core.Properties.StateProperty.Quality, 0.1 + 0.08 * j);
@@ -99,7 +105,7 @@ public static class Counts
             }
 
             output.WriteLine(string.Create(inv,
-                $"| {name} | {counts[0].Average():F1} ({counts[0].Max()}) | {counts[1].Average():F1} ({counts[1].Max()}) | {counts[2].Average():F1} ({counts[2].Max()}) | {counts[3].Average():F1} ({counts[3].Max()}) |"));
+                $"| {name} | {counts[0].Average():F1} ({counts[0].Max()}) | {counts[1].Average():F1} ({counts[1].Max()}) | {counts[2].Average():F1} ({counts[2].Max()}) | {counts[3].Average():F1} ({counts[3].Max()}) | {worst.T:F3} Tc, {worst.P:F2} Pc |"));
         }
     }
 
