@@ -26,8 +26,6 @@ public sealed class CubicModel : IResidualModel
     private const double R = Constants.GasConstant;
     private readonly double _delta1;
     private readonly double _delta2;
-    private readonly double _u;
-    private readonly double _w;
 
     /// <summary>Builds a model from its form, alpha function and critical constants.</summary>
     /// <param name="kind">Which published model this is (for reports).</param>
@@ -83,8 +81,6 @@ public sealed class CubicModel : IResidualModel
         double shift = volumeShift / CovolumeB;
         _delta1 = form.Delta1 + shift;
         _delta2 = form.Delta2 + shift;
-        _u = _delta1 + _delta2;
-        _w = _delta1 * _delta2;
         var entry = kind.Entry();
         Identity = new ModelIdentity(entry.Id, entry.Title, alpha.Description, volumeShift);
     }
@@ -328,7 +324,7 @@ public sealed class CubicModel : IResidualModel
     public int DensityRoots(double temperature, double pressure, ReadOnlySpan<double> amounts, Span<double> roots)
     {
         RequirePure(amounts);
-        return CubicRoots.Find(this, temperature, pressure, roots);
+        return CubicRoots.Find(temperature, pressure, CovolumeB, TranslatedCovolume, _delta1, _delta2, AttractionA * Alpha.Evaluate(temperature).Value, roots);
     }
 
     private static void RequirePure(ReadOnlySpan<double> amounts)
@@ -348,25 +344,34 @@ public sealed class CubicModel : IResidualModel
     /// <param name="density">ρ in mol/m³, in (0, 1/(b − c)).</param>
     public HelmholtzDerivatives Residual(double temperature, double density)
     {
-        double b = CovolumeB;
-        double eta = b * density;
-        double bRep = TranslatedCovolume;
-        double etaRep = bRep * density;
         AlphaValue alpha = Alpha.Evaluate(temperature);
-        double theta = AttractionA * alpha.Value / b;
-        double thetaT = AttractionA * alpha.FirstDerivative / b;
-        double thetaTT = AttractionA * alpha.SecondDerivative / b;
+        double b = CovolumeB;
+        return Helmholtz(temperature, density, b, TranslatedCovolume, _delta1, _delta2,
+            AttractionA * alpha.Value / b, AttractionA * alpha.FirstDerivative / b, AttractionA * alpha.SecondDerivative / b);
+    }
+
+    /// <summary>The translated cubic's molar residual Helmholtz energy and its derivatives, for
+    /// any set of constants: b, the repulsive b′ = b − c, the shifted δ′1, δ′2, and θ = a·α/b with
+    /// its first two T-derivatives. A pure fluid passes its own; a mixture at fixed composition
+    /// its mixed a(T), b and c (<see cref="CubicMixtureModel"/>).</summary>
+    internal static HelmholtzDerivatives Helmholtz(double temperature, double density, double b, double bRep, double delta1, double delta2,
+        double theta, double thetaT, double thetaTT)
+    {
+        double eta = b * density;
+        double etaRep = bRep * density;
+        double u = delta1 + delta2;
+        double w = delta1 * delta2;
 
         double oneMinusEta = 1 - etaRep;
         double logRepulsive = Math.Log(oneMinusEta);
-        double d1 = 1 + _delta1 * eta;
-        double d2 = 1 + _delta2 * eta;
-        double f = _delta1 == _delta2
+        double d1 = 1 + delta1 * eta;
+        double d2 = 1 + delta2 * eta;
+        double f = delta1 == delta2
             ? eta / d1
-            : Math.Log(d1 / d2) / (_delta1 - _delta2);
+            : Math.Log(d1 / d2) / (delta1 - delta2);
         double d = d1 * d2;
-        double dRho = b * (_u + 2 * _w * eta);   // dD/dρ
-        double dRhoRho = 2 * _w * b * b;         // d²D/dρ²
+        double dRho = b * (u + 2 * w * eta);   // dD/dρ
+        double dRhoRho = 2 * w * b * b;        // d²D/dρ²
 
         double rt = R * temperature;
         double value = -rt * logRepulsive - theta * f;

@@ -16,17 +16,13 @@ internal static class CubicRoots
 {
     private const double R = Constants.GasConstant;
 
-    public static int Find(CubicModel model, double temperature, double pressure, Span<double> roots)
+    public static int Find(double temperature, double pressure, double b, double bRep, double delta1, double delta2, double aAlpha, Span<double> roots)
     {
         double rt = R * temperature;
-        double b = model.CovolumeB;
-        double bRep = model.TranslatedCovolume;
-        var (delta1, delta2) = model.ShiftedDeltas;
         double e1 = delta1 * b;
         double e2 = delta2 * b;
         double u = e1 + e2;
         double w = e1 * e2;
-        double aAlpha = model.AttractionA * model.Alpha.Evaluate(temperature).Value;
 
         // Coefficients of Z³ + c2·Z² + c1·Z + c0 with Z = P·v/(RT).
         double s = pressure / rt;
