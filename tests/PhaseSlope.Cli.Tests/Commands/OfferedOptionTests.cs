@@ -364,6 +364,24 @@ public sealed class OfferedOptionTests : IDisposable
         yield return Changes("mixture", "--format", mixture, "--format", "json");
         yield return Refused("mixture", "--format", [.. mixture, "--format", "csv"]);
         yield return Changes("mixture", "--out", mixture, "--out", "{dir}/out.txt");
+
+        // envelope: the same mixture options move the envelope; the Péneloux shift moves no
+        // equilibrium temperature or pressure, only the critical density the JSON gives.
+        string[] envelope = ["envelope", "methane=0.8,carbon dioxide=0.2"];
+        string[] envelopeJson = [.. envelope, "--format", "json"];
+        yield return Changes("envelope", "--mass-fractions", envelope, "--mass-fractions");
+        yield return Changes("envelope", "--kij", envelope, "--kij", "methane,CO2=0.1");
+        yield return Refused("envelope", "--kij", [.. envelope, "--kij", "methane,propane=0.1"]);
+        yield return Changes("envelope", "--eos", envelope, "--eos", "srk");
+        yield return Refused("envelope", "--eos", [.. envelope, "--eos", "nonesuch"]);
+        yield return Changes("envelope", "--alpha", envelope, "--alpha", "twu");
+        yield return Changes("envelope", "--volume-shift", envelopeJson, "--volume-shift", "peneloux");
+        yield return Refused("envelope", "--volume-shift", [.. envelope, "--volume-shift", "1 cm3/mol"]);
+        yield return Changes("envelope", "--min-pressure", envelope, "--min-pressure", "50 kPa");
+        yield return Refused("envelope", "--min-pressure", [.. envelope, "--min-pressure", "5 K"]);
+        yield return Changes("envelope", "--format", envelope, "--format", "json");
+        yield return Refused("envelope", "--format", [.. envelope, "--format", "csv"]);
+        yield return Changes("envelope", "--out", envelope, "--out", "{dir}/out.txt");
     }
 
     /// <summary>--eos, --alpha, --volume-shift, --format and (where offered) --units.</summary>
