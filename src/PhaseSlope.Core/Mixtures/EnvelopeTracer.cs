@@ -115,6 +115,7 @@ public sealed class EnvelopeTracer
         private readonly Matrix<double> _jacobian;
         private readonly Vector<double> _residual;
         private int _evaluations;
+        private bool _labelled = true;
 
         public Run(EnvelopeTracer owner, IReadOnlyList<double> composition)
         {
@@ -184,6 +185,7 @@ public sealed class EnvelopeTracer
                 throw new ConvergenceException($"the bubble point at {Preconditions.Format(_options.StartPressure)} Pa converged to nearly equal phases (largest |ln K| {Preconditions.Format(Math.Abs(x[reference]))}); lower the start pressure", iterations, Math.Abs(x[reference]));
             }
 
+            _labelled = _z.Count(v => v > 0) == 1;
             double[] tangent = Sensitivity(LnP);
             double[] direction = Oriented(tangent, tangent[LnP] > 0 ? 1 : -1); // up in pressure
             points.Add(new Node(x, direction, false, iterations));
@@ -230,7 +232,8 @@ public sealed class EnvelopeTracer
                 }
 
                 bool side = guess[reference] * points[0].X[reference] < 0;
-                if (!Newton(guess, spec, target, side, out iterations))
+                var start = (double[])guess.Clone();
+                if (!Newton(guess, spec, target, side, out iterations) && !RetryLabelled(start, guess, spec, target, side, out iterations))
                 {
                     step *= 0.5;
                     if (step < _options.MinimumStep)
@@ -295,8 +298,8 @@ public sealed class EnvelopeTracer
                 Composition = _z,
                 Points = envelopePoints,
                 CriticalPoint = criticalPoint,
-                Cricondenbar = Extremum(points, LnP, LnT),
-                Cricondentherm = Extremum(points, LnT, LnP),
+                Cricondenbar = Extremum(points, LnP, LnT, reference),
+                Cricondentherm = Extremum(points, LnT, LnP, reference),
                 StopReason = stop,
                 Evaluations = _evaluations,
             };
@@ -372,16 +375,19 @@ public sealed class EnvelopeTracer
                 return false;
             }
 
-            // Far from the critical point the phases are labelled (feed liquid on the bubble side);
-            // near it, where a fixed-composition cubic can still have a spurious second root, each
-            // phase takes its root of lower Gibbs energy, which on the envelope is its own.
+            // On a stable envelope each phase is on its own root of lower Gibbs energy (were the
+            // other root lower, the feed would have a negative tangent-plane distance there), so
+            // both phases take their stable roots. Labels (feed liquid on the bubble side) are used
+            // for the first point, where Newton starts from Wilson's guess, and for a feed with one
+            // component present, whose incipient phase has the feed's composition; near the
+            // critical point (every |ln K| below 0.5) the stable roots are used in either case.
             double spread = 0;
             for (int i = 0; i < _n; i++)
             {
                 spread = Math.Max(spread, Math.Abs(x[i]));
             }
 
-            bool labelled = spread > LabelledSpread;
+            bool labelled = _labelled && spread > LabelledSpread;
             var feedRoot = !labelled ? MixtureRoot.Stable : swapped ? MixtureRoot.Vapour : MixtureRoot.Liquid;
             var incipientRoot = !labelled ? MixtureRoot.Stable : swapped ? MixtureRoot.Liquid : MixtureRoot.Vapour;
             try
@@ -421,6 +427,29 @@ public sealed class EnvelopeTracer
             }
 
             return true;
+        }
+
+        /// <summary>After a failure on stable roots, the same Newton from the same start on labelled
+        /// roots (feed liquid on the bubble side): far below a component's triple point, for
+        /// example, the stable-root choice can flip between iterations where the labels do not.</summary>
+        private bool RetryLabelled(double[] start, double[] x, int spec, double target, bool swapped, out int iterations)
+        {
+            iterations = 0;
+            if (_labelled)
+            {
+                return false;
+            }
+
+            Array.Copy(start, x, start.Length);
+            _labelled = true;
+            try
+            {
+                return Newton(x, spec, target, swapped, out iterations);
+            }
+            finally
+            {
+                _labelled = false;
+            }
         }
 
         /// <summary>Newton on the envelope equations with X_spec = target; X is updated in place.</summary>
@@ -509,23 +538,63 @@ public sealed class EnvelopeTracer
         /// interpolation of ln T and ln P in u = ln K_ref to u = 0, with dX/du = direction/direction_ref.</summary>
         private EnvelopeLandmark Critical(Node before, Node after, int reference)
         {
-            double u0 = before.X[reference], u1 = after.X[reference];
-            double Hermite(int k)
+            double s = (0 - before.X[reference]) / (after.X[reference] - before.X[reference]);
+            return new EnvelopeLandmark(Math.Exp(Hermite(before, after, LnT, reference, s)), Math.Exp(Hermite(before, after, LnP, reference, s)), EnvelopeBranch.Bubble);
+        }
+
+        /// <summary>Cubic Hermite interpolation of X_k between two points at the fraction s of the
+        /// way in the parameter X_param, with the slopes dX_k/dX_param from their directions.</summary>
+        private static double Hermite(Node a, Node b, int k, int param, double s)
+        {
+            var (p0, m0, p1, m1) = HermiteData(a, b, k, param);
+            double s2 = s * s, s3 = s2 * s;
+            return (2 * s3 - 3 * s2 + 1) * p0 + (s3 - 2 * s2 + s) * m0 + (-2 * s3 + 3 * s2) * p1 + (s3 - s2) * m1;
+        }
+
+        private static (double P0, double M0, double P1, double M1) HermiteData(Node a, Node b, int k, int param)
+        {
+            double h = b.X[param] - a.X[param];
+            return (a.X[k], a.Direction[k] / a.Direction[param] * h, b.X[k], b.Direction[k] / b.Direction[param] * h);
+        }
+
+        /// <summary>The maximum of X_of on the Hermite cubic between two points (parameter X_param):
+        /// the root in [0, 1] of its quadratic derivative with the larger value.</summary>
+        private EnvelopeLandmark? HermiteMaximum(Node a, Node b, int of, int param, int reference, double startSign)
+        {
+            var (p0, m0, p1, m1) = HermiteData(a, b, of, param);
+            double qa = 6 * p0 + 3 * m0 - 6 * p1 + 3 * m1, qb = -6 * p0 - 4 * m0 + 6 * p1 - 2 * m1, qc = m0;
+            var candidates = new List<double>();
+            if (Math.Abs(qa) < 1e-300)
             {
-                double h = u1 - u0, s = (0 - u0) / h;
-                double m0 = before.Direction[k] / before.Direction[reference] * h;
-                double m1 = after.Direction[k] / after.Direction[reference] * h;
-                double s2 = s * s, s3 = s2 * s;
-                return (2 * s3 - 3 * s2 + 1) * before.X[k] + (s3 - 2 * s2 + s) * m0 + (-2 * s3 + 3 * s2) * after.X[k] + (s3 - s2) * m1;
+                candidates.Add(-qc / qb);
+            }
+            else
+            {
+                double d = qb * qb - 4 * qa * qc;
+                if (d >= 0)
+                {
+                    double r = Math.Sqrt(d);
+                    candidates.Add((-qb + r) / (2 * qa));
+                    candidates.Add((-qb - r) / (2 * qa));
+                }
             }
 
-            return new EnvelopeLandmark(Math.Exp(Hermite(LnT)), Math.Exp(Hermite(LnP)), EnvelopeBranch.Bubble);
+            var inside = candidates.Where(c => c >= 0 && c <= 1).ToList();
+            if (inside.Count == 0)
+            {
+                return null;
+            }
+
+            double best = inside.MaxBy(c => Hermite(a, b, of, param, c));
+            double u = Hermite(a, b, reference, param, best);
+            var branch = u * startSign < 0 ? EnvelopeBranch.Dew : EnvelopeBranch.Bubble;
+            return new EnvelopeLandmark(Math.Exp(Hermite(a, b, LnT, param, best)), Math.Exp(Hermite(a, b, LnP, param, best)), branch);
         }
 
         /// <summary>The maximum of variable <paramref name="of"/> along the curve: between the two
         /// points where its rate changes sign (the bracket with the higher value), Brent on
         /// g(S) = dX_of/dX_along at converged points specified in <paramref name="along"/>.</summary>
-        private EnvelopeLandmark? Extremum(List<Node> points, int of, int along)
+        private EnvelopeLandmark? Extremum(List<Node> points, int of, int along, int reference)
         {
             int best = -1;
             for (int k = 0; k + 1 < points.Count; k++)
@@ -545,6 +614,13 @@ public sealed class EnvelopeTracer
             var a = points[best];
             var b = points[best + 1];
             bool side = a.Swapped;
+            if (a.Swapped != b.Swapped)
+            {
+                // The maximum lies between the two points that straddle the critical point, where a
+                // point at given T or P is not unique: interpolate in ln K as for the critical point.
+                return HermiteMaximum(a, b, of, reference, reference, points[0].X[reference]);
+            }
+
             var x = new double[_size];
             double Rate(double s)
             {
@@ -574,10 +650,10 @@ public sealed class EnvelopeTracer
             }
             catch (ConvergenceException)
             {
-                // fall through: report the better of the two bracketing points is not "located"
+                // Newton failed inside the bracket: interpolate instead (below).
             }
 
-            return null;
+            return HermiteMaximum(a, b, of, along, reference, points[0].X[reference]);
         }
     }
 

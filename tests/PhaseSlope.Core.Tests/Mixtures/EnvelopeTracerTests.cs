@@ -50,16 +50,24 @@ public sealed class EnvelopeTracerTests
         { GasNames, GasComposition },
     };
 
+    public static TheoryData<string[], double[]> AllFeeds()
+    {
+        var all = Feeds();
+        all.Add(["propane", "n-butane"], [0.5, 0.5]); // close-boiling: both extrema lie beside the critical point
+        return all;
+    }
+
     [Theory]
-    [MemberData(nameof(Feeds))]
+    [MemberData(nameof(AllFeeds))]
     public void CriticalPoint_EqualsHeidemannKhalil(string[] names, double[] composition)
     {
         // Two independent routes to the same point of the same model: the crossing of ln K through
         // zero, interpolated (cubic Hermite in ln K) between points at ln K = ±0.02, and the
         // Heidemann–Khalil criteria solved to 1e-12. The Hermite error is of order
-        // (Δ ln K)⁴·f''''/384 with Δ ln K = 0.04, a few 1e-7 for the curvatures met here
-        // (measured: ≤ 3e-7 in P, ≤ 5e-8 in T); 1e-5 relative leaves room and still fails for any
-        // wrong criterion or crossing (those miss by percent).
+        // (Δ ln K)⁴·f''''/384 with Δ ln K = 0.04, 1e-7 to 1e-6 for the curvatures met here
+        // (measured: ≤ 2.2e-6 in P and ≤ 2.4e-7 in T, the largest for the close-boiling pair, whose
+        // ln K are small everywhere); 1e-5 relative leaves room and still fails for any wrong
+        // criterion or crossing (those miss by percent).
         var model = Mixture(names);
         var envelope = new EnvelopeTracer(model).Trace(composition);
         Assert.Equal(EnvelopeStop.EndPressure, envelope.StopReason);
@@ -93,6 +101,26 @@ public sealed class EnvelopeTracerTests
         AssertClose.Relative(therm.Temperature, highestT, 1e-4, "cricondentherm against the densest trace");
         var critical = envelope.CriticalPoint!.Value;
         Assert.True(bar.Pressure >= critical.Pressure && therm.Temperature >= critical.Temperature, "the critical point lies inside the box of the extrema");
+    }
+
+    [Fact]
+    public void CloseBoiling_ExtremaBesideTheCriticalPoint()
+    {
+        // Propane + n-butane (equimolar): the envelope is a narrow loop and both extrema lie between
+        // the last bubble and the first dew point (ln K = ±0.02), where they are interpolated (cubic
+        // Hermite in ln K, as the critical point). They are the highest pressure and temperature of
+        // the envelope (no traced point above, beyond the 1e-9 Newton tolerance), above the critical
+        // point, and within the gap: less than 1 % above the critical pressure and temperature (the
+        // straddling points lie 0.4 % below in pressure).
+        var model = Mixture("propane", "n-butane");
+        var envelope = new EnvelopeTracer(model).Trace([0.5, 0.5]);
+        var critical = envelope.CriticalPoint!.Value;
+        var bar = envelope.Cricondenbar!.Value;
+        var therm = envelope.Cricondentherm!.Value;
+        Assert.True(envelope.Points.All(p => p.Pressure <= bar.Pressure * (1 + 1e-9)), "a traced point above the cricondenbar");
+        Assert.True(envelope.Points.All(p => p.Temperature <= therm.Temperature * (1 + 1e-9)), "a traced point above the cricondentherm");
+        AssertClose.InRange(critical.Pressure, critical.Pressure * 1.01, bar.Pressure, "cricondenbar pressure");
+        AssertClose.InRange(critical.Temperature, critical.Temperature * 1.01, therm.Temperature, "cricondentherm temperature");
     }
 
     [Fact]
