@@ -13,7 +13,7 @@ internal static class MixtureWriter
 {
     /// <summary>The note on an assumed zero k_ij.</summary>
     public const string AssumedZeroNote =
-        "a pair marked 'assumed 0' has no given or published k_ij; 0 can be far from the fitted value (CO2 and N2 with hydrocarbons take about 0.03-0.13), "
+        "a pair marked 'assumed zero' has no given or published k_ij; 0 can be far from the fitted value (CO2 and N2 with hydrocarbons take about 0.03-0.13), "
         + "so give one with --kij or in a mixture file";
 
     /// <summary>The note on the pseudo-critical constants.</summary>
