@@ -66,6 +66,9 @@ internal sealed class MixtureOptions
         command.Options.Add(Kij);
         command.Options.Add(Common.Eos);
         command.Options.Add(Common.Alpha);
+        // Each command owns its CommonOptions instance, so this description is the mixture commands' own.
+        Common.VolumeShift.Description = "Volume translation c of each component (v = v_eos - c): fluid (default: each fluid file's own volume_shift_pr/srk, else none), "
+            + "none, or peneloux (the published correlation for pr or srk, per component); it shifts densities only";
         command.Options.Add(Common.VolumeShift);
     }
 

@@ -50,6 +50,11 @@ internal static class MixtureResolver
                 throw new UsageException($"--kij: {problem}");
             }
 
+            if (!Mixture.IsAcceptedInteraction(value))
+            {
+                throw new UsageException($"--kij: k_ij of {first}, {second} is {value.ToString("G10", System.Globalization.CultureInfo.InvariantCulture)}; {Mixture.InteractionRange}");
+            }
+
             parsed.Add((text.Trim(), first, second, value));
         }
 
@@ -75,7 +80,14 @@ internal static class MixtureResolver
             throw new UsageException("--mass-fractions: applies to a MIXTURE written NAME=FRACTION,...; a mixture file states its basis on its 'basis' line");
         }
 
-        var resolved = list ? FromList(argument, massFractions) : FromFile(argument.Trim());
+        string text = argument.Trim();
+        bool pathLike = text.Contains('/') || text.Contains('\\') || text.EndsWith(MixtureFile.Extension, StringComparison.OrdinalIgnoreCase);
+        if (!list && !pathLike && !File.Exists(text))
+        {
+            throw new UsageException($"MIXTURE: '{text}' is neither NAME=FRACTION,NAME=FRACTION,... (e.g. {text}=1 for one component) nor an existing mixture file");
+        }
+
+        var resolved = list ? FromList(argument, massFractions) : FromFile(text);
         return kij.Count == 0 ? resolved : resolved with { Mixture = ApplyKij(resolved.Mixture, kij) };
     }
 
