@@ -199,6 +199,7 @@ public class BadInputCatalogueTests
         { ["mixture", "methane=0.5,ethane=0.5", "--kij", "methane,propane=0.1"], ExitCodes.Usage, "--kij 'methane,propane=0.1': 'propane' is not a component of the mixture (components: methane, ethane)" },
         { ["mixture", "methane=1", "--volume-shift", "1 cm3/mol"], ExitCodes.Usage, "--volume-shift: a mixture takes fluid, none or peneloux" },
         { ["mixture", "methane=1", "--format", "csv"], ExitCodes.Usage, "--format: mixture writes table or json" },
+        { ["mixture", "methane=0.5,n-butane=0.5", "--alpha", "mathias-copeman"], ExitCodes.OutOfRange, "no Mathias-Copeman parameters for n-butane with Peng-Robinson" },
         { ["mixture", "{dir}/blend.mixture", "--mass-fractions"], ExitCodes.Usage, "--mass-fractions: applies to a MIXTURE written NAME=FRACTION" },
         { ["mixture", "{dir}/no-such.mixture"], ExitCodes.Fluid, "no-such.mixture: mixture file not found" },
         { ["mixture", "methane"], ExitCodes.Usage, "MIXTURE: 'methane' is neither NAME=FRACTION,NAME=FRACTION,... (e.g. methane=1" },

@@ -11,7 +11,8 @@ namespace PhaseSlope.Cli.Commands;
 /// <param name="Name">The mixture file's name line, or null.</param>
 /// <param name="Origin">The mixture file's path, or <see cref="MixtureResolver.CommandLineOrigin"/>.</param>
 /// <param name="Model">--eos, --alpha and --volume-shift (a mixture's volume shift is none, fluid or peneloux).</param>
-internal sealed record MixtureInput(Mixture Mixture, string? Name, string Origin, ModelChoice Model)
+/// <param name="Remarks">The mixture file's remarks line, or null.</param>
+internal sealed record MixtureInput(Mixture Mixture, string? Name, string Origin, ModelChoice Model, string? Remarks = null)
 {
     /// <summary>The k_ij of every pair for the chosen model, with their sources.</summary>
     public InteractionMatrix Interactions => Mixture.Interactions(Model.Kind);
@@ -87,6 +88,6 @@ internal sealed class MixtureOptions
 
         var kij = MixtureResolver.ParseKij(parse.GetValue(Kij) ?? []);
         var resolved = MixtureResolver.Resolve(parse.GetValue(Mixture) ?? "", parse.GetValue(MassFractions), kij);
-        return new MixtureInput(resolved.Mixture, resolved.Name, resolved.Origin, model);
+        return new MixtureInput(resolved.Mixture, resolved.Name, resolved.Origin, model, resolved.Remarks);
     }
 }

@@ -11,7 +11,8 @@ namespace PhaseSlope.Cli.Commands;
 /// <param name="Mixture">The mixture with every --kij applied.</param>
 /// <param name="Name">The file's <c>name</c> line, or null (a command-line mixture has none).</param>
 /// <param name="Origin">The mixture file's path, or <see cref="MixtureResolver.CommandLineOrigin"/>.</param>
-internal sealed record ResolvedMixture(Mixture Mixture, string? Name, string Origin);
+/// <param name="Remarks">The file's <c>remarks</c> line, or null.</param>
+internal sealed record ResolvedMixture(Mixture Mixture, string? Name, string Origin, string? Remarks = null);
 
 /// <summary>Turns a MIXTURE argument into a <see cref="Mixture"/>: either
 /// <c>NAME=FRACTION,NAME=FRACTION,…</c> (each NAME as FLUID accepts it: a catalog name or synonym,
@@ -169,8 +170,8 @@ internal static class MixtureResolver
         try
         {
             using var stream = Input.BoundedInput.Open(path, Input.BoundedInput.FluidFileLimit);
-            var (mixture, name) = MixtureFile.Read(stream, path, Component);
-            return new ResolvedMixture(mixture, name, path);
+            var (mixture, name, remarks) = MixtureFile.Read(stream, path, Component);
+            return new ResolvedMixture(mixture, name, path, remarks);
         }
         catch (Exception ex) when (ex is FileNotFoundException or DirectoryNotFoundException)
         {

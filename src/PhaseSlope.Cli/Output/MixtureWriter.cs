@@ -33,6 +33,11 @@ internal static class MixtureWriter
         var mass = mixture.MassFractions;
         var text = new StringBuilder();
         text.Append(CultureInfo.InvariantCulture, $"mixture: {input.DisplayName} ({OriginText(input)})\n");
+        if (input.Remarks is not null)
+        {
+            text.Append(CultureInfo.InvariantCulture, $"remarks: {input.Remarks}\n");
+        }
+
         text.Append(CultureInfo.InvariantCulture, $"model: {input.Model.Kind.Title()}, van der Waals one-fluid mixing\n\n");
         var components = new TextTable(
             ["component", "mole fraction", "mass fraction", "M (g/mol)", "Tc (K)", "Pc (kPa)", "omega", "c (cm3/mol)", "alpha"],
@@ -103,6 +108,15 @@ internal static class MixtureWriter
             }
 
             json.WriteString("origin", OriginText(input));
+            if (input.Remarks is null)
+            {
+                json.WriteNull("remarks");
+            }
+            else
+            {
+                json.WriteString("remarks", input.Remarks);
+            }
+
             json.WriteString("eos", input.Model.Kind.Id());
             json.WriteString("model", $"{input.Model.Kind.Title()}, van der Waals one-fluid mixing");
             json.WriteStartArray("components");

@@ -76,10 +76,11 @@ public sealed class MixtureCommandTests
         File.WriteAllText(folder.File("gas.mixture"),
             "# invented test blend\nformat phaseslope-mixture 1\nname test gas (invented)\n"
             + "component methane = 0.7\ncomponent fluids/my-gas.fluid = 0.3\n"
-            + "kij methane, my-gas = 0.02 | invented for this test\n");
+            + "kij methane, my-gas = 0.02 | invented for this test\nremarks made up for the test\n");
 
         var root = RunJson("mixture", folder.File("gas.mixture"), "--format", "json");
         Assert.Equal("test gas (invented)", root.GetProperty("name").GetString());
+        Assert.Equal("made up for the test", root.GetProperty("remarks").GetString());
         var pair = Pair(root, "methane", "my-gas");
         Assert.Equal((0.02, "invented for this test"), (pair.GetProperty("kij").GetDouble(), pair.GetProperty("source").GetString()));
 
