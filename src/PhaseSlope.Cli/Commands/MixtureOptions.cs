@@ -19,8 +19,7 @@ internal sealed record MixtureInput(Mixture Mixture, string? Name, string Origin
 
     /// <summary>The cubic mixture model: each component's model built as the pure commands build
     /// it (same --eos, --alpha; --volume-shift per component), with <see cref="Interactions"/>.</summary>
-    public CubicMixtureModel CreateModel()
-        => Mixture.CreateModel(Model.Kind, Model.Alpha, fluid => CommonOptions.ParseShift(Model.VolumeShiftText, Model.Kind, fluid));
+    public CubicMixtureModel CreateModel() => Model.ForMixture(Mixture);
 
     /// <summary>A name for messages and titles: the file's name, else the components joined by '+'.</summary>
     public string DisplayName => Name ?? string.Join(" + ", Mixture.Components.Select(c => c.Name));
@@ -80,8 +79,7 @@ internal sealed class MixtureOptions
     public MixtureInput Bind(ParseResult parse)
     {
         var model = Common.BindModel(parse);
-        string shift = model.VolumeShiftText.Trim().ToLowerInvariant();
-        if (shift is not ("fluid" or "none" or "peneloux"))
+        if (!model.ShiftSuitsMixture)
         {
             throw new UsageException($"--volume-shift: a mixture takes fluid, none or peneloux (each component's own), not one volume '{model.VolumeShiftText}' for every component");
         }
