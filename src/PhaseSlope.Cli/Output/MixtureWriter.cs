@@ -82,7 +82,7 @@ internal static class MixtureWriter
         }
 
         text.Append('\n');
-        foreach (string note in Notes(input, interactions))
+        foreach (string note in Notes(interactions))
         {
             text.Append(CultureInfo.InvariantCulture, $"note: {note}\n");
         }
@@ -149,19 +149,7 @@ internal static class MixtureWriter
                 json.WriteNull("molar_mass_unavailable_reason");
             }
 
-            json.WriteStartArray("interaction_parameters");
-            foreach (var pair in interactions.Pairs)
-            {
-                json.WriteStartObject();
-                json.WriteString("first", mixture.Components[pair.First].Name);
-                json.WriteString("second", mixture.Components[pair.Second].Name);
-                json.WriteFinite("kij", pair.Value);
-                json.WriteString("origin", OriginName(pair.Origin));
-                json.WriteString("source", pair.Source);
-                json.WriteEndObject();
-            }
-
-            json.WriteEndArray();
+            WriteInteractions(json, mixture, interactions);
             json.WriteStartObject("pseudo_critical");
             json.WriteString("method", Mixture.KayRuleSource);
             json.WriteFinite("temperature_K", mixture.PseudoCriticalTemperature);
@@ -169,7 +157,7 @@ internal static class MixtureWriter
             json.WriteFinite("acentric_factor", mixture.PseudoAcentricFactor);
             json.WriteEndObject();
             json.WriteStartArray("notes");
-            foreach (string note in Notes(input, interactions))
+            foreach (string note in Notes(interactions))
             {
                 json.WriteStringValue(note);
             }
@@ -178,6 +166,45 @@ internal static class MixtureWriter
             json.WriteEndObject();
         });
     }
+
+    /// <summary>Writes <c>"interaction_parameters"</c>: one object per pair with <c>first</c>,
+    /// <c>second</c> (component names), <c>kij</c>, <c>origin</c> (given, published, assumed_zero)
+    /// and <c>source</c>; every mixture command's JSON names its k_ij this way.</summary>
+    public static void WriteInteractions(System.Text.Json.Utf8JsonWriter json, Mixture mixture, InteractionMatrix interactions)
+    {
+        json.WriteStartArray("interaction_parameters");
+        foreach (var pair in interactions.Pairs)
+        {
+            json.WriteStartObject();
+            json.WriteString("first", mixture.Components[pair.First].Name);
+            json.WriteString("second", mixture.Components[pair.Second].Name);
+            json.WriteFinite("kij", pair.Value);
+            json.WriteString("origin", OriginName(pair.Origin));
+            json.WriteString("source", pair.Source);
+            json.WriteEndObject();
+        }
+
+        json.WriteEndArray();
+    }
+
+    /// <summary>The notes every mixture result carries about its k_ij: an assumed zero, and the
+    /// recalled published values (none when neither applies).</summary>
+    public static IEnumerable<string> InteractionNotes(InteractionMatrix interactions)
+    {
+        if (interactions.AnyAssumedZero)
+        {
+            yield return AssumedZeroNote;
+        }
+
+        if (interactions.Pairs.Any(p => p.Origin == InteractionOrigin.Published))
+        {
+            yield return RecalledNote;
+        }
+    }
+
+    /// <summary>The note on published k_ij values, all recalled.</summary>
+    public const string RecalledNote =
+        "published k_ij values are recalled ('from memory' in their source); check them against the publication before relying on them for design";
 
     /// <summary>The JSON spelling of an origin: given, published or assumed_zero.</summary>
     public static string OriginName(InteractionOrigin origin) => origin switch
@@ -190,18 +217,5 @@ internal static class MixtureWriter
     private static string MassBasisNote(MixtureInput input)
         => $"no molar mass for {string.Join(", ", input.Mixture.Components.Where(c => c.MolarMass is null).Select(c => c.Name))}";
 
-    private static IEnumerable<string> Notes(MixtureInput input, InteractionMatrix interactions)
-    {
-        if (interactions.AnyAssumedZero)
-        {
-            yield return AssumedZeroNote;
-        }
-
-        if (interactions.Pairs.Any(p => p.Origin == InteractionOrigin.Published))
-        {
-            yield return "published k_ij values are recalled ('from memory' in their source); check them against the publication before relying on them for design";
-        }
-
-        yield return PseudoCriticalNote;
-    }
+    private static IEnumerable<string> Notes(InteractionMatrix interactions) => [.. InteractionNotes(interactions), PseudoCriticalNote];
 }
