@@ -226,14 +226,13 @@ internal sealed class PlotOptions
         }
 
         var modelChoice = Common.BindModel(parse);
-        string shift = modelChoice.VolumeShiftText.Trim().ToLowerInvariant();
-        if (shift is not ("fluid" or "none" or "peneloux"))
+        if (!modelChoice.ShiftSuitsMixture)
         {
             throw new UsageException($"--volume-shift: a mixture takes fluid, none or peneloux (each component's own), not one volume '{modelChoice.VolumeShiftText}' for every component");
         }
 
         var resolved = MixtureResolver.Resolve(parse.GetValue(Fluids) ?? "", false, []);
-        var input = new MixtureInput(resolved.Mixture, resolved.Name, resolved.Origin, modelChoice);
+        var input = new MixtureInput(resolved.Mixture, resolved.Name, resolved.Origin, modelChoice, resolved.Remarks);
         if (input.Mixture.Count < 2)
         {
             throw new UsageException($"MIXTURE: a phase envelope needs at least two components, got only '{input.Mixture.Components[0].Name}' (a pure fluid's saturation line is the p-t diagram)");

@@ -37,9 +37,9 @@ internal static class EnvelopeWriter
                 : "the trace reached its point limit before coming back to the minimum pressure; the rest of the envelope is missing";
         }
 
-        if (input.Interactions.AnyAssumedZero)
+        foreach (string note in MixtureWriter.InteractionNotes(input.Interactions))
         {
-            yield return MixtureWriter.AssumedZeroNote;
+            yield return note;
         }
 
         yield return "points are the feed at its bubble (liquid) or dew (vapour) point with the incipient phase; the critical point is where the two branches meet";
@@ -136,6 +136,7 @@ internal static class EnvelopeWriter
             json.WriteString("eos", input.Model.Kind.Id());
             json.WriteString("model", $"{input.Model.Kind.Title()}, van der Waals one-fluid mixing");
             Fractions(json, "mole_fractions", feed);
+            MixtureWriter.WriteInteractions(json, input.Mixture, input.Interactions);
             json.WriteStartObject("points");
             Branch(json, "bubble", envelope.BubblePoints, bubble: true);
             Branch(json, "dew", envelope.DewPoints, bubble: false);
