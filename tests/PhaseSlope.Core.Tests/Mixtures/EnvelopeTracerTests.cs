@@ -203,6 +203,23 @@ public sealed class EnvelopeTracerTests
     }
 
     [Fact]
+    public void PointLimit_StopsWithItsReasonAndNoLandmarks()
+    {
+        // Ten points of the equimolar methane-ethane bubble line (about 1 MPa at most): the trace
+        // says why it stopped, and gives no critical point, cricondenbar or cricondentherm that
+        // it did not reach (null, not a value from the traced part).
+        var model = Mixture("methane", "ethane");
+        var envelope = new EnvelopeTracer(model, EnvelopeOptions.Default with { MaximumPoints = 10 }).Trace([0.5, 0.5]);
+        Assert.Equal(EnvelopeStop.PointLimit, envelope.StopReason);
+        Assert.Equal(10, envelope.Points.Count);
+        Assert.All(envelope.Points, p => Assert.Equal(EnvelopeBranch.Bubble, p.Branch));
+        Assert.Null(envelope.CriticalPoint);
+        Assert.Null(envelope.Cricondenbar);
+        Assert.Null(envelope.Cricondentherm);
+        Assert.True(envelope.Points.Zip(envelope.Points.Skip(1)).All(p => p.Second.Pressure > p.First.Pressure), "the bubble line rises from the start pressure");
+    }
+
+    [Fact]
     public void BadInput_IsRefused()
     {
         var model = Mixture("methane", "ethane");
