@@ -256,30 +256,39 @@ public sealed partial class MixtureEquilibrium
         return Newton(temperature, pressure, z, state, stability, substitution, accelerated, evaluations);
     }
 
-    /// <summary>Newton's method on the vapour amounts from a substitution state inside (0, 1).</summary>
+    /// <summary>Newton's method on the amounts of the smaller phase (the other is z minus them, so a
+    /// vanishing phase keeps its precision) from a substitution state inside (0, 1).</summary>
     private MixtureFlashResult Newton(double temperature, double pressure, double[] z, SplitState start, StabilityResult stability,
         int substitution, int accelerated, int evaluations)
     {
         int n = z.Length;
-        var v = new double[n];
-        var l = new double[n];
+        // a: the primary (smaller) phase, b = z − a. swapped: a is the liquid.
+        bool swapped = start.Beta > 0.5;
+        var a = new double[n];
+        var b = new double[n];
         for (int i = 0; i < n; i++)
         {
-            v[i] = start.Beta * start.Y[i];
-            l[i] = z[i] - v[i];
+            a[i] = swapped ? (1 - start.Beta) * start.X[i] : start.Beta * start.Y[i];
+            b[i] = z[i] - a[i];
         }
 
-        var x = new double[n];
-        var y = new double[n];
-        var lnPhiL = new double[n];
-        var lnPhiV = new double[n];
-        var dNL = new double[n * n];
-        var dNV = new double[n * n];
+        var xa = new double[n];
+        var xb = new double[n];
+        var lnPhiA = new double[n];
+        var lnPhiB = new double[n];
+        var dNA = new double[n * n];
+        var dNB = new double[n * n];
         var gradient = new double[n];
-        var nextV = new double[n];
-        var nextL = new double[n];
-        double densityL = 0, densityV = 0;
-        double gibbs = EvaluateAmounts(temperature, pressure, v, l, x, y, lnPhiL, lnPhiV, dNL, dNV, ref densityL, ref densityV, ref evaluations);
+        var nextA = new double[n];
+        var nextB = new double[n];
+        var nxa = new double[n];
+        var nxb = new double[n];
+        var nLnPhiA = new double[n];
+        var nLnPhiB = new double[n];
+        var nDNA = new double[n * n];
+        var nDNB = new double[n * n];
+        double densityA = 0, densityB = 0;
+        double gibbs = EvaluateAmounts(temperature, pressure, a, b, xa, xb, lnPhiA, lnPhiB, dNA, dNB, ref densityA, ref densityB, ref evaluations);
         int newton = 0;
         double residual;
         while (true)
@@ -287,7 +296,7 @@ public sealed partial class MixtureEquilibrium
             residual = 0;
             for (int i = 0; i < n; i++)
             {
-                gradient[i] = Math.Log(y[i]) + lnPhiV[i] - Math.Log(x[i]) - lnPhiL[i];
+                gradient[i] = Math.Log(xa[i]) + lnPhiA[i] - Math.Log(xb[i]) - lnPhiB[i];
                 residual = Math.Max(residual, Math.Abs(gradient[i]));
             }
 
@@ -303,7 +312,7 @@ public sealed partial class MixtureEquilibrium
                     newton, residual);
             }
 
-            double vapour = v.Sum(), liquid = l.Sum();
+            double totalA = a.Sum(), totalB = b.Sum();
             var h = Matrix<double>.Build.Dense(n, n);
             var rhs = Vector<double>.Build.Dense(n);
             for (int i = 0; i < n; i++)
@@ -311,10 +320,10 @@ public sealed partial class MixtureEquilibrium
                 rhs[i] = -gradient[i];
                 for (int j = 0; j < n; j++)
                 {
-                    h[i, j] = (dNV[i * n + j] - 1) / vapour + (dNL[i * n + j] - 1) / liquid;
+                    h[i, j] = (dNA[i * n + j] - 1) / totalA + (dNB[i * n + j] - 1) / totalB;
                 }
 
-                h[i, i] += 1 / v[i] + 1 / l[i];
+                h[i, i] += 1 / a[i] + 1 / b[i];
             }
 
             var step = h.LU().Solve(rhs);
@@ -323,21 +332,45 @@ public sealed partial class MixtureEquilibrium
             for (int i = 0; i < n; i++)
             {
                 descent += step[i] * gradient[i];
-                // Keep 0 < v_i < z_i: go at most 90 % of the way to either bound.
-                if (v[i] + step[i] <= 0)
+                // Keep 0 < a_i < z_i: go at most 90 % of the way to either bound.
+                if (a[i] + step[i] <= 0)
                 {
-                    scale = Math.Min(scale, -0.9 * v[i] / step[i]);
+                    scale = Math.Min(scale, -0.9 * a[i] / step[i]);
                 }
-                else if (l[i] - step[i] <= 0)
+                else if (b[i] - step[i] <= 0)
                 {
-                    scale = Math.Min(scale, 0.9 * l[i] / step[i]);
+                    scale = Math.Min(scale, 0.9 * b[i] / step[i]);
                 }
             }
 
             if (!(descent < 0))
             {
-                throw new ConvergenceException($"the flash at {Preconditions.Format(temperature)} K and {Preconditions.Format(pressure)} Pa met a Gibbs-energy Hessian that is not positive definite (Newton step uphill)",
-                    newton, residual);
+                // The Hessian is not positive definite here (far from the minimum): one
+                // successive-substitution step instead, which lowers G (Michelsen 1982, Part II).
+                var lnK = new double[n];
+                for (int i = 0; i < n; i++)
+                {
+                    lnK[i] = swapped ? lnPhiA[i] - lnPhiB[i] : lnPhiB[i] - lnPhiA[i];
+                }
+
+                var fallback = new SplitState(n);
+                Evaluate(temperature, pressure, z, lnK, fallback);
+                evaluations += 2;
+                substitution++;
+                if (!fallback.Inside)
+                {
+                    throw new ConvergenceException($"the flash at {Preconditions.Format(temperature)} K and {Preconditions.Format(pressure)} Pa left the two-phase range while converging",
+                        substitution + newton, residual);
+                }
+
+                for (int i = 0; i < n; i++)
+                {
+                    a[i] = swapped ? (1 - fallback.Beta) * fallback.X[i] : fallback.Beta * fallback.Y[i];
+                    b[i] = z[i] - a[i];
+                }
+
+                gibbs = EvaluateAmounts(temperature, pressure, a, b, xa, xb, lnPhiA, lnPhiB, dNA, dNB, ref densityA, ref densityB, ref evaluations);
+                continue;
             }
 
             bool moved = false;
@@ -345,31 +378,25 @@ public sealed partial class MixtureEquilibrium
             {
                 for (int i = 0; i < n; i++)
                 {
-                    nextV[i] = v[i] + scale * step[i];
-                    nextL[i] = z[i] - nextV[i];
+                    nextA[i] = a[i] + scale * step[i];
+                    nextB[i] = z[i] - nextA[i];
                 }
 
-                double dl = densityL, dv = densityV;
-                var nx = new double[n];
-                var ny = new double[n];
-                var nLnPhiL = new double[n];
-                var nLnPhiV = new double[n];
-                var nDNL = new double[n * n];
-                var nDNV = new double[n * n];
-                double nextGibbs = EvaluateAmounts(temperature, pressure, nextV, nextL, nx, ny, nLnPhiL, nLnPhiV, nDNL, nDNV, ref dl, ref dv, ref evaluations);
+                double da = densityA, db = densityB;
+                double nextGibbs = EvaluateAmounts(temperature, pressure, nextA, nextB, nxa, nxb, nLnPhiA, nLnPhiB, nDNA, nDNB, ref da, ref db, ref evaluations);
                 // Accept a step that does not raise G beyond rounding (1e-14 relative of |G|).
                 if (nextGibbs <= gibbs + 1e-14 * Math.Max(1, Math.Abs(gibbs)))
                 {
                     gibbs = nextGibbs;
-                    nextV.CopyTo(v, 0);
-                    nextL.CopyTo(l, 0);
-                    nx.CopyTo(x, 0);
-                    ny.CopyTo(y, 0);
-                    nLnPhiL.CopyTo(lnPhiL, 0);
-                    nLnPhiV.CopyTo(lnPhiV, 0);
-                    nDNL.CopyTo(dNL, 0);
-                    nDNV.CopyTo(dNV, 0);
-                    (densityL, densityV) = (dl, dv);
+                    (a, nextA) = (nextA, a);
+                    (b, nextB) = (nextB, b);
+                    (xa, nxa) = (nxa, xa);
+                    (xb, nxb) = (nxb, xb);
+                    (lnPhiA, nLnPhiA) = (nLnPhiA, lnPhiA);
+                    (lnPhiB, nLnPhiB) = (nLnPhiB, lnPhiB);
+                    (dNA, nDNA) = (nDNA, dNA);
+                    (dNB, nDNB) = (nDNB, dNB);
+                    (densityA, densityB) = (da, db);
                     moved = true;
                     break;
                 }
@@ -381,6 +408,8 @@ public sealed partial class MixtureEquilibrium
                 break;
             }
         }
+
+        var (l, v, densityL, densityV) = swapped ? (a, b, densityA, densityB) : (b, a, densityB, densityA);
 
         // The single phase's Gibbs energy, to confirm the split is the stable state.
         var lnPhiFeed = new double[n];
@@ -400,13 +429,14 @@ public sealed partial class MixtureEquilibrium
                 substitution + newton, residual);
         }
 
-        double beta = v.Sum() / (v.Sum() + l.Sum());
+        double vapourTotal = v.Sum(), liquidTotal = l.Sum();
+        double beta = vapourTotal / (vapourTotal + liquidTotal);
         var liquidX = Normalised(l);
         var vapourY = Normalised(v);
         if (densityV > densityL)
         {
             // The phase called vapour while iterating is the denser one: swap the labels.
-            (liquidX, vapourY, densityL, densityV, beta) = (vapourY, liquidX, densityV, densityL, 1 - beta);
+            (liquidX, vapourY, densityL, densityV, beta) = (vapourY, liquidX, densityV, densityL, liquidTotal / (vapourTotal + liquidTotal));
         }
 
         var liquidPhase = Phase(temperature, pressure, liquidX, densityL, ref evaluations);
@@ -415,30 +445,30 @@ public sealed partial class MixtureEquilibrium
             new MixtureSolverReport(substitution, newton, evaluations, residual, accelerated));
     }
 
-    /// <summary>Fugacities and their amount derivatives of both phases at amounts (v, l); returns G/RT
-    /// per mole of feed.</summary>
-    private double EvaluateAmounts(double temperature, double pressure, double[] v, double[] l, double[] x, double[] y,
-        double[] lnPhiL, double[] lnPhiV, double[] dNL, double[] dNV, ref double densityL, ref double densityV, ref int evaluations)
+    /// <summary>Fugacities and their amount derivatives of two phases of amounts a and b (mole
+    /// fractions into xa and xb); returns G/RT per mole of feed, +∞ where an amount is not positive.</summary>
+    private double EvaluateAmounts(double temperature, double pressure, double[] a, double[] b, double[] xa, double[] xb,
+        double[] lnPhiA, double[] lnPhiB, double[] dNA, double[] dNB, ref double densityA, ref double densityB, ref int evaluations)
     {
-        int n = v.Length;
-        double vapour = v.Sum(), liquid = l.Sum();
+        int n = a.Length;
+        double totalA = a.Sum(), totalB = b.Sum();
         for (int i = 0; i < n; i++)
         {
-            x[i] = l[i] / liquid;
-            y[i] = v[i] / vapour;
-            if (!(x[i] > 0) || !(y[i] > 0))
+            xa[i] = a[i] / totalA;
+            xb[i] = b[i] / totalB;
+            if (!(xa[i] > 0) || !(xb[i] > 0))
             {
                 return double.PositiveInfinity;
             }
         }
 
-        densityL = Model.LnFugacityCoefficientsAtPressure(temperature, pressure, x, MixtureRoot.Stable, lnPhiL, dN: dNL);
-        densityV = Model.LnFugacityCoefficientsAtPressure(temperature, pressure, y, MixtureRoot.Stable, lnPhiV, dN: dNV);
+        densityA = Model.LnFugacityCoefficientsAtPressure(temperature, pressure, xa, MixtureRoot.Stable, lnPhiA, dN: dNA);
+        densityB = Model.LnFugacityCoefficientsAtPressure(temperature, pressure, xb, MixtureRoot.Stable, lnPhiB, dN: dNB);
         evaluations += 2;
         double g = 0;
         for (int i = 0; i < n; i++)
         {
-            g += l[i] * (Math.Log(x[i]) + lnPhiL[i]) + v[i] * (Math.Log(y[i]) + lnPhiV[i]);
+            g += a[i] * (Math.Log(xa[i]) + lnPhiA[i]) + b[i] * (Math.Log(xb[i]) + lnPhiB[i]);
         }
 
         return g;
