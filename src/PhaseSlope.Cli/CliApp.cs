@@ -45,6 +45,7 @@ internal static class CliApp
         root.Subcommands.Add(AuditCommand.Create(io));
         root.Subcommands.Add(PlotCommand.Create(io));
         root.Subcommands.Add(FluidsCommand.Create(io));
+        root.Subcommands.Add(MixtureCommand.Create(io));
         return root;
     }
 }

@@ -181,6 +181,29 @@ public class BadInputCatalogueTests
         { ["fluids", "list", "--units", "furlongs"], ExitCodes.Usage, "--units: unknown unit system 'furlongs' (use si or engineeri" },
         { ["coexist", "propane", "-T", "300", "--diagnostics", "yes"], ExitCodes.Usage, "Unrecognized command or argument 'yes'." },        { ["fit", "{dir}/ok.csv", "--form", "antoine", "--temperature-unit", "degC"], ExitCodes.DataFile, "the header gives the unit 'K' but --temperature-unit says 'degC'" },
         { ["fit", "{dir}/ok.csv", "--form", "antoine", "--pressure-unit", "bar"], ExitCodes.DataFile, "the header gives the unit 'kPa' but --pressure-unit says 'bar'" },
+        { ["mixture", "methane=0.5,metane=0.5"], ExitCodes.Fluid, "MIXTURE: component 2: unknown fluid 'metane'; did you mean 'methane'" },
+        { ["mixture", "methane=0.5,CH4=0.5"], ExitCodes.Usage, "MIXTURE: component 'methane' is given twice (components 1 and 2)" },
+        { ["mixture", "methane=1.2,ethane=-0.2"], ExitCodes.Usage, "MIXTURE: the mole fraction of 'ethane' is -0.2; a fraction must" },
+        { ["mixture", "methane=0.5,ethane=0.4"], ExitCodes.Usage, "MIXTURE: the mole fractions of methane (0.5), ethane (0.4) sum to 0.9, not 1" },
+        { ["mixture", "r-32=0.23,r-125=0.25,r-134a=0.5", "--mass-fractions"], ExitCodes.Usage, "MIXTURE: the mass fractions of r-32 (0.23), r-125 (0.25), r-134a (0.5) sum to 0.98" },
+        { ["mixture", "methane=0.5,ethane"], ExitCodes.Usage, "MIXTURE: item 2: 'ethane' is not NAME=FRACTION" },
+        { ["mixture", "methane=0.5,ethane=half"], ExitCodes.Usage, "MIXTURE: item 2: the fraction of 'ethane' is 'half', not a number" },
+        { ["mixture", "methane=0.5,,ethane=0.5"], ExitCodes.Usage, "MIXTURE: item 2 is empty" },
+        { ["mixture", "inline:tc=300K,pc=4MPa,omega=0.1=0.5,methane=0.5"], ExitCodes.Usage, "MIXTURE: an inline fluid cannot be a component" },
+        { ["mixture", "methane=0.5,{dir}/nomass.fluid=0.5", "--mass-fractions"], ExitCodes.Fluid, "MIXTURE: --mass-fractions: fluid 'nomass' gives no molar mass" },
+        { ["mixture", "methane=0.5,ethane=0.5", "--kij", "methane,ethane=abc"], ExitCodes.Usage, "--kij: the k_ij of 'methane,ethane' is 'abc', not a number" },
+        { ["mixture", "methane=0.5,ethane=0.5", "--kij", "methane;ethane=0.1"], ExitCodes.Usage, "--kij: 'methane;ethane=0.1' is not A,B=VALUE" },
+        { ["mixture", "methane=0.5,ethane=0.5", "--kij", "methane,ethane=1.5"], ExitCodes.Usage, "--kij: k_ij of methane, ethane is 1.5; it must be between -1 and 1" },
+        { ["mixture", "methane=0.5,ethane=0.5", "--kij", "methane,ethane=0.1", "--kij", "C2H6,CH4=0.2"], ExitCodes.Usage, "--kij: k_ij of methane, ethane is given twice" },
+        { ["mixture", "methane=0.5,ethane=0.5", "--kij", "methane,methane=0.1"], ExitCodes.Usage, "--kij: interaction parameter 1 is for components 1 and 1" },
+        { ["mixture", "methane=0.5,ethane=0.5", "--kij", "methane,propane=0.1"], ExitCodes.Usage, "--kij 'methane,propane=0.1': 'propane' is not a component of the mixture (components: methane, ethane)" },
+        { ["mixture", "methane=1", "--volume-shift", "1 cm3/mol"], ExitCodes.Usage, "--volume-shift: a mixture takes fluid, none or peneloux" },
+        { ["mixture", "methane=1", "--format", "csv"], ExitCodes.Usage, "--format: mixture writes table or json" },
+        { ["mixture", "{dir}/blend.mixture", "--mass-fractions"], ExitCodes.Usage, "--mass-fractions: applies to a MIXTURE written NAME=FRACTION" },
+        { ["mixture", "{dir}/no-such.mixture"], ExitCodes.Fluid, "no-such.mixture: mixture file not found" },
+        { ["mixture", "{dir}/sum.mixture"], ExitCodes.Fluid, "sum.mixture:3: field 'component': the mole fractions of methane (0.5), ethane (0.4) sum to 0.9" },
+        { ["mixture", "{dir}/badfluid.mixture"], ExitCodes.Fluid, "badfluid.mixture:2: field 'component': component 'hugemass.fluid': " },
+        { ["mixture", "/dev/zero"], ExitCodes.Fluid, "cannot read mixture file: a line is longer than the limit" },
     };
 
     [Theory]
@@ -214,6 +237,10 @@ public class BadInputCatalogueTests
         File.WriteAllText(folder.File("hugemass.fluid"), ReplaceLine(propane, "molar_mass", "molar_mass 1e308 g/mol | invented for a test"));
         File.WriteAllText(folder.File("lowomega.fluid"), ReplaceLine(ReplaceLine(ReplaceLine(propane, "acentric_factor", "acentric_factor -0.5 | invented for a test"),
             "name", "name lowomega"), "synonyms", ""));
+        File.WriteAllText(folder.File("nomass.fluid"), ReplaceLine(ReplaceLine(ReplaceLine(propane, "molar_mass", ""), "name", "name nomass"), "synonyms", ""));
+        File.WriteAllText(folder.File("blend.mixture"), "format phaseslope-mixture 1\ncomponent methane = 0.5\ncomponent ethane = 0.5\n");
+        File.WriteAllText(folder.File("sum.mixture"), "format phaseslope-mixture 1\ncomponent methane = 0.5\ncomponent ethane = 0.4\n");
+        File.WriteAllText(folder.File("badfluid.mixture"), "format phaseslope-mixture 1\ncomponent hugemass.fluid = 1\n");
     }
 
     private static string ReplaceLine(string text, string key, string line)

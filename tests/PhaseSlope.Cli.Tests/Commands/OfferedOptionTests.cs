@@ -345,6 +345,25 @@ public sealed class OfferedOptionTests : IDisposable
         yield return Changes("fluids estimate", "--format", estimate, "--format", "json");
         yield return Refused("fluids estimate", "--format", [.. estimate, "--format", "xml"]);
         yield return Changes("fluids estimate", "--out", estimate, "--out", "{dir}/out.fluid");
+
+        // mixture: methane + CO2 has a published Peng-Robinson k_ij, so --eos srk changes it to an
+        // assumed zero; --alpha and --volume-shift change each component's model constants.
+        string[] mixture = ["mixture", "methane=0.8,carbon dioxide=0.2"];
+        yield return Changes("mixture", "--mass-fractions", mixture, "--mass-fractions");
+        yield return Refused("mixture", "--mass-fractions", ["mixture", "{dir}/blend.mixture", "--mass-fractions"]);
+        yield return Changes("mixture", "--kij", mixture, "--kij", "methane,CO2=0.1");
+        yield return Differs("mixture", "--kij", [.. mixture, "--kij", "methane,CO2=0.1"], [.. mixture, "--kij", "CO2,methane=0.12"]);
+        yield return Refused("mixture", "--kij", [.. mixture, "--kij", "methane,propane=0.1"]);
+        yield return Refused("mixture", "--kij", [.. mixture, "--kij", "methane=0.1"]);
+        yield return Changes("mixture", "--eos", mixture, "--eos", "srk");
+        yield return Refused("mixture", "--eos", [.. mixture, "--eos", "nonesuch"]);
+        yield return Changes("mixture", "--alpha", mixture, "--alpha", "twu");
+        yield return Changes("mixture", "--alpha", mixture, "--alpha", "mathias-copeman");
+        yield return Changes("mixture", "--volume-shift", mixture, "--volume-shift", "peneloux");
+        yield return Refused("mixture", "--volume-shift", [.. mixture, "--volume-shift", "1 cm3/mol"]);
+        yield return Changes("mixture", "--format", mixture, "--format", "json");
+        yield return Refused("mixture", "--format", [.. mixture, "--format", "csv"]);
+        yield return Changes("mixture", "--out", mixture, "--out", "{dir}/out.txt");
     }
 
     /// <summary>--eos, --alpha, --volume-shift, --format and (where offered) --units.</summary>
