@@ -384,8 +384,10 @@ public sealed partial class MixtureEquilibrium
 
                 double da = densityA, db = densityB;
                 double nextGibbs = EvaluateAmounts(temperature, pressure, nextA, nextB, nxa, nxb, nLnPhiA, nLnPhiB, nDNA, nDNB, ref da, ref db, ref evaluations);
-                // Accept a step that does not raise G beyond rounding (1e-14 relative of |G|).
-                if (nextGibbs <= gibbs + 1e-14 * Math.Max(1, Math.Abs(gibbs)))
+                // Accept a step that does not raise G beyond rounding (1e-14 relative of |G|); once the
+                // gradient is below 1e-8 Newton is in its quadratic range and the change of G (of the
+                // order of the gradient squared) is below G's rounding, so the full step is taken.
+                if (double.IsFinite(nextGibbs) && (residual < 1e-8 || nextGibbs <= gibbs + 1e-14 * Math.Max(1, Math.Abs(gibbs))))
                 {
                     gibbs = nextGibbs;
                     (a, nextA) = (nextA, a);

@@ -211,7 +211,9 @@ public static class StabilityAnalysis
                 evaluations++;
                 model.LnFugacityCoefficientsAtPressure(temperature, pressure, trialW, MixtureRoot.Stable, trialLnPhi, dN: dN);
                 double trialTm = Distance(trialW, trialLnW, trialLnPhi, d);
-                if (double.IsFinite(trialTm) && trialTm <= tm + 1e-13 * Math.Max(1, Math.Abs(tm)))
+                // Near the stationary point (gradient below 1e-8) the change of tm is below its
+                // rounding, so the full Newton step is taken.
+                if (double.IsFinite(trialTm) && (largest < 1e-8 || trialTm <= tm + 1e-13 * Math.Max(1, Math.Abs(tm))))
                 {
                     tm = trialTm;
                     trialW.CopyTo(w, 0);
