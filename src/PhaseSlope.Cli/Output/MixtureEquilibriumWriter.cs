@@ -144,10 +144,11 @@ internal static class MixtureEquilibriumWriter
 
     private static void Footer(Utf8JsonWriter json, MixtureInput input, string? caloricMissing)
     {
+        MixtureWriter.WriteInteractions(json, input.Mixture, input.Interactions);
         json.WriteStartArray("notes");
-        if (input.Interactions.AnyAssumedZero)
+        foreach (string note in MixtureWriter.InteractionNotes(input.Interactions))
         {
-            json.WriteStringValue(MixtureWriter.AssumedZeroNote);
+            json.WriteStringValue(note);
         }
 
         json.WriteStringValue(caloricMissing is null ? ConventionNote : "enthalpy and entropy are null: a component has no ideal-gas heat capacity cp°");
@@ -214,9 +215,9 @@ internal static class MixtureEquilibriumWriter
 
     private static void AppendNotes(StringBuilder text, MixtureInput input, bool caloricMissing)
     {
-        if (input.Interactions.AnyAssumedZero)
+        foreach (string note in MixtureWriter.InteractionNotes(input.Interactions))
         {
-            text.Append(CultureInfo.InvariantCulture, $"note: {MixtureWriter.AssumedZeroNote}\n");
+            text.Append(CultureInfo.InvariantCulture, $"note: {note}\n");
         }
 
         text.Append(CultureInfo.InvariantCulture, $"note: {(caloricMissing ? "h and s are n/a: a component has no ideal-gas heat capacity cp°" : ConventionNote)}\n");

@@ -365,8 +365,8 @@ public sealed class OfferedOptionTests : IDisposable
         yield return Refused("mixture", "--format", [.. mixture, "--format", "csv"]);
         yield return Changes("mixture", "--out", mixture, "--out", "{dir}/out.txt");
 
-        // bubble, dew and flash: methane + propane (a published Peng-Robinson k_ij, so --kij and
-        // --eos change the numbers); --volume-shift changes the phase densities.
+        // bubble, dew and flash: methane + propane (no k_ij in the table, 0 assumed, so --kij
+        // changes the numbers); --volume-shift changes the phase densities.
         foreach (string point in new[] { "bubble", "dew" })
         {
             string[] atT = [point, "methane=0.2,propane=0.8", "-T", "250"];
