@@ -41,7 +41,8 @@ public sealed partial class MixtureEquilibrium
     /// point), Newton's method on the vapour amounts v_i minimises the Gibbs energy with the exact
     /// Hessian H_ij = (δ_ij/y_i − 1 + Φ^V_ij)/V + (δ_ij/x_i − 1 + Φ^L_ij)/L (Φ = n·∂ln φ_i/∂n_j), the
     /// step shortened to keep every amount positive and halved while G rises. Converged when
-    /// max_i |ln f_i^V − ln f_i^L| &lt; 1e-11.</para>
+    /// max_i |ln f_i^V − ln f_i^L| &lt; 1e-11, or below 1e-8 when a Newton step no longer halves it
+    /// (the rounding floor where ln φ is large; the residual reached is in the report).</para>
     /// <para>The liquid amounts are l = z − v, so the material balance closes to rounding. The split is
     /// checked to have a lower Gibbs energy than the single phase
     /// (<see cref="MixtureFlashResult.GibbsEnergyChange"/> &lt; 0).</para>
@@ -293,7 +294,7 @@ public sealed partial class MixtureEquilibrium
         double densityA = 0, densityB = 0;
         double gibbs = EvaluateAmounts(temperature, pressure, a, b, xa, xb, lnPhiA, lnPhiB, dNA, dNB, ref densityA, ref densityB, ref evaluations);
         int newton = 0;
-        double residual;
+        double residual, previousResidual = double.PositiveInfinity;
         while (true)
         {
             residual = 0;
@@ -304,10 +305,15 @@ public sealed partial class MixtureEquilibrium
             }
 
             // 1e-11 in ln f: the fugacities agree to 1e-11 relative, a few hundred roundings of ln φ.
-            if (residual < 1e-11)
+            // Where ln φ is large (a light gas dissolved in a cold liquid) rounding can hold the
+            // residual above that: below 1e-8, a Newton step that no longer halves it has reached
+            // the rounding floor, and the residual reached is reported.
+            if (residual < 1e-11 || (residual < 1e-8 && residual > 0.5 * previousResidual))
             {
                 break;
             }
+
+            previousResidual = residual;
 
             if (++newton > MaxFlashNewtonSteps)
             {
@@ -350,29 +356,7 @@ public sealed partial class MixtureEquilibrium
             {
                 // The Hessian is not positive definite here (far from the minimum): one
                 // successive-substitution step instead, which lowers G (Michelsen 1982, Part II).
-                var lnK = new double[n];
-                for (int i = 0; i < n; i++)
-                {
-                    lnK[i] = swapped ? lnPhiA[i] - lnPhiB[i] : lnPhiB[i] - lnPhiA[i];
-                }
-
-                var fallback = new SplitState(n);
-                Evaluate(temperature, pressure, z, lnK, fallback);
-                evaluations += 2;
-                substitution++;
-                if (!fallback.Inside)
-                {
-                    throw new ConvergenceException($"the flash at {Preconditions.Format(temperature)} K and {Preconditions.Format(pressure)} Pa left the two-phase range while converging",
-                        substitution + newton, residual);
-                }
-
-                for (int i = 0; i < n; i++)
-                {
-                    a[i] = swapped ? (1 - fallback.Beta) * fallback.X[i] : fallback.Beta * fallback.Y[i];
-                    b[i] = z[i] - a[i];
-                }
-
-                gibbs = EvaluateAmounts(temperature, pressure, a, b, xa, xb, lnPhiA, lnPhiB, dNA, dNB, ref densityA, ref densityB, ref evaluations);
+                gibbs = SubstitutionStep(temperature, pressure, z, swapped, a, b, xa, xb, lnPhiA, lnPhiB, dNA, dNB, ref densityA, ref densityB, ref evaluations, residual, ref substitution, newton);
                 continue;
             }
 
@@ -409,8 +393,14 @@ public sealed partial class MixtureEquilibrium
 
             if (!moved)
             {
-                // G no longer decreases at rounding: the minimum is as converged as rounding allows.
-                break;
+                if (residual < 1e-8)
+                {
+                    // G no longer decreases at rounding: the minimum is as converged as rounding allows.
+                    break;
+                }
+
+                // No descent along the Newton direction far from the minimum: a substitution step.
+                gibbs = SubstitutionStep(temperature, pressure, z, swapped, a, b, xa, xb, lnPhiA, lnPhiB, dNA, dNB, ref densityA, ref densityB, ref evaluations, residual, ref substitution, newton);
             }
         }
 
@@ -448,6 +438,38 @@ public sealed partial class MixtureEquilibrium
         var vapourPhase = Phase(temperature, pressure, vapourY, densityV, ref evaluations);
         return new MixtureFlashResult(temperature, pressure, z, beta, liquidPhase, vapourPhase, stability, change,
             new MixtureSolverReport(substitution, newton, evaluations, residual, accelerated));
+    }
+
+    /// <summary>One successive-substitution step from the current amounts (K from the current
+    /// fugacity coefficients, β from Rachford–Rice), written back into a and b and evaluated.</summary>
+    private double SubstitutionStep(double temperature, double pressure, double[] z, bool swapped, double[] a, double[] b, double[] xa, double[] xb,
+        double[] lnPhiA, double[] lnPhiB, double[] dNA, double[] dNB, ref double densityA, ref double densityB, ref int evaluations,
+        double residual, ref int substitution, int newton)
+    {
+        int n = z.Length;
+        var lnK = new double[n];
+        for (int i = 0; i < n; i++)
+        {
+            lnK[i] = swapped ? lnPhiA[i] - lnPhiB[i] : lnPhiB[i] - lnPhiA[i];
+        }
+
+        var fallback = new SplitState(n);
+        Evaluate(temperature, pressure, z, lnK, fallback);
+        evaluations += 2;
+        substitution++;
+        if (!fallback.Inside)
+        {
+            throw new ConvergenceException($"the flash at {Preconditions.Format(temperature)} K and {Preconditions.Format(pressure)} Pa left the two-phase range while converging",
+                substitution + newton, residual);
+        }
+
+        for (int i = 0; i < n; i++)
+        {
+            a[i] = swapped ? (1 - fallback.Beta) * fallback.X[i] : fallback.Beta * fallback.Y[i];
+            b[i] = z[i] - a[i];
+        }
+
+        return EvaluateAmounts(temperature, pressure, a, b, xa, xb, lnPhiA, lnPhiB, dNA, dNB, ref densityA, ref densityB, ref evaluations);
     }
 
     /// <summary>Fugacities and their amount derivatives of two phases of amounts a and b (mole
