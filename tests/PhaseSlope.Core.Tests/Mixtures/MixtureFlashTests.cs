@@ -19,12 +19,17 @@ public sealed class MixtureFlashTests
         { "natural-gas", 220.0, 4.0e6 },
         { "natural-gas", 250.0, 2.0e6 },
         { "r-407c", 233.0, 101325 },
+        // Near the mixture critical point of equimolar methane/propane (x and y of methane 0.49 and
+        // 0.69, densities within a factor of 2): Newton on the amounts finishes what substitution
+        // starts.
+        { "methane-propane-equimolar", 300.0, 8.75e6 },
     };
 
     private static (MixtureEquilibrium Engine, double[] Feed) System(string name) => name switch
     {
         "methane-propane" => (Engine(0.02, "methane", "propane"), [0.2, 0.8]),
         "natural-gas" => (Engine(0, NaturalGasNames), NaturalGas),
+        "methane-propane-equimolar" => (Engine(0.02, "methane", "propane"), [0.5, 0.5]),
         _ => R407C(),
     };
 
