@@ -47,6 +47,9 @@ internal static class CliApp
         root.Subcommands.Add(FluidsCommand.Create(io));
         root.Subcommands.Add(MixtureCommand.Create(io));
         root.Subcommands.Add(EnvelopeCommand.Create(io));
+        root.Subcommands.Add(SaturationCommand.Create(io, Core.Mixtures.MixtureSaturationKind.Bubble));
+        root.Subcommands.Add(SaturationCommand.Create(io, Core.Mixtures.MixtureSaturationKind.Dew));
+        root.Subcommands.Add(FlashCommand.Create(io));
         return root;
     }
 }

@@ -29,6 +29,11 @@ public class CultureInvarianceTests
         // Fractions and k_ij are read with a '.' decimal point whatever the culture.
         rows.Add(["mixture", "R-32=0.23,R-125=0.25,R-134a=0.52", "--mass-fractions", "--kij", "R-32,R-125=0.01"]);
         rows.Add(["mixture", "methane=0.85,CO2=0.1,N2=0.05", "--format", "json"]);
+        // Mixture equilibrium: tables and JSON of a bubble point with its glide and of a split.
+        rows.Add(["bubble", "R-32=0.23,R-125=0.25,R-134a=0.52", "--mass-fractions", "--pressure", "1 atm"]);
+        rows.Add(["dew", "R-32=0.23,R-125=0.25,R-134a=0.52", "--mass-fractions", "--pressure", "1 atm", "--format", "json"]);
+        rows.Add(["flash", "methane=0.2,propane=0.8", "--temperature", "250 K", "--pressure", "1 MPa"]);
+        rows.Add(["flash", "methane=0.2,propane=0.8", "--pressure", "1 MPa", "--enthalpy", "-15 kJ/mol", "--format", "json"]);
         return rows;
     }
 

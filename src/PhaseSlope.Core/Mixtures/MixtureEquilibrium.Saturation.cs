@@ -127,12 +127,22 @@ public sealed partial class MixtureEquilibrium
         {
             if (newton > MaxSaturationNewtonSteps)
             {
-                throw new ConvergenceException($"the {(bubble ? "bubble" : "dew")} point at {Describe(atTemperature, value)} did not converge in {MaxSaturationNewtonSteps} Newton steps",
+                throw new ConvergenceException(
+                    $"no {(bubble ? "bubble" : "dew")} point found at {Describe(atTemperature, value)}: Newton did not converge in {MaxSaturationNewtonSteps} steps "
+                    + $"(there may be none at this {(atTemperature ? "temperature" : "pressure")}: outside the phase envelope, or close to the mixture's critical point)",
                     MaxSaturationNewtonSteps, residual);
             }
 
-            temperature = Math.Exp(lnT);
-            pressure = Math.Exp(lnP);
+            // The given variable stays exactly as given; only the unknown moves.
+            if (atTemperature)
+            {
+                pressure = Math.Exp(lnP);
+            }
+            else
+            {
+                temperature = Math.Exp(lnT);
+            }
+
             double sum = Incipient(bubble, z, lnK, w);
             (densityL, densityV) = Fugacities(bubble, temperature, pressure, z, w, feedRoot, incipientRoot, lnPhiL, lnPhiV, dN,
                 atTemperature ? default : dTL, atTemperature ? default : dTV, atTemperature ? dPL : default, atTemperature ? dPV : default);
@@ -177,15 +187,16 @@ public sealed partial class MixtureEquilibrium
                 lnT += scale * step[n];
             }
 
-            // Trivial solution: both phases of one composition and density. A pure component has
-            // equal compositions but distinct densities, so it passes.
+            // Trivial solution: both phases of one composition (to 1e-4) and density (to 0.1 %). A
+            // pure component has equal compositions but distinct densities, so it passes; a genuine
+            // point this close to the critical point is not resolved either.
             double apart = 0;
             for (int i = 0; i < n; i++)
             {
                 apart = Math.Max(apart, Math.Abs(w[i] / sum - z[i]));
             }
 
-            if (apart < 1e-6 && Math.Abs(densityL - densityV) < 1e-4 * Math.Max(densityL, densityV))
+            if (apart < 1e-4 && Math.Abs(densityL - densityV) < 1e-3 * Math.Max(densityL, densityV))
             {
                 throw new ConvergenceException(
                     $"no {(bubble ? "bubble" : "dew")} point at {Describe(atTemperature, value)}: the iteration reached the trivial solution (liquid and vapour identical), as it does outside the phase envelope",
@@ -196,8 +207,15 @@ public sealed partial class MixtureEquilibrium
             // hold to 1e-11 (a few hundred roundings of ln φ).
             if (largest < 1e-12 && residual < 1e-11)
             {
-                temperature = Math.Exp(lnT);
-                pressure = Math.Exp(lnP);
+                if (atTemperature)
+                {
+                    pressure = Math.Exp(lnP);
+                }
+                else
+                {
+                    temperature = Math.Exp(lnT);
+                }
+
                 double total = Incipient(bubble, z, lnK, w);
                 var incipient = new double[n];
                 for (int i = 0; i < n; i++)

@@ -12,7 +12,9 @@ namespace PhaseSlope.Core.Mixtures;
 /// <param name="Vapour">The vapour phase (the feed itself for a single vapour-like phase; null for
 /// a single liquid-like phase).</param>
 /// <param name="Stability">The tangent-plane-distance test of the feed that decided single phase
-/// or split.</param>
+/// or split. For a split it stopped at the first trial phase with negative tm (proof enough, and
+/// the start of the split), so its trial is not a stationary point; <see cref="MixtureEquilibrium.Stability"/>
+/// converges both trials.</param>
 /// <param name="GibbsEnergyChange">For a split, (G_split − G_feed)/(RT) per mole of feed, negative
 /// (the split is the stable state); 0 for a single phase.</param>
 /// <param name="Report">Iterations and model evaluations.</param>

@@ -70,6 +70,13 @@ public static class RachfordRice
         {
             double g = G(feed, k, beta, out double dg);
             residual = Math.Abs(g);
+            double newton = -g / dg;
+            // Converged when the Newton correction reaches rounding of β (g is then zero to rounding).
+            if (g == 0 || Math.Abs(newton) <= 1e-15 * Math.Max(1, Math.Abs(beta)))
+            {
+                return new RachfordRiceSolution(beta, beta > 0 && beta < 1, iteration, residual);
+            }
+
             if (g > 0)
             {
                 lo = beta;
@@ -79,21 +86,18 @@ public static class RachfordRice
                 hi = beta;
             }
 
-            double next = beta - g / dg;
+            double next = beta + newton;
             if (!(next > lo && next < hi))
             {
                 next = 0.5 * (lo + hi);
             }
 
-            double step = Math.Abs(next - beta);
-            beta = next;
-            // Converged when the step reaches rounding of β, or g vanishes: the bracket (lo, hi) can
-            // shrink no further.
-            if (g == 0 || step <= 1e-15 * Math.Max(1, Math.Abs(beta)) || hi - lo <= 1e-15 * Math.Max(1, Math.Abs(beta)))
+            if (hi - lo <= 1e-15 * Math.Max(1, Math.Abs(beta)))
             {
-                residual = Math.Abs(G(feed, k, beta, out _));
-                return new RachfordRiceSolution(beta, beta > 0 && beta < 1, iteration, residual);
+                return new RachfordRiceSolution(next, next > 0 && next < 1, iteration, Math.Abs(G(feed, k, next, out _)));
             }
+
+            beta = next;
         }
 
         throw new ConvergenceException($"the Rachford-Rice equation did not converge in {maxIterations} iterations", maxIterations, residual);

@@ -33,6 +33,15 @@ public static class StabilityAnalysis
     /// <exception cref="InvalidInputException">A component is absent from the feed, or the mixture
     /// has no density root at (T, P).</exception>
     public static StabilityResult Test(CubicMixtureModel model, double temperature, double pressure, ReadOnlySpan<double> feed, ReadOnlySpan<double> lnK)
+        => Test(model, temperature, pressure, feed, lnK, stopWhenUnstable: false);
+
+    /// <summary>Tests the feed; with <paramref name="stopWhenUnstable"/> a trial stops as soon as its
+    /// tm is below −<see cref="NegativeDistance"/> (which already proves the feed unstable; the
+    /// flash only needs the trial as a start), and the liquid-like trial is skipped when the
+    /// vapour-like one has proved it. The trial returned is then not a stationary point.</summary>
+    /// <exception cref="InvalidInputException">A component is absent from the feed, or the mixture
+    /// has no density root at (T, P).</exception>
+    public static StabilityResult Test(CubicMixtureModel model, double temperature, double pressure, ReadOnlySpan<double> feed, ReadOnlySpan<double> lnK, bool stopWhenUnstable)
     {
         ArgumentNullException.ThrowIfNull(model);
         Preconditions.Positive(temperature, "temperature");
@@ -47,8 +56,10 @@ public static class StabilityAnalysis
             d[i] += Math.Log(feed[i]);
         }
 
-        var vapour = Trial(model, temperature, pressure, feed, d, lnK, +1, ref evaluations);
-        var liquid = Trial(model, temperature, pressure, feed, d, lnK, -1, ref evaluations);
+        var vapour = Trial(model, temperature, pressure, feed, d, lnK, +1, stopWhenUnstable, ref evaluations);
+        var liquid = stopWhenUnstable && !vapour.IsTrivial && vapour.TangentPlaneDistance < -NegativeDistance
+            ? new StabilityTrial(feed.ToArray(), 0, true, 0)
+            : Trial(model, temperature, pressure, feed, d, lnK, -1, stopWhenUnstable, ref evaluations);
         bool stable = (vapour.IsTrivial || vapour.TangentPlaneDistance >= -NegativeDistance)
                       && (liquid.IsTrivial || liquid.TangentPlaneDistance >= -NegativeDistance);
         return new StabilityResult(stable, vapour, liquid, evaluations);
@@ -75,7 +86,7 @@ public static class StabilityAnalysis
     }
 
     private static StabilityTrial Trial(CubicMixtureModel model, double temperature, double pressure, ReadOnlySpan<double> feed, double[] d,
-        ReadOnlySpan<double> lnK, int side, ref int evaluations)
+        ReadOnlySpan<double> lnK, int side, bool stopWhenUnstable, ref int evaluations)
     {
         int n = feed.Length;
         var lnW = new double[n];
@@ -97,6 +108,13 @@ public static class StabilityAnalysis
             iterations++;
             evaluations++;
             model.LnFugacityCoefficientsAtPressure(temperature, pressure, w, MixtureRoot.Stable, lnPhi);
+            if (stopWhenUnstable && step > 0 && Distance(w, lnW, lnPhi, d) is double now && now < -NegativeDistance)
+            {
+                // tm(W) < 0 at the current W (its ln φ just evaluated) proves instability.
+                double total = w.Sum();
+                return new StabilityTrial(w.Select(x => x / total).ToArray(), now, false, iterations);
+            }
+
             double change = 0, distance = 0;
             for (int i = 0; i < n; i++)
             {
@@ -211,7 +229,9 @@ public static class StabilityAnalysis
                 evaluations++;
                 model.LnFugacityCoefficientsAtPressure(temperature, pressure, trialW, MixtureRoot.Stable, trialLnPhi, dN: dN);
                 double trialTm = Distance(trialW, trialLnW, trialLnPhi, d);
-                if (double.IsFinite(trialTm) && trialTm <= tm + 1e-13 * Math.Max(1, Math.Abs(tm)))
+                // Near the stationary point (gradient below 1e-8) the change of tm is below its
+                // rounding, so the full Newton step is taken.
+                if (double.IsFinite(trialTm) && (largest < 1e-8 || trialTm <= tm + 1e-13 * Math.Max(1, Math.Abs(tm))))
                 {
                     tm = trialTm;
                     trialW.CopyTo(w, 0);

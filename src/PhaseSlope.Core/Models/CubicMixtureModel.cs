@@ -101,6 +101,71 @@ public sealed class CubicMixtureModel : IResidualModel
     /// <summary>k_ij between components i and j.</summary>
     public double Interaction(int i, int j) => _kij[i * _components.Length + j];
 
+    /// <summary>The temperature-dependent pair terms at one temperature: a_ij = (1 − k_ij)√(a_i a_j)
+    /// and its first two T-derivatives. Immutable; the last one built is kept, so the many
+    /// evaluations of an equilibrium calculation at one temperature compute the alpha functions
+    /// and square roots once (reading and replacing the reference is atomic, so the model stays
+    /// safe to share between threads).</summary>
+    private sealed class PairTerms
+    {
+        public PairTerms(CubicMixtureModel model, double temperature)
+        {
+            var components = model._components;
+            int n = components.Length;
+            Temperature = temperature;
+            A = new double[n * n];
+            AT = new double[n * n];
+            ATT = new double[n * n];
+            Span<double> a = stackalloc double[n];
+            Span<double> la1 = stackalloc double[n];   // a_i'/a_i
+            Span<double> la2 = stackalloc double[n];   // a_i''/a_i − (a_i'/a_i)²
+            for (int i = 0; i < n; i++)
+            {
+                var alpha = components[i].Alpha.Evaluate(temperature);
+                a[i] = components[i].AttractionA * alpha.Value;
+                la1[i] = alpha.FirstDerivative / alpha.Value;
+                la2[i] = alpha.SecondDerivative / alpha.Value - la1[i] * la1[i];
+            }
+
+            for (int i = 0; i < n; i++)
+            {
+                for (int j = 0; j < n; j++)
+                {
+                    // a_ij = (1 − k_ij)√(a_i a_j); with s = √(a_i a_j): s'/s = (l_i + l_j)/2 and
+                    // s''/s = ((l_i + l_j)/2)² + (m_i + m_j)/2 (l = a'/a, m = a''/a − l²).
+                    double s = (1 - model._kij[i * n + j]) * Math.Sqrt(a[i] * a[j]);
+                    double l = 0.5 * (la1[i] + la1[j]);
+                    A[i * n + j] = s;
+                    AT[i * n + j] = s * l;
+                    ATT[i * n + j] = s * (l * l + 0.5 * (la2[i] + la2[j]));
+                }
+            }
+        }
+
+        public double Temperature { get; }
+
+        public double[] A { get; }
+
+        public double[] AT { get; }
+
+        public double[] ATT { get; }
+    }
+
+    private PairTerms? _pairTerms;
+
+    /// <summary>The pair terms at <paramref name="temperature"/>, reused when the last ones are at it.</summary>
+    private PairTerms Pairs(double temperature)
+    {
+        var terms = _pairTerms;
+        if (terms is null || terms.Temperature != temperature)
+        {
+            terms = new PairTerms(this, temperature);
+            _pairTerms = terms;
+        }
+
+        return terms;
+    }
+
     /// <summary>The mixed constants at a composition: Σx_i b_i, Σx_i c_i and a(T) = ΣΣ x_i x_j a_ij
     /// with its first two temperature derivatives.</summary>
     private (double B, double C, double A, double AT, double ATT) Mixed(double temperature, ReadOnlySpan<double> amounts, Span<double> ai = default, Span<double> aiT = default)
@@ -113,17 +178,11 @@ public sealed class CubicMixtureModel : IResidualModel
             total += x;
         }
 
-        Span<double> a = stackalloc double[n];
-        Span<double> la1 = stackalloc double[n];   // a_i'/a_i
-        Span<double> la2 = stackalloc double[n];   // a_i''/a_i − (a_i'/a_i)²
+        var pairs = Pairs(temperature);
         double b = 0, c = 0;
         for (int i = 0; i < n; i++)
         {
             var model = _components[i];
-            var alpha = model.Alpha.Evaluate(temperature);
-            a[i] = model.AttractionA * alpha.Value;
-            la1[i] = alpha.FirstDerivative / alpha.Value;
-            la2[i] = alpha.SecondDerivative / alpha.Value - la1[i] * la1[i];
             double x = amounts[i] / total;
             b += x * model.CovolumeB;
             c += x * model.VolumeShift;
@@ -133,23 +192,18 @@ public sealed class CubicMixtureModel : IResidualModel
         for (int i = 0; i < n; i++)
         {
             double xi = amounts[i] / total;
-            double sum = 0, sumT = 0;
+            double sum = 0, sumT = 0, sumTT = 0;
             for (int j = 0; j < n; j++)
             {
                 double xj = amounts[j] / total;
-                // a_ij = (1 − k_ij)√(a_i a_j); with s = √(a_i a_j): s'/s = (l_i + l_j)/2 and
-                // s''/s = ((l_i + l_j)/2)² + (m_i + m_j)/2 (l = a'/a, m = a''/a − l²).
-                double s = (1 - _kij[i * n + j]) * Math.Sqrt(a[i] * a[j]);
-                double l = 0.5 * (la1[i] + la1[j]);
-                double sT = s * l;
-                double sTT = s * (l * l + 0.5 * (la2[i] + la2[j]));
-                am += xi * xj * s;
-                amT += xi * xj * sT;
-                amTT += xi * xj * sTT;
-                sum += xj * s;
-                sumT += xj * sT;
+                sum += xj * pairs.A[i * n + j];
+                sumT += xj * pairs.AT[i * n + j];
+                sumTT += xj * pairs.ATT[i * n + j];
             }
 
+            am += xi * sum;
+            amT += xi * sumT;
+            amTT += xi * sumTT;
             if (!ai.IsEmpty)
             {
                 ai[i] = sum;    // Σ_j x_j a_ij
@@ -251,25 +305,16 @@ public sealed class CubicMixtureModel : IResidualModel
         return density;
     }
 
-    /// <summary>Of two roots, the one of lower residual Gibbs energy g_r/RT = Σ x_i ln φ_i.</summary>
+    /// <summary>Of two roots, the one of lower residual Gibbs energy g_r/RT = Σ x_i ln φ_i, which at
+    /// fixed composition is the one-fluid cubic's a_r/RT + Z − 1 − ln Z (the same number, from the
+    /// mixed constants without the per-component terms).</summary>
     private double StableRoot(double temperature, double pressure, ReadOnlySpan<double> amounts, ReadOnlySpan<double> roots)
     {
-        Span<double> lnPhi = stackalloc double[_components.Length];
-        return ResidualGibbs(temperature, roots[1], amounts, lnPhi) < ResidualGibbs(temperature, roots[0], amounts, lnPhi) ? roots[1] : roots[0];
-    }
-
-    /// <summary>g_r/RT = Σ x_i ln φ_i at (T, ρ, n).</summary>
-    private double ResidualGibbs(double temperature, double density, ReadOnlySpan<double> amounts, Span<double> lnPhi)
-    {
-        Fugacities(temperature, density, amounts, lnPhi, default, default, default);
-        double total = 0, g = 0;
-        for (int i = 0; i < amounts.Length; i++)
-        {
-            total += amounts[i];
-            g += amounts[i] * lnPhi[i];
-        }
-
-        return g / total;
+        var (b, c, a, aT, aTT) = Mixed(temperature, amounts);
+        double shift = c / b;
+        double ResidualGibbs(double density)
+            => CubicModel.Helmholtz(temperature, density, b, b - c, _delta1 + shift, _delta2 + shift, a / b, aT / b, aTT / b).LnFugacityCoefficient(pressure);
+        return ResidualGibbs(roots[1]) < ResidualGibbs(roots[0]) ? roots[1] : roots[0];
     }
 
     /// <summary>The closed-form fugacities and derivatives at (T, ρ, n); see the remarks.</summary>
@@ -312,6 +357,7 @@ public sealed class CubicMixtureModel : IResidualModel
         double z = pressure * v / (n * rt);
         double lnZ = Math.Log(z);
 
+        double lnFree = Math.Log(free), lnV = Math.Log(v);
         Span<double> fi = stackalloc double[nc];
         Span<double> pi = stackalloc double[nc];            // (∂P/∂n_i)_{T,V}
         for (int i = 0; i < nc; i++)
@@ -321,7 +367,7 @@ public sealed class CubicMixtureModel : IResidualModel
             double di = 2 * n * ai[i];                      // D_i = 2 Σ_j n_j a_ij
             double e = ci - bi;
             double inner = hV * ci + hB * bi;
-            fi[i] = -Math.Log(free) - n * e / free + Math.Log(v) - (di * h + d * inner) / rt;
+            fi[i] = -lnFree - n * e / free + lnV - (di * h + d * inner) / rt;
             double fiV = -1 / free + n * e / (free * free) + 1 / v - (di * hV + d * (hVV * ci + hVB * bi)) / rt;
             pi[i] = rt / v - rt * fiV;
             lnPhi[i] = fi[i] - lnZ;
@@ -344,12 +390,7 @@ public sealed class CubicMixtureModel : IResidualModel
             return;
         }
 
-        Span<double> pure = stackalloc double[nc];  // a_i(T)
-        for (int i = 0; i < nc; i++)
-        {
-            pure[i] = _components[i].AttractionA * _components[i].Alpha.Evaluate(temperature).Value;
-        }
-
+        var pairs = Pairs(temperature);
         for (int i = 0; i < nc; i++)
         {
             var mi = _components[i];
@@ -358,7 +399,7 @@ public sealed class CubicMixtureModel : IResidualModel
             {
                 var mj = _components[j];
                 double bj = mj.CovolumeB, cj = mj.VolumeShift, ej = cj - bj, dj = 2 * n * ai[j];
-                double aij = (1 - _kij[i * nc + j]) * Math.Sqrt(pure[i] * pure[j]);
+                double aij = pairs.A[i * nc + j];
                 double fij = -ej / free - ei / free + n * ei * ej / (free * free)
                     - (2 * aij * h + di * (hV * cj + hB * bj) + dj * (hV * ci + hB * bi)
                        + d * (ci * cj * hVV + (ci * bj + cj * bi) * hVB + bi * bj * hBB)) / rt;

@@ -382,6 +382,45 @@ public sealed class OfferedOptionTests : IDisposable
         yield return Changes("envelope", "--format", envelope, "--format", "json");
         yield return Refused("envelope", "--format", [.. envelope, "--format", "csv"]);
         yield return Changes("envelope", "--out", envelope, "--out", "{dir}/out.txt");
+        // bubble, dew and flash: methane + propane (no k_ij in the table, 0 assumed, so --kij
+        // changes the numbers); --volume-shift changes the phase densities.
+        foreach (string point in new[] { "bubble", "dew" })
+        {
+            string[] atT = [point, "methane=0.2,propane=0.8", "-T", "250"];
+            yield return Differs(point, "--temperature", atT, [point, "methane=0.2,propane=0.8", "-T", "260"]);
+            yield return Differs(point, "--pressure", atT, [point, "methane=0.2,propane=0.8", "-P", "1MPa"]);
+            yield return Refused(point, "--pressure", [.. atT, "-P", "1MPa"]);
+            yield return Refused(point, "--temperature", [point, "methane=0.2,propane=0.8"]);
+            yield return Changes(point, "--mass-fractions", atT, "--mass-fractions");
+            yield return Changes(point, "--kij", atT, "--kij", "methane,propane=0.05");
+            yield return Changes(point, "--eos", atT, "--eos", "srk");
+            yield return Changes(point, "--alpha", atT, "--alpha", "twu");
+            yield return Changes(point, "--volume-shift", atT, "--volume-shift", "peneloux");
+            yield return Refused(point, "--volume-shift", [.. atT, "--volume-shift", "1 cm3/mol"]);
+            yield return Changes(point, "--format", atT, "--format", "json");
+            yield return Refused(point, "--format", [.. atT, "--format", "csv"]);
+            yield return Changes(point, "--out", atT, "--out", "{dir}/out.txt");
+        }
+
+        string[] flash = ["flash", "methane=0.2,propane=0.8", "-T", "250", "-P", "1MPa"];
+        string[] flashH = ["flash", "methane=0.2,propane=0.8", "-P", "1MPa", "--enthalpy", "-15000 J/mol"];
+        string[] flashS = ["flash", "methane=0.2,propane=0.8", "-P", "1MPa", "--entropy", "-70 J/(mol*K)"];
+        yield return Differs("flash", "--temperature", flash, ["flash", "methane=0.2,propane=0.8", "-T", "260", "-P", "1MPa"]);
+        yield return Differs("flash", "--pressure", flash, ["flash", "methane=0.2,propane=0.8", "-T", "250", "-P", "2MPa"]);
+        yield return Refused("flash", "--pressure", ["flash", "methane=0.2,propane=0.8", "-T", "250"]);
+        yield return Differs("flash", "--enthalpy", flashH, ["flash", "methane=0.2,propane=0.8", "-P", "1MPa", "--enthalpy", "-14000 J/mol"]);
+        yield return Refused("flash", "--enthalpy", [.. flash, "--enthalpy", "-15000 J/mol"]);
+        yield return Differs("flash", "--entropy", flashS, ["flash", "methane=0.2,propane=0.8", "-P", "1MPa", "--entropy", "-65 J/(mol*K)"]);
+        yield return Refused("flash", "--entropy", [.. flashH, "--entropy", "-70 J/(mol*K)"]);
+        yield return Changes("flash", "--mass-fractions", flash, "--mass-fractions");
+        yield return Changes("flash", "--kij", flash, "--kij", "methane,propane=0.05");
+        yield return Changes("flash", "--eos", flash, "--eos", "srk");
+        yield return Changes("flash", "--alpha", flash, "--alpha", "twu");
+        yield return Changes("flash", "--volume-shift", flash, "--volume-shift", "peneloux");
+        yield return Refused("flash", "--volume-shift", [.. flash, "--volume-shift", "1 cm3/mol"]);
+        yield return Changes("flash", "--format", flash, "--format", "json");
+        yield return Refused("flash", "--format", [.. flash, "--format", "csv"]);
+        yield return Changes("flash", "--out", flash, "--out", "{dir}/out.txt");
     }
 
     /// <summary>--eos, --alpha, --volume-shift, --format and (where offered) --units.</summary>

@@ -1,0 +1,226 @@
+using System.Globalization;
+using System.Text;
+using System.Text.Json;
+using PhaseSlope.Cli.Commands;
+using PhaseSlope.Core.Mixtures;
+using PhaseSlope.Core.Models;
+
+namespace PhaseSlope.Cli.Output;
+
+/// <summary>Renders the mixture equilibrium results of <c>bubble</c>, <c>dew</c> and <c>flash</c>
+/// as a table or JSON (SI, molar basis; mole fractions as objects keyed by component name).</summary>
+internal static class MixtureEquilibriumWriter
+{
+    /// <summary>The note on the convention of h and s.</summary>
+    public const string ConventionNote =
+        "h and s are molar, zero for each pure component as ideal gas at 298.15 K and 1 bar (the ideal-gas reference); s includes the ideal entropy of mixing";
+
+    /// <summary>Why the glide is null at a given temperature.</summary>
+    public const string GlideAtTemperatureReason = "the glide is the dew minus the bubble temperature at one pressure: give --pressure";
+
+    /// <summary>A bubble or dew point, with the glide at its pressure (or why there is none).</summary>
+    public static string Render(MixtureInput input, MixtureSaturationPoint point, double? glide, string? glideReason, OutputFormat format)
+        => format == OutputFormat.Json ? Json(input, point, glide, glideReason) : Table(input, point, glide, glideReason);
+
+    /// <summary>A flash result.</summary>
+    public static string Render(MixtureInput input, MixtureFlashResult flash, OutputFormat format)
+        => format == OutputFormat.Json ? Json(input, flash) : Table(input, flash);
+
+    private static string KindName(MixtureSaturationKind kind) => kind == MixtureSaturationKind.Bubble ? "bubble" : "dew";
+
+    /// <summary>"liquid", "vapour" or "two-phase".</summary>
+    public static string PhaseName(MixtureFlashResult flash) => flash.IsTwoPhase ? "two-phase" : flash.Liquid is not null ? "liquid" : "vapour";
+
+    private static string Json(MixtureInput input, MixtureSaturationPoint point, double? glide, string? glideReason)
+        => JsonText.WriteLine(json =>
+        {
+            json.WriteStartObject();
+            Header(json, input);
+            json.WriteString("point", KindName(point.Kind));
+            json.WriteFinite("temperature_K", point.Temperature);
+            json.WriteFinite("pressure_Pa", point.Pressure);
+            json.WriteNumberOrNull("glide_K", glide);
+            if (glideReason is null)
+            {
+                json.WriteNull("glide_unavailable_reason");
+            }
+            else
+            {
+                json.WriteString("glide_unavailable_reason", glideReason);
+            }
+
+            Fractions(json, "liquid_mole_fractions", input, point.Liquid);
+            Fractions(json, "vapour_mole_fractions", input, point.Vapour);
+            Phase(json, "liquid", point.Liquid);
+            Phase(json, "vapour", point.Vapour);
+            Report(json, point.Report);
+            Footer(json, input, point.Liquid.Enthalpy is null ? "h and s need cp°" : null);
+            json.WriteEndObject();
+        });
+
+    private static string Json(MixtureInput input, MixtureFlashResult flash)
+        => JsonText.WriteLine(json =>
+        {
+            json.WriteStartObject();
+            Header(json, input);
+            json.WriteString("phase", PhaseName(flash));
+            json.WriteFinite("temperature_K", flash.Temperature);
+            json.WriteFinite("pressure_Pa", flash.Pressure);
+            json.WriteFinite("vapour_fraction", flash.VapourFraction);
+            json.WriteFinite("density_mol_m3", flash.Density);
+            json.WriteNumberOrNull("enthalpy_J_mol", flash.Enthalpy);
+            json.WriteNumberOrNull("entropy_J_molK", flash.Entropy);
+            Fractions(json, "liquid_mole_fractions", input, flash.Liquid);
+            Fractions(json, "vapour_mole_fractions", input, flash.Vapour);
+            Phase(json, "liquid", flash.Liquid);
+            Phase(json, "vapour", flash.Vapour);
+            json.WriteStartObject("stability");
+            json.WriteBoolean("feed_stable", flash.Stability.IsStable);
+            json.WriteFinite("tangent_plane_distance", flash.Stability.TangentPlaneDistance);
+            json.WriteFinite("gibbs_energy_change_per_RT", flash.GibbsEnergyChange);
+            json.WriteEndObject();
+            Report(json, flash.Report);
+            Footer(json, input, flash.Enthalpy is null ? "h and s need cp°" : null);
+            json.WriteEndObject();
+        });
+
+    private static void Header(Utf8JsonWriter json, MixtureInput input)
+    {
+        json.WriteString("mixture", input.DisplayName);
+        json.WriteString("eos", input.Model.Kind.Id());
+        json.WriteStartObject("feed_mole_fractions");
+        for (int i = 0; i < input.Mixture.Count; i++)
+        {
+            json.WriteFinite(input.Mixture.Components[i].Name, input.Mixture.MoleFractions[i]);
+        }
+
+        json.WriteEndObject();
+    }
+
+    private static void Fractions(Utf8JsonWriter json, string key, MixtureInput input, MixturePhase? phase)
+    {
+        if (phase is null)
+        {
+            json.WriteNull(key);
+            return;
+        }
+
+        json.WriteStartObject(key);
+        for (int i = 0; i < input.Mixture.Count; i++)
+        {
+            json.WriteFinite(input.Mixture.Components[i].Name, phase.MoleFractions[i]);
+        }
+
+        json.WriteEndObject();
+    }
+
+    private static void Phase(Utf8JsonWriter json, string key, MixturePhase? phase)
+    {
+        if (phase is null)
+        {
+            json.WriteNull(key);
+            return;
+        }
+
+        json.WriteStartObject(key);
+        json.WriteFinite("density_mol_m3", phase.Density);
+        json.WriteFinite("compressibility_factor", phase.CompressibilityFactor);
+        json.WriteNumberOrNull("enthalpy_J_mol", phase.Enthalpy);
+        json.WriteNumberOrNull("entropy_J_molK", phase.Entropy);
+        json.WriteEndObject();
+    }
+
+    private static void Report(Utf8JsonWriter json, MixtureSolverReport report)
+    {
+        json.WriteStartObject("solver");
+        json.WriteNumber("substitution_steps", report.SubstitutionSteps);
+        json.WriteNumber("accelerated_steps", report.AcceleratedSteps);
+        json.WriteNumber("newton_steps", report.NewtonSteps);
+        json.WriteNumber("temperature_steps", report.OuterSteps);
+        json.WriteNumber("model_evaluations", report.ModelEvaluations);
+        json.WriteFinite("fugacity_residual", report.FugacityResidual);
+        json.WriteEndObject();
+    }
+
+    private static void Footer(Utf8JsonWriter json, MixtureInput input, string? caloricMissing)
+    {
+        MixtureWriter.WriteInteractions(json, input.Mixture, input.Interactions);
+        json.WriteStartArray("notes");
+        foreach (string note in MixtureWriter.InteractionNotes(input.Interactions))
+        {
+            json.WriteStringValue(note);
+        }
+
+        json.WriteStringValue(caloricMissing is null ? ConventionNote : "enthalpy and entropy are null: a component has no ideal-gas heat capacity cp°");
+        json.WriteEndArray();
+        json.WriteString("caution", CoexistenceWriter.Caution);
+    }
+
+    private static string Table(MixtureInput input, MixtureSaturationPoint point, double? glide, string? glideReason)
+    {
+        var text = new StringBuilder();
+        text.Append(CultureInfo.InvariantCulture, $"{KindName(point.Kind)} point of {input.DisplayName} ({input.Model.Kind.Title()})\n");
+        text.Append(CultureInfo.InvariantCulture, $"temperature: {NumberText.Table(point.Temperature)} K\n");
+        text.Append(CultureInfo.InvariantCulture, $"pressure: {NumberText.Table(point.Pressure / 1e3)} kPa\n");
+        text.Append(glide is double g
+            ? string.Create(CultureInfo.InvariantCulture, $"glide at this pressure: {NumberText.Table(g)} K (dew minus bubble temperature)\n")
+            : $"glide: n/a ({glideReason})\n");
+        text.Append('\n');
+        text.Append(PhaseTable(input, point.Liquid, point.Vapour));
+        text.Append(CultureInfo.InvariantCulture,
+            $"\nsolver: {point.Report.SubstitutionSteps} substitution and {point.Report.NewtonSteps} Newton steps, {point.Report.ModelEvaluations} model evaluations\n");
+        AppendNotes(text, input, point.Liquid.Enthalpy is null);
+        return text.ToString();
+    }
+
+    private static string Table(MixtureInput input, MixtureFlashResult flash)
+    {
+        var text = new StringBuilder();
+        text.Append(CultureInfo.InvariantCulture, $"flash of {input.DisplayName} ({input.Model.Kind.Title()})\n");
+        text.Append(CultureInfo.InvariantCulture, $"temperature: {NumberText.Table(flash.Temperature)} K\n");
+        text.Append(CultureInfo.InvariantCulture, $"pressure: {NumberText.Table(flash.Pressure / 1e3)} kPa\n");
+        text.Append(CultureInfo.InvariantCulture, $"phase: {PhaseName(flash)}, vapour fraction {NumberText.Table(flash.VapourFraction)} (mol/mol)\n");
+        if (flash.Enthalpy is double h && flash.Entropy is double s)
+        {
+            text.Append(CultureInfo.InvariantCulture, $"h: {NumberText.Table(h)} J/mol, s: {NumberText.Table(s)} J/(mol K) (whole feed)\n");
+        }
+
+        text.Append('\n');
+        text.Append(PhaseTable(input, flash.Liquid, flash.Vapour));
+        text.Append(CultureInfo.InvariantCulture,
+            $"\nstability: tangent-plane distance {NumberText.Table(flash.Stability.TangentPlaneDistance)} ({(flash.Stability.IsStable ? "feed stable" : "feed splits")})\n");
+        text.Append(CultureInfo.InvariantCulture,
+            $"solver: {flash.Report.SubstitutionSteps} substitution ({flash.Report.AcceleratedSteps} accelerated), {flash.Report.NewtonSteps} Newton, {flash.Report.OuterSteps} temperature steps, {flash.Report.ModelEvaluations} model evaluations\n");
+        AppendNotes(text, input, flash.Enthalpy is null);
+        return text.ToString();
+    }
+
+    private static string PhaseTable(MixtureInput input, MixturePhase? liquid, MixturePhase? vapour)
+    {
+        var table = new TextTable(["", "liquid", "vapour"], [false, true, true]);
+        static string Cell(MixturePhase? phase, Func<MixturePhase, double?> value)
+            => phase is null ? "-" : value(phase) is double v ? NumberText.Table(v) : "n/a";
+        for (int i = 0; i < input.Mixture.Count; i++)
+        {
+            int k = i;
+            table.Add($"x {input.Mixture.Components[i].Name}", Cell(liquid, p => p.MoleFractions[k]), Cell(vapour, p => p.MoleFractions[k]));
+        }
+
+        table.Add("density (mol/m3)", Cell(liquid, p => p.Density), Cell(vapour, p => p.Density));
+        table.Add("Z", Cell(liquid, p => p.CompressibilityFactor), Cell(vapour, p => p.CompressibilityFactor));
+        table.Add("h (J/mol)", Cell(liquid, p => p.Enthalpy), Cell(vapour, p => p.Enthalpy));
+        table.Add("s (J/(mol K))", Cell(liquid, p => p.Entropy), Cell(vapour, p => p.Entropy));
+        return table.Render();
+    }
+
+    private static void AppendNotes(StringBuilder text, MixtureInput input, bool caloricMissing)
+    {
+        foreach (string note in MixtureWriter.InteractionNotes(input.Interactions))
+        {
+            text.Append(CultureInfo.InvariantCulture, $"note: {note}\n");
+        }
+
+        text.Append(CultureInfo.InvariantCulture, $"note: {(caloricMissing ? "h and s are n/a: a component has no ideal-gas heat capacity cp°" : ConventionNote)}\n");
+        text.AppendLine(CoexistenceWriter.Caution);
+    }
+}
