@@ -46,6 +46,7 @@ internal static class CliApp
         root.Subcommands.Add(PlotCommand.Create(io));
         root.Subcommands.Add(FluidsCommand.Create(io));
         root.Subcommands.Add(MixtureCommand.Create(io));
+        root.Subcommands.Add(BinaryCommand.Create(io));
         return root;
     }
 }

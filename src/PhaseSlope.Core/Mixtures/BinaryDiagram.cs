@@ -48,7 +48,15 @@ public sealed record BinaryDiagram(BinaryDiagramKind Kind, double? Temperature, 
             }
         }
 
-        return Build(equilibrium.Model, BinaryDiagramKind.Isothermal, temperature, points, x => equilibrium.BubbleAtTemperature(temperature, [x, 1 - x]));
+        double? last = null;
+        MixtureSaturationPoint Bubble(double x)
+        {
+            var point = BubbleAtTemperature(equilibrium, temperature, [x, 1 - x], last);
+            last = point.Pressure;
+            return point;
+        }
+
+        return Build(equilibrium.Model, BinaryDiagramKind.Isothermal, temperature, points, Bubble);
     }
 
     /// <summary>The T–x–y diagram at pressure P.</summary>
@@ -72,6 +80,64 @@ public sealed record BinaryDiagram(BinaryDiagramKind Kind, double? Temperature, 
         }
 
         return Build(equilibrium.Model, BinaryDiagramKind.Isobaric, pressure, points, x => equilibrium.BubbleAtPressure(pressure, [x, 1 - x]));
+    }
+
+    /// <summary>Cap on the Newton steps of the fallback in <see cref="BubbleAtTemperature"/>.</summary>
+    public const int MaxFallbackSteps = 40;
+
+    /// <summary>The bubble point at T of liquid <paramref name="z"/>: <see cref="MixtureEquilibrium.BubbleAtTemperature"/>,
+    /// or, where that does not converge from Wilson's start (it fails for some close-boiling pairs at
+    /// low pressure, where every K is near 1), Newton's method in P on the bubble point at given P:
+    /// P ← P + (dP/dT)_x·(T − T_bubble(P)), the slope being the bubble line's generalized Clapeyron
+    /// slope at fixed x (<see cref="MixtureClapeyron.BubbleLine"/>), which is the exact derivative, so
+    /// the iteration converges quadratically; it stops when |T_bubble(P) − T| &lt; 1e-11·T.</summary>
+    /// <param name="equilibrium">The engine.</param>
+    /// <param name="temperature">T, K.</param>
+    /// <param name="z">The liquid.</param>
+    /// <param name="start">A pressure to start the fallback from (a neighbour's), or null for Wilson's estimate.</param>
+    private static MixtureSaturationPoint BubbleAtTemperature(MixtureEquilibrium equilibrium, double temperature, double[] z, double? start)
+    {
+        try
+        {
+            return equilibrium.BubbleAtTemperature(temperature, z);
+        }
+        catch (ConvergenceException direct)
+        {
+            double pressure;
+            if (start is double p0)
+            {
+                pressure = p0;
+            }
+            else
+            {
+                var lnK = new double[z.Length];
+                equilibrium.WilsonLnK(temperature, 1, lnK);   // K at 1 Pa: P = Σ z_i K_i(1 Pa)
+                pressure = 0;
+                for (int i = 0; i < z.Length; i++)
+                {
+                    pressure += z[i] * Math.Exp(lnK[i]);
+                }
+            }
+
+            double error = double.PositiveInfinity;
+            for (int step = 0; step < MaxFallbackSteps; step++)
+            {
+                var point = equilibrium.BubbleAtPressure(pressure, z);
+                error = temperature - point.Temperature;
+                if (Math.Abs(error) < 1e-11 * temperature)
+                {
+                    return point;
+                }
+
+                var slope = MixtureClapeyron.BubbleLine(equilibrium.Model, point.Temperature, point.Pressure, z, [.. point.Vapour.MoleFractions]);
+                // Limit the step to a factor of 2 in P, as the saturation solvers limit ln P steps.
+                double next = pressure + slope.Slope * error;
+                pressure = Math.Clamp(next, 0.5 * pressure, 2 * pressure);
+            }
+
+            throw new ConvergenceException($"{direct.Message}; the fallback on the bubble point at given pressure did not reach {Preconditions.Format(temperature)} K in {MaxFallbackSteps} steps",
+                MaxFallbackSteps, Math.Abs(error));
+        }
     }
 
     /// <summary>The liquid compositions: x_1 = (1 − cos(πk/(N−1)))/2, denser towards the pure
@@ -119,7 +185,7 @@ public sealed record BinaryDiagram(BinaryDiagramKind Kind, double? Temperature, 
         {
             var point = bubble(xs[k]);
             evaluations += point.Report.ModelEvaluations;
-            points.Add(ToPoint(xs[k], point));
+            points.Add(ToPoint(model, xs[k], point));
             g[k] = k == 0 ? point.KValues[0] - 1
                 : k == count - 1 ? 1 - point.KValues[1]
                 : (point.Vapour.MoleFractions[0] - xs[k]) / (xs[k] * (1 - xs[k]));
@@ -148,7 +214,7 @@ public sealed record BinaryDiagram(BinaryDiagramKind Kind, double? Temperature, 
                 var at = bubble(root);
                 evaluations += at.Report.ModelEvaluations;
                 azeotrope = Locate(model, at, g[k] > 0 ? AzeotropeKind.MaximumPressure : AzeotropeKind.MinimumPressure, iterations);
-                points.Insert(k + 1, ToPoint(root, at));
+                points.Insert(k + 1, ToPoint(model, root, at));
             }
         }
 
@@ -157,8 +223,9 @@ public sealed record BinaryDiagram(BinaryDiagramKind Kind, double? Temperature, 
             : new BinaryDiagram(kind, null, value, points, azeotrope, evaluations);
     }
 
-    private static BinaryDiagramPoint ToPoint(double x, MixtureSaturationPoint point)
-        => new(x, point.Vapour.MoleFractions[0], point.Temperature, point.Pressure, point);
+    private static BinaryDiagramPoint ToPoint(Models.CubicMixtureModel model, double x, MixtureSaturationPoint point)
+        => new(x, point.Vapour.MoleFractions[0], point.Temperature, point.Pressure, point,
+            MixtureClapeyron.BubbleLine(model, point.Temperature, point.Pressure, [.. point.Liquid.MoleFractions], [.. point.Vapour.MoleFractions]));
 
     private static Azeotrope Locate(Models.CubicMixtureModel model, MixtureSaturationPoint point, AzeotropeKind kind, int iterations)
     {

@@ -7,4 +7,11 @@ namespace PhaseSlope.Core.Mixtures;
 /// <param name="Temperature">T, K.</param>
 /// <param name="Pressure">P, Pa.</param>
 /// <param name="Point">The bubble point it came from (both phases and the solver's report).</param>
-public sealed record BinaryDiagramPoint(double LiquidFraction, double VapourFraction, double Temperature, double Pressure, MixtureSaturationPoint Point);
+/// <param name="Clapeyron">The slope of the bubble line at this liquid composition
+/// (<see cref="MixtureClapeyron.BubbleLine"/>), with its partial molar differences.</param>
+public sealed record BinaryDiagramPoint(double LiquidFraction, double VapourFraction, double Temperature, double Pressure, MixtureSaturationPoint Point,
+    MixtureClapeyron.Result Clapeyron)
+{
+    /// <summary>dP/dT of the bubble line at fixed liquid composition, Pa/K.</summary>
+    public double BubbleSlope => Clapeyron.Slope;
+}
