@@ -47,6 +47,7 @@ internal static class CliApp
         root.Subcommands.Add(FluidsCommand.Create(io));
         root.Subcommands.Add(MixtureCommand.Create(io));
         root.Subcommands.Add(BinaryCommand.Create(io));
+        root.Subcommands.Add(FitKijCommand.Create(io));
         return root;
     }
 }
