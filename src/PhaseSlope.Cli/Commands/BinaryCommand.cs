@@ -41,6 +41,11 @@ internal sealed record BinaryRequest(MixtureInput Input, double? Temperature, do
         var engine = new MixtureEquilibrium(Input.CreateModel(), Input.Mixture.Components);
         return Temperature is double t ? BinaryDiagram.AtTemperature(engine, t, Points) : BinaryDiagram.AtPressure(engine, Pressure!.Value, Points);
     }
+
+    /// <summary>The chart of <c>plot --diagram p-xy|t-xy|x-y</c>.</summary>
+    public OxyPlot.PlotModel Chart(Plots.DiagramKind kind, Plots.PlotUnits units)
+        => Plots.Diagrams.BinaryDiagramChart.Build(kind, Compute(), Input.Mixture.Components[0], Input.Mixture.Components[1],
+            Core.Models.ModelRegistry.Title(Input.Model.Kind), units);
 }
 
 /// <summary>The options of <c>binary</c>: MIXTURE, --kij, --eos, --alpha, --temperature or

@@ -26,7 +26,7 @@ internal static class PlotCommand
             PlotModel model;
             try
             {
-                model = Diagram.Build(request.Kind, request.Fluids, request.Options);
+                model = request.Binary is { } binary ? binary.Chart(request.Kind, request.Options.Units) : Diagram.Build(request.Kind, request.Fluids, request.Options);
             }
             catch (InvalidInputException ex) when (PlotOptions.OptionOf(ex.Field) is string option)
             {
@@ -52,8 +52,9 @@ internal static class PlotCommand
 /// <param name="Height">Height in pixels.</param>
 /// <param name="Fluids">The fluids with their models.</param>
 /// <param name="Options">Axis choices and the measured data, if any.</param>
+/// <param name="Binary">For p-xy, t-xy and x-y: the binary mixture and its conditions (then <paramref name="Fluids"/> is empty).</param>
 internal sealed record PlotRequest(DiagramKind Kind, string Path, FigureFormat Format, int Width, int Height,
-    IReadOnlyList<PlotFluid> Fluids, DiagramOptions Options);
+    IReadOnlyList<PlotFluid> Fluids, DiagramOptions Options, BinaryRequest? Binary = null);
 
 /// <summary>The options of <c>plot</c>, bound to a <see cref="PlotRequest"/>.</summary>
 internal sealed class PlotOptions
@@ -167,7 +168,11 @@ internal sealed class PlotOptions
         command.Options.Add(EnthalpyRange);
         command.Options.Add(EntropyRange);
         command.Options.Add(Cycle);
+        Binary.AddTo(command);
     }
+
+    /// <summary>--temperature, --pressure, --points, --kij (the binary diagrams only).</summary>
+    public BinaryPlotOptions Binary { get; } = new();
 
     /// <summary>The option a field of a refusal by <see cref="Diagram"/> comes from, or null.</summary>
     public static string? OptionOf(string field) => FieldOptions.GetValueOrDefault(field);
@@ -221,6 +226,14 @@ internal sealed class PlotOptions
             _ => throw new UsageException($"--units: unknown unit system '{unitsText}' (use si or engineering)"),
         };
 
+        if (kind.IsBinary())
+        {
+            var binary = Binary.Bind(parse, kind, parse.GetValue(Fluids)!, Common,
+                [Data, Reduced, Log, TemperatureUnit, PressureUnit, Common.VolumeShift, Reference, Isotherms, Isobars, Isochores, TemperatureRange, PressureRange, EnthalpyRange, EntropyRange, Cycle]);
+            return new PlotRequest(kind, path, figureFormat, w, h, [], new DiagramOptions { Units = axisUnits }, binary);
+        }
+
+        Binary.RefuseFor(kind, parse);
         string[] names = [.. FluidResolver.SplitList(parse.GetValue(Fluids)!)];
         if (names.Any(n => n.Length == 0))
         {
