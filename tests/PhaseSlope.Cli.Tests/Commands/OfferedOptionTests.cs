@@ -265,6 +265,18 @@ public sealed class OfferedOptionTests : IDisposable
         string[] dome = ["plot", "propane", "--diagram", "t-rho", "--out", "{dir}/out.svg"];
         string[] plotBare = [.. plot, "--data", "{bare}", "--temperature-unit", "K", "--pressure-unit", "kPa"];
         yield return Differs("plot", "--diagram", plot, Replace(plot, "p-t", "slope"));
+        // The binary diagrams: benzene + cyclohexane, 5 compositions.
+        string[] txy = ["plot", "benzene=0.5,cyclohexane=0.5", "--diagram", "t-xy", "--pressure", "1atm", "--points", "5", "--out", "{dir}/out.svg"];
+        yield return Differs("plot", "--diagram", txy, Replace(txy, "t-xy", "x-y"));
+        yield return Differs("plot", "--pressure", txy, Replace(txy, "1atm", "50kPa"));
+        yield return Refused("plot", "--pressure", [.. plot, "--pressure", "1atm"]);
+        yield return Differs("plot", "--temperature", Replace(txy, "t-xy", "x-y"), ["plot", "benzene=0.5,cyclohexane=0.5", "--diagram", "x-y", "--temperature", "340", "--points", "5", "--out", "{dir}/out.svg"]);
+        yield return Refused("plot", "--temperature", [.. txy, "--temperature", "340"]);
+        yield return Differs("plot", "--points", txy, Replace(txy, "5", "7"));
+        yield return Refused("plot", "--points", [.. plot, "--points", "7"]);
+        yield return Changes("plot", "--kij", txy, "--kij", "benzene,cyclohexane=0.02");
+        yield return Refused("plot", "--kij", [.. plot, "--kij", "benzene,cyclohexane=0.02"]);
+        yield return Refused("plot", "--reduced", [.. txy, "--reduced"]);
         yield return Differs("plot", "--out", plot, Replace(plot, "{dir}/out.svg", "{dir}/out.png"));
         yield return Changes("plot", "--width", plot, "--width", "800");
         yield return Changes("plot", "--height", plot, "--height", "600");
