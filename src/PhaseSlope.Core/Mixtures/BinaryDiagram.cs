@@ -103,39 +103,43 @@ public sealed record BinaryDiagram(BinaryDiagramKind Kind, double? Temperature, 
         }
         catch (ConvergenceException direct)
         {
-            double pressure;
-            if (start is double p0)
+            // From the neighbour's pressure first, then from Wilson's estimate: the bubble point at
+            // given P converges from one where it does not from the other.
+            var lnK = new double[z.Length];
+            equilibrium.WilsonLnK(temperature, 1, lnK);   // K at 1 Pa: P = Σ z_i K_i(1 Pa)
+            double wilson = 0;
+            for (int i = 0; i < z.Length; i++)
             {
-                pressure = p0;
-            }
-            else
-            {
-                var lnK = new double[z.Length];
-                equilibrium.WilsonLnK(temperature, 1, lnK);   // K at 1 Pa: P = Σ z_i K_i(1 Pa)
-                pressure = 0;
-                for (int i = 0; i < z.Length; i++)
-                {
-                    pressure += z[i] * Math.Exp(lnK[i]);
-                }
+                wilson += z[i] * Math.Exp(lnK[i]);
             }
 
             double error = double.PositiveInfinity;
-            for (int step = 0; step < MaxFallbackSteps; step++)
+            foreach (double first in start is double p0 ? new[] { p0, wilson } : [wilson])
             {
-                var point = equilibrium.BubbleAtPressure(pressure, z);
-                error = temperature - point.Temperature;
-                if (Math.Abs(error) < 1e-11 * temperature)
+                try
                 {
-                    return point;
-                }
+                    double pressure = first;
+                    for (int step = 0; step < MaxFallbackSteps; step++)
+                    {
+                        var point = equilibrium.BubbleAtPressure(pressure, z);
+                        error = temperature - point.Temperature;
+                        if (Math.Abs(error) < 1e-11 * temperature)
+                        {
+                            return point;
+                        }
 
-                var slope = MixtureClapeyron.BubbleLine(equilibrium.Model, point.Temperature, point.Pressure, z, [.. point.Vapour.MoleFractions]);
-                // Limit the step to a factor of 2 in P, as the saturation solvers limit ln P steps.
-                double next = pressure + slope.Slope * error;
-                pressure = Math.Clamp(next, 0.5 * pressure, 2 * pressure);
+                        var slope = MixtureClapeyron.BubbleLine(equilibrium.Model, point.Temperature, point.Pressure, z, [.. point.Vapour.MoleFractions]);
+                        // Limit the step to a factor of 2 in P, as the saturation solvers limit ln P steps.
+                        pressure = Math.Clamp(pressure + slope.Slope * error, 0.5 * pressure, 2 * pressure);
+                    }
+                }
+                catch (ConvergenceException)
+                {
+                    // Try the next start.
+                }
             }
 
-            throw new ConvergenceException($"{direct.Message}; the fallback on the bubble point at given pressure did not reach {Preconditions.Format(temperature)} K in {MaxFallbackSteps} steps",
+            throw new ConvergenceException($"{direct.Message}; the fallback on the bubble point at given pressure did not reach {Preconditions.Format(temperature)} K either",
                 MaxFallbackSteps, Math.Abs(error));
         }
     }
