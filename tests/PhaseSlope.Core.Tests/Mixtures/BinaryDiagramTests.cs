@@ -103,6 +103,7 @@ public sealed class BinaryDiagramTests
         // difference of the computed bubble pressure at T ± 0.01 K. The difference's truncation
         // error is h²/6·P'''/P' ~ 1e-8 relative (P varies on a scale of ~10 K); each bubble
         // pressure is converged to ~1e-12 relative, which adds ~1e-12·P/(2h·P') ~ 1e-10. So 1e-6.
+        // Measured: 6e-9 (benzene-cyclohexane), 4e-9 (propane-n-butane), 8e-10 (CO2-propane).
         var engine = Engine(a, b, kij);
         double[] z = [x1, 1 - x1];
         const double h = 0.01;
