@@ -48,6 +48,7 @@ internal static class CliApp
         root.Subcommands.Add(MixtureCommand.Create(io));
         root.Subcommands.Add(BinaryCommand.Create(io));
         root.Subcommands.Add(FitKijCommand.Create(io));
+        root.Subcommands.Add(EnvelopeCommand.Create(io));
         return root;
     }
 }

@@ -115,4 +115,21 @@ public static class Counts
         _ = CoexistenceCurve.Trace(solver, points);
         return counting.Evaluations;
     }
+
+    /// <summary>Prints points, model evaluations (ln φ of one phase with derivatives) and the
+    /// landmarks of the lean-gas envelope (<see cref="EnvelopeBenchmarks"/>) for a few step limits.</summary>
+    public static void PrintEnvelopes(TextWriter output)
+    {
+        var inv = CultureInfo.InvariantCulture;
+        var model = new CubicMixtureModel(EnvelopeBenchmarks.Names.Select(n => CubicModel.For(CubicModelKind.PengRobinson, FluidCatalog.Embedded.Find(n))).ToList());
+        output.WriteLine("| maximum step | points | evaluations | per point | critical point K, MPa | cricondenbar K, MPa | cricondentherm K, MPa |");
+        output.WriteLine("|---|---|---|---|---|---|---|");
+        foreach (double step in new[] { 0.05, 0.1, EnvelopeBenchmarks.TwoHundredPointStep, 0.2 })
+        {
+            var envelope = new Core.Mixtures.EnvelopeTracer(model, Core.Mixtures.EnvelopeOptions.Default with { MaximumStep = step }).Trace(EnvelopeBenchmarks.Composition);
+            static string Show(Core.Mixtures.EnvelopeLandmark? l) => l is { } v ? string.Create(CultureInfo.InvariantCulture, $"{v.Temperature:F2}, {v.Pressure / 1e6:F4}") : "none";
+            output.WriteLine(string.Create(inv,
+                $"| {step} | {envelope.Points.Count} | {envelope.Evaluations} | {envelope.Evaluations / (double)envelope.Points.Count:F1} | {Show(envelope.CriticalPoint)} | {Show(envelope.Cricondenbar)} | {Show(envelope.Cricondentherm)} |"));
+        }
+    }
 }

@@ -13,11 +13,19 @@ public static class Program
     /// <summary>Runs the benchmarks chosen on the command line, prints the counts, or writes the data file.</summary>
     public static void Main(string[] args)
     {
+        if (args is ["envelope-counts"])
+        {
+            Counts.PrintEnvelopes(Console.Out);
+            return;
+        }
+
         if (args is ["counts"])
         {
             Counts.Print(Console.Out);
             Console.Out.WriteLine();
             Counts.PrintFlashes(Console.Out);
+            Console.Out.WriteLine();
+            Counts.PrintEnvelopes(Console.Out);
             return;
         }
 

@@ -26,6 +26,9 @@ public class CultureInvarianceTests
         rows.Add(["fluids", "show", "propane", "--format", "json"]);
         rows.Add(["fluids", "list"]);
         rows.Add(["latent", data, "--fluid", fluid, "--format", "json"]);
+        // Fractions and k_ij are read with a '.' decimal point whatever the culture.
+        rows.Add(["mixture", "R-32=0.23,R-125=0.25,R-134a=0.52", "--mass-fractions", "--kij", "R-32,R-125=0.01"]);
+        rows.Add(["mixture", "methane=0.85,CO2=0.1,N2=0.05", "--format", "json"]);
         return rows;
     }
 

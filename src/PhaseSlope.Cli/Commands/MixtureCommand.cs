@@ -49,6 +49,7 @@ internal sealed class MixtureCommandOptions
     public void AddTo(Command command)
     {
         Mixture.AddTo(command);
+        Common.Format.Description = "Output format: table or json";
         command.Options.Add(Common.Format);
         Out.AddTo(command);
     }

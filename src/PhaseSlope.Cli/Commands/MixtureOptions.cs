@@ -11,15 +11,15 @@ namespace PhaseSlope.Cli.Commands;
 /// <param name="Name">The mixture file's name line, or null.</param>
 /// <param name="Origin">The mixture file's path, or <see cref="MixtureResolver.CommandLineOrigin"/>.</param>
 /// <param name="Model">--eos, --alpha and --volume-shift (a mixture's volume shift is none, fluid or peneloux).</param>
-internal sealed record MixtureInput(Mixture Mixture, string? Name, string Origin, ModelChoice Model)
+/// <param name="Remarks">The mixture file's remarks line, or null.</param>
+internal sealed record MixtureInput(Mixture Mixture, string? Name, string Origin, ModelChoice Model, string? Remarks = null)
 {
     /// <summary>The k_ij of every pair for the chosen model, with their sources.</summary>
     public InteractionMatrix Interactions => Mixture.Interactions(Model.Kind);
 
     /// <summary>The cubic mixture model: each component's model built as the pure commands build
     /// it (same --eos, --alpha; --volume-shift per component), with <see cref="Interactions"/>.</summary>
-    public CubicMixtureModel CreateModel()
-        => Mixture.CreateModel(Model.Kind, Model.Alpha, fluid => CommonOptions.ParseShift(Model.VolumeShiftText, Model.Kind, fluid));
+    public CubicMixtureModel CreateModel() => Model.ForMixture(Mixture);
 
     /// <summary>A name for messages and titles: the file's name, else the components joined by '+'.</summary>
     public string DisplayName => Name ?? string.Join(" + ", Mixture.Components.Select(c => c.Name));
@@ -66,6 +66,9 @@ internal sealed class MixtureOptions
         command.Options.Add(Kij);
         command.Options.Add(Common.Eos);
         command.Options.Add(Common.Alpha);
+        // Each command owns its CommonOptions instance, so this description is the mixture commands' own.
+        Common.VolumeShift.Description = "Volume translation c of each component (v = v_eos - c): fluid (default: each fluid file's own volume_shift_pr/srk, else none), "
+            + "none, or peneloux (the published correlation for pr or srk, per component); it shifts densities only";
         command.Options.Add(Common.VolumeShift);
     }
 
@@ -76,14 +79,13 @@ internal sealed class MixtureOptions
     public MixtureInput Bind(ParseResult parse)
     {
         var model = Common.BindModel(parse);
-        string shift = model.VolumeShiftText.Trim().ToLowerInvariant();
-        if (shift is not ("fluid" or "none" or "peneloux"))
+        if (!model.ShiftSuitsMixture)
         {
             throw new UsageException($"--volume-shift: a mixture takes fluid, none or peneloux (each component's own), not one volume '{model.VolumeShiftText}' for every component");
         }
 
         var kij = MixtureResolver.ParseKij(parse.GetValue(Kij) ?? []);
         var resolved = MixtureResolver.Resolve(parse.GetValue(Mixture) ?? "", parse.GetValue(MassFractions), kij);
-        return new MixtureInput(resolved.Mixture, resolved.Name, resolved.Origin, model);
+        return new MixtureInput(resolved.Mixture, resolved.Name, resolved.Origin, model, resolved.Remarks);
     }
 }

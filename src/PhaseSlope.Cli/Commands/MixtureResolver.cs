@@ -11,7 +11,8 @@ namespace PhaseSlope.Cli.Commands;
 /// <param name="Mixture">The mixture with every --kij applied.</param>
 /// <param name="Name">The file's <c>name</c> line, or null (a command-line mixture has none).</param>
 /// <param name="Origin">The mixture file's path, or <see cref="MixtureResolver.CommandLineOrigin"/>.</param>
-internal sealed record ResolvedMixture(Mixture Mixture, string? Name, string Origin);
+/// <param name="Remarks">The file's <c>remarks</c> line, or null.</param>
+internal sealed record ResolvedMixture(Mixture Mixture, string? Name, string Origin, string? Remarks = null);
 
 /// <summary>Turns a MIXTURE argument into a <see cref="Mixture"/>: either
 /// <c>NAME=FRACTION,NAME=FRACTION,…</c> (each NAME as FLUID accepts it: a catalog name or synonym,
@@ -50,6 +51,11 @@ internal static class MixtureResolver
                 throw new UsageException($"--kij: {problem}");
             }
 
+            if (!Mixture.IsAcceptedInteraction(value))
+            {
+                throw new UsageException($"--kij: k_ij of {first}, {second} is {value.ToString("G10", System.Globalization.CultureInfo.InvariantCulture)}; {Mixture.InteractionRange}");
+            }
+
             parsed.Add((text.Trim(), first, second, value));
         }
 
@@ -75,7 +81,14 @@ internal static class MixtureResolver
             throw new UsageException("--mass-fractions: applies to a MIXTURE written NAME=FRACTION,...; a mixture file states its basis on its 'basis' line");
         }
 
-        var resolved = list ? FromList(argument, massFractions) : FromFile(argument.Trim());
+        string text = argument.Trim();
+        bool pathLike = text.Contains('/') || text.Contains('\\') || text.EndsWith(MixtureFile.Extension, StringComparison.OrdinalIgnoreCase);
+        if (!list && !pathLike && !File.Exists(text))
+        {
+            throw new UsageException($"MIXTURE: '{text}' is neither NAME=FRACTION,NAME=FRACTION,... (e.g. {text}=1 for one component) nor an existing mixture file");
+        }
+
+        var resolved = list ? FromList(argument, massFractions) : FromFile(text);
         return kij.Count == 0 ? resolved : resolved with { Mixture = ApplyKij(resolved.Mixture, kij) };
     }
 
@@ -157,8 +170,8 @@ internal static class MixtureResolver
         try
         {
             using var stream = Input.BoundedInput.Open(path, Input.BoundedInput.FluidFileLimit);
-            var (mixture, name) = MixtureFile.Read(stream, path, Component);
-            return new ResolvedMixture(mixture, name, path);
+            var (mixture, name, remarks) = MixtureFile.Read(stream, path, Component);
+            return new ResolvedMixture(mixture, name, path, remarks);
         }
         catch (Exception ex) when (ex is FileNotFoundException or DirectoryNotFoundException)
         {

@@ -22,6 +22,15 @@ internal static class PlotCommand
         options.AddTo(command);
         command.SetAction(parse => io.Guard(() =>
         {
+            if (PlotOptions.IsEnvelope(parse.GetValue(options.Kind)))
+            {
+                var envelope = options.BindEnvelope(parse);
+                using var drawn = new MemoryStream();
+                FigureExporter.Export(envelope.Model, drawn, envelope.Format, envelope.Width, envelope.Height);
+                Output.AtomicFile.WriteBytes(envelope.Path, file => drawn.WriteTo(file));
+                return;
+            }
+
             var request = options.Bind(parse);
             PlotModel model;
             try
@@ -56,6 +65,14 @@ internal static class PlotCommand
 internal sealed record PlotRequest(DiagramKind Kind, string Path, FigureFormat Format, int Width, int Height,
     IReadOnlyList<PlotFluid> Fluids, DiagramOptions Options, BinaryRequest? Binary = null);
 
+/// <summary>The checked inputs and drawn model of <c>plot MIXTURE --diagram envelope</c>.</summary>
+/// <param name="Model">The envelope diagram.</param>
+/// <param name="Path">The figure file.</param>
+/// <param name="Format">PNG or SVG.</param>
+/// <param name="Width">Width in pixels.</param>
+/// <param name="Height">Height in pixels.</param>
+internal sealed record EnvelopePlotRequest(PlotModel Model, string Path, FigureFormat Format, int Width, int Height);
+
 /// <summary>The options of <c>plot</c>, bound to a <see cref="PlotRequest"/>.</summary>
 internal sealed class PlotOptions
 {
@@ -63,10 +80,11 @@ internal sealed class PlotOptions
     public CommonOptions Common { get; } = new();
 
     /// <summary>FLUID[,FLUID...].</summary>
-    public Argument<string> Fluids { get; } = new("FLUID") { Description = "Catalog name, fluid file or inline:... definition; several separated by commas (p-t, lnp-invt, t-rho, slope, latent); an inline definition keeps the key=value items that follow it" };
+    public Argument<string> Fluids { get; } = new("FLUID") { Description = "Catalog name, fluid file or inline:... definition; several separated by commas (p-t, lnp-invt, t-rho, slope, latent); an inline definition keeps the key=value items that follow it. "
+        + "For --diagram envelope a MIXTURE instead: NAME=FRACTION,NAME=FRACTION,... in mole fractions, or a mixture file; for p-xy, t-xy and x-y a MIXTURE of two components (its fractions are not used)" };
 
     /// <summary>--diagram.</summary>
-    public Option<string> Kind { get; } = new("--diagram", "-d") { Description = $"Diagram: {string.Join(", ", DiagramKinds.Ids)}", Required = true };
+    public Option<string> Kind { get; } = new("--diagram", "-d") { Description = $"Diagram: {string.Join(", ", DiagramKinds.Ids)}, or {EnvelopeId} (a MIXTURE's bubble and dew lines, critical point, cricondenbar and cricondentherm)", Required = true };
 
     /// <summary>--out (the figure file).</summary>
     public Option<string> Out { get; } = new("--out", "-o") { Description = "Figure file; .png or .svg chooses the format", Required = true };
@@ -191,17 +209,49 @@ internal sealed class PlotOptions
         ["cycle"] = CycleOption.Name,
     };
 
-    /// <summary>Parses and checks every option, resolves the fluids, checks that the diagram can
-    /// be drawn for them, then reads the data file.</summary>
-    public PlotRequest Bind(ParseResult parse)
+    /// <summary>The identifier of the envelope diagram, drawn for a MIXTURE instead of fluids.</summary>
+    public const string EnvelopeId = "envelope";
+
+    /// <summary>Whether --diagram names the envelope diagram.</summary>
+    public static bool IsEnvelope(string? kind) => string.Equals(kind?.Trim(), EnvelopeId, StringComparison.OrdinalIgnoreCase);
+
+    /// <summary>For <c>--diagram envelope</c>: the FLUID argument is a MIXTURE (NAME=FRACTION,… in
+    /// mole fractions, or a mixture file); --out, --width, --height, --log, --units, --eos, --alpha
+    /// and --volume-shift apply, the other options are refused. Traces the envelope and draws it.</summary>
+    public EnvelopePlotRequest BindEnvelope(ParseResult parse)
     {
-        // Everything that is a usage error is checked before any fluid is read or computed.
-        string kindText = parse.GetValue(Kind)!;
-        if (!DiagramKinds.TryParse(kindText, out var kind))
+        var (path, figureFormat, w, h) = Figure(parse);
+        var axisUnits = AxisUnits(parse);
+        foreach (var option in new Option[] { Data, Reduced, TemperatureUnit, PressureUnit, Reference, Isotherms, Isobars, Isochores, TemperatureRange, PressureRange, EnthalpyRange, EntropyRange, Cycle, Binary.Temperature, Binary.Pressure, Binary.Points, Binary.Kij })
         {
-            throw new UsageException($"--diagram: unknown diagram '{kindText}' (use {string.Join(", ", DiagramKinds.Ids)})");
+            if (CommonOptions.Given(parse, option))
+            {
+                throw new UsageException($"{option.Name}: the envelope diagram does not take it (it draws the bubble and dew lines of a MIXTURE; --log and --units apply)");
+            }
         }
 
+        var modelChoice = Common.BindModel(parse);
+        if (!modelChoice.ShiftSuitsMixture)
+        {
+            throw new UsageException($"--volume-shift: a mixture takes fluid, none or peneloux (each component's own), not one volume '{modelChoice.VolumeShiftText}' for every component");
+        }
+
+        var resolved = MixtureResolver.Resolve(parse.GetValue(Fluids) ?? "", false, []);
+        var input = new MixtureInput(resolved.Mixture, resolved.Name, resolved.Origin, modelChoice, resolved.Remarks);
+        if (input.Mixture.Count < 2)
+        {
+            throw new UsageException($"MIXTURE: a phase envelope needs at least two components, got only '{input.Mixture.Components[0].Name}' (a pure fluid's saturation line is the p-t diagram)");
+        }
+
+        var model = input.CreateModel();
+        var envelope = new Core.Mixtures.EnvelopeTracer(model).Trace(input.Mixture.MoleFractions);
+        string name = input.Name ?? string.Join(", ", input.Mixture.Components.Select((c, i) => $"{c.Name} {Output.NumberText.Table(input.Mixture.MoleFractions[i])}"));
+        var diagram = EnvelopeDiagram.Build(envelope, name, Core.Models.ModelRegistry.Title(modelChoice.Kind), new DiagramOptions { Units = axisUnits, Logarithmic = parse.GetValue(Log) });
+        return new EnvelopePlotRequest(diagram, path, figureFormat, w, h);
+    }
+
+    private (string Path, FigureFormat Format, int Width, int Height) Figure(ParseResult parse)
+    {
         string path = parse.GetValue(Out)!;
         if (!FigureFormats.TryFromPath(path, out var figureFormat))
         {
@@ -218,13 +268,33 @@ internal sealed class PlotOptions
             }
         }
 
+        return (path, figureFormat, w, h);
+    }
+
+    private PlotUnits AxisUnits(ParseResult parse)
+    {
         string unitsText = parse.GetValue(Units) ?? "si";
-        var axisUnits = unitsText.ToLowerInvariant() switch
+        return unitsText.ToLowerInvariant() switch
         {
             "si" => PlotUnits.Si,
             "engineering" => PlotUnits.Engineering,
             _ => throw new UsageException($"--units: unknown unit system '{unitsText}' (use si or engineering)"),
         };
+    }
+
+    /// <summary>Parses and checks every option, resolves the fluids, checks that the diagram can
+    /// be drawn for them, then reads the data file.</summary>
+    public PlotRequest Bind(ParseResult parse)
+    {
+        // Everything that is a usage error is checked before any fluid is read or computed.
+        string kindText = parse.GetValue(Kind)!;
+        if (!DiagramKinds.TryParse(kindText, out var kind))
+        {
+            throw new UsageException($"--diagram: unknown diagram '{kindText}' (use {string.Join(", ", DiagramKinds.Ids)} or {EnvelopeId})");
+        }
+
+        var (path, figureFormat, w, h) = Figure(parse);
+        var axisUnits = AxisUnits(parse);
 
         if (kind.IsBinary())
         {

@@ -13,7 +13,7 @@ internal static class MixtureWriter
 {
     /// <summary>The note on an assumed zero k_ij.</summary>
     public const string AssumedZeroNote =
-        "a pair marked 'assumed 0' has no given or published k_ij; 0 can be far from the fitted value (CO2 and N2 with hydrocarbons take about 0.03-0.13), "
+        "a pair marked 'assumed zero' has no given or published k_ij; 0 can be far from the fitted value (CO2 and N2 with hydrocarbons take about 0.03-0.13), "
         + "so give one with --kij or in a mixture file";
 
     /// <summary>The note on the pseudo-critical constants.</summary>
@@ -33,6 +33,11 @@ internal static class MixtureWriter
         var mass = mixture.MassFractions;
         var text = new StringBuilder();
         text.Append(CultureInfo.InvariantCulture, $"mixture: {input.DisplayName} ({OriginText(input)})\n");
+        if (input.Remarks is not null)
+        {
+            text.Append(CultureInfo.InvariantCulture, $"remarks: {input.Remarks}\n");
+        }
+
         text.Append(CultureInfo.InvariantCulture, $"model: {input.Model.Kind.Title()}, van der Waals one-fluid mixing\n\n");
         var components = new TextTable(
             ["component", "mole fraction", "mass fraction", "M (g/mol)", "Tc (K)", "Pc (kPa)", "omega", "c (cm3/mol)", "alpha"],
@@ -77,7 +82,7 @@ internal static class MixtureWriter
         }
 
         text.Append('\n');
-        foreach (string note in Notes(input, interactions))
+        foreach (string note in Notes(interactions))
         {
             text.Append(CultureInfo.InvariantCulture, $"note: {note}\n");
         }
@@ -103,6 +108,15 @@ internal static class MixtureWriter
             }
 
             json.WriteString("origin", OriginText(input));
+            if (input.Remarks is null)
+            {
+                json.WriteNull("remarks");
+            }
+            else
+            {
+                json.WriteString("remarks", input.Remarks);
+            }
+
             json.WriteString("eos", input.Model.Kind.Id());
             json.WriteString("model", $"{input.Model.Kind.Title()}, van der Waals one-fluid mixing");
             json.WriteStartArray("components");
@@ -135,19 +149,7 @@ internal static class MixtureWriter
                 json.WriteNull("molar_mass_unavailable_reason");
             }
 
-            json.WriteStartArray("interaction_parameters");
-            foreach (var pair in interactions.Pairs)
-            {
-                json.WriteStartObject();
-                json.WriteString("first", mixture.Components[pair.First].Name);
-                json.WriteString("second", mixture.Components[pair.Second].Name);
-                json.WriteFinite("kij", pair.Value);
-                json.WriteString("origin", OriginName(pair.Origin));
-                json.WriteString("source", pair.Source);
-                json.WriteEndObject();
-            }
-
-            json.WriteEndArray();
+            WriteInteractions(json, mixture, interactions);
             json.WriteStartObject("pseudo_critical");
             json.WriteString("method", Mixture.KayRuleSource);
             json.WriteFinite("temperature_K", mixture.PseudoCriticalTemperature);
@@ -155,7 +157,7 @@ internal static class MixtureWriter
             json.WriteFinite("acentric_factor", mixture.PseudoAcentricFactor);
             json.WriteEndObject();
             json.WriteStartArray("notes");
-            foreach (string note in Notes(input, interactions))
+            foreach (string note in Notes(interactions))
             {
                 json.WriteStringValue(note);
             }
@@ -164,6 +166,45 @@ internal static class MixtureWriter
             json.WriteEndObject();
         });
     }
+
+    /// <summary>Writes <c>"interaction_parameters"</c>: one object per pair with <c>first</c>,
+    /// <c>second</c> (component names), <c>kij</c>, <c>origin</c> (given, published, assumed_zero)
+    /// and <c>source</c>; every mixture command's JSON names its k_ij this way.</summary>
+    public static void WriteInteractions(System.Text.Json.Utf8JsonWriter json, Mixture mixture, InteractionMatrix interactions)
+    {
+        json.WriteStartArray("interaction_parameters");
+        foreach (var pair in interactions.Pairs)
+        {
+            json.WriteStartObject();
+            json.WriteString("first", mixture.Components[pair.First].Name);
+            json.WriteString("second", mixture.Components[pair.Second].Name);
+            json.WriteFinite("kij", pair.Value);
+            json.WriteString("origin", OriginName(pair.Origin));
+            json.WriteString("source", pair.Source);
+            json.WriteEndObject();
+        }
+
+        json.WriteEndArray();
+    }
+
+    /// <summary>The notes every mixture result carries about its k_ij: an assumed zero, and the
+    /// recalled published values (none when neither applies).</summary>
+    public static IEnumerable<string> InteractionNotes(InteractionMatrix interactions)
+    {
+        if (interactions.AnyAssumedZero)
+        {
+            yield return AssumedZeroNote;
+        }
+
+        if (interactions.Pairs.Any(p => p.Origin == InteractionOrigin.Published))
+        {
+            yield return RecalledNote;
+        }
+    }
+
+    /// <summary>The note on published k_ij values, all recalled.</summary>
+    public const string RecalledNote =
+        "published k_ij values are recalled ('from memory' in their source); check them against the publication before relying on them for design";
 
     /// <summary>The JSON spelling of an origin: given, published or assumed_zero.</summary>
     public static string OriginName(InteractionOrigin origin) => origin switch
@@ -176,18 +217,5 @@ internal static class MixtureWriter
     private static string MassBasisNote(MixtureInput input)
         => $"no molar mass for {string.Join(", ", input.Mixture.Components.Where(c => c.MolarMass is null).Select(c => c.Name))}";
 
-    private static IEnumerable<string> Notes(MixtureInput input, InteractionMatrix interactions)
-    {
-        if (interactions.AnyAssumedZero)
-        {
-            yield return AssumedZeroNote;
-        }
-
-        if (interactions.Pairs.Any(p => p.Origin == InteractionOrigin.Published))
-        {
-            yield return "published k_ij values are recalled ('from memory' in their source); check them against the publication before relying on them for design";
-        }
-
-        yield return PseudoCriticalNote;
-    }
+    private static IEnumerable<string> Notes(InteractionMatrix interactions) => [.. InteractionNotes(interactions), PseudoCriticalNote];
 }

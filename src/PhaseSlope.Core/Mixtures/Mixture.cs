@@ -179,6 +179,14 @@ public sealed class Mixture
         return moles;
     }
 
+    /// <summary>What <see cref="IsAcceptedInteraction"/> accepts, for messages.</summary>
+    public const string InteractionRange = "it must be between -1 and 1 (published values lie within about ±0.5)";
+
+    /// <summary>Whether a k_ij is accepted: finite and strictly between −1 and 1. k_ij ≥ 1 makes
+    /// a_ij = (1 − k_ij)√(a_i a_j) zero or negative (no attraction between unlike molecules);
+    /// k_ij ≤ −1 at least doubles it, far outside published values (within about ±0.5).</summary>
+    public static bool IsAcceptedInteraction(double value) => value > -1 && value < 1;
+
     /// <summary>The same mixture with <paramref name="overrides"/> added to the given interaction
     /// parameters, each replacing any given value of its pair (the command line's <c>--kij</c>
     /// over a mixture file's <c>kij</c> lines).</summary>
@@ -283,8 +291,10 @@ public sealed class Mixture
         // (0.333333 three times sums to 1 − 1.00000000003e-6), which must not decide a refusal.
         if (!(Math.Abs(sum - 1) <= FractionSumTolerance + 1e-12))
         {
+            // A datasheet's percentages (23/25/52 %) sum to 100: say so rather than only refuse.
+            string hint = Math.Abs(sum - 100) <= 100 * FractionSumTolerance ? "; these look like percentages: write fractions (0.23 for 23 %)" : "";
             throw new InvalidInputException($"{basis} fractions", sum,
-                $"the {basis} fractions of {string.Join(", ", fluids.Select((f, i) => $"{f.Name} ({Show(fractions[i])})"))} sum to {Show(sum)}, not 1 (tolerance {Show(FractionSumTolerance)})");
+                $"the {basis} fractions of {string.Join(", ", fluids.Select((f, i) => $"{f.Name} ({Show(fractions[i])})"))} sum to {Show(sum)}, not 1 (tolerance {Show(FractionSumTolerance)}){hint}");
         }
 
         return [.. fractions.Select(x => x / sum)];
@@ -308,12 +318,9 @@ public sealed class Mixture
             }
 
             string pair = $"{fluids[Math.Min(g.First, g.Second)].Name}, {fluids[Math.Max(g.First, g.Second)].Name}";
-            // k_ij ≥ 1 makes a_ij = (1 − k_ij)√(a_i a_j) zero or negative (no attraction between
-            // unlike molecules); k_ij ≤ −1 doubles it at least. Published values lie within ±0.5.
-            if (!double.IsFinite(g.Value) || !(g.Value > -1 && g.Value < 1))
+            if (!IsAcceptedInteraction(g.Value))
             {
-                throw new InvalidInputException("kij", g.Value,
-                    $"k_ij of {pair} is {Show(g.Value)}; it must be between -1 and 1 (published values lie within about ±0.5)");
+                throw new InvalidInputException("kij", g.Value, $"k_ij of {pair} is {Show(g.Value)}; {InteractionRange}");
             }
 
             if (string.IsNullOrWhiteSpace(g.Source))

@@ -34,9 +34,9 @@ public static class MixtureFile
     /// <param name="resolve">Turns a component name as written into a fluid (a catalog name or
     /// synonym, or a fluid file); its <see cref="UnknownFluidException"/> or
     /// <see cref="FluidDataException"/> is reported at the component's line.</param>
-    /// <returns>The mixture and the name the file gives it (null when none).</returns>
+    /// <returns>The mixture, and the name and remarks the file gives (null when none).</returns>
     /// <exception cref="FluidDataException">The file is malformed or a check fails.</exception>
-    public static (Mixture Mixture, string? Name) Parse(TextReader reader, string origin, Func<string, Fluid> resolve)
+    public static (Mixture Mixture, string? Name, string? Remarks) Parse(TextReader reader, string origin, Func<string, Fluid> resolve)
     {
         ArgumentNullException.ThrowIfNull(reader);
         ArgumentNullException.ThrowIfNull(origin);
@@ -44,6 +44,7 @@ public static class MixtureFile
         var components = new List<(int Line, Fluid Fluid, double Fraction)>();
         var pairs = new List<(int Line, string First, string Second, double Value, string Source)>();
         string? name = null;
+        string? remarks = null;
         bool? mass = null;
         bool sawFormat = false;
         int lineNumber = 0;
@@ -88,6 +89,7 @@ public static class MixtureFile
                     name = Require(origin, lineNumber, key, rest);
                     break;
                 case "remarks":
+                    remarks = Require(origin, lineNumber, key, rest);
                     break;
                 case "basis":
                     mass = rest switch
@@ -118,7 +120,7 @@ public static class MixtureFile
             throw new FluidDataException(origin, Math.Max(lineNumber, 1), "component", "no component lines (component NAME = FRACTION)");
         }
 
-        return (Build(origin, components, pairs, mass ?? false), name);
+        return (Build(origin, components, pairs, mass ?? false), name, remarks);
     }
 
     private static (int Line, Fluid Fluid, double Fraction) ReadComponent(string origin, int line, string text, Func<string, Fluid> resolve)
@@ -223,7 +225,7 @@ public static class MixtureFile
         => value.Length > 0 ? value : throw new FluidDataException(origin, line, key, "has no value");
 
     /// <summary>Opens a stream as UTF-8 text for <see cref="Parse"/>.</summary>
-    public static (Mixture Mixture, string? Name) Read(Stream stream, string origin, Func<string, Fluid> resolve)
+    public static (Mixture Mixture, string? Name, string? Remarks) Read(Stream stream, string origin, Func<string, Fluid> resolve)
     {
         ArgumentNullException.ThrowIfNull(stream);
         using var reader = new StreamReader(stream, new UTF8Encoding(false, true), detectEncodingFromByteOrderMarks: true, leaveOpen: true);

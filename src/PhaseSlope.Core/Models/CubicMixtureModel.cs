@@ -178,28 +178,24 @@ public sealed class CubicMixtureModel : IResidualModel
     /// <inheritdoc />
     /// <remarks>The critical point of a mixture is not a property of the cubic at fixed
     /// composition (its mechanical critical point is not where liquid and vapour of that
-    /// composition become one); for one component it is that component's. Mixture critical
-    /// points are located by the criteria of Heidemann &amp; Khalil (1980) in the mixtures layer.</remarks>
-    /// <exception cref="InvalidInputException">More than one component is present.</exception>
+    /// composition become one); for one component present it is that component's. With more, it is
+    /// located by the criteria of Heidemann &amp; Khalil (1980),
+    /// <see cref="Mixtures.CriticalPointCriteria.Locate"/>; where that finds several (a liquid–liquid
+    /// critical point besides the liquid–vapour one), the least dense is returned.</remarks>
+    /// <exception cref="InvalidInputException">More than one component is present and no critical
+    /// point is found (none of positive pressure at volumes from 1.6 to 12 times the covolume).</exception>
     public ModelCriticalPoint CriticalPoint(ReadOnlySpan<double> amounts)
     {
         RequireAmounts(amounts);
-        int present = -1;
-        for (int i = 0; i < amounts.Length; i++)
+        var found = Mixtures.CriticalPointCriteria.Locate(this, amounts.ToArray());
+        if (found.Count == 0)
         {
-            if (amounts[i] > 0)
-            {
-                if (present >= 0)
-                {
-                    throw new InvalidInputException("composition", amounts.Length,
-                        "the critical point of a mixture is located by the Heidemann-Khalil criteria (mixture critical point), not from the cubic at fixed composition");
-                }
-
-                present = i;
-            }
+            throw new InvalidInputException("composition", amounts.Length,
+                "no mixture critical point found by the Heidemann-Khalil criteria for this composition");
         }
 
-        return _components[present].CriticalPoint(Composition.Pure);
+        var point = found[0];
+        return new ModelCriticalPoint(point.Temperature, point.Pressure, point.Density);
     }
 
     /// <inheritdoc />
@@ -213,6 +209,15 @@ public sealed class CubicMixtureModel : IResidualModel
     /// <inheritdoc />
     public void LnFugacityCoefficients(double temperature, double density, ReadOnlySpan<double> amounts, Span<double> lnFugacityCoefficients)
         => Fugacities(temperature, density, amounts, lnFugacityCoefficients, default, default, default);
+
+    /// <summary>ln φ_i at given density (T, ρ, n) and optionally the same derivatives as
+    /// <see cref="LnFugacityCoefficientsAtPressure"/> gives, taken at the pressure of that density:
+    /// <paramref name="dT"/> (∂ln φ_i/∂T)_{P,n}, <paramref name="dP"/> (∂ln φ_i/∂P)_{T,n} and
+    /// <paramref name="dN"/> n·(∂ln φ_i/∂n_j)_{T,P}. An empty span skips a derivative. Used where the
+    /// density is the variable (the critical-point criteria at fixed T and V).</summary>
+    public void LnFugacityCoefficients(double temperature, double density, ReadOnlySpan<double> amounts, Span<double> lnFugacityCoefficients,
+        Span<double> dT, Span<double> dP = default, Span<double> dN = default)
+        => Fugacities(temperature, density, amounts, lnFugacityCoefficients, dT, dP, dN);
 
     /// <summary>ln φ_i on the chosen density root at (T, P), and optionally their derivatives:
     /// <paramref name="dT"/> (∂ln φ_i/∂T)_{P,n}, <paramref name="dP"/> (∂ln φ_i/∂P)_{T,n} and

@@ -34,7 +34,7 @@ public sealed class MixtureCommandTests
         Assert.Equal(0.08620284, root.GetProperty("molar_mass_kg_mol").GetDouble(), 5e-9);
         // No refrigerant k_ij ships: every pair is an assumed zero, and the output says so.
         Assert.All(root.GetProperty("interaction_parameters").EnumerateArray(), p => Assert.Equal("assumed_zero", p.GetProperty("origin").GetString()));
-        Assert.Contains(root.GetProperty("notes").EnumerateArray(), n => n.GetString()!.Contains("assumed 0", StringComparison.Ordinal));
+        Assert.Contains(root.GetProperty("notes").EnumerateArray(), n => n.GetString()!.Contains("assumed zero", StringComparison.Ordinal));
     }
 
     [Fact]
@@ -59,8 +59,8 @@ public sealed class MixtureCommandTests
     {
         string table = RunText("mixture", "methane=0.9,n-decane=0.1");
         Assert.Contains("pseudo-critical (Kay's rule)", table, StringComparison.Ordinal);
-        Assert.Contains("assumed 0", table, StringComparison.Ordinal);
-        Assert.Contains("note: a pair marked 'assumed 0' has no given or published k_ij", table, StringComparison.Ordinal);
+        Assert.Contains("assumed zero", table, StringComparison.Ordinal);
+        Assert.Contains("note: a pair marked 'assumed zero' has no given or published k_ij", table, StringComparison.Ordinal);
     }
 
     [Fact]
@@ -76,10 +76,11 @@ public sealed class MixtureCommandTests
         File.WriteAllText(folder.File("gas.mixture"),
             "# invented test blend\nformat phaseslope-mixture 1\nname test gas (invented)\n"
             + "component methane = 0.7\ncomponent fluids/my-gas.fluid = 0.3\n"
-            + "kij methane, my-gas = 0.02 | invented for this test\n");
+            + "kij methane, my-gas = 0.02 | invented for this test\nremarks made up for the test\n");
 
         var root = RunJson("mixture", folder.File("gas.mixture"), "--format", "json");
         Assert.Equal("test gas (invented)", root.GetProperty("name").GetString());
+        Assert.Equal("made up for the test", root.GetProperty("remarks").GetString());
         var pair = Pair(root, "methane", "my-gas");
         Assert.Equal((0.02, "invented for this test"), (pair.GetProperty("kij").GetDouble(), pair.GetProperty("source").GetString()));
 

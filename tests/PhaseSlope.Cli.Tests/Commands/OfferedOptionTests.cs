@@ -406,6 +406,24 @@ public sealed class OfferedOptionTests : IDisposable
         yield return Changes("fit-kij", "--format", fitKij, "--format", "json");
         yield return Refused("fit-kij", "--format", [.. fitKij, "--format", "csv"]);
         yield return Differs("fit-kij", "--out", fitKij, Replace(fitKij, "{dir}/fit.mixture", "{dir}/other.mixture"));
+
+        // envelope: the same mixture options move the envelope; the Péneloux shift moves no
+        // equilibrium temperature or pressure, only the critical density the JSON gives.
+        string[] envelope = ["envelope", "methane=0.8,carbon dioxide=0.2"];
+        string[] envelopeJson = [.. envelope, "--format", "json"];
+        yield return Changes("envelope", "--mass-fractions", envelope, "--mass-fractions");
+        yield return Changes("envelope", "--kij", envelope, "--kij", "methane,CO2=0.1");
+        yield return Refused("envelope", "--kij", [.. envelope, "--kij", "methane,propane=0.1"]);
+        yield return Changes("envelope", "--eos", envelope, "--eos", "srk");
+        yield return Refused("envelope", "--eos", [.. envelope, "--eos", "nonesuch"]);
+        yield return Changes("envelope", "--alpha", envelope, "--alpha", "twu");
+        yield return Changes("envelope", "--volume-shift", envelopeJson, "--volume-shift", "peneloux");
+        yield return Refused("envelope", "--volume-shift", [.. envelope, "--volume-shift", "1 cm3/mol"]);
+        yield return Changes("envelope", "--min-pressure", envelope, "--min-pressure", "50 kPa");
+        yield return Refused("envelope", "--min-pressure", [.. envelope, "--min-pressure", "5 K"]);
+        yield return Changes("envelope", "--format", envelope, "--format", "json");
+        yield return Refused("envelope", "--format", [.. envelope, "--format", "csv"]);
+        yield return Changes("envelope", "--out", envelope, "--out", "{dir}/out.txt");
     }
 
     /// <summary>--eos, --alpha, --volume-shift, --format and (where offered) --units.</summary>

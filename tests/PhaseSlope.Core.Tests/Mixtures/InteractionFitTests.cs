@@ -82,7 +82,7 @@ public sealed class InteractionFitTests(ITestOutputHelper output)
         var mixture = Mixture.Create([F("ethanol"), F("water")], [0.5, 0.5], [new GivenInteraction(0, 1, -0.0712345678901, "fitted by phaseslope to data.csv")]);
         var text = new StringWriter();
         MixtureFileWriter.Write(text, mixture, "ethanol-water (fitted)", ["composition equimolar"]);
-        var (read, name) = MixtureFile.Parse(new StringReader(text.ToString()), "test", FluidCatalog.Embedded.Find);
+        var (read, name, _) = MixtureFile.Parse(new StringReader(text.ToString()), "test", FluidCatalog.Embedded.Find);
         Assert.Equal("ethanol-water (fitted)", name);
         Assert.Equal(-0.0712345678901, read.GivenInteractions.Single().Value);
         Assert.Equal("fitted by phaseslope to data.csv", read.GivenInteractions.Single().Source);

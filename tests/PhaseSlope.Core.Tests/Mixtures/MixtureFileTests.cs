@@ -8,7 +8,7 @@ namespace PhaseSlope.Core.Tests.Mixtures;
 /// <summary>The mixture file: what it reads, and every malformed file refused at its line.</summary>
 public sealed class MixtureFileTests
 {
-    private static (Mixture Mixture, string? Name) Parse(string text)
+    private static (Mixture Mixture, string? Name, string? Remarks) Parse(string text)
         => MixtureFile.Parse(new StringReader(text), "test.mixture", FluidCatalog.Embedded.Find);
 
     private const string Head = "format phaseslope-mixture 1\n";
@@ -16,7 +16,7 @@ public sealed class MixtureFileTests
     [Fact]
     public void Parse_ReadsComponentsBasisAndInteractions()
     {
-        var (mixture, name) = Parse(
+        var (mixture, name, remarks) = Parse(
             "# an invented blend for the test\n" + Head
             + "name       test blend (invented)\n"
             + "basis      mass\n"
@@ -25,7 +25,7 @@ public sealed class MixtureFileTests
             + "component  HFC-134a = 0.52\n"
             + "kij        r-32, r-134a = 0.01 | invented for this test\n"
             + "remarks    anything\n");
-        Assert.Equal("test blend (invented)", name);
+        Assert.Equal(("test blend (invented)", "anything"), (name, remarks));
         Assert.Equal(["r-32", "r-125", "r-134a"], mixture.Components.Select(c => c.Name));
         // Mass basis: the same mole fractions as the hand computation in MixtureTests (5e-8).
         Assert.Equal(0.3811104, mixture.MoleFractions[0], 5e-8);

@@ -1,0 +1,173 @@
+using System.Globalization;
+using System.Text;
+using System.Text.Json;
+using PhaseSlope.Cli.Commands;
+using PhaseSlope.Core.Mixtures;
+using PhaseSlope.Core.Models;
+
+namespace PhaseSlope.Cli.Output;
+
+/// <summary>Renders a traced phase envelope for <c>envelope</c>: the bubble and dew branches, the
+/// critical point (from the tracer, with the Heidemann–Khalil point beside it), the cricondenbar
+/// and the cricondentherm, each with temperature_K and pressure_Pa.</summary>
+internal static class EnvelopeWriter
+{
+    /// <summary>Renders as a table or as JSON (CSV is not offered: the result is not one table).</summary>
+    public static string Render(MixtureInput input, PhaseEnvelope envelope, IReadOnlyList<MixtureCriticalPoint> criteria, OutputFormat format)
+        => format == OutputFormat.Json ? Json(input, envelope, criteria) : Table(input, envelope, criteria);
+
+    /// <summary>The Heidemann–Khalil point nearest the envelope's critical point (or the least dense).</summary>
+    private static MixtureCriticalPoint? Criteria(PhaseEnvelope envelope, IReadOnlyList<MixtureCriticalPoint> criteria)
+        => criteria.Count == 0 ? null
+            : envelope.CriticalPoint is { } c ? criteria.MinBy(p => Math.Abs(p.Temperature - c.Temperature)) : criteria[0];
+
+    private static string StopName(EnvelopeStop stop) => stop switch
+    {
+        EnvelopeStop.EndPressure => "end_pressure",
+        EnvelopeStop.PointLimit => "point_limit",
+        _ => "step_too_small",
+    };
+
+    private static IEnumerable<string> Notes(MixtureInput input, PhaseEnvelope envelope)
+    {
+        if (envelope.StopReason != EnvelopeStop.EndPressure)
+        {
+            yield return envelope.StopReason == EnvelopeStop.StepTooSmall
+                ? "the trace stopped before coming back to the minimum pressure (Newton failed at the smallest step); the points given are converged, the rest of the envelope is missing"
+                : "the trace reached its point limit before coming back to the minimum pressure; the rest of the envelope is missing";
+        }
+
+        foreach (string note in MixtureWriter.InteractionNotes(input.Interactions))
+        {
+            yield return note;
+        }
+
+        yield return "points are the feed at its bubble (liquid) or dew (vapour) point with the incipient phase; the critical point is where the two branches meet";
+    }
+
+    private static string Table(MixtureInput input, PhaseEnvelope envelope, IReadOnlyList<MixtureCriticalPoint> criteria)
+    {
+        var text = new StringBuilder();
+        text.Append(CultureInfo.InvariantCulture, $"phase envelope of {input.DisplayName}\n");
+        text.Append(CultureInfo.InvariantCulture, $"model: {input.Model.Kind.Title()}, van der Waals one-fluid mixing\n\n");
+        var points = new TextTable(["branch", "T (K)", "P (kPa)"], [false, true, true]);
+        foreach (var point in envelope.Points)
+        {
+            points.Add(point.Branch == EnvelopeBranch.Bubble ? "bubble" : "dew", NumberText.Table(point.Temperature), NumberText.Table(point.Pressure / 1e3));
+        }
+
+        text.Append(points.Render());
+        text.Append('\n');
+        void Landmark(string name, EnvelopeLandmark? landmark, string missing)
+            => text.Append(landmark is { } l
+                ? string.Create(CultureInfo.InvariantCulture, $"{name}: T = {NumberText.Table(l.Temperature)} K, P = {NumberText.Table(l.Pressure / 1e3)} kPa\n")
+                : $"{name}: undefined ({missing})\n");
+        Landmark("critical point", envelope.CriticalPoint, "the trace did not reach it");
+        if (Criteria(envelope, criteria) is { } hk)
+        {
+            text.Append(CultureInfo.InvariantCulture, $"critical point (Heidemann-Khalil criteria): T = {NumberText.Table(hk.Temperature)} K, P = {NumberText.Table(hk.Pressure / 1e3)} kPa\n");
+        }
+
+        Landmark("cricondenbar", envelope.Cricondenbar, "no pressure maximum on the traced part");
+        Landmark("cricondentherm", envelope.Cricondentherm, "no temperature maximum on the traced part");
+        text.Append('\n');
+        foreach (string note in Notes(input, envelope))
+        {
+            text.Append(CultureInfo.InvariantCulture, $"note: {note}\n");
+        }
+
+        text.Append(CultureInfo.InvariantCulture, $"caution: {CoexistenceWriter.Caution}\n");
+        return text.ToString();
+    }
+
+    private static string Json(MixtureInput input, PhaseEnvelope envelope, IReadOnlyList<MixtureCriticalPoint> criteria)
+    {
+        var names = input.Mixture.Components.Select(c => c.Name).ToList();
+        var feed = input.Mixture.MoleFractions;
+        void Fractions(Utf8JsonWriter json, string key, IReadOnlyList<double> x)
+        {
+            json.WriteStartObject(key);
+            for (int i = 0; i < names.Count; i++)
+            {
+                json.WriteFinite(names[i], x[i]);
+            }
+
+            json.WriteEndObject();
+        }
+
+        void Landmark(Utf8JsonWriter json, string key, EnvelopeLandmark? landmark, string missing)
+        {
+            if (landmark is { } l)
+            {
+                json.WriteStartObject(key);
+                json.WriteFinite("temperature_K", l.Temperature);
+                json.WriteFinite("pressure_Pa", l.Pressure);
+                json.WriteString("branch", l.Branch == EnvelopeBranch.Bubble ? "bubble" : "dew");
+                json.WriteEndObject();
+                json.WriteNull($"{key}_unavailable_reason");
+            }
+            else
+            {
+                json.WriteNull(key);
+                json.WriteString($"{key}_unavailable_reason", missing);
+            }
+        }
+
+        void Branch(Utf8JsonWriter json, string key, IEnumerable<EnvelopePoint> points, bool bubble)
+        {
+            json.WriteStartArray(key);
+            foreach (var point in points)
+            {
+                json.WriteStartObject();
+                json.WriteFinite("temperature_K", point.Temperature);
+                json.WriteFinite("pressure_Pa", point.Pressure);
+                Fractions(json, "liquid_mole_fractions", bubble ? feed : point.IncipientComposition);
+                Fractions(json, "vapour_mole_fractions", bubble ? point.IncipientComposition : feed);
+                json.WriteEndObject();
+            }
+
+            json.WriteEndArray();
+        }
+
+        return JsonText.WriteLine(json =>
+        {
+            json.WriteStartObject();
+            json.WriteString("mixture", input.DisplayName);
+            json.WriteString("eos", input.Model.Kind.Id());
+            json.WriteString("model", $"{input.Model.Kind.Title()}, van der Waals one-fluid mixing");
+            Fractions(json, "mole_fractions", feed);
+            MixtureWriter.WriteInteractions(json, input.Mixture, input.Interactions);
+            json.WriteStartObject("points");
+            Branch(json, "bubble", envelope.BubblePoints, bubble: true);
+            Branch(json, "dew", envelope.DewPoints, bubble: false);
+            json.WriteEndObject();
+            Landmark(json, "critical_point", envelope.CriticalPoint, "the trace did not reach the critical point");
+            if (Criteria(envelope, criteria) is { } hk)
+            {
+                json.WriteStartObject("critical_point_criteria");
+                json.WriteString("method", "Heidemann-Khalil (1980)");
+                json.WriteFinite("temperature_K", hk.Temperature);
+                json.WriteFinite("pressure_Pa", hk.Pressure);
+                json.WriteFinite("density_mol_m3", hk.Density);
+                json.WriteEndObject();
+            }
+            else
+            {
+                json.WriteNull("critical_point_criteria");
+            }
+
+            Landmark(json, "cricondenbar", envelope.Cricondenbar, "no pressure maximum on the traced part of the envelope");
+            Landmark(json, "cricondentherm", envelope.Cricondentherm, "no temperature maximum on the traced part of the envelope");
+            json.WriteString("stop_reason", StopName(envelope.StopReason));
+            json.WriteStartArray("notes");
+            foreach (string note in Notes(input, envelope))
+            {
+                json.WriteStringValue(note);
+            }
+
+            json.WriteEndArray();
+            json.WriteString("caution", CoexistenceWriter.Caution);
+            json.WriteEndObject();
+        });
+    }
+}
