@@ -46,6 +46,8 @@ internal static class CliApp
         root.Subcommands.Add(PlotCommand.Create(io));
         root.Subcommands.Add(FluidsCommand.Create(io));
         root.Subcommands.Add(MixtureCommand.Create(io));
+        root.Subcommands.Add(BinaryCommand.Create(io));
+        root.Subcommands.Add(FitKijCommand.Create(io));
         root.Subcommands.Add(EnvelopeCommand.Create(io));
         root.Subcommands.Add(SaturationCommand.Create(io, Core.Mixtures.MixtureSaturationKind.Bubble));
         root.Subcommands.Add(SaturationCommand.Create(io, Core.Mixtures.MixtureSaturationKind.Dew));

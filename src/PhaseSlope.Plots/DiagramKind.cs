@@ -35,6 +35,15 @@ public enum DiagramKind
     /// <summary>Deviations of the measured vapour pressures from each fluid's model (for example a
     /// fluid before and after <c>phaseslope tune</c>), with the data's stated uncertainties.</summary>
     Deviations,
+
+    /// <summary>A binary mixture's bubble and dew lines in pressure against mole fraction at a temperature.</summary>
+    PressureComposition,
+
+    /// <summary>A binary mixture's bubble and dew lines in temperature against mole fraction at a pressure.</summary>
+    TemperatureComposition,
+
+    /// <summary>A binary mixture's vapour against liquid mole fraction at a temperature or a pressure.</summary>
+    Composition,
 }
 
 /// <summary>The command-line identifiers of the diagram kinds.</summary>
@@ -52,6 +61,9 @@ public static class DiagramKinds
         (DiagramKind.PressureEnthalpy, "p-h"),
         (DiagramKind.Residuals, "residuals"),
         (DiagramKind.Deviations, "deviations"),
+        (DiagramKind.PressureComposition, "p-xy"),
+        (DiagramKind.TemperatureComposition, "t-xy"),
+        (DiagramKind.Composition, "x-y"),
     ];
 
     /// <summary>Every identifier, in the order of <see cref="DiagramKind"/>.</summary>
@@ -75,6 +87,10 @@ public static class DiagramKinds
         kind = default;
         return false;
     }
+
+    /// <summary>Whether the kind is a binary mixture's diagram (drawn by <see cref="Diagrams.BinaryDiagramChart"/>).</summary>
+    public static bool IsBinary(this DiagramKind kind)
+        => kind is DiagramKind.PressureComposition or DiagramKind.TemperatureComposition or DiagramKind.Composition;
 
     /// <summary>Whether the kind can show several fluids on one chart.</summary>
     public static bool AllowsSeveralFluids(this DiagramKind kind)

@@ -195,6 +195,23 @@ public class BadInputCatalogueTests
         { ["mixture", "methane=0.5,,ethane=0.5"], ExitCodes.Usage, "MIXTURE: item 2 is empty" },
         { ["mixture", "inline:tc=300K,pc=4MPa,omega=0.1=0.5,methane=0.5"], ExitCodes.Usage, "MIXTURE: an inline fluid cannot be a component" },
         { ["mixture", "methane=0.5,{dir}/nomass.fluid=0.5", "--mass-fractions"], ExitCodes.Fluid, "MIXTURE: --mass-fractions: fluid 'nomass' gives no molar mass" },
+        { ["binary", "benzene=0.5,cyclohexane=0.5"], ExitCodes.Usage, "binary: give exactly one of --temperature (P-x-y) and --pressure (T-x-y)" },
+        { ["binary", "benzene=0.5,cyclohexane=0.5", "-T", "300", "-P", "1 atm"], ExitCodes.Usage, "binary: give exactly one of --temperature (P-x-y) and --pressure (T-x-y)" },
+        { ["binary", "benzene=0.5,cyclohexane=0.5", "-P", "1 atm", "--points", "2"], ExitCodes.Usage, "--points: '2' is not a whole number from 3 to 10001" },
+        { ["binary", "benzene=0.5,cyclohexane=0.5", "-P", "1 atm", "--points", "ten"], ExitCodes.Usage, "--points: 'ten' is not a whole number from 3 to 10001" },
+        { ["binary", "methane=0.3,ethane=0.3,propane=0.4", "-T", "150"], ExitCodes.Usage, "MIXTURE: binary needs a binary (two components); got 3" },
+        { ["binary", "methane=0.5,propane=0.5", "-T", "250"], ExitCodes.OutOfRange, "250 K is not below the critical temperature of methane" },
+        { ["binary", "methane=0.5,propane=0.5", "-P", "50 bar"], ExitCodes.OutOfRange, "5000000 Pa is not below the critical pressure of methane" },
+        { ["binary", "benzene=0.5,cyclohexane=0.5", "-P", "1 atm", "--format", "xml"], ExitCodes.Usage, "--format: unknown format 'xml'" },
+        { ["fit-kij", "{dir}/no-such.csv", "--components", "ethanol,water"], ExitCodes.DataFile, "no-such.csv: data file not found" },
+        { ["fit-kij", "{dir}/ok.csv", "--components", "ethanol,water"], ExitCodes.DataFile, "the header needs columns 'T [unit]', 'P [unit]' and 'x1'" },
+        { ["fit-kij", "{dir}/vlenounits.csv", "--components", "ethanol,water"], ExitCodes.DataFile, "the temperature column needs its unit in the header" },
+        { ["fit-kij", "{dir}/vlebad.csv", "--components", "ethanol,water"], ExitCodes.DataFile, "x1 = 1.5 is not a mole fraction from 0 to 1" },
+        { ["fit-kij", "{dir}/vleone.csv", "--components", "ethanol,water"], ExitCodes.DataFile, "1 data row after the header; at least 2 are needed" },
+        { ["fit-kij", "{dir}/vlebad.csv", "--components", "ethanol"], ExitCodes.Usage, "--components: 'ethanol' is not two component names A,B" },
+        { ["fit-kij", "{dir}/vlebad.csv", "--components", "ethanol,etanol"], ExitCodes.Fluid, "unknown fluid 'etanol'" },
+        { ["fit-kij", "{dir}/vlebad.csv", "--components", "ethanol,C2H5OH"], ExitCodes.Usage, "--components: 'ethanol' is given twice" },
+        { ["fit-kij", "{dir}/vlebad.csv", "--components", "ethanol,water", "--format", "csv"], ExitCodes.Usage, "--format: fit-kij reports as table or json" },
         { ["mixture", "methane=0.5,ethane=0.5", "--kij", "methane,ethane=abc"], ExitCodes.Usage, "--kij: the k_ij of 'methane,ethane' is 'abc', not a number" },
         { ["mixture", "methane=0.5,ethane=0.5", "--kij", "methane;ethane=0.1"], ExitCodes.Usage, "--kij: 'methane;ethane=0.1' is not A,B=VALUE" },
         { ["mixture", "methane=0.5,ethane=0.5", "--kij", "methane,ethane=1.5"], ExitCodes.Usage, "--kij: k_ij of methane, ethane is 1.5; it must be between -1 and 1" },
@@ -255,6 +272,9 @@ public class BadInputCatalogueTests
         File.WriteAllText(folder.File("lowomega.fluid"), ReplaceLine(ReplaceLine(ReplaceLine(propane, "acentric_factor", "acentric_factor -0.5 | invented for a test"),
             "name", "name lowomega"), "synonyms", ""));
         File.WriteAllText(folder.File("nomass.fluid"), ReplaceLine(ReplaceLine(ReplaceLine(propane, "molar_mass", ""), "name", "name nomass"), "synonyms", ""));
+        File.WriteAllText(folder.File("vlenounits.csv"), "T,P [kPa],x1,y1\n351,101.325,0.5,0.6\n352,101.325,0.4,0.55\n");
+        File.WriteAllText(folder.File("vlebad.csv"), "T [K],P [kPa],x1,y1\n351,101.325,1.5,0.6\n352,101.325,0.4,0.55\n");
+        File.WriteAllText(folder.File("vleone.csv"), "T [K],P [kPa],x1,y1\n351,101.325,0.5,0.6\n");
         File.WriteAllText(folder.File("blend.mixture"), "format phaseslope-mixture 1\ncomponent methane = 0.5\ncomponent ethane = 0.5\n");
         File.WriteAllText(folder.File("sum.mixture"), "format phaseslope-mixture 1\ncomponent methane = 0.5\ncomponent ethane = 0.4\n");
         File.WriteAllText(folder.File("badfluid.mixture"), "format phaseslope-mixture 1\ncomponent hugemass.fluid = 1\n");

@@ -17,6 +17,11 @@ public class RenderingTests
     private static PlotModel Build(string id)
     {
         Assert.True(DiagramKinds.TryParse(id, out var kind));
+        if (kind.IsBinary())
+        {
+            return BinaryDiagramChartTests.Chart(kind);
+        }
+
         // Few points keep the suite fast; the shapes are the same. The residuals and deviations kinds need data:
         // the model's own saturation pressures with a 0.3 % scatter pattern and stated uncertainty.
         // Deviations draw Peng–Robinson against Soave–Redlich–Kwong's pressures (a model against its

@@ -35,7 +35,7 @@ internal static class PlotCommand
             PlotModel model;
             try
             {
-                model = Diagram.Build(request.Kind, request.Fluids, request.Options);
+                model = request.Binary is { } binary ? binary.Chart(request.Kind, request.Options.Units) : Diagram.Build(request.Kind, request.Fluids, request.Options);
             }
             catch (InvalidInputException ex) when (PlotOptions.OptionOf(ex.Field) is string option)
             {
@@ -61,8 +61,9 @@ internal static class PlotCommand
 /// <param name="Height">Height in pixels.</param>
 /// <param name="Fluids">The fluids with their models.</param>
 /// <param name="Options">Axis choices and the measured data, if any.</param>
+/// <param name="Binary">For p-xy, t-xy and x-y: the binary mixture and its conditions (then <paramref name="Fluids"/> is empty).</param>
 internal sealed record PlotRequest(DiagramKind Kind, string Path, FigureFormat Format, int Width, int Height,
-    IReadOnlyList<PlotFluid> Fluids, DiagramOptions Options);
+    IReadOnlyList<PlotFluid> Fluids, DiagramOptions Options, BinaryRequest? Binary = null);
 
 /// <summary>The checked inputs and drawn model of <c>plot MIXTURE --diagram envelope</c>.</summary>
 /// <param name="Model">The envelope diagram.</param>
@@ -80,7 +81,7 @@ internal sealed class PlotOptions
 
     /// <summary>FLUID[,FLUID...].</summary>
     public Argument<string> Fluids { get; } = new("FLUID") { Description = "Catalog name, fluid file or inline:... definition; several separated by commas (p-t, lnp-invt, t-rho, slope, latent); an inline definition keeps the key=value items that follow it. "
-        + "For --diagram envelope a MIXTURE instead: NAME=FRACTION,NAME=FRACTION,... in mole fractions, or a mixture file" };
+        + "For --diagram envelope a MIXTURE instead: NAME=FRACTION,NAME=FRACTION,... in mole fractions, or a mixture file; for p-xy, t-xy and x-y a MIXTURE of two components (its fractions are not used)" };
 
     /// <summary>--diagram.</summary>
     public Option<string> Kind { get; } = new("--diagram", "-d") { Description = $"Diagram: {string.Join(", ", DiagramKinds.Ids)}, or {EnvelopeId} (a MIXTURE's bubble and dew lines, critical point, cricondenbar and cricondentherm)", Required = true };
@@ -185,7 +186,11 @@ internal sealed class PlotOptions
         command.Options.Add(EnthalpyRange);
         command.Options.Add(EntropyRange);
         command.Options.Add(Cycle);
+        Binary.AddTo(command);
     }
+
+    /// <summary>--temperature, --pressure, --points, --kij (the binary diagrams only).</summary>
+    public BinaryPlotOptions Binary { get; } = new();
 
     /// <summary>The option a field of a refusal by <see cref="Diagram"/> comes from, or null.</summary>
     public static string? OptionOf(string field) => FieldOptions.GetValueOrDefault(field);
@@ -217,7 +222,7 @@ internal sealed class PlotOptions
     {
         var (path, figureFormat, w, h) = Figure(parse);
         var axisUnits = AxisUnits(parse);
-        foreach (var option in new Option[] { Data, Reduced, TemperatureUnit, PressureUnit, Reference, Isotherms, Isobars, Isochores, TemperatureRange, PressureRange, EnthalpyRange, EntropyRange, Cycle })
+        foreach (var option in new Option[] { Data, Reduced, TemperatureUnit, PressureUnit, Reference, Isotherms, Isobars, Isochores, TemperatureRange, PressureRange, EnthalpyRange, EntropyRange, Cycle, Binary.Temperature, Binary.Pressure, Binary.Points, Binary.Kij })
         {
             if (CommonOptions.Given(parse, option))
             {
@@ -291,6 +296,14 @@ internal sealed class PlotOptions
         var (path, figureFormat, w, h) = Figure(parse);
         var axisUnits = AxisUnits(parse);
 
+        if (kind.IsBinary())
+        {
+            var binary = Binary.Bind(parse, kind, parse.GetValue(Fluids)!, Common,
+                [Data, Reduced, Log, TemperatureUnit, PressureUnit, Common.VolumeShift, Reference, Isotherms, Isobars, Isochores, TemperatureRange, PressureRange, EnthalpyRange, EntropyRange, Cycle]);
+            return new PlotRequest(kind, path, figureFormat, w, h, [], new DiagramOptions { Units = axisUnits }, binary);
+        }
+
+        Binary.RefuseFor(kind, parse);
         string[] names = [.. FluidResolver.SplitList(parse.GetValue(Fluids)!)];
         if (names.Any(n => n.Length == 0))
         {

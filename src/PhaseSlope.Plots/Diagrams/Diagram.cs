@@ -30,6 +30,7 @@ public static class Diagram
             DiagramKind.TemperatureEntropy => TemperatureEntropyDiagram.Build(fluids[0], options),
             DiagramKind.Residuals => ResidualsDiagram.Build(fluids[0], options),
             DiagramKind.Deviations => DeviationsDiagram.Build(fluids, options),
+            _ when kind.IsBinary() => throw new ArgumentException($"{kind.Id()} is a binary mixture's diagram: build it with BinaryDiagramChart", nameof(kind)),
             _ => PressureEnthalpyDiagram.Build(fluids[0], options),
         };
     }

@@ -265,6 +265,18 @@ public sealed class OfferedOptionTests : IDisposable
         string[] dome = ["plot", "propane", "--diagram", "t-rho", "--out", "{dir}/out.svg"];
         string[] plotBare = [.. plot, "--data", "{bare}", "--temperature-unit", "K", "--pressure-unit", "kPa"];
         yield return Differs("plot", "--diagram", plot, Replace(plot, "p-t", "slope"));
+        // The binary diagrams: benzene + cyclohexane, 5 compositions.
+        string[] txy = ["plot", "benzene=0.5,cyclohexane=0.5", "--diagram", "t-xy", "--pressure", "1atm", "--points", "5", "--out", "{dir}/out.svg"];
+        yield return Differs("plot", "--diagram", txy, Replace(txy, "t-xy", "x-y"));
+        yield return Differs("plot", "--pressure", txy, Replace(txy, "1atm", "50kPa"));
+        yield return Refused("plot", "--pressure", [.. plot, "--pressure", "1atm"]);
+        yield return Differs("plot", "--temperature", Replace(txy, "t-xy", "x-y"), ["plot", "benzene=0.5,cyclohexane=0.5", "--diagram", "x-y", "--temperature", "340", "--points", "5", "--out", "{dir}/out.svg"]);
+        yield return Refused("plot", "--temperature", [.. txy, "--temperature", "340"]);
+        yield return Differs("plot", "--points", txy, Replace(txy, "5", "7"));
+        yield return Refused("plot", "--points", [.. plot, "--points", "7"]);
+        yield return Changes("plot", "--kij", txy, "--kij", "benzene,cyclohexane=0.02");
+        yield return Refused("plot", "--kij", [.. plot, "--kij", "benzene,cyclohexane=0.02"]);
+        yield return Refused("plot", "--reduced", [.. txy, "--reduced"]);
         yield return Differs("plot", "--out", plot, Replace(plot, "{dir}/out.svg", "{dir}/out.png"));
         yield return Changes("plot", "--width", plot, "--width", "800");
         yield return Changes("plot", "--height", plot, "--height", "600");
@@ -364,6 +376,36 @@ public sealed class OfferedOptionTests : IDisposable
         yield return Changes("mixture", "--format", mixture, "--format", "json");
         yield return Refused("mixture", "--format", [.. mixture, "--format", "csv"]);
         yield return Changes("mixture", "--out", mixture, "--out", "{dir}/out.txt");
+
+        // binary: benzene + cyclohexane, a T-x-y diagram at 1 atm on 5 compositions (it has an
+        // azeotrope with k_ij = 0); every option moves the bubble points or the output's form.
+        string[] binary = ["binary", "benzene=0.5,cyclohexane=0.5", "-P", "1atm", "--points", "5"];
+        yield return Differs("binary", "--temperature", binary, ["binary", "benzene=0.5,cyclohexane=0.5", "-T", "340", "--points", "5"]);
+        yield return Differs("binary", "--pressure", binary, Replace(binary, "1atm", "50kPa"));
+        yield return Refused("binary", "--pressure", [.. binary, "-T", "340"]);
+        yield return Differs("binary", "--points", binary, Replace(binary, "5", "7"));
+        yield return Refused("binary", "--points", Replace(binary, "5", "2"));
+        yield return Changes("binary", "--kij", binary, "--kij", "benzene,cyclohexane=0.02");
+        yield return Refused("binary", "--kij", [.. binary, "--kij", "benzene,propane=0.02"]);
+        yield return Changes("binary", "--eos", binary, "--eos", "srk");
+        yield return Refused("binary", "--eos", [.. binary, "--eos", "nonesuch"]);
+        yield return Changes("binary", "--alpha", binary, "--alpha", "twu");
+        yield return Changes("binary", "--format", binary, "--format", "json");
+        yield return Changes("binary", "--format", binary, "--format", "csv");
+        yield return Refused("binary", "--format", [.. binary, "--format", "xml"]);
+        yield return Changes("binary", "--out", binary, "--out", "{dir}/out.txt");
+
+        // fit-kij: three ethanol-water points at 1 atm (Carey and Lewis 1932 via Perry's, from
+        // memory) fitted and written to {dir}/fit.mixture.
+        string[] fitKij = ["fit-kij", "{vle}", "--components", "ethanol,water", "--out", "{dir}/fit.mixture"];
+        yield return Differs("fit-kij", "--components", fitKij, Replace(fitKij, "ethanol,water", "1-propanol,water"));
+        yield return Refused("fit-kij", "--components", Replace(fitKij, "ethanol,water", "ethanol"));
+        yield return Changes("fit-kij", "--eos", fitKij, "--eos", "srk");
+        yield return Refused("fit-kij", "--eos", [.. fitKij, "--eos", "nonesuch"]);
+        yield return Changes("fit-kij", "--alpha", fitKij, "--alpha", "twu");
+        yield return Changes("fit-kij", "--format", fitKij, "--format", "json");
+        yield return Refused("fit-kij", "--format", [.. fitKij, "--format", "csv"]);
+        yield return Differs("fit-kij", "--out", fitKij, Replace(fitKij, "{dir}/fit.mixture", "{dir}/other.mixture"));
 
         // envelope: the same mixture options move the envelope; the Péneloux shift moves no
         // equilibrium temperature or pressure, only the critical density the JSON gives.
@@ -657,7 +699,13 @@ public sealed class OfferedOptionTests : IDisposable
             File.WriteAllText(states2, "T [K],P [bar]\n300,2\n");
         }
 
-        return [.. args.Select(a => a.Replace("{dir}", folder.Path, StringComparison.Ordinal).Replace("{bare}", bare, StringComparison.Ordinal)
+        string vle = _data.File("vle.csv");
+        if (!File.Exists(vle))
+        {
+            File.WriteAllText(vle, "T [degC],P [kPa],x1,y1\n86.7,101.325,0.0966,0.4375\n81.5,101.325,0.3273,0.5826\n78.41,101.325,0.7472,0.7815\n");
+        }
+
+        return [.. args.Select(a => a.Replace("{dir}", folder.Path, StringComparison.Ordinal).Replace("{bare}", bare, StringComparison.Ordinal).Replace("{vle}", vle, StringComparison.Ordinal)
             .Replace("{states1}", states1, StringComparison.Ordinal).Replace("{states2}", states2, StringComparison.Ordinal))];
     }
 
