@@ -102,7 +102,9 @@ public static class CriticalPointCriteria
         return found;
     }
 
-    private static double[] Normalized(CubicMixtureModel model, IReadOnlyList<double> composition)
+    /// <summary>A composition checked against the model (one finite, non-negative fraction per
+    /// component, not all zero) and divided by its sum: shared by the envelope tracer.</summary>
+    internal static double[] Normalized(CubicMixtureModel model, IReadOnlyList<double> composition)
     {
         if (composition.Count != model.ComponentCount)
         {

@@ -122,29 +122,8 @@ public sealed class EnvelopeTracer
             _owner = owner;
             _options = owner.Options;
             _n = owner._model.ComponentCount;
-            if (composition.Count != _n)
-            {
-                throw new InvalidInputException("composition", composition.Count, $"this mixture has {_n} components; got {composition.Count} fractions");
-            }
-
-            double total = 0;
-            foreach (double v in composition)
-            {
-                if (!(v >= 0) || !double.IsFinite(v))
-                {
-                    throw new InvalidInputException("composition", v, $"fraction {Preconditions.Format(v)} is not a finite non-negative number");
-                }
-
-                total += v;
-            }
-
-            if (!(total > 0))
-            {
-                throw new InvalidInputException("composition", total, "the fractions of a mixture must not all be zero");
-            }
-
             _size = _n + 2;
-            _z = composition.Select(v => v / total).ToArray();
+            _z = CriticalPointCriteria.Normalized(owner._model, composition);
             _y = new double[_n];
             _lnPhiX = new double[_n];
             _lnPhiY = new double[_n];
