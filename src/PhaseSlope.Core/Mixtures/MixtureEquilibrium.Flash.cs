@@ -66,10 +66,37 @@ public sealed partial class MixtureEquilibrium
             return SinglePhase(temperature, pressure, z, stability, evaluations);
         }
 
+        if (Shallow(stability.Lowest))
+        {
+            // The trial that proved instability is shallow (tm above −1e-6): typically a stationary
+            // point of tm next to the feed (the feed near its own spinodal, tm of order −1e-9), whose
+            // K-values are all within 1 % of 1 and lead substitution into the trivial split (the
+            // 10-component gas at 230 K and 4.25 MPa did so and failed after 50 Newton steps). The
+            // full test runs both trials, so a distinct phase (there the liquid-like trial, tm −4.1)
+            // starts the split. Should the full test not converge, the first result (which proved
+            // instability) stands.
+            try
+            {
+                var full = StabilityAnalysis.Test(Model, temperature, pressure, z, lnK, stopWhenUnstable: false);
+                evaluations += full.ModelEvaluations;
+                stability = full;
+            }
+            catch (ConvergenceException)
+            {
+                // Keep the first result.
+            }
+        }
+
         var vapourTrial = stability.VapourLike;
         var liquidTrial = stability.LiquidLike;
         bool vapourFound = !vapourTrial.IsTrivial && vapourTrial.TangentPlaneDistance < -StabilityAnalysis.NegativeDistance;
         bool liquidFound = !liquidTrial.IsTrivial && liquidTrial.TangentPlaneDistance < -StabilityAnalysis.NegativeDistance;
+        if (vapourFound && liquidFound && Shallow(vapourTrial) != Shallow(liquidTrial))
+        {
+            // One trial is shallow and the other deep: start from the deep one alone.
+            (vapourFound, liquidFound) = Shallow(vapourTrial) ? (false, true) : (true, false);
+        }
+
         if (vapourFound && liquidFound)
         {
             // Both trials found a phase; when they found the same one, K from one trial and the feed.
@@ -95,6 +122,11 @@ public sealed partial class MixtureEquilibrium
 
         return Split(temperature, pressure, z, lnK, stability, evaluations);
     }
+
+    /// <summary>A trial whose tm, though negative, is above −1e-6 (RT per mole of trial phase): ten
+    /// thousand times <see cref="StabilityAnalysis.NegativeDistance"/>, so it proves instability, but a
+    /// weak start for the split (a real split well inside the envelope has tm of order −0.1 to −5).</summary>
+    private static bool Shallow(StabilityTrial trial) => trial.TangentPlaneDistance > -1e-6;
 
     private MixtureFlashResult SinglePhase(double temperature, double pressure, double[] z, StabilityResult stability, int evaluations)
     {
