@@ -28,7 +28,9 @@ public sealed partial class MixtureEquilibrium
     /// <summary>The isothermal flash: the stable state of a feed at (T, P).</summary>
     /// <remarks>
     /// <para>First the tangent-plane-distance test (<see cref="StabilityAnalysis"/>, stopping at the
-    /// first trial with negative tm, which proves the split and starts it); a stable feed is
+    /// first trial with negative tm, which proves the split and starts it; where that trial is a
+    /// shallow point next to the feed, which would start the split at the trivial solution, both
+    /// trials are converged and the other starts it); a stable feed is
     /// one phase, labelled liquid or vapour by its root (the denser of two roots is liquid; with one
     /// root, T below Kay's pseudo-critical temperature Σ z_i Tc_i is liquid-like, a rule of thumb
     /// (Kay, Ind. Eng. Chem. 28, 1014 (1936))). An unstable feed is split starting from the
