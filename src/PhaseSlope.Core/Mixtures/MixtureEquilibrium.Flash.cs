@@ -28,7 +28,9 @@ public sealed partial class MixtureEquilibrium
     /// <summary>The isothermal flash: the stable state of a feed at (T, P).</summary>
     /// <remarks>
     /// <para>First the tangent-plane-distance test (<see cref="StabilityAnalysis"/>, stopping at the
-    /// first trial with negative tm, which proves the split and starts it); a stable feed is
+    /// first trial with negative tm, which proves the split and starts it; where that trial is a
+    /// shallow point next to the feed, which would start the split at the trivial solution, both
+    /// trials are converged and the other starts it); a stable feed is
     /// one phase, labelled liquid or vapour by its root (the denser of two roots is liquid; with one
     /// root, T below Kay's pseudo-critical temperature Σ z_i Tc_i is liquid-like, a rule of thumb
     /// (Kay, Ind. Eng. Chem. 28, 1014 (1936))). An unstable feed is split starting from the
@@ -66,10 +68,37 @@ public sealed partial class MixtureEquilibrium
             return SinglePhase(temperature, pressure, z, stability, evaluations);
         }
 
+        if (Shallow(stability.Lowest, z))
+        {
+            // The trial that proved instability is shallow and next to the feed (a stationary point
+            // of tm near the feed, the feed near its own spinodal, tm of order −1e-9 to −1e-5), whose
+            // K-values are all near 1 and lead substitution into the trivial split (the
+            // 10-component gas at 230 K and 4.25 MPa did so and failed after 50 Newton steps). The
+            // full test runs both trials, so a distinct phase (there the liquid-like trial, tm −4.1)
+            // starts the split. Should the full test not converge, the first result (which proved
+            // instability) stands.
+            try
+            {
+                var full = StabilityAnalysis.Test(Model, temperature, pressure, z, lnK, stopWhenUnstable: false);
+                evaluations += full.ModelEvaluations;
+                stability = full;
+            }
+            catch (ConvergenceException)
+            {
+                // Keep the first result.
+            }
+        }
+
         var vapourTrial = stability.VapourLike;
         var liquidTrial = stability.LiquidLike;
         bool vapourFound = !vapourTrial.IsTrivial && vapourTrial.TangentPlaneDistance < -StabilityAnalysis.NegativeDistance;
         bool liquidFound = !liquidTrial.IsTrivial && liquidTrial.TangentPlaneDistance < -StabilityAnalysis.NegativeDistance;
+        if (vapourFound && liquidFound && Shallow(vapourTrial, z) != Shallow(liquidTrial, z))
+        {
+            // One trial is a shallow point next to the feed and the other is not: start from the other alone.
+            (vapourFound, liquidFound) = Shallow(vapourTrial, z) ? (false, true) : (true, false);
+        }
+
         if (vapourFound && liquidFound)
         {
             // Both trials found a phase; when they found the same one, K from one trial and the feed.
@@ -94,6 +123,30 @@ public sealed partial class MixtureEquilibrium
         }
 
         return Split(temperature, pressure, z, lnK, stability, evaluations);
+    }
+
+    /// <summary>A weak start for the split: a trial whose tm, though below
+    /// −<see cref="StabilityAnalysis.NegativeDistance"/> (so it proves instability), is above −1e-3 RT
+    /// per mole of trial phase, at a composition near the feed (Σ (ln w_i/z_i)² &lt; 1, K-values within
+    /// a factor of about 1.4 of 1). On the 10-component test gas the shallow stationary points that
+    /// led substitution into the trivial split had tm −3e-9 to −1.3e-5 at Σ (ln w_i/z_i)² of 2e-4 to
+    /// 0.12, while the deep trials of its splits have tm −0.03 to −5 and the incipient phases near its
+    /// phase boundaries lie far from the feed (Σ of order 10 to 100).</summary>
+    private static bool Shallow(StabilityTrial trial, double[] z)
+    {
+        if (!(trial.TangentPlaneDistance > -1e-3))
+        {
+            return false;
+        }
+
+        double apart = 0;
+        for (int i = 0; i < z.Length; i++)
+        {
+            double d = Math.Log(trial.Composition[i] / z[i]);
+            apart += d * d;
+        }
+
+        return apart < 1;
     }
 
     private MixtureFlashResult SinglePhase(double temperature, double pressure, double[] z, StabilityResult stability, int evaluations)
