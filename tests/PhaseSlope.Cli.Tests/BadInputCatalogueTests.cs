@@ -228,7 +228,6 @@ public class BadInputCatalogueTests
         { ["mixture", "{dir}/no-such.mixture", "--kij", "a,b=2"], ExitCodes.Usage, "--kij: k_ij of a, b is 2; it must be between -1 and 1" },
         { ["bubble", "methane=0.2,propane=0.8"], ExitCodes.Usage, "bubble: give exactly one of --temperature and --pressure" },
         { ["dew", "methane=0.2,propane=0.8", "-T", "250", "-P", "1 MPa"], ExitCodes.Usage, "dew: give exactly one of --temperature and --pressure" },
-        { ["dew", "methane=0.2,propane=0.8", "-T", "250", "--format", "csv"], ExitCodes.Usage, "--format: dew writes table or json" },
         { ["bubble", "methane=0.9,propane=0.1", "-T", "300"], ExitCodes.NotConverged, "no bubble point found at 300 K" },
         { ["flash", "methane=0.2,propane=0.8", "-T", "250"], ExitCodes.Usage, "flash: give --pressure with one of --temperature, --enthalpy" },
         { ["flash", "methane=0.2,propane=0.8", "-P", "1 MPa", "-T", "250", "--entropy", "1 J/(mol*K)"], ExitCodes.Usage, "flash: give exactly one of --temperature, --enthalpy and --entropy" },

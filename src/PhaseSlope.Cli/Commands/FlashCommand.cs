@@ -105,11 +105,6 @@ internal sealed class FlashOptions
         }
 
         var format = Common.OutputFormat(parse);
-        if (format == OutputFormat.Csv)
-        {
-            throw new UsageException("--format: flash writes table or json");
-        }
-
         double p = QuantityParser.ParsePressure(pText, "--pressure");
         double? t = tText is null ? null : QuantityParser.ParseTemperature(tText, "--temperature");
         _ = Out.Path(parse);

@@ -116,11 +116,6 @@ internal sealed class SaturationOptions
         }
 
         var format = Common.OutputFormat(parse);
-        if (format == OutputFormat.Csv)
-        {
-            throw new UsageException($"--format: {_command} writes table or json");
-        }
-
         double? t = tText is null ? null : QuantityParser.ParseTemperature(tText, "--temperature");
         double? p = pText is null ? null : QuantityParser.ParsePressure(pText, "--pressure");
         _ = Out.Path(parse);

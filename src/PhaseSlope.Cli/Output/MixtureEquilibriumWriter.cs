@@ -19,12 +19,28 @@ internal static class MixtureEquilibriumWriter
     public const string GlideAtTemperatureReason = "the glide is the dew minus the bubble temperature at one pressure: give --pressure";
 
     /// <summary>A bubble or dew point, with the glide at its pressure (or why there is none).</summary>
-    public static string Render(MixtureInput input, MixtureSaturationPoint point, double? glide, string? glideReason, OutputFormat format)
-        => format == OutputFormat.Json ? Json(input, point, glide, glideReason) : Table(input, point, glide, glideReason);
+    public static string Render(MixtureInput input, MixtureSaturationPoint point, double? glide, string? glideReason, OutputFormat format) => format switch
+    {
+        OutputFormat.Json => Json(input, point, glide, glideReason),
+        OutputFormat.Csv => Csv(Json(input, point, glide, glideReason), input),
+        _ => Table(input, point, glide, glideReason),
+    };
 
     /// <summary>A flash result.</summary>
-    public static string Render(MixtureInput input, MixtureFlashResult flash, OutputFormat format)
-        => format == OutputFormat.Json ? Json(input, flash) : Table(input, flash);
+    public static string Render(MixtureInput input, MixtureFlashResult flash, OutputFormat format) => format switch
+    {
+        OutputFormat.Json => Json(input, flash),
+        OutputFormat.Csv => Csv(Json(input, flash), input),
+        _ => Table(input, flash),
+    };
+
+    /// <summary>The JSON object as one CSV row (every key a column, nested objects and arrays
+    /// flattened, SI units); the glide is a temperature difference.</summary>
+    private static string Csv(string json, MixtureInput input)
+    {
+        using var document = System.Text.Json.JsonDocument.Parse(json);
+        return FlatCsv.Write([JsonFlattener.Flatten(document.RootElement)], Cli.Units.UnitSystem.Si, input.Mixture.MolarMass, new HashSet<string>(StringComparer.Ordinal) { "glide_K" });
+    }
 
     private static string KindName(MixtureSaturationKind kind) => kind == MixtureSaturationKind.Bubble ? "bubble" : "dew";
 

@@ -440,7 +440,7 @@ public sealed class OfferedOptionTests : IDisposable
             yield return Changes(point, "--volume-shift", atT, "--volume-shift", "peneloux");
             yield return Refused(point, "--volume-shift", [.. atT, "--volume-shift", "1 cm3/mol"]);
             yield return Changes(point, "--format", atT, "--format", "json");
-            yield return Refused(point, "--format", [.. atT, "--format", "csv"]);
+            yield return Changes(point, "--format", atT, "--format", "csv");
             yield return Changes(point, "--out", atT, "--out", "{dir}/out.txt");
         }
 
@@ -461,7 +461,7 @@ public sealed class OfferedOptionTests : IDisposable
         yield return Changes("flash", "--volume-shift", flash, "--volume-shift", "peneloux");
         yield return Refused("flash", "--volume-shift", [.. flash, "--volume-shift", "1 cm3/mol"]);
         yield return Changes("flash", "--format", flash, "--format", "json");
-        yield return Refused("flash", "--format", [.. flash, "--format", "csv"]);
+        yield return Changes("flash", "--format", flash, "--format", "csv");
         yield return Changes("flash", "--out", flash, "--out", "{dir}/out.txt");
     }
 
