@@ -184,7 +184,6 @@ public class BadInputCatalogueTests
         { ["mixture", "methane=0.5,metane=0.5"], ExitCodes.Fluid, "MIXTURE: component 2: unknown fluid 'metane'; did you mean 'methane'" },
         { ["envelope", "methane=1"], ExitCodes.Usage, "MIXTURE: a phase envelope needs at least two components, got only 'methane'" },
         { ["envelope", "methane=0.5,ethane=0.5", "--min-pressure", "20 MPa"], ExitCodes.Usage, "--min-pressure: '20 MPa' is above 10 MPa; the envelope is trac" },
-        { ["envelope", "methane=0.5,ethane=0.5", "--format", "csv"], ExitCodes.Usage, "--format: envelope writes table or json" },
         { ["envelope", "methane=0.5,ethane=0.4"], ExitCodes.Usage, "MIXTURE: the mole fractions of methane (0.5), ethane (0.4) sum to 0.9, not 1" },
         { ["mixture", "methane=0.5,CH4=0.5"], ExitCodes.Usage, "MIXTURE: component 'methane' is given twice (components 1 and 2)" },
         { ["mixture", "methane=1.2,ethane=-0.2"], ExitCodes.Usage, "MIXTURE: the mole fraction of 'ethane' is -0.2; a fraction must" },

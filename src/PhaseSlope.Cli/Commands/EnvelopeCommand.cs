@@ -67,15 +67,10 @@ internal sealed class EnvelopeCommandOptions
         Out.AddTo(command);
     }
 
-    /// <summary>Checks --format (table or json) and --min-pressure, then binds the mixture.</summary>
+    /// <summary>Checks --format and --min-pressure, then binds the mixture.</summary>
     public EnvelopeRequest Bind(ParseResult parse)
     {
         var format = Common.OutputFormat(parse);
-        if (format == OutputFormat.Csv)
-        {
-            throw new UsageException("--format: envelope writes table or json (its result is two branches and three points, not one table)");
-        }
-
         string? text = parse.GetValue(MinimumPressure);
         double minimum = text is null ? EnvelopeOptions.Default.StartPressure : QuantityParser.ParsePressure(text, "--min-pressure");
         if (!(minimum <= 1e7))

@@ -12,9 +12,31 @@ namespace PhaseSlope.Cli.Output;
 /// and the cricondentherm, each with temperature_K and pressure_Pa.</summary>
 internal static class EnvelopeWriter
 {
-    /// <summary>Renders as a table or as JSON (CSV is not offered: the result is not one table).</summary>
-    public static string Render(MixtureInput input, PhaseEnvelope envelope, IReadOnlyList<MixtureCriticalPoint> criteria, OutputFormat format)
-        => format == OutputFormat.Json ? Json(input, envelope, criteria) : Table(input, envelope, criteria);
+    /// <summary>Renders as a table, as JSON, or as CSV: one row per traced point (the bubble
+    /// branch, then the dew branch) with its branch and the point's JSON members flattened; the
+    /// critical point, cricondenbar and cricondentherm are in the JSON and the table.</summary>
+    public static string Render(MixtureInput input, PhaseEnvelope envelope, IReadOnlyList<MixtureCriticalPoint> criteria, OutputFormat format) => format switch
+    {
+        OutputFormat.Json => Json(input, envelope, criteria),
+        OutputFormat.Csv => Csv(Json(input, envelope, criteria), input),
+        _ => Table(input, envelope, criteria),
+    };
+
+    private static string Csv(string json, MixtureInput input)
+    {
+        using var document = System.Text.Json.JsonDocument.Parse(json);
+        var points = document.RootElement.GetProperty("points");
+        var rows = new List<IReadOnlyList<FlatField>>();
+        foreach (string branch in new[] { "bubble", "dew" })
+        {
+            foreach (var point in points.GetProperty(branch).EnumerateArray())
+            {
+                rows.Add([new FlatField("branch", [], System.Text.Json.JsonValueKind.String, branch), .. JsonFlattener.Flatten(point)]);
+            }
+        }
+
+        return FlatCsv.Write(rows, Cli.Units.UnitSystem.Si, input.Mixture.MolarMass);
+    }
 
     /// <summary>The Heidemann–Khalil point nearest the envelope's critical point (or the least dense).</summary>
     private static MixtureCriticalPoint? Criteria(PhaseEnvelope envelope, IReadOnlyList<MixtureCriticalPoint> criteria)

@@ -32,3 +32,23 @@ public class MixtureCsvTests
         }
     }
 }
+
+/// <summary>The envelope's CSV: one row per traced point, both branches, as in the JSON.</summary>
+public class EnvelopeCsvTests
+{
+    [Fact]
+    public void Csv_OneRowPerPoint_BothBranches_SameNumbers()
+    {
+        string[] args = ["envelope", "methane=0.8,ethane=0.2"];
+        var json = RunJson([.. args, "--format", "json"]);
+        var rows = CurveCommandTests.ParseCsv(RunText([.. args, "--format", "csv"]));
+        var bubble = json.GetProperty("points").GetProperty("bubble").EnumerateArray().ToArray();
+        var dew = json.GetProperty("points").GetProperty("dew").EnumerateArray().ToArray();
+        Assert.Equal(1 + bubble.Length + dew.Length, rows.Count);
+        int t = Array.IndexOf(rows[0], "temperature_K");
+        Assert.Equal("bubble", rows[1][0]);
+        Assert.Equal(bubble[0].GetProperty("temperature_K").GetRawText(), rows[1][t]);
+        Assert.Equal("dew", rows[^1][0]);
+        Assert.Equal(dew[^1].GetProperty("temperature_K").GetRawText(), rows[^1][t]);
+    }
+}
