@@ -56,6 +56,19 @@ internal static class FiniteNumbers
             json.WriteNull(key);
         }
     }
+
+    /// <summary>Writes a text member that may be absent: the text, else <c>null</c>.</summary>
+    public static void WriteStringOrNull(this Utf8JsonWriter json, string key, string? value)
+    {
+        if (value is null)
+        {
+            json.WriteNull(key);
+        }
+        else
+        {
+            json.WriteString(key, value);
+        }
+    }
 }
 
 /// <summary>A result that must be a number came out NaN or infinite (an overflow).</summary>

@@ -56,14 +56,7 @@ internal static class MixtureEquilibriumWriter
             json.WriteFinite("temperature_K", point.Temperature);
             json.WriteFinite("pressure_Pa", point.Pressure);
             json.WriteNumberOrNull("glide_K", glide);
-            if (glideReason is null)
-            {
-                json.WriteNull("glide_unavailable_reason");
-            }
-            else
-            {
-                json.WriteString("glide_unavailable_reason", glideReason);
-            }
+            json.WriteStringOrNull("glide_unavailable_reason", glideReason);
 
             Fractions(json, "liquid_mole_fractions", input, point.Liquid);
             Fractions(json, "vapour_mole_fractions", input, point.Vapour);

@@ -98,24 +98,9 @@ internal static class MixtureWriter
         return JsonText.WriteLine(json =>
         {
             json.WriteStartObject();
-            if (input.Name is null)
-            {
-                json.WriteNull("name");
-            }
-            else
-            {
-                json.WriteString("name", input.Name);
-            }
-
+            json.WriteStringOrNull("name", input.Name);
             json.WriteString("origin", OriginText(input));
-            if (input.Remarks is null)
-            {
-                json.WriteNull("remarks");
-            }
-            else
-            {
-                json.WriteString("remarks", input.Remarks);
-            }
+            json.WriteStringOrNull("remarks", input.Remarks);
 
             json.WriteString("eos", input.Model.Kind.Id());
             json.WriteString("model", $"{input.Model.Kind.Title()}, van der Waals one-fluid mixing");

@@ -257,7 +257,7 @@ internal static class StateWriter
                     {
                         json.WriteStartObject();
                         json.WriteNumber("line", r.Line);
-                        WriteStringOrNull(json, "error", r.Error);
+                        json.WriteStringOrNull("error", r.Error);
                         json.WritePropertyName("state");
                         if (r.State is { } state)
                         {
@@ -316,18 +316,6 @@ internal static class StateWriter
 
                 text.AppendLine(CoexistenceWriter.Caution);
                 return text.ToString();
-        }
-    }
-
-    private static void WriteStringOrNull(Utf8JsonWriter json, string name, string? value)
-    {
-        if (value is null)
-        {
-            json.WriteNull(name);
-        }
-        else
-        {
-            json.WriteString(name, value);
         }
     }
 }

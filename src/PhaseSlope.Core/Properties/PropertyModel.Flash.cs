@@ -274,7 +274,7 @@ public sealed partial class PropertyModel
                     return TwoPhase(point, QualityOf(liquid, vapour, p, value)!.Value);
                 }
 
-                var single = AtDensity(t, value);
+                var single = AtDensity(t, value, PhaseChoice.Stable, point);
                 return Single(single, SaturationTemperatureAt(single.Pressure));
             }
 

@@ -124,6 +124,11 @@ public sealed partial class PropertyModel
     /// 1/b; a two-phase density without a chosen phase; a density inside the spinodal or on the
     /// other branch than the chosen one; a phase chosen at or above Tc.</exception>
     public ThermodynamicState AtDensity(double temperature, double density, PhaseChoice phase = PhaseChoice.Stable)
+        => AtDensity(temperature, density, phase, saturation: null);
+
+    /// <summary><see cref="AtDensity(double, double, PhaseChoice)"/> with the coexistence point at
+    /// T when the caller has it already (a flash), so it is not solved twice.</summary>
+    private ThermodynamicState AtDensity(double temperature, double density, PhaseChoice phase, CoexistencePoint? saturation)
     {
         Preconditions.Positive(temperature, "temperature");
         Preconditions.Positive(density, "density");
@@ -148,7 +153,7 @@ public sealed partial class PropertyModel
             return Build(PhaseState.From(residual, pressure), PhaseLabel.Supercritical, metastable: false);
         }
 
-        var saturation = SaturationAt(temperature);
+        saturation ??= SaturationAt(temperature);
         double liquid = saturation.Liquid.Density;
         double vapour = saturation.Vapour.Density;
         // The saturated densities carry the solver's stated relative uncertainty (at most 1e-9,
