@@ -236,6 +236,16 @@ public class BadInputCatalogueTests
         { ["mixture", "{dir}/sum.mixture"], ExitCodes.Fluid, "sum.mixture:3: field 'component': the mole fractions of methane (0.5), ethane (0.4) sum to 0.9" },
         { ["mixture", "{dir}/badfluid.mixture"], ExitCodes.Fluid, "badfluid.mixture:2: field 'component': component 'hugemass.fluid': " },
         { ["mixture", "/dev/zero"], ExitCodes.Fluid, "cannot read mixture file: a line is longer than the limit" },
+        // --units on the mixture commands: a misspelt system, JSON (always SI), and per-kilogram
+        // units for a component without a molar mass (each phase's Σ x_i M_i needs every M_i).
+        { ["bubble", "methane=0.2,propane=0.8", "-T", "250", "--units", "imperial"], ExitCodes.Usage, "--units: unknown unit system 'imperial' (use si or engineer" },
+        { ["dew", "methane=0.2,propane=0.8", "-T", "250", "--units", "Engineering "], ExitCodes.Usage, "--units: unknown unit system 'Engineering ' (use si or eng" },
+        { ["flash", "methane=0.2,propane=0.8", "-T", "250", "-P", "1MPa", "--units", "eng"], ExitCodes.Usage, "--units: unknown unit system 'eng' (use si or engineering)" },
+        { ["envelope", "methane=0.8,ethane=0.2", "--units", "metric"], ExitCodes.Usage, "--units: unknown unit system 'metric' (use si or engineerin" },
+        { ["binary", "benzene=0.5,cyclohexane=0.5", "-P", "1atm", "--units", "us"], ExitCodes.Usage, "--units: unknown unit system 'us' (use si or engineering)" },
+        { ["flash", "methane=0.2,propane=0.8", "-T", "250", "-P", "1MPa", "--format", "json", "--units", "engineering"], ExitCodes.Usage, "--units: applies to tables and CSV only; json output is alwa" },
+        { ["bubble", "methane=0.5,{dir}/nomass.fluid=0.5", "-T", "250", "--units", "engineering"], ExitCodes.Fluid, "field 'molar_mass': fluid 'nomass' gives no molar mass, whic" },
+        { ["flash", "methane=0.5,{dir}/nomass.fluid=0.5", "-T", "250", "-P", "1MPa", "--format", "csv", "--units", "engineering"], ExitCodes.Fluid, "field 'molar_mass': fluid 'nomass' gives no molar mass, whic" },
     };
 
     [Theory]

@@ -32,7 +32,7 @@ internal static class BinaryCommand
 /// <param name="Temperature">The fixed T in K (P–x–y), or null.</param>
 /// <param name="Pressure">The fixed P in Pa (T–x–y), or null.</param>
 /// <param name="Points">The number of liquid compositions, the ends included.</param>
-/// <param name="Output">The output format.</param>
+/// <param name="Output">The output format and the units of table and CSV.</param>
 internal sealed record BinaryRequest(MixtureInput Input, double? Temperature, double? Pressure, int Points, OutputChoice Output)
 {
     /// <summary>The diagram from the core.</summary>
@@ -49,7 +49,7 @@ internal sealed record BinaryRequest(MixtureInput Input, double? Temperature, do
 }
 
 /// <summary>The options of <c>binary</c>: MIXTURE, --kij, --eos, --alpha, --temperature or
-/// --pressure, --points, --format, --out. --mass-fractions and --volume-shift are not offered:
+/// --pressure, --points, --format, --units, --out. --mass-fractions and --volume-shift are not offered:
 /// the diagram spans every composition, and a Péneloux shift does not move a bubble point.</summary>
 internal sealed class BinaryOptions
 {
@@ -88,11 +88,13 @@ internal sealed class BinaryOptions
         command.Options.Add(Pressure);
         command.Options.Add(Points);
         command.Options.Add(Common.Format);
+        Common.Units.Description = CommonOptions.TemperaturePressureUnitsDescription;
+        command.Options.Add(Common.Units);
         Out.AddTo(command);
     }
 
     /// <summary>Parses and checks every option, then resolves the mixture (two components).</summary>
-    public BinaryRequest Bind(ParseResult parse) => Bind(parse, Common.BindOutput(parse), "binary");
+    public BinaryRequest Bind(ParseResult parse) => Bind(parse, Common.BindOutput(parse, csvUnits: true), "binary");
 
     /// <summary>Binds with a given output choice (plot binds its own); <paramref name="command"/> names the command in messages.</summary>
     public BinaryRequest Bind(ParseResult parse, OutputChoice output, string command)

@@ -55,6 +55,16 @@ internal sealed class CommonOptions
     public const string UnitsWithCsvDescription =
         "Units of the table and the CSV: si (K, kPa, mol/m3, J/mol; CSV: the SI keys) or engineering (degC, bar, kg/m3, kJ/kg; CSV headers name each unit); JSON is always SI";
 
+    /// <summary>The --units description of the mixture commands whose tables and CSV carry
+    /// per-kilogram values (bubble, dew, flash), each with its own phase's molar mass.</summary>
+    public const string MixtureUnitsDescription =
+        "Units of the table and the CSV: si (K, kPa, mol/m3, J/mol; CSV: the SI keys) or engineering (degC, bar, kg/m3, kJ/kg, kJ/(kg K), "
+        + "each phase per kg of its own composition, the feed's totals per kg of feed; CSV headers name each unit; the glide stays a difference in K); JSON is always SI";
+
+    /// <summary>The --units description of envelope and binary (temperatures, pressures and slopes only).</summary>
+    public const string TemperaturePressureUnitsDescription =
+        "Units of the table and the CSV: si (K, kPa, kPa/K; CSV: the SI keys) or engineering (degC, bar, bar/K; CSV headers name each unit); mole fractions unchanged; JSON is always SI";
+
     /// <summary>Adds the options a command honours: <paramref name="withEos"/> adds --eos, --alpha
     /// and --volume-shift; <paramref name="withUnits"/> adds --units (only for commands whose
     /// tables have a display unit choice). --format is always added.</summary>

@@ -25,7 +25,7 @@ internal static class EnvelopeCommand
             var composition = request.Input.Mixture.MoleFractions;
             var envelope = tracer.Trace(composition);
             var criteria = CriticalPointCriteria.Locate(model, composition);
-            options.Out.Emit(io, parse, EnvelopeWriter.Render(request.Input, envelope, criteria, request.Output.Format), "the envelope");
+            options.Out.Emit(io, parse, EnvelopeWriter.Render(request.Input, envelope, criteria, request.Output), "the envelope");
         }));
         return command;
     }
@@ -34,7 +34,7 @@ internal static class EnvelopeCommand
 /// <summary>The checked inputs of <c>envelope</c>.</summary>
 /// <param name="Input">The mixture and model choice.</param>
 /// <param name="MinimumPressure">Where the bubble line starts and the dew line ends, Pa.</param>
-/// <param name="Output">The output format (table or json).</param>
+/// <param name="Output">The output format (table, csv or json) and the units of table and CSV.</param>
 internal sealed record EnvelopeRequest(MixtureInput Input, double MinimumPressure, OutputChoice Output);
 
 /// <summary>The options of <c>envelope</c>, bound to an <see cref="EnvelopeRequest"/>.</summary>
@@ -64,6 +64,8 @@ internal sealed class EnvelopeCommandOptions
         Mixture.AddTo(command);
         command.Options.Add(MinimumPressure);
         command.Options.Add(Common.Format);
+        Common.Units.Description = CommonOptions.TemperaturePressureUnitsDescription;
+        command.Options.Add(Common.Units);
         Out.AddTo(command);
     }
 
@@ -79,7 +81,7 @@ internal sealed class EnvelopeCommandOptions
         }
 
         _ = Out.Path(parse);
-        var output = Common.BindOutput(parse, format);
+        var output = Common.BindOutput(parse, format, csvUnits: true);
         var input = Mixture.Bind(parse);
         if (input.Mixture.Count < 2)
         {

@@ -24,7 +24,7 @@ internal static class FlashCommand
             var result = request.Temperature is double t ? engine.Flash(t, request.Pressure, z)
                 : request.Enthalpy is double h ? engine.FlashAtEnthalpy(request.Pressure, h, z)
                 : engine.FlashAtEntropy(request.Pressure, request.Entropy!.Value, z);
-            options.Out.Emit(io, parse, MixtureEquilibriumWriter.Render(request.Input, result, request.Output.Format), "the flash");
+            options.Out.Emit(io, parse, MixtureEquilibriumWriter.Render(request.Input, result, request.Output), "the flash");
         }));
         return command;
     }
@@ -36,7 +36,7 @@ internal static class FlashCommand
 /// <param name="Temperature">T in K, or null.</param>
 /// <param name="Enthalpy">Molar enthalpy in J/mol, or null.</param>
 /// <param name="Entropy">Molar entropy in J/(mol·K), or null.</param>
-/// <param name="Output">table or json.</param>
+/// <param name="Output">table, csv or json, and the units of table and CSV.</param>
 internal sealed record FlashRequest(MixtureInput Input, double Pressure, double? Temperature, double? Enthalpy, double? Entropy, OutputChoice Output);
 
 /// <summary>The options of <c>flash</c>, bound to a <see cref="FlashRequest"/>.</summary>
@@ -81,6 +81,8 @@ internal sealed class FlashOptions
         command.Options.Add(Enthalpy);
         command.Options.Add(Entropy);
         command.Options.Add(Common.Format);
+        Common.Units.Description = CommonOptions.MixtureUnitsDescription;
+        command.Options.Add(Common.Units);
         Out.AddTo(command);
     }
 
@@ -108,8 +110,9 @@ internal sealed class FlashOptions
         double p = QuantityParser.ParsePressure(pText, "--pressure");
         double? t = tText is null ? null : QuantityParser.ParseTemperature(tText, "--temperature");
         _ = Out.Path(parse);
-        var output = Common.BindOutput(parse, format);
+        var output = Common.BindOutput(parse, format, csvUnits: true);
         var input = Mixture.Bind(parse);
+        output.RequireMolarMassFor(input.Mixture);
         double? molarMass = input.Mixture.MolarMass;
         double? h = hText is null ? null : QuantityParser.ParseMolarOrSpecific(hText, "--enthalpy", MolarQuantity.Energy, molarMass);
         double? s = sText is null ? null : QuantityParser.ParseMolarOrSpecific(sText, "--entropy", MolarQuantity.Entropy, molarMass);

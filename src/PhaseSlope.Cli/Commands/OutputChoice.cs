@@ -17,4 +17,18 @@ internal sealed record OutputChoice(OutputFormat Format, UnitSystem Units)
             fluid.RequireMolarMass("--units engineering (per-kilogram units)");
         }
     }
+
+    /// <summary>Refuses per-kilogram units for a mixture with a component that gives no molar mass
+    /// (each phase's molar mass Σ x_i M_i needs every component's).</summary>
+    /// <exception cref="Core.Errors.FluidDataException">--units engineering and a component without a molar mass.</exception>
+    public void RequireMolarMassFor(Core.Mixtures.Mixture mixture)
+    {
+        if (Format != OutputFormat.Json && Units == UnitSystem.Engineering)
+        {
+            foreach (var component in mixture.Components)
+            {
+                component.RequireMolarMass("--units engineering (per-kilogram units of each phase)");
+            }
+        }
+    }
 }

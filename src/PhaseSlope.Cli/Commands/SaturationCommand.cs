@@ -39,7 +39,7 @@ internal static class SaturationCommand
                 (glide, reason) = Glide(engine, point, p, z, bubble);
             }
 
-            options.Out.Emit(io, parse, MixtureEquilibriumWriter.Render(request.Input, point, glide, reason, request.Output.Format),
+            options.Out.Emit(io, parse, MixtureEquilibriumWriter.Render(request.Input, point, glide, reason, request.Output),
                 $"the {(bubble ? "bubble" : "dew")} point");
         }));
         return command;
@@ -64,7 +64,7 @@ internal static class SaturationCommand
 /// <param name="Input">The mixture and model choice.</param>
 /// <param name="Temperature">The given temperature in K, or null.</param>
 /// <param name="Pressure">The given pressure in Pa, or null.</param>
-/// <param name="Output">table or json.</param>
+/// <param name="Output">table, csv or json, and the units of table and CSV.</param>
 internal sealed record SaturationRequest(MixtureInput Input, double? Temperature, double? Pressure, OutputChoice Output);
 
 /// <summary>The options of <c>bubble</c> and <c>dew</c>, bound to a <see cref="SaturationRequest"/>.</summary>
@@ -101,6 +101,8 @@ internal sealed class SaturationOptions
         command.Options.Add(Temperature);
         command.Options.Add(Pressure);
         command.Options.Add(Common.Format);
+        Common.Units.Description = CommonOptions.MixtureUnitsDescription;
+        command.Options.Add(Common.Units);
         Out.AddTo(command);
     }
 
@@ -119,7 +121,9 @@ internal sealed class SaturationOptions
         double? t = tText is null ? null : QuantityParser.ParseTemperature(tText, "--temperature");
         double? p = pText is null ? null : QuantityParser.ParsePressure(pText, "--pressure");
         _ = Out.Path(parse);
-        var output = Common.BindOutput(parse, format);
-        return new SaturationRequest(Mixture.Bind(parse), t, p, output);
+        var output = Common.BindOutput(parse, format, csvUnits: true);
+        var input = Mixture.Bind(parse);
+        output.RequireMolarMassFor(input.Mixture);
+        return new SaturationRequest(input, t, p, output);
     }
 }

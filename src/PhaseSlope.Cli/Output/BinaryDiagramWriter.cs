@@ -10,7 +10,8 @@ namespace PhaseSlope.Cli.Output;
 
 /// <summary>Renders a binary diagram for <c>binary</c>: table, JSON (the points and an
 /// <c>azeotrope</c> object or null) or CSV (the JSON's points, flattened: one row per composition,
-/// the azeotrope's row marked).</summary>
+/// the azeotrope's row marked). Table and CSV follow --units (temperatures, pressures and slopes
+/// only: nothing in them is per kilogram).</summary>
 internal static class BinaryDiagramWriter
 {
     /// <summary>The note that the diagram ignores MIXTURE's fractions.</summary>
@@ -20,7 +21,7 @@ internal static class BinaryDiagramWriter
     public static string Render(BinaryRequest request, BinaryDiagram diagram) => request.Output.Format switch
     {
         OutputFormat.Json => JsonText.WriteLine(json => Json(json, request, diagram)),
-        OutputFormat.Csv => FlatCsv.Write(diagram.Points.Select(p => new JsonFlattener().Flatten(json => Row(json, p, diagram.Azeotrope))), UnitSystem.Si, molarMass: null),
+        OutputFormat.Csv => FlatCsv.Write(diagram.Points.Select(p => new JsonFlattener().Flatten(json => Row(json, p, diagram.Azeotrope))), request.Output.Units, molarMass: null),
         _ => Table(request, diagram),
     };
 
@@ -31,21 +32,26 @@ internal static class BinaryDiagramWriter
     private static string Table(BinaryRequest request, BinaryDiagram diagram)
     {
         var text = new StringBuilder();
+        var units = request.Output.Units;
+        string tUnit = UnitFormatter.TemperatureLabel(units), pUnit = UnitFormatter.PressureLabel(units), slopeUnit = UnitFormatter.SlopeLabel(units);
+        string T(double kelvin) => NumberText.Table(UnitFormatter.Temperature(kelvin, units));
+        string P(double pascal) => NumberText.Table(UnitFormatter.Pressure(pascal, units));
+        string Slope(double paPerK) => NumberText.Table(UnitFormatter.Slope(paPerK, units));
         var pair = request.Input.Interactions.Pairs[0];
         text.Append(CultureInfo.InvariantCulture, $"binary: {First(request)} (1) + {Second(request)} (2), {request.Input.Model.Kind.Title()}, van der Waals one-fluid mixing\n");
         text.Append(CultureInfo.InvariantCulture, $"k_ij = {NumberText.Table(pair.Value)} ({MixtureWriter.OriginName(pair.Origin).Replace('_', ' ')}: {pair.Source})\n");
         bool isothermal = diagram.Kind == BinaryDiagramKind.Isothermal;
         text.Append(isothermal
-            ? string.Create(CultureInfo.InvariantCulture, $"P-x-y at T = {NumberText.Table(diagram.Temperature!.Value)} K\n\n")
-            : string.Create(CultureInfo.InvariantCulture, $"T-x-y at P = {NumberText.Table(diagram.Pressure!.Value / 1e3)} kPa\n\n"));
-        var table = new TextTable(["x1", "y1", isothermal ? "P (kPa)" : "T (K)", "dP/dT at x (kPa/K)", ""], [true, true, true, true, false]);
+            ? string.Create(CultureInfo.InvariantCulture, $"P-x-y at T = {T(diagram.Temperature!.Value)} {tUnit}\n\n")
+            : string.Create(CultureInfo.InvariantCulture, $"T-x-y at P = {P(diagram.Pressure!.Value)} {pUnit}\n\n"));
+        var table = new TextTable(["x1", "y1", isothermal ? $"P ({pUnit})" : $"T ({tUnit})", $"dP/dT at x ({slopeUnit})", ""], [true, true, true, true, false]);
         foreach (var point in diagram.Points)
         {
             table.Add(
                 NumberText.Table(point.LiquidFraction),
                 NumberText.Table(point.VapourFraction),
-                isothermal ? NumberText.Table(point.Pressure / 1e3) : NumberText.Table(point.Temperature),
-                NumberText.Table(Slope(point) / 1e3),
+                isothermal ? P(point.Pressure) : T(point.Temperature),
+                Slope(BinaryDiagramWriter.Slope(point)),
                 ReferenceEquals(point.Point, diagram.Azeotrope?.Point) ? "azeotrope" : "");
         }
 
@@ -54,8 +60,8 @@ internal static class BinaryDiagramWriter
         if (diagram.Azeotrope is { } a)
         {
             text.Append(CultureInfo.InvariantCulture,
-                $"azeotrope ({KindText(a.Kind)}): x1 = y1 = {NumberText.Table(a.MoleFraction)}, T = {NumberText.Table(a.Temperature)} K, P = {NumberText.Table(a.Pressure / 1e3)} kPa, "
-                + $"dP/dT of its line = {NumberText.Table(a.Clapeyron.Slope / 1e3)} kPa/K\n");
+                $"azeotrope ({KindText(a.Kind)}): x1 = y1 = {NumberText.Table(a.MoleFraction)}, T = {T(a.Temperature)} {tUnit}, P = {P(a.Pressure)} {pUnit}, "
+                + $"dP/dT of its line = {Slope(a.Clapeyron.Slope)} {slopeUnit}\n");
         }
         else
         {

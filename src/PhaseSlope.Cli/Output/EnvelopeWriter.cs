@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Text;
 using System.Text.Json;
 using PhaseSlope.Cli.Commands;
+using PhaseSlope.Cli.Units;
 using PhaseSlope.Core.Mixtures;
 using PhaseSlope.Core.Models;
 
@@ -14,15 +15,16 @@ internal static class EnvelopeWriter
 {
     /// <summary>Renders as a table, as JSON, or as CSV: one row per traced point (the bubble
     /// branch, then the dew branch) with its branch and the point's JSON members flattened; the
-    /// critical point, cricondenbar and cricondentherm are in the JSON and the table.</summary>
-    public static string Render(MixtureInput input, PhaseEnvelope envelope, IReadOnlyList<MixtureCriticalPoint> criteria, OutputFormat format) => format switch
+    /// critical point, cricondenbar and cricondentherm are in the JSON and the table. Table and
+    /// CSV follow --units (temperatures and pressures only: nothing here is per kilogram).</summary>
+    public static string Render(MixtureInput input, PhaseEnvelope envelope, IReadOnlyList<MixtureCriticalPoint> criteria, OutputChoice output) => output.Format switch
     {
         OutputFormat.Json => Json(input, envelope, criteria),
-        OutputFormat.Csv => Csv(Json(input, envelope, criteria), input),
-        _ => Table(input, envelope, criteria),
+        OutputFormat.Csv => Csv(Json(input, envelope, criteria), output.Units),
+        _ => Table(input, envelope, criteria, output.Units),
     };
 
-    private static string Csv(string json, MixtureInput input)
+    private static string Csv(string json, UnitSystem units)
     {
         using var document = System.Text.Json.JsonDocument.Parse(json);
         var points = document.RootElement.GetProperty("points");
@@ -35,7 +37,8 @@ internal static class EnvelopeWriter
             }
         }
 
-        return FlatCsv.Write(rows, Cli.Units.UnitSystem.Si, input.Mixture.MolarMass);
+        // A row holds T, P and mole fractions: no per-kilogram value, so no molar mass is needed.
+        return FlatCsv.Write(rows, units, molarMass: null);
     }
 
     /// <summary>The Heidemann–Khalil point nearest the envelope's critical point (or the least dense).</summary>
@@ -67,27 +70,30 @@ internal static class EnvelopeWriter
         yield return "points are the feed at its bubble (liquid) or dew (vapour) point with the incipient phase; the critical point is where the two branches meet";
     }
 
-    private static string Table(MixtureInput input, PhaseEnvelope envelope, IReadOnlyList<MixtureCriticalPoint> criteria)
+    private static string Table(MixtureInput input, PhaseEnvelope envelope, IReadOnlyList<MixtureCriticalPoint> criteria, UnitSystem units)
     {
         var text = new StringBuilder();
+        string tUnit = UnitFormatter.TemperatureLabel(units), pUnit = UnitFormatter.PressureLabel(units);
+        string T(double kelvin) => NumberText.Table(UnitFormatter.Temperature(kelvin, units));
+        string P(double pascal) => NumberText.Table(UnitFormatter.Pressure(pascal, units));
         text.Append(CultureInfo.InvariantCulture, $"phase envelope of {input.DisplayName}\n");
         text.Append(CultureInfo.InvariantCulture, $"model: {input.Model.Kind.Title()}, van der Waals one-fluid mixing\n\n");
-        var points = new TextTable(["branch", "T (K)", "P (kPa)"], [false, true, true]);
+        var points = new TextTable(["branch", $"T ({tUnit})", $"P ({pUnit})"], [false, true, true]);
         foreach (var point in envelope.Points)
         {
-            points.Add(point.Branch == EnvelopeBranch.Bubble ? "bubble" : "dew", NumberText.Table(point.Temperature), NumberText.Table(point.Pressure / 1e3));
+            points.Add(point.Branch == EnvelopeBranch.Bubble ? "bubble" : "dew", T(point.Temperature), P(point.Pressure));
         }
 
         text.Append(points.Render());
         text.Append('\n');
         void Landmark(string name, EnvelopeLandmark? landmark, string missing)
             => text.Append(landmark is { } l
-                ? string.Create(CultureInfo.InvariantCulture, $"{name}: T = {NumberText.Table(l.Temperature)} K, P = {NumberText.Table(l.Pressure / 1e3)} kPa\n")
+                ? string.Create(CultureInfo.InvariantCulture, $"{name}: T = {T(l.Temperature)} {tUnit}, P = {P(l.Pressure)} {pUnit}\n")
                 : $"{name}: undefined ({missing})\n");
         Landmark("critical point", envelope.CriticalPoint, "the trace did not reach it");
         if (Criteria(envelope, criteria) is { } hk)
         {
-            text.Append(CultureInfo.InvariantCulture, $"critical point (Heidemann-Khalil criteria): T = {NumberText.Table(hk.Temperature)} K, P = {NumberText.Table(hk.Pressure / 1e3)} kPa\n");
+            text.Append(CultureInfo.InvariantCulture, $"critical point (Heidemann-Khalil criteria): T = {T(hk.Temperature)} {tUnit}, P = {P(hk.Pressure)} {pUnit}\n");
         }
 
         Landmark("cricondenbar", envelope.Cricondenbar, "no pressure maximum on the traced part");

@@ -16,13 +16,17 @@ namespace PhaseSlope.Cli.Output;
 /// <c>_mol_m3K</c> becomes <c>_kg_m3K</c>, <c>_J_molK2</c> becomes <c>_kJ_kgK2</c> (a
 /// temperature difference of 1 K is 1 degC). Keys without a unit suffix (dimensionless numbers,
 /// counts, text) and keys already mass-based (<c>_kg_m3</c>, <c>_kg_mol</c>) are written as they
-/// are. A temperature difference must be named in <c>differences</c>, by the name of an object
+/// are, and so are the members of an object named <c>*mole_fractions</c> (keyed by component
+/// name, dimensionless). A temperature difference must be named in <c>differences</c>, by the name of an object
 /// holding such temperatures (<c>standard_uncertainty</c>) or by its own member name (a
 /// superheat <c>T - Tsat</c>): it stays in K, since 1 K is 1 degC as a difference; any other
 /// <c>_K</c> key is an absolute temperature and gets the Celsius offset. Where a converted key
 /// equals another key of the row (<c>density_mol_m3</c> in engineering units is
 /// <c>density_kg_m3</c>, which the JSON also carries), the two hold the same quantity and one
 /// column is written, the first.</para>
+/// <para>A pure fluid has one molar mass; a mixture's phases each have their own (Σ x_i M_i of
+/// the phase's composition), so the mixture writers give a molar mass per field
+/// (<see cref="WriteByPhase"/>).</para>
 /// </remarks>
 internal static class FlatCsv
 {
@@ -52,20 +56,39 @@ internal static class FlatCsv
     /// first row and the rows written in one pass; only if a later row has a key the first lacks
     /// is the text discarded and written in two passes (the union of the keys first).</remarks>
     public static string Write(IEnumerable<IReadOnlyList<FlatField>> rows, UnitSystem units, double? molarMass, IReadOnlySet<string>? differences = null)
+        => WriteByPhase(rows, units, One(molarMass), differences);
+
+    /// <summary>Renders the rows, each field's mass-based unit with the molar mass
+    /// <paramref name="molarMassOf"/> gives for it (a mixture's liquid, vapour and feed each have
+    /// their own, Σ x_i M_i of their own composition).</summary>
+    /// <param name="rows">Flattened rows.</param>
+    /// <param name="units">SI: the JSON keys and digits. Engineering: converted as described.</param>
+    /// <param name="molarMassOf">The molar mass in kg/mol of the phase a numeric field with a unit
+    /// suffix describes (asked only in engineering units; NaN where none applies, which a
+    /// mass-based field then refuses as a bug).</param>
+    /// <param name="differences">As in <see cref="Write(TextWriter, IEnumerable{IReadOnlyList{FlatField}}, UnitSystem, double?, IReadOnlySet{string}?)"/>.</param>
+    public static string WriteByPhase(IEnumerable<IReadOnlyList<FlatField>> rows, UnitSystem units, Func<FlatField, double> molarMassOf, IReadOnlySet<string>? differences = null)
     {
         var columns = new Columns(units, differences);
         using (var text = new StringWriter(CultureInfo.InvariantCulture))
         {
             var first = rows.Take(1).ToArray();
-            if (TryWrite(text, rows, columns, columns.Header(first), molarMass))
+            if (TryWrite(text, rows, columns, columns.Header(first), molarMassOf))
             {
                 return text.ToString();
             }
         }
 
         using var again = new StringWriter(CultureInfo.InvariantCulture);
-        Write(again, rows, units, molarMass, differences);
+        TryWrite(again, rows, columns, columns.Header(rows), molarMassOf);
         return again.ToString();
+    }
+
+    /// <summary>One molar mass for every field (a pure fluid), NaN when there is none.</summary>
+    private static Func<FlatField, double> One(double? molarMass)
+    {
+        double m = molarMass ?? double.NaN;
+        return _ => m;
     }
 
     /// <summary>Writes the rows as CSV to <paramref name="output"/> (left open).</summary>
@@ -80,7 +103,7 @@ internal static class FlatCsv
     public static void Write(TextWriter output, IEnumerable<IReadOnlyList<FlatField>> rows, UnitSystem units, double? molarMass, IReadOnlySet<string>? differences = null)
     {
         var columns = new Columns(units, differences);
-        TryWrite(output, rows, columns, columns.Header(rows), molarMass);
+        TryWrite(output, rows, columns, columns.Header(rows), One(molarMass));
     }
 
     /// <summary>The column of each key (its header and unit suffix), computed once per key.</summary>
@@ -123,9 +146,8 @@ internal static class FlatCsv
     /// <summary>Writes the header and the rows; false (with part of the text written) when a row
     /// has a key that is not in the header.</summary>
     private static bool TryWrite(TextWriter output, IEnumerable<IReadOnlyList<FlatField>> rows, Columns columns, (List<string> Names, Dictionary<string, int> Index) header,
-        double? molarMass)
+        Func<FlatField, double> molarMassOf)
     {
-        double m = molarMass ?? double.NaN;
         bool complete = true;
         IEnumerable<IReadOnlyList<string>> Cells()
         {
@@ -147,7 +169,7 @@ internal static class FlatCsv
                         ? field.Text
                         // Every quantity but the temperature (never per kelvin, never a difference
                         // here) is a pure factor, so a slope per kelvin converts as its quantity does.
-                        : NumberText.RoundTrip(UnitFormatter.Convert(suffix.Quantity, double.Parse(field.Text, NumberStyles.Float, CultureInfo.InvariantCulture), columns.Units, m));
+                        : NumberText.RoundTrip(UnitFormatter.Convert(suffix.Quantity, double.Parse(field.Text, NumberStyles.Float, CultureInfo.InvariantCulture), columns.Units, molarMassOf(field)));
                 }
 
                 yield return [.. cells.Select(c => c ?? "")];
@@ -163,6 +185,13 @@ internal static class FlatCsv
     private static Suffix? Find(FlatField field, UnitSystem units, IReadOnlySet<string>? differences)
     {
         if (units == UnitSystem.Si)
+        {
+            return null;
+        }
+
+        // A mole fraction is named by its component (liquid_mole_fractions_NAME), not by a unit:
+        // whatever the name ends in, it stays as it is.
+        if (field.Parents.Count > 0 && field.Parents[^1].EndsWith("mole_fractions", StringComparison.Ordinal))
         {
             return null;
         }

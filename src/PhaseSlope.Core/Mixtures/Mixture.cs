@@ -54,23 +54,32 @@ public sealed class Mixture
     public double[] Amounts() => [.. _moleFractions];
 
     /// <summary>The molar mass of the blend, Σ x_i M_i in kg/mol, or null when a component has none.</summary>
-    public double? MolarMass
-    {
-        get
-        {
-            double sum = 0;
-            for (int i = 0; i < _components.Length; i++)
-            {
-                if (_components[i].MolarMass is not SourcedValue m)
-                {
-                    return null;
-                }
+    public double? MolarMass => MolarMassOf(_moleFractions);
 
-                sum += _moleFractions[i] * m.Value;
+    /// <summary>The molar mass Σ x_i M_i in kg/mol of a phase of these components with the mole
+    /// fractions <paramref name="moleFractions"/> (in component order; a liquid and a vapour in
+    /// equilibrium differ from the feed and from each other), or null when a component has none.</summary>
+    /// <exception cref="ArgumentException">The fractions are not one per component.</exception>
+    public double? MolarMassOf(IReadOnlyList<double> moleFractions)
+    {
+        ArgumentNullException.ThrowIfNull(moleFractions);
+        if (moleFractions.Count != _components.Length)
+        {
+            throw new ArgumentException($"expected {_components.Length} mole fractions, got {moleFractions.Count}", nameof(moleFractions));
+        }
+
+        double sum = 0;
+        for (int i = 0; i < _components.Length; i++)
+        {
+            if (_components[i].MolarMass is not SourcedValue m)
+            {
+                return null;
             }
 
-            return sum;
+            sum += moleFractions[i] * m.Value;
         }
+
+        return sum;
     }
 
     /// <summary>The mass fractions w_i = x_i M_i / Σ x_j M_j, or null when a component has no molar mass.</summary>

@@ -394,6 +394,10 @@ public sealed class OfferedOptionTests : IDisposable
         yield return Changes("binary", "--format", binary, "--format", "csv");
         yield return Refused("binary", "--format", [.. binary, "--format", "xml"]);
         yield return Changes("binary", "--out", binary, "--out", "{dir}/out.txt");
+        // --units converts table and CSV (T in degC, P in bar, slopes in bar/K); JSON stays SI and refuses it.
+        yield return Changes("binary", "--units", binary, "--units", "engineering");
+        yield return Changes("binary", "--units", [.. binary, "--format", "csv"], "--units", "engineering");
+        yield return Refused("binary", "--units", [.. binary, "--format", "json", "--units", "engineering"]);
 
         // fit-kij: three ethanol-water points at 1 atm (Carey and Lewis 1932 via Perry's, from
         // memory) fitted and written to {dir}/fit.mixture.
@@ -424,6 +428,9 @@ public sealed class OfferedOptionTests : IDisposable
         yield return Changes("envelope", "--format", envelope, "--format", "json");
         yield return Changes("envelope", "--format", envelope, "--format", "csv");
         yield return Changes("envelope", "--out", envelope, "--out", "{dir}/out.txt");
+        yield return Changes("envelope", "--units", envelope, "--units", "engineering");
+        yield return Changes("envelope", "--units", [.. envelope, "--format", "csv"], "--units", "engineering");
+        yield return Refused("envelope", "--units", [.. envelopeJson, "--units", "engineering"]);
         // bubble, dew and flash: methane + propane (no k_ij in the table, 0 assumed, so --kij
         // changes the numbers); --volume-shift changes the phase densities.
         foreach (string point in new[] { "bubble", "dew" })
@@ -442,6 +449,9 @@ public sealed class OfferedOptionTests : IDisposable
             yield return Changes(point, "--format", atT, "--format", "json");
             yield return Changes(point, "--format", atT, "--format", "csv");
             yield return Changes(point, "--out", atT, "--out", "{dir}/out.txt");
+            yield return Changes(point, "--units", atT, "--units", "engineering");
+            yield return Changes(point, "--units", [.. atT, "--format", "csv"], "--units", "engineering");
+            yield return Refused(point, "--units", [.. atT, "--format", "json", "--units", "engineering"]);
         }
 
         string[] flash = ["flash", "methane=0.2,propane=0.8", "-T", "250", "-P", "1MPa"];
@@ -463,6 +473,9 @@ public sealed class OfferedOptionTests : IDisposable
         yield return Changes("flash", "--format", flash, "--format", "json");
         yield return Changes("flash", "--format", flash, "--format", "csv");
         yield return Changes("flash", "--out", flash, "--out", "{dir}/out.txt");
+        yield return Changes("flash", "--units", flash, "--units", "engineering");
+        yield return Changes("flash", "--units", [.. flash, "--format", "csv"], "--units", "engineering");
+        yield return Refused("flash", "--units", [.. flash, "--format", "json", "--units", "engineering"]);
     }
 
     /// <summary>--eos, --alpha, --volume-shift, --format and (where offered) --units.</summary>

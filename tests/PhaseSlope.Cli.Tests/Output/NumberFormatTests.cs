@@ -156,5 +156,31 @@ public class NumberFormatTests
         Assert.Equal("temperature_degC,superheat_degC\n5,-268.15\n", FlatCsv.Write([row], UnitSystem.Engineering, 0.1));
     }
 
+    [Fact]
+    public void FlatCsv_Engineering_ByPhase_EachKeyItsOwnMolarMass_MoleFractionsUntouched()
+    {
+        // A mixture's row: the liquid's density with the liquid's molar mass, the vapour's with the
+        // vapour's; a component named as if it had a unit suffix is still a mole fraction.
+        var row = new JsonFlattener().Flatten(json =>
+        {
+            json.WriteStartObject();
+            json.WriteStartObject("liquid_mole_fractions");
+            json.WriteNumber("odd_K", 0.5);
+            json.WriteEndObject();
+            json.WriteStartObject("liquid");
+            json.WriteNumber("density_mol_m3", 1000);
+            json.WriteEndObject();
+            json.WriteStartObject("vapour");
+            json.WriteNumber("density_mol_m3", 1000);
+            json.WriteEndObject();
+            json.WriteEndObject();
+        });
+
+        // 1000 mol/m3 at 0.0625 kg/mol is 62.5 kg/m3, at 0.03125 kg/mol 31.25 kg/m3 (powers of two:
+        // exact in binary, so the text is exact).
+        string csv = FlatCsv.WriteByPhase([row], UnitSystem.Engineering, f => f.Parents.Count > 0 && f.Parents[0] == "liquid" ? 0.0625 : 0.03125);
+        Assert.Equal("liquid_mole_fractions_odd_K,liquid_density_kg_m3,vapour_density_kg_m3\n0.5,62.5,31.25\n", csv);
+    }
+
     private static string[] ParseLine(string line) => PhaseSlope.Cli.Tests.Commands.CurveCommandTests.ParseCsv(line)[0];
 }

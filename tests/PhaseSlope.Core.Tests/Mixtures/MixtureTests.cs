@@ -52,6 +52,23 @@ public sealed class MixtureTests
     }
 
     [Fact]
+    public void MolarMassOf_APhase_IsItsOwnCompositionsSum()
+    {
+        // A phase of the same components with other mole fractions: Σ x_i M_i of its own fractions.
+        // By hand with the catalog's molar masses (methane 16.04246, n-butane 58.1222 g/mol): a liquid
+        // 0.15 methane, 0.85 n-butane is 2.406369 + 49.40387 = 51.810239 g/mol, against the feed's
+        // 0.3·16.04246 + 0.7·58.1222 = 4.812738 + 40.68554 = 45.498278 g/mol. Tolerance 5e-7 g/mol:
+        // the hand sums are written to six decimals (half a unit of the last digit).
+        var mixture = Mixture.Create([F("methane"), F("n-butane")], [0.3, 0.7]);
+        Assert.True(Math.Abs(mixture.MolarMassOf([0.15, 0.85])!.Value * 1e3 - 51.810239) < 5e-7, $"{mixture.MolarMassOf([0.15, 0.85]):R}");
+        Assert.True(Math.Abs(mixture.MolarMass!.Value * 1e3 - 45.498278) < 5e-7, $"{mixture.MolarMass:R}");
+        // The feed's is the same sum over the feed's own fractions.
+        Assert.Equal(mixture.MolarMass, mixture.MolarMassOf(mixture.MoleFractions));
+        // One fraction per component, or the sum means nothing.
+        Assert.Throws<ArgumentException>(() => mixture.MolarMassOf([1.0]));
+    }
+
+    [Fact]
     public void PseudoCritical_IsKaysRule()
     {
         // Kay's rule (Kay, Ind. Eng. Chem. 28, 1014 (1936); from memory): Tpc = Σ x_i Tc_i. For
