@@ -59,7 +59,14 @@ internal sealed class CommonOptions
     /// per-kilogram values (bubble, dew, flash), each with its own phase's molar mass.</summary>
     public const string MixtureUnitsDescription =
         "Units of the table and the CSV: si (K, kPa, mol/m3, J/mol; CSV: the SI keys) or engineering (degC, bar, kg/m3, kJ/kg, kJ/(kg K), "
-        + "each phase per kg of its own composition, the feed's totals per kg of feed; CSV headers name each unit; the glide stays a difference in K); JSON is always SI";
+        + "each phase per kg of its own composition, the feed's totals per kg of feed; CSV headers name each unit"
+        + GlideUnitsNote + "); JSON is always SI";
+
+    /// <summary>The clause bubble and dew add to <see cref="MixtureUnitsDescription"/>; a flash has no glide.</summary>
+    private const string GlideUnitsNote = "; the glide stays a difference in K";
+
+    /// <summary>The --units description of flash: <see cref="MixtureUnitsDescription"/> without the glide.</summary>
+    public static string FlashUnitsDescription => MixtureUnitsDescription.Replace(GlideUnitsNote, "", StringComparison.Ordinal);
 
     /// <summary>The --units description of envelope and binary (temperatures, pressures and slopes only).</summary>
     public const string TemperaturePressureUnitsDescription =

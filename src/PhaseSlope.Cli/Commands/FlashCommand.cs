@@ -81,7 +81,7 @@ internal sealed class FlashOptions
         command.Options.Add(Enthalpy);
         command.Options.Add(Entropy);
         command.Options.Add(Common.Format);
-        Common.Units.Description = CommonOptions.MixtureUnitsDescription;
+        Common.Units.Description = CommonOptions.FlashUnitsDescription;
         command.Options.Add(Common.Units);
         Out.AddTo(command);
     }
