@@ -79,10 +79,11 @@ public sealed class MixtureCriticalRegionTests
     }
 
     /// <summary>States at relative offsets 1e-3, 1e-4 and 1e-5 in T and P around the mixture critical
-    /// point of <see cref="CriticalPointCriteria"/> (about 241.0 K and 9.985 MPa). All converge;
-    /// below T_c(1 + 1e-5) the split lowers G by less than the 1e-10 RT tm resolution and the flash
-    /// reports one phase, which the checks accept (measured: at ΔT/T_c = +1e-5 and P = P_c the split
-    /// has ΔG = −1.4e-10 RT; at 1e-6, tm = −2e-12, a single phase within the resolution).</summary>
+    /// point of <see cref="CriticalPointCriteria"/> (about 241.0 K and 9.985 MPa). All converge. Closer
+    /// than about 1e-5 the split, where there is one, has tm above −1e-10 RT (the resolution of the
+    /// stability test) and the flash reports the single phase, which the checks accept as stable to
+    /// that resolution (measured: at T_c(1 + 1e-5) and P_c the split is resolved with
+    /// ΔG = −1.4e-10 RT; at T_c(1 + 1e-6) the lowest tm is −2e-12 and the flash gives one phase).</summary>
     [Theory]
     [InlineData(1e-3)]
     [InlineData(1e-4)]
@@ -137,7 +138,7 @@ public sealed class MixtureCriticalRegionTests
         var x = flash.Liquid!.MoleFractions.ToArray();
         var y = flash.Vapour!.MoleFractions.ToArray();
         double beta = flash.VapourFraction;
-        Assert.InRange(beta, double.Epsilon, 1 - 1e-16);
+        Assert.True(beta > 0 && beta < 1, $"{at}: vapour fraction {beta} of a split");
         var lnPhiL = new double[n];
         var lnPhiV = new double[n];
         var lnPhiZ = new double[n];
