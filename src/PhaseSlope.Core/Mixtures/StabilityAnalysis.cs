@@ -46,6 +46,8 @@ public static class StabilityAnalysis
     /// vapour-like one has proved it. The trial returned is then not a stationary point.</summary>
     /// <exception cref="InvalidInputException">A component is absent from the feed, or the mixture
     /// has no density root at (T, P).</exception>
+    /// <exception cref="ConvergenceException">A trial reached no stationary point in
+    /// <see cref="MaxNewtonSteps"/> Newton steps and no trial found a negative tm.</exception>
     public static StabilityResult Test(CubicMixtureModel model, double temperature, double pressure, ReadOnlySpan<double> feed, ReadOnlySpan<double> lnK, bool stopWhenUnstable)
     {
         ArgumentNullException.ThrowIfNull(model);
