@@ -20,7 +20,7 @@ public sealed partial class MixtureEquilibrium
 
     /// <summary>Σ(Δ ln K)² below which successive substitution hands over to Newton: K within about
     /// 1 % of the solution, close enough for Newton's quadratic convergence with its line search
-    /// (and the substitution fallback where the Hessian is not positive definite); a tighter switch
+    /// (and the restricted step where the Hessian is not positive definite); a tighter switch
     /// only spends more substitution steps (measured on the benchmark gas: 1e-6 cost 4 more
     /// evaluations per flash).</summary>
     public const double NewtonSwitch = 1e-4;
@@ -42,7 +42,12 @@ public sealed partial class MixtureEquilibrium
     /// <see cref="NewtonSwitch"/>, or after <see cref="SlowSubstitutionSteps"/> steps (near a critical
     /// point), Newton's method on the vapour amounts v_i minimises the Gibbs energy with the exact
     /// Hessian H_ij = (δ_ij/y_i − 1 + Φ^V_ij)/V + (δ_ij/x_i − 1 + Φ^L_ij)/L (Φ = n·∂ln φ_i/∂n_j), the
-    /// step shortened to keep every amount positive and halved while G rises. Converged when
+    /// step shortened to keep every amount positive and halved while G rises. Where the Hessian is
+    /// not positive definite (near the critical point, where G is nearly flat along the line joining
+    /// the phases; the plain step there pointed uphill and substitution crawled, so 5 states within
+    /// 1 % of the test gas's critical point ran out of Newton steps) the step is the restricted
+    /// Newton step of <see cref="TrustRegionStep"/> in scaled amounts, accepted only where G falls,
+    /// its radius adapted to the ratio of actual to predicted change. Converged when
     /// max_i |ln f_i^V − ln f_i^L| &lt; 1e-11, or below 1e-8 when a Newton step no longer halves it
     /// (the rounding floor where ln φ is large; the residual reached is in the report).</para>
     /// <para>The liquid amounts are l = z − v, so the material balance closes to rounding. The split is
@@ -347,6 +352,9 @@ public sealed partial class MixtureEquilibrium
         double densityA = 0, densityB = 0;
         double gibbs = EvaluateAmounts(temperature, pressure, a, b, xa, xb, lnPhiA, lnPhiB, dNA, dNB, ref densityA, ref densityB, ref evaluations);
         int newton = 0;
+        // Trust radius of the restricted step, in amounts scaled by √(1/a_i + 1/b_i) (the ideal part
+        // of the Hessian's diagonal), so that a unit step changes G by about ½ RT per mole of feed.
+        double radius = 1;
         double residual, previousResidual = double.PositiveInfinity;
         while (true)
         {
@@ -388,12 +396,34 @@ public sealed partial class MixtureEquilibrium
                 h[i, i] += 1 / a[i] + 1 / b[i];
             }
 
-            var step = h.LU().Solve(rhs);
-            double descent = 0;
+            Vector<double>? step = null;
+            try
+            {
+                step = h.Cholesky().Solve(rhs);
+            }
+            catch (ArgumentException)
+            {
+                // Not positive definite: the restricted step below.
+            }
+
+            if (step is null)
+            {
+                // The Hessian is indefinite (near the critical point, where G is nearly flat along the
+                // direction joining the phases and SS crawls): the restricted Newton step on G.
+                gibbs = RestrictedStep(temperature, pressure, z, h, gradient, ref radius, a, b, xa, xb, lnPhiA, lnPhiB, dNA, dNB,
+                    nextA, nextB, nxa, nxb, nLnPhiA, nLnPhiB, nDNA, nDNB, ref densityA, ref densityB, gibbs, ref evaluations, out bool stepped);
+                if (!stepped)
+                {
+                    throw new ConvergenceException($"the flash at {Preconditions.Format(temperature)} K and {Preconditions.Format(pressure)} Pa found no descent of the Gibbs energy at a point that is not its minimum",
+                        newton, residual);
+                }
+
+                continue;
+            }
+
             double scale = 1;
             for (int i = 0; i < n; i++)
             {
-                descent += step[i] * gradient[i];
                 // Keep 0 < a_i < z_i: go at most 90 % of the way to either bound.
                 if (a[i] + step[i] <= 0)
                 {
@@ -403,14 +433,6 @@ public sealed partial class MixtureEquilibrium
                 {
                     scale = Math.Min(scale, 0.9 * b[i] / step[i]);
                 }
-            }
-
-            if (!(descent < 0))
-            {
-                // The Hessian is not positive definite here (far from the minimum): one
-                // successive-substitution step instead, which lowers G (Michelsen 1982, Part II).
-                gibbs = SubstitutionStep(temperature, pressure, z, swapped, a, b, xa, xb, lnPhiA, lnPhiB, dNA, dNB, ref densityA, ref densityB, ref evaluations, residual, ref substitution, newton);
-                continue;
             }
 
             bool moved = false;
@@ -491,6 +513,103 @@ public sealed partial class MixtureEquilibrium
         var vapourPhase = Phase(temperature, pressure, vapourY, densityV, ref evaluations);
         return new MixtureFlashResult(temperature, pressure, z, beta, liquidPhase, vapourPhase, stability, change,
             new MixtureSolverReport(substitution, newton, evaluations, residual, accelerated));
+    }
+
+    /// <summary>One restricted Newton step on G where its Hessian is indefinite (<see cref="TrustRegionStep"/>
+    /// in amounts scaled by D_i = √(1/a_i + 1/b_i)), kept inside 0 &lt; a_i &lt; z_i and accepted only if G
+    /// falls; the radius shrinks to a quarter of a rejected or poorly predicted step and doubles after
+    /// a well-predicted one on the boundary. On acceptance the current arrays take the new point
+    /// (swapped with the next-point buffers) and G there is returned.</summary>
+    private double RestrictedStep(double temperature, double pressure, double[] z, Matrix<double> h, double[] gradient, ref double radius,
+        double[] a, double[] b, double[] xa, double[] xb, double[] lnPhiA, double[] lnPhiB, double[] dNA, double[] dNB,
+        double[] nextA, double[] nextB, double[] nxa, double[] nxb, double[] nLnPhiA, double[] nLnPhiB, double[] nDNA, double[] nDNB,
+        ref double densityA, ref double densityB, double gibbs, ref int evaluations, out bool stepped)
+    {
+        int n = z.Length;
+        var scaling = new double[n];
+        var scaledGradient = new double[n];
+        var scaled = Matrix<double>.Build.Dense(n, n);
+        for (int i = 0; i < n; i++)
+        {
+            scaling[i] = Math.Sqrt(1 / a[i] + 1 / b[i]);
+            scaledGradient[i] = gradient[i] / scaling[i];
+        }
+
+        for (int i = 0; i < n; i++)
+        {
+            for (int j = 0; j < n; j++)
+            {
+                scaled[i, j] = h[i, j] / (scaling[i] * scaling[j]);
+            }
+        }
+
+        var u = new double[n];
+        var s = new double[n];
+        for (int attempt = 0; attempt < 30; attempt++)
+        {
+            TrustRegionStep.Solve(scaled, scaledGradient, radius, u);
+            double length = Math.Sqrt(u.Sum(x => x * x));
+            double scale = 1;
+            for (int i = 0; i < n; i++)
+            {
+                s[i] = u[i] / scaling[i];
+                if (a[i] + s[i] <= 0)
+                {
+                    scale = Math.Min(scale, -0.9 * a[i] / s[i]);
+                }
+                else if (b[i] - s[i] <= 0)
+                {
+                    scale = Math.Min(scale, 0.9 * b[i] / s[i]);
+                }
+            }
+
+            // The quadratic model's change for the (possibly shortened) step.
+            double linear = 0, quadratic = 0;
+            for (int i = 0; i < n; i++)
+            {
+                s[i] *= scale;
+                linear += gradient[i] * s[i];
+                double hs = 0;
+                for (int j = 0; j < n; j++)
+                {
+                    hs += h[i, j] * s[j];
+                }
+
+                quadratic += s[i] * hs;
+            }
+
+            double predicted = linear + 0.5 * quadratic;
+            for (int i = 0; i < n; i++)
+            {
+                nextA[i] = a[i] + s[i];
+                nextB[i] = z[i] - nextA[i];
+            }
+
+            double da = densityA, db = densityB;
+            double nextGibbs = EvaluateAmounts(temperature, pressure, nextA, nextB, nxa, nxb, nLnPhiA, nLnPhiB, nDNA, nDNB, ref da, ref db, ref evaluations);
+            double ratio = (nextGibbs - gibbs) / predicted;
+            bool accepted = double.IsFinite(nextGibbs) && nextGibbs < gibbs;
+            radius = !accepted || ratio < 0.25 ? 0.25 * scale * length
+                : ratio > 0.75 && scale * length > 0.99 * radius ? 2 * radius
+                : radius;
+            if (accepted)
+            {
+                nextA.CopyTo(a, 0);
+                nextB.CopyTo(b, 0);
+                nxa.CopyTo(xa, 0);
+                nxb.CopyTo(xb, 0);
+                nLnPhiA.CopyTo(lnPhiA, 0);
+                nLnPhiB.CopyTo(lnPhiB, 0);
+                nDNA.CopyTo(dNA, 0);
+                nDNB.CopyTo(dNB, 0);
+                (densityA, densityB) = (da, db);
+                stepped = true;
+                return nextGibbs;
+            }
+        }
+
+        stepped = false;
+        return gibbs;
     }
 
     /// <summary>One successive-substitution step from the current amounts (K from the current

@@ -14,7 +14,12 @@ namespace PhaseSlope.Core.Mixtures;
 /// substitution, ln W_i ← d_i − ln φ_i(W), then finished by Newton's method in α_i = 2√W_i, where
 /// the Hessian is exact: H_ij = δ_ij + √(W_i W_j)·∂ln φ_i/∂W_j + δ_ij·g_i/α_i with the gradient
 /// g_i = √W_i (ln W_i + ln φ_i − d_i) (Michelsen &amp; Mollerup, Thermodynamic Models, 2nd ed.
-/// (2007), ch. 10). The trial phase takes the root of lower Gibbs energy at its composition.
+/// (2007), ch. 10); where that Hessian is indefinite the restricted step of
+/// <see cref="TrustRegionStep"/> replaces the plain one. The trial phase takes the root of lower
+/// Gibbs energy at its composition. Both trials are completed before the verdict: tm &lt; 0 at any
+/// trial point proves instability, while stability needs every trial at a stationary point with
+/// tm ≥ 0 (or at the trivial one), so a trial left unfinished is a
+/// <see cref="ConvergenceException"/> only when no trial showed instability.
 /// Every component of the feed must be present (z_i &gt; 0).</remarks>
 public static class StabilityAnalysis
 {
@@ -41,6 +46,8 @@ public static class StabilityAnalysis
     /// vapour-like one has proved it. The trial returned is then not a stationary point.</summary>
     /// <exception cref="InvalidInputException">A component is absent from the feed, or the mixture
     /// has no density root at (T, P).</exception>
+    /// <exception cref="ConvergenceException">A trial reached no stationary point in
+    /// <see cref="MaxNewtonSteps"/> Newton steps and no trial found a negative tm.</exception>
     public static StabilityResult Test(CubicMixtureModel model, double temperature, double pressure, ReadOnlySpan<double> feed, ReadOnlySpan<double> lnK, bool stopWhenUnstable)
     {
         ArgumentNullException.ThrowIfNull(model);
@@ -56,13 +63,26 @@ public static class StabilityAnalysis
             d[i] += Math.Log(feed[i]);
         }
 
-        var vapour = Trial(model, temperature, pressure, feed, d, lnK, +1, stopWhenUnstable, ref evaluations);
-        var liquid = stopWhenUnstable && !vapour.IsTrivial && vapour.TangentPlaneDistance < -NegativeDistance
+        var vapour = Trial(model, temperature, pressure, feed, d, lnK, +1, stopWhenUnstable, ref evaluations, out bool vapourConverged, out double vapourResidual);
+        bool vapourNegative = !vapour.IsTrivial && vapour.TangentPlaneDistance < -NegativeDistance;
+        bool liquidConverged = true;
+        double liquidResidual = 0;
+        var liquid = stopWhenUnstable && vapourNegative
             ? new StabilityTrial(feed.ToArray(), 0, true, 0)
-            : Trial(model, temperature, pressure, feed, d, lnK, -1, stopWhenUnstable, ref evaluations);
-        bool stable = (vapour.IsTrivial || vapour.TangentPlaneDistance >= -NegativeDistance)
-                      && (liquid.IsTrivial || liquid.TangentPlaneDistance >= -NegativeDistance);
-        return new StabilityResult(stable, vapour, liquid, evaluations);
+            : Trial(model, temperature, pressure, feed, d, lnK, -1, stopWhenUnstable, ref evaluations, out liquidConverged, out liquidResidual);
+        bool liquidNegative = !liquid.IsTrivial && liquid.TangentPlaneDistance < -NegativeDistance;
+        // tm < 0 at any trial composition, stationary or not, proves the feed unstable; stability
+        // rests on every trial having reached a stationary point with tm ≥ 0 (or the trivial one),
+        // so both trials are always completed and only then is an unfinished one an error.
+        if (!vapourNegative && !liquidNegative && !(vapourConverged && liquidConverged))
+        {
+            var unfinished = vapourConverged ? liquid : vapour;
+            throw new ConvergenceException(
+                $"the stability test did not converge in {MaxNewtonSteps} Newton steps at {Preconditions.Format(temperature)} K and {Preconditions.Format(pressure)} Pa (the {(vapourConverged ? "liquid" : "vapour")}-like trial stopped at tm {Preconditions.Format(unfinished.TangentPlaneDistance)}, the other trial found no negative tm)",
+                unfinished.Iterations, vapourConverged ? liquidResidual : vapourResidual);
+        }
+
+        return new StabilityResult(!vapourNegative && !liquidNegative, vapour, liquid, evaluations);
     }
 
     internal static void RequirePresent(ReadOnlySpan<double> feed)
@@ -86,9 +106,10 @@ public static class StabilityAnalysis
     }
 
     private static StabilityTrial Trial(CubicMixtureModel model, double temperature, double pressure, ReadOnlySpan<double> feed, double[] d,
-        ReadOnlySpan<double> lnK, int side, bool stopWhenUnstable, ref int evaluations)
+        ReadOnlySpan<double> lnK, int side, bool stopWhenUnstable, ref int evaluations, out bool converged, out double residual)
     {
         int n = feed.Length;
+        residual = 0;
         var lnW = new double[n];
         var w = new double[n];
         var lnPhi = new double[n];
@@ -100,7 +121,7 @@ public static class StabilityAnalysis
 
         int iterations = 0;
         bool trivial = false;
-        bool converged = false;
+        converged = false;
         // Successive substitution: each step lowers tm (Michelsen 1982) and leaves the trivial
         // solution's neighbourhood quickly if the feed is unstable.
         for (int step = 0; step < SubstitutionSteps; step++)
@@ -141,7 +162,7 @@ public static class StabilityAnalysis
         double tm;
         if (!trivial)
         {
-            tm = converged ? Distance(w, lnW, lnPhi, d) : Newton(model, temperature, pressure, feed, d, w, lnW, lnPhi, ref iterations, ref evaluations);
+            tm = converged ? Distance(w, lnW, lnPhi, d) : Newton(model, temperature, pressure, d, w, lnW, lnPhi, ref iterations, ref evaluations, out converged, out residual);
             double distance = 0;
             double total = w.Sum();
             for (int i = 0; i < n; i++)
@@ -155,6 +176,7 @@ public static class StabilityAnalysis
         else
         {
             tm = 0;
+            converged = true;
         }
 
         double sum = w.Sum();
@@ -173,20 +195,31 @@ public static class StabilityAnalysis
         return tm;
     }
 
-    /// <summary>Newton in α = 2√W with a halving line search on tm; leaves w, lnW and lnPhi at the
-    /// stationary point and returns tm there.</summary>
-    private static double Newton(CubicMixtureModel model, double temperature, double pressure, ReadOnlySpan<double> feed, double[] d,
-        double[] w, double[] lnW, double[] lnPhi, ref int iterations, ref int evaluations)
+    /// <summary>Newton in α = 2√W from the substitution's last point; leaves w, lnW and lnPhi at the
+    /// stationary point and returns tm there. Where the Hessian is positive definite the Newton
+    /// step is taken with a halving line search on tm; where it is not (near a saddle of tm, or
+    /// where a shallow minimum merges with a saddle just outside the phase boundary, where the
+    /// plain step pointed uphill and the search stalled), the restricted step of
+    /// <see cref="TrustRegionStep"/> follows the negative curvature downhill and its radius adapts
+    /// to the ratio of actual to predicted change of tm. <paramref name="converged"/> is false
+    /// after <see cref="MaxNewtonSteps"/> steps; tm is then the value at the last point.</summary>
+    private static double Newton(CubicMixtureModel model, double temperature, double pressure, double[] d,
+        double[] w, double[] lnW, double[] lnPhi, ref int iterations, ref int evaluations, out bool converged, out double residual)
     {
         int n = w.Length;
+        residual = double.PositiveInfinity;
         var dN = new double[n * n];
         var gradient = new double[n];
+        var restricted = new double[n];
         var trialW = new double[n];
         var trialLnW = new double[n];
         var trialLnPhi = new double[n];
         evaluations++;
         model.LnFugacityCoefficientsAtPressure(temperature, pressure, w, MixtureRoot.Stable, lnPhi, dN: dN);
         double tm = Distance(w, lnW, lnPhi, d);
+        // Trust radius in α (α_i = 2√W_i is of order 1 for a major component); adapted below.
+        double radius = 0.5;
+        converged = false;
         for (int step = 0; step < MaxNewtonSteps; step++)
         {
             iterations++;
@@ -200,6 +233,7 @@ public static class StabilityAnalysis
                 double si = Math.Sqrt(w[i]);
                 gradient[i] = si * gi;
                 largest = Math.Max(largest, Math.Abs(gradient[i]));
+                residual = largest;
                 rhs[i] = -gradient[i];
                 for (int j = 0; j < n; j++)
                 {
@@ -212,45 +246,93 @@ public static class StabilityAnalysis
             // Converged when the gradient is 1e-10: tm is then known to ~1e-20 beyond rounding.
             if (largest < 1e-10)
             {
+                converged = true;
                 return tm;
             }
 
-            var delta = h.LU().Solve(rhs);
-            double lambda = 1;
-            for (int search = 0; search < 30; search++)
+            Vector<double>? delta = null;
+            try
             {
-                for (int i = 0; i < n; i++)
-                {
-                    double alpha = 2 * Math.Sqrt(w[i]) + lambda * delta[i];
-                    trialW[i] = Math.Max(0.25 * alpha * alpha, 1e-300);
-                    trialLnW[i] = Math.Log(trialW[i]);
-                }
+                delta = h.Cholesky().Solve(rhs);
+            }
+            catch (ArgumentException)
+            {
+                // Not positive definite: the restricted step below.
+            }
 
-                evaluations++;
-                model.LnFugacityCoefficientsAtPressure(temperature, pressure, trialW, MixtureRoot.Stable, trialLnPhi, dN: dN);
-                double trialTm = Distance(trialW, trialLnW, trialLnPhi, d);
-                // Near the stationary point (gradient below 1e-8) the change of tm is below its
-                // rounding, so the full Newton step is taken.
-                if (double.IsFinite(trialTm) && (largest < 1e-8 || trialTm <= tm + 1e-13 * Math.Max(1, Math.Abs(tm))))
+            bool moved = false;
+            if (delta is not null)
+            {
+                double lambda = 1;
+                for (int search = 0; search < 30 && !moved; search++, lambda *= 0.5)
                 {
-                    tm = trialTm;
-                    trialW.CopyTo(w, 0);
-                    trialLnW.CopyTo(lnW, 0);
-                    trialLnPhi.CopyTo(lnPhi, 0);
-                    break;
-                }
+                    for (int i = 0; i < n; i++)
+                    {
+                        restricted[i] = lambda * delta[i];
+                    }
 
-                lambda *= 0.5;
-                if (search == 29)
-                {
-                    // No descent at rounding level: the stationary point is as converged as it can be.
-                    model.LnFugacityCoefficientsAtPressure(temperature, pressure, w, MixtureRoot.Stable, lnPhi);
-                    return tm;
+                    double trialTm = Move(model, temperature, pressure, d, w, restricted, trialW, trialLnW, trialLnPhi, dN, ref evaluations);
+                    // Near the stationary point (gradient below 1e-8) the change of tm is below its
+                    // rounding, so the full Newton step is taken.
+                    moved = double.IsFinite(trialTm) && (largest < 1e-8 || trialTm <= tm + 1e-13 * Math.Max(1, Math.Abs(tm)));
+                    if (moved)
+                    {
+                        tm = trialTm;
+                    }
                 }
             }
+            else
+            {
+                for (int search = 0; search < 30 && !moved; search++)
+                {
+                    double predicted = TrustRegionStep.Solve(h, gradient, radius, restricted);
+                    double length = Math.Sqrt(restricted.Sum(x => x * x));
+                    double trialTm = Move(model, temperature, pressure, d, w, restricted, trialW, trialLnW, trialLnPhi, dN, ref evaluations);
+                    double ratio = (trialTm - tm) / predicted;
+                    // Accept only a real decrease of tm: an indefinite Hessian means the point is not
+                    // yet a minimum, so there is room to descend.
+                    moved = double.IsFinite(trialTm) && trialTm < tm;
+                    radius = !moved || ratio < 0.25 ? 0.25 * length
+                        : ratio > 0.75 && length > 0.99 * radius ? 2 * radius
+                        : radius;
+                    if (moved)
+                    {
+                        tm = trialTm;
+                    }
+                }
+            }
+
+            if (!moved)
+            {
+                // No descent at rounding level: the stationary point is as converged as it can be.
+                evaluations++;
+                model.LnFugacityCoefficientsAtPressure(temperature, pressure, w, MixtureRoot.Stable, lnPhi);
+                converged = true;
+                return tm;
+            }
+
+            trialW.CopyTo(w, 0);
+            trialLnW.CopyTo(lnW, 0);
+            trialLnPhi.CopyTo(lnPhi, 0);
         }
 
-        throw new ConvergenceException($"the stability test did not converge in {MaxNewtonSteps} Newton steps at {Preconditions.Format(temperature)} K and {Preconditions.Format(pressure)} Pa",
-            iterations, gradient.Max(Math.Abs));
+        return tm;
+    }
+
+    /// <summary>tm at α + Δα (W = α²/4); the trial point's ln φ and its amount derivatives (into dN)
+    /// are left in the trial arrays.</summary>
+    private static double Move(CubicMixtureModel model, double temperature, double pressure, double[] d, double[] w, double[] step,
+        double[] trialW, double[] trialLnW, double[] trialLnPhi, double[] dN, ref int evaluations)
+    {
+        for (int i = 0; i < w.Length; i++)
+        {
+            double alpha = 2 * Math.Sqrt(w[i]) + step[i];
+            trialW[i] = Math.Max(0.25 * alpha * alpha, 1e-300);
+            trialLnW[i] = Math.Log(trialW[i]);
+        }
+
+        evaluations++;
+        model.LnFugacityCoefficientsAtPressure(temperature, pressure, trialW, MixtureRoot.Stable, trialLnPhi, dN: dN);
+        return Distance(trialW, trialLnW, trialLnPhi, d);
     }
 }
