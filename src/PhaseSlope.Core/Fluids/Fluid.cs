@@ -48,6 +48,33 @@ public sealed record Fluid
     /// <summary>Triple-point temperature in K, or null when not known.</summary>
     public SourcedValue? TriplePointTemperature { get; init; }
 
+    /// <summary>Triple-point pressure in Pa, or null when not known: below it no liquid exists.</summary>
+    public SourcedValue? TriplePointPressure { get; init; }
+
+    /// <summary>Molar enthalpy of fusion at the triple point, J/mol, or null.</summary>
+    public SourcedValue? EnthalpyOfFusion { get; init; }
+
+    /// <summary>The solid's molar density at the triple point, mol/m³, or null.</summary>
+    public SourcedValue? SolidDensity { get; init; }
+
+    /// <summary>The liquid's molar density at the triple point, mol/m³, or null (given with
+    /// <see cref="SolidDensity"/> to form <see cref="FusionVolumeChange"/>).</summary>
+    public SourcedValue? TriplePointLiquidDensity { get; init; }
+
+    /// <summary>Δv_fus = v_liquid − v_solid at the triple point, m³/mol (negative for water), or null:
+    /// given directly or formed from <see cref="TriplePointLiquidDensity"/> and <see cref="SolidDensity"/>.</summary>
+    public SourcedValue? FusionVolumeChange { get; init; }
+
+    /// <summary>The solid's molar isobaric heat capacity near the triple point, J/(mol·K), or null
+    /// (with the ideal-gas cp° it gives the temperature dependence of the sublimation enthalpy).</summary>
+    public SourcedValue? SolidHeatCapacity { get; init; }
+
+    /// <summary>A published melting-pressure equation, or null.</summary>
+    public SolidLineEquation? MeltingPressureEquation { get; init; }
+
+    /// <summary>A published sublimation-pressure equation, or null.</summary>
+    public SolidLineEquation? SublimationPressureEquation { get; init; }
+
     /// <summary>Ideal-gas isobaric heat capacity cp°(T), or null when the file gives none (then
     /// only residual and coexistence properties are available, not absolute caloric ones).</summary>
     public IdealGasHeatCapacity? IdealGasHeatCapacity { get; init; }

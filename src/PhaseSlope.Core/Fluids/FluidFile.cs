@@ -104,6 +104,14 @@ internal sealed partial class FluidFileParser
     private const string KeyCriticalMolarVolume = "critical_molar_volume";
     private const string KeyNormalBoilingPoint = "normal_boiling_point";
     private const string KeyTriplePointTemperature = "triple_point_temperature";
+    private const string KeyTriplePointPressure = "triple_point_pressure";
+    private const string KeyEnthalpyOfFusion = "enthalpy_of_fusion";
+    private const string KeySolidDensity = "solid_density";
+    private const string KeyTriplePointLiquidDensity = "triple_point_liquid_density";
+    private const string KeyFusionVolumeChange = "fusion_volume_change";
+    private const string KeySolidHeatCapacity = "solid_heat_capacity";
+    private const string KeyMeltingPressureEquation = "melting_pressure_equation";
+    private const string KeySublimationPressureEquation = "sublimation_pressure_equation";
     private const string KeyRemarks = "remarks";
     private const string KeyIdealGasCp = "ideal_gas_cp";
     private const string KeyAlphaTwuPr = "alpha_twu_pr";
@@ -131,7 +139,9 @@ internal sealed partial class FluidFileParser
         KeyFormat, KeyName, KeySynonyms, KeyFormula, KeyCas, KeyFamily,
         KeyMolarMass, KeyCriticalTemperature, KeyCriticalPressure, KeyAcentricFactor,
         KeyCriticalDensity, KeyCriticalMolarVolume, KeyNormalBoilingPoint,
-        KeyTriplePointTemperature, KeyIdealGasCp, KeyVapourPressureEquation, KeyVolumeShiftPr, KeyVolumeShiftSrk,
+        KeyTriplePointTemperature, KeyTriplePointPressure, KeyEnthalpyOfFusion, KeySolidDensity, KeyTriplePointLiquidDensity,
+        KeyFusionVolumeChange, KeySolidHeatCapacity, KeyMeltingPressureEquation, KeySublimationPressureEquation,
+        KeyIdealGasCp, KeyVapourPressureEquation, KeyVolumeShiftPr, KeyVolumeShiftSrk,
         .. AlphaKeys, .. AlphaKeys.Select(k => k + CovarianceSuffix), .. AlphaKeys.Select(k => k + SensitivitySuffix), KeyAlphaDefault,
         KeyProvenance, KeyRemarks,
     ];
@@ -151,6 +161,12 @@ internal sealed partial class FluidFileParser
         [KeyCriticalMolarVolume] = Quantity.MolarVolume,
         [KeyNormalBoilingPoint] = Quantity.Temperature,
         [KeyTriplePointTemperature] = Quantity.Temperature,
+        [KeyTriplePointPressure] = Quantity.Pressure,
+        [KeyEnthalpyOfFusion] = Quantity.MolarEnergy,
+        [KeySolidDensity] = Quantity.MolarDensity,
+        [KeyTriplePointLiquidDensity] = Quantity.MolarDensity,
+        [KeyFusionVolumeChange] = Quantity.SignedMolarVolume,
+        [KeySolidHeatCapacity] = Quantity.HeatCapacity,
         [KeyVolumeShiftPr] = Quantity.VolumeShift,
         [KeyVolumeShiftSrk] = Quantity.VolumeShift,
     };
@@ -169,6 +185,8 @@ internal sealed partial class FluidFileParser
     private readonly Dictionary<string, (int Line, double[] Values)> _alphaSensitivities = new(StringComparer.Ordinal);
     private AlphaForm _preferredAlpha = AlphaForm.Default;
     private PublishedVapourPressure? _vapourPressureEquation;
+    private SolidLineEquation? _meltingEquation;
+    private SolidLineEquation? _sublimationEquation;
 
     internal FluidFileParser(string origin) => _origin = origin;
 
@@ -181,6 +199,9 @@ internal sealed partial class FluidFileParser
         MolarVolume,
         Dimensionless,
         VolumeShift,
+        MolarEnergy,
+        HeatCapacity,
+        SignedMolarVolume,
     }
 
     /// <summary>A numeric entry as written: number and uncertainty in the file's unit.</summary>
@@ -389,6 +410,12 @@ internal sealed partial class FluidFileParser
             case KeyVapourPressureEquation:
                 _vapourPressureEquation = ReadVapourPressureEquation(line, rest);
                 break;
+            case KeyMeltingPressureEquation:
+                _meltingEquation = ReadSolidLineEquation(line, key, SolidLineKind.Melting, rest);
+                break;
+            case KeySublimationPressureEquation:
+                _sublimationEquation = ReadSolidLineEquation(line, key, SolidLineKind.Sublimation, rest);
+                break;
             case KeyAlphaDefault:
                 _preferredAlpha = ReadAlphaDefault(line, key, rest);
                 break;
@@ -579,7 +606,9 @@ internal sealed partial class FluidFileParser
             Quantity.Pressure => FluidUnits.Allowed(Dimension.Pressure),
             Quantity.MolarMass => FluidUnits.Allowed(Dimension.MolarMass),
             Quantity.MolarDensity => FluidUnits.Allowed(Dimension.AmountDensity),
-            Quantity.MolarVolume or Quantity.VolumeShift => FluidUnits.Allowed(Dimension.MolarVolume),
+            Quantity.MolarVolume or Quantity.VolumeShift or Quantity.SignedMolarVolume => FluidUnits.Allowed(Dimension.MolarVolume),
+            Quantity.MolarEnergy => FluidUnits.Allowed(Dimension.MolarEnergy),
+            Quantity.HeatCapacity => FluidUnits.Allowed(Dimension.MolarEntropy),
             _ => [],
         };
 
@@ -622,6 +651,16 @@ internal sealed partial class FluidFileParser
         if (quantity == Quantity.VolumeShift)
         {
             return; // a translation may have either sign; the model bounds it by its co-volume
+        }
+
+        if (quantity == Quantity.SignedMolarVolume)
+        {
+            if (number == 0)
+            {
+                throw Fail(line, key, "a volume change of zero gives no Clapeyron slope; give the measured value with its sign (negative where the solid is the less dense phase, as for water)");
+            }
+
+            return; // v_liquid − v_solid is negative for water, positive for most fluids
         }
 
         if (number <= 0)
@@ -692,6 +731,7 @@ internal sealed partial class FluidFileParser
 
         string name = _text[KeyName];
         CheckSynonymsDifferFromName(name);
+        var solid = SolidData(m, triplePoint, criticalTemperature, criticalPressure);
 
         return new Fluid
         {
@@ -707,6 +747,14 @@ internal sealed partial class FluidFileParser
             CriticalDensity = criticalDensity,
             NormalBoilingPoint = normalBoilingPoint,
             TriplePointTemperature = triplePoint,
+            TriplePointPressure = solid.TriplePointPressure,
+            EnthalpyOfFusion = solid.EnthalpyOfFusion,
+            SolidDensity = solid.SolidDensity,
+            TriplePointLiquidDensity = solid.LiquidDensity,
+            FusionVolumeChange = solid.FusionVolumeChange,
+            SolidHeatCapacity = solid.SolidHeatCapacity,
+            MeltingPressureEquation = _meltingEquation,
+            SublimationPressureEquation = _sublimationEquation,
             IdealGasHeatCapacity = _idealGasCp,
             AlphaParameters = AlphaParametersWithCovariances(),
             PreferredAlpha = _preferredAlpha,
@@ -716,6 +764,147 @@ internal sealed partial class FluidFileParser
             Remarks = _text.GetValueOrDefault(KeyRemarks),
             Origin = _origin,
         };
+    }
+
+    /// <summary>The solid-phase data (triple-point pressure, fusion, the solid's density and heat
+    /// capacity) with the checks that relate them to each other and to the critical point.</summary>
+    private (SourcedValue? TriplePointPressure, SourcedValue? EnthalpyOfFusion, SourcedValue? SolidDensity, SourcedValue? LiquidDensity,
+        SourcedValue? FusionVolumeChange, SourcedValue? SolidHeatCapacity) SolidData(
+        double? molarMass, SourcedValue? triplePoint, SourcedValue criticalTemperature, SourcedValue criticalPressure)
+    {
+        SourcedValue? pressure = ToSi(KeyTriplePointPressure, molarMass);
+        SourcedValue? fusion = ToSi(KeyEnthalpyOfFusion, molarMass);
+        SourcedValue? solidDensity = ToSi(KeySolidDensity, molarMass);
+        SourcedValue? liquidDensity = ToSi(KeyTriplePointLiquidDensity, molarMass);
+        SourcedValue? volumeChange = ToSi(KeyFusionVolumeChange, molarMass);
+        SourcedValue? heatCapacity = ToSi(KeySolidHeatCapacity, molarMass);
+
+        foreach (string key in new[] { KeyTriplePointPressure, KeyEnthalpyOfFusion, KeySolidDensity, KeyTriplePointLiquidDensity, KeyFusionVolumeChange, KeySolidHeatCapacity, KeyMeltingPressureEquation, KeySublimationPressureEquation })
+        {
+            if (triplePoint is null && _lineOfKey.TryGetValue(key, out int line))
+            {
+                throw Fail(line, key, $"needs the triple point ('{KeyTriplePointTemperature}'), which is not given");
+            }
+        }
+
+        if (pressure is not null && pressure.Value >= criticalPressure.Value)
+        {
+            throw Fail(_lineOfKey[KeyTriplePointPressure], KeyTriplePointPressure,
+                $"{Show(pressure.Value)} Pa is not below the critical pressure {Show(criticalPressure.Value)} Pa (line {_lineOfKey[KeyCriticalPressure]})");
+        }
+
+        if ((solidDensity is null) != (liquidDensity is null))
+        {
+            string given = solidDensity is null ? KeyTriplePointLiquidDensity : KeySolidDensity;
+            string missing = solidDensity is null ? KeySolidDensity : KeyTriplePointLiquidDensity;
+            throw Fail(_lineOfKey[given], given, $"needs '{missing}' too: the volume change on melting is the difference of the two");
+        }
+
+        if (solidDensity is not null && volumeChange is not null)
+        {
+            throw Fail(_lineOfKey[KeyFusionVolumeChange], KeyFusionVolumeChange,
+                $"give either '{KeyFusionVolumeChange}' or the two densities (line {_lineOfKey[KeySolidDensity]}), not both");
+        }
+
+        if (solidDensity is not null && liquidDensity is not null)
+        {
+            // Δv_fus = v_liquid − v_solid at the triple point, from the two molar densities.
+            volumeChange = new SourcedValue(1 / liquidDensity.Value - 1 / solidDensity.Value,
+                $"from {KeyTriplePointLiquidDensity} ({liquidDensity.Source}) and {KeySolidDensity} ({solidDensity.Source})");
+        }
+
+        foreach (var equation in new[] { _meltingEquation, _sublimationEquation })
+        {
+            if (equation is null)
+            {
+                continue;
+            }
+
+            string key = equation.Kind == SolidLineKind.Melting ? KeyMeltingPressureEquation : KeySublimationPressureEquation;
+            if (equation.Kind == SolidLineKind.Sublimation && equation.HighestTemperature > triplePoint!.Value * (1 + 1e-9))
+            {
+                throw Fail(_lineOfKey[key], key, $"the range ends at {Show(equation.HighestTemperature)} K, above the triple point {Show(triplePoint.Value)} K: a solid sublimes only below it");
+            }
+
+            if (equation.HighestTemperature >= criticalTemperature.Value && equation.Kind == SolidLineKind.Sublimation)
+            {
+                throw Fail(_lineOfKey[key], key, "the range reaches the critical temperature");
+            }
+        }
+
+        return (pressure, fusion, solidDensity, liquidDensity, volumeChange, heatCapacity);
+    }
+
+    /// <summary>Reads <c>reduce TR K PR UNIT form powers|excess terms a1^b1 … range T1-T2 K | source</c>:
+    /// a published melting or sublimation equation (<see cref="SolidLineForm"/>) over its stated range.</summary>
+    private SolidLineEquation ReadSolidLineEquation(int line, string key, SolidLineKind kind, string rest)
+    {
+        const string example = "reduce 273.16 K 611.657 Pa form powers terms 1195393.37^3 80818.3159^25.75 range 251.165-273.16 K | source";
+        string source = ReadSource(line, key, rest, out string body);
+        string[] tokens = body.Split((char[]?)null, StringSplitOptions.RemoveEmptyEntries);
+        int terms = Array.IndexOf(tokens, "terms");
+        int range = Array.IndexOf(tokens, "range");
+        if (tokens.Length < 12 || tokens[0] != "reduce" || tokens[5] != "form" || terms != 7 || range < 9 || range != tokens.Length - 3)
+        {
+            throw Fail(line, key, $"malformed equation; write {example}");
+        }
+
+        double tr = ReadKelvin(line, key, "reduce", [tokens[1], tokens[2]], example);
+        double pr = ReadPressureWithUnit(line, key, tokens[3], tokens[4]);
+        SolidLineForm form = tokens[6] switch
+        {
+            "powers" => SolidLineForm.Powers,
+            "excess" => SolidLineForm.Excess,
+            _ => throw Fail(line, key, $"unknown form '{tokens[6]}'; expected powers or excess (docs/fluid-files.md)"),
+        };
+
+        var coefficients = new List<double>();
+        var exponents = new List<double>();
+        foreach (string term in tokens[8..range])
+        {
+            int caret = term.IndexOf('^', StringComparison.Ordinal);
+            if (caret <= 0 || !TryNumber(term[..caret], out double a) || !TryNumber(term[(caret + 1)..], out double b))
+            {
+                throw Fail(line, key, $"malformed term '{term}'; write a^b");
+            }
+
+            coefficients.Add(a);
+            exponents.Add(b);
+        }
+
+        string[] ends = tokens[range + 1].Split('-');
+        if (ends.Length != 2 || !TryNumber(ends[0], out double low) || !TryNumber(ends[1], out double high) || tokens[range + 2] != "K" || !(low > 0) || !(high > low))
+        {
+            throw Fail(line, key, $"malformed range '{string.Join(' ', tokens[(range + 1)..])}'; write range T1-T2 K with 0 < T1 < T2");
+        }
+
+        var equation = new SolidLineEquation(kind, form, tr, pr, coefficients, exponents, low, high, source);
+        foreach (double t in new[] { low, high, 0.5 * (low + high) })
+        {
+            var (p, slope) = equation.Evaluate(t);
+            if (!(p > 0) || !double.IsFinite(p) || !double.IsFinite(slope))
+            {
+                throw Fail(line, key, $"gives no positive finite pressure at {Show(t)} K inside its range (an excess form needs T on one side of the reference temperature)");
+            }
+        }
+
+        return equation;
+    }
+
+    private double ReadPressureWithUnit(int line, string key, string number, string unitText)
+    {
+        if (!TryNumber(number, out double value) || !(value > 0))
+        {
+            throw Fail(line, key, $"'{number}' is not a positive pressure");
+        }
+
+        string[] allowed = FluidUnits.Allowed(Units.Dimension.Pressure);
+        if (Array.IndexOf(allowed, unitText) < 0)
+        {
+            throw Fail(line, key, $"wrong pressure unit '{unitText}'; allowed: {string.Join(", ", allowed)}");
+        }
+
+        return FluidUnits.Get(unitText).ToSi(value);
     }
 
     /// <summary>Converts an entry to SI; null when the entry is absent.</summary>
@@ -741,6 +930,17 @@ internal sealed partial class FluidFileParser
                 double m = molarMass ?? throw Fail(raw.Line, key, $"unit '{raw.Unit}' needs the molar mass, which is not given ('{KeyMolarMass}')");
                 value = unit.ToSi(raw.Number) / m;
                 uncertainty = raw.Uncertainty is double um ? unit.ToSi(um) / m : null;
+                break;
+            case Dimension.SpecificEnergy or Dimension.SpecificEntropy:
+                // Per kilogram → per mole: times the molar mass (its own uncertainty not propagated).
+                double mass = molarMass ?? throw Fail(raw.Line, key, $"unit '{raw.Unit}' needs the molar mass, which is not given ('{KeyMolarMass}')");
+                value = unit.ToSi(raw.Number) * mass;
+                uncertainty = raw.Uncertainty is double ue ? unit.ToSi(ue) * mass : null;
+                break;
+            case Dimension.MolarVolume when QuantityOfKey[key] == Quantity.SignedMolarVolume:
+                // A volume change stays a volume (m³/mol); it is not inverted like a critical molar volume.
+                value = unit.ToSi(raw.Number);
+                uncertainty = raw.Uncertainty is double uc ? unit.ToSi(uc) : null;
                 break;
             case Dimension.MolarVolume:
                 // Molar volume V → ρ = 1/V; first-order propagation u(ρ) = u(V)/V².

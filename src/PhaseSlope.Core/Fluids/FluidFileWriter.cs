@@ -55,6 +55,8 @@ public static class FluidFileWriter
             Quantity(text, "triple_point_temperature", tt, "K");
         }
 
+        WriteSolidData(text, fluid);
+
         if (fluid.IdealGasHeatCapacity is { } cp)
         {
             var value = new StringBuilder();
@@ -132,6 +134,47 @@ public static class FluidFileWriter
         string u = unit is null ? "" : $" {unit}";
         string sigma = value.StandardUncertainty is double s ? $" ± {Number(s)}" : "";
         Line(text, key, $"{Number(value.Value)}{u}{sigma} | {value.Source}");
+    }
+
+    /// <summary>The triple-point pressure, fusion data and published solid lines, as read.</summary>
+    private static void WriteSolidData(StringBuilder text, Fluid fluid)
+    {
+        if (fluid.TriplePointPressure is { } pt)
+        {
+            Quantity(text, "triple_point_pressure", pt, "Pa");
+        }
+
+        if (fluid.EnthalpyOfFusion is { } fusion)
+        {
+            Quantity(text, "enthalpy_of_fusion", fusion, "J/mol");
+        }
+
+        if (fluid.SolidDensity is { } solid && fluid.TriplePointLiquidDensity is { } liquid)
+        {
+            Quantity(text, "solid_density", solid, "mol/m3");
+            Quantity(text, "triple_point_liquid_density", liquid, "mol/m3");
+        }
+        else if (fluid.FusionVolumeChange is { } dv)
+        {
+            Quantity(text, "fusion_volume_change", dv, "m3/mol");
+        }
+
+        if (fluid.SolidHeatCapacity is { } cs)
+        {
+            Quantity(text, "solid_heat_capacity", cs, "J/(mol·K)");
+        }
+
+        foreach (var (key, equation) in new[] { ("melting_pressure_equation", fluid.MeltingPressureEquation), ("sublimation_pressure_equation", fluid.SublimationPressureEquation) })
+        {
+            if (equation is null)
+            {
+                continue;
+            }
+
+            string terms = string.Join(' ', equation.Coefficients.Select((a, i) => $"{Number(a)}^{Number(equation.Exponents[i])}"));
+            string form = equation.Form == SolidLineForm.Powers ? "powers" : "excess";
+            Line(text, key, $"reduce {Number(equation.ReducingTemperature)} K {Number(equation.ReducingPressure)} Pa form {form} terms {terms} range {Number(equation.LowestTemperature)}-{Number(equation.HighestTemperature)} K | {equation.Source}");
+        }
     }
 
     private static void Optional(StringBuilder text, string key, string? value)

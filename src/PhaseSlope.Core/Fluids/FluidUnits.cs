@@ -8,7 +8,8 @@ namespace PhaseSlope.Core.Fluids;
 /// <remarks>The subset is deliberately narrower than the table: temperatures in kelvin only (a
 /// Celsius value is easy to misread as kelvin, and the file's range checks read the number before
 /// conversion), pressures in the SI multiples and the bar. A critical density may also be written
-/// as a mass density (divided by the molar mass) or a molar volume (its reciprocal).</remarks>
+/// as a mass density (divided by the molar mass) or a molar volume (its reciprocal); an enthalpy of
+/// fusion or a solid's heat capacity per kilogram is multiplied by the molar mass.</remarks>
 internal static class FluidUnits
 {
     private static readonly Dictionary<Dimension, Unit[]> Subset = new()
@@ -18,6 +19,8 @@ internal static class FluidUnits
         [Dimension.MolarMass] = Units("g/mol", "kg/mol"),
         [Dimension.AmountDensity] = Units("mol/m3", "mol/L", "mol/dm3", "kg/m3"),
         [Dimension.MolarVolume] = Units("m3/mol", "L/mol", "dm3/mol", "cm3/mol"),
+        [Dimension.MolarEnergy] = Units("J/mol", "kJ/mol", "J/kg", "kJ/kg"),
+        [Dimension.MolarEntropy] = Units("J/(mol·K)", "J/(kg·K)", "kJ/(kg·K)"),
     };
 
     /// <summary>Unit spellings allowed for a field of the given dimension (with the table's
