@@ -77,15 +77,21 @@ public sealed partial class CatalogSolidDataTests(ITestOutputHelper output)
                 double tt = fluid.TriplePointTemperature!.Value, pt = fluid.TriplePointPressure!.Value;
                 Assert.True(equation.Covers(tt), Invariant($"{fluid.Name} {equation.Kind} equation's range {equation.LowestTemperature}-{equation.HighestTemperature} K excludes T_t {tt} K"));
 
-                // The triple points are printed to five or six significant digits (611.657 Pa,
-                // 0.51795 MPa, 12.523 kPa, 68.891 kPa), a relative half-unit of at most 1e-5 in
-                // pressure, and 1e-5 in temperature moves a melting line by its slope times that
-                // (T_t·dP/dT·1e-5 / P_t: about 0.03 for nitrogen, whose line is steep in reduced
-                // units) but a sublimation line only by (Δh_sub/RT_t)·1e-5 < 3e-4. A mismatch of
-                // the reducing point is a different number at the third or fourth digit.
+                // The published equations are reduced by their paper's own triple point, so the
+                // reducing point must be the file's (T_t, P_t) to the digits printed in the file;
+                // a reducing point copied from another paper or mistyped differs at the third or
+                // fourth digit.
+                double halfT = HalfUnitOfLastDigit(fluid.TriplePointTemperature), halfP = HalfUnitOfLastDigit(fluid.TriplePointPressure);
+                AssertClose.Relative(tt, equation.ReducingTemperature, halfT, $"{fluid.Name} {equation.Kind} equation's reducing temperature vs {fluid.TriplePointTemperature.Source}");
+                AssertClose.Relative(pt, equation.ReducingPressure, halfP, $"{fluid.Name} {equation.Kind} equation's reducing pressure vs {fluid.TriplePointPressure.Source}");
+
+                // And evaluated at T_t it gives P_t: to the half-unit of P_t's last digit plus what
+                // the half-unit of T_t's last digit moves the line (T_t·|dP/dT|/P_t times it: 1e-4 to
+                // 1e-3 for the sublimation lines, large for steep melting lines such as ethane's,
+                // whose pressure is then fixed by the reducing-point check above).
                 double atTriplePoint = equation.Pressure(tt);
-                double tolerance = equation.Kind == SolidLineKind.Sublimation ? 3e-4 : 1e-5 * (1 + tt * Math.Abs(equation.Slope(tt)) / pt);
-                output.WriteLine(Invariant($"{fluid.Name} {equation.Kind}: P(T_t) = {atTriplePoint:G8} Pa, sourced P_t = {pt:G8} Pa"));
+                double tolerance = halfP + halfT * tt * Math.Abs(equation.Slope(tt)) / pt;
+                output.WriteLine(Invariant($"{fluid.Name} {equation.Kind}: P(T_t) = {atTriplePoint:G8} Pa, sourced P_t = {pt:G8} Pa, allowed {tolerance:G3} relative"));
                 AssertClose.Relative(pt, atTriplePoint, tolerance, $"{fluid.Name} {equation.Kind} equation ({equation.Source}) at T_t vs {fluid.TriplePointPressure.Source}");
                 count++;
             }
@@ -304,13 +310,14 @@ public sealed partial class CatalogSolidDataTests(ITestOutputHelper output)
 
     private static string Percent(double fraction) => (100 * fraction).ToString("+0.0;-0.0;0.0", CultureInfo.InvariantCulture);
 
-    /// <summary>The relative half-unit of the last printed digit of a value, read back from its
-    /// source line's number (the catalog's values are exact decimals as written).</summary>
+    /// <summary>Half a unit of a value's last printed digit, relative to the value (an upper bound:
+    /// 0.5·10^(1−n) for n significant digits). The digits are the value's own (G6, trailing zeros
+    /// dropped), which for the catalog's values of at most six digits are those printed in the
+    /// file whatever the unit (12.523 kPa is 12523 Pa, 0.51795 MPa is 517950 Pa).</summary>
     private static double HalfUnitOfLastDigit(SourcedValue value)
     {
-        // Significant digits of the value as stored (G6 of a number written with fewer digits
-        // gives those digits back).
-        string digits = value.Value.ToString("G6", CultureInfo.InvariantCulture).Split('E')[0].Replace("-", "", StringComparison.Ordinal).Replace(".", "", StringComparison.Ordinal).TrimStart('0');
+        string mantissa = value.Value.ToString("G6", CultureInfo.InvariantCulture).Split('E')[0];
+        string digits = mantissa.Replace("-", "", StringComparison.Ordinal).Replace(".", "", StringComparison.Ordinal).Trim('0');
         int significant = Math.Max(1, digits.Length);
         return 0.5 * Math.Pow(10, 1 - significant);
     }
