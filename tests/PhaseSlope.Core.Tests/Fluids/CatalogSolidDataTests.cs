@@ -162,6 +162,51 @@ public sealed partial class CatalogSolidDataTests(ITestOutputHelper output)
         Assert.True(count >= 4, $"{count} fluids checked (water, carbon dioxide, nitrogen and argon expected)");
     }
 
+    /// <summary>(f, integrated) The sublimation line the toolkit draws without a published
+    /// equation (Clapeyron from the sourced triple point with Δh_sub = Δh_fus + Δh_vap, Δh_vap from
+    /// the fluid's vapour-pressure equation) against the published sublimation equation, for the
+    /// fluids that have both: the catalog's Δh_fus, P_t and vapour-pressure equation together must
+    /// reproduce the published line.</summary>
+    [Fact]
+    public void ClapeyronSublimationFromTheCatalogsFusionData_FollowsThePublishedSublimationEquation()
+    {
+        // Two effects separate the lines (all measured deviations are positive, the Clapeyron
+        // line high):
+        // - Δh_sub is held at its triple-point value (the catalog gives no solid heat capacity),
+        //   while it grows towards low T by |Δcp|·(T_t − T), Δcp = cp° − cp_solid < 0. Integrating
+        //   d ln P/dT = Δh/(RT²) from T_t, the held-constant line is high by (|Δcp|/R)·(x − ln(1 + x)),
+        //   x = T_t/T − 1 (0.014 at 0.85·T_t). Near their triple points cp_solid is about 4.5R for ice
+        //   (38 J/(mol·K)), 4R for argon, 5.5R for β-nitrogen and 6.5R for solid carbon dioxide (54
+        //   J/(mol·K)), against cp° of 2.5R to 4R (solid heat capacities from memory, handbook
+        //   level), so |Δcp| ≤ 2.5R; 3R is allowed.
+        // - An error in Δh_sub itself (from Δh_fus: the Δh_fus test above measures up to 6.3 % of
+        //   Δh_fus for nitrogen, 0.8 % of Δh_sub for carbon dioxide) scales ln(P/P_t): 1 %·|ln(P/P_t)|.
+        // Plus 0.5 % for the model's vapour volume (Z differs from 1 by up to 8 % here, and the
+        // model's second virial coefficient by a few percent of that).
+        int count = 0;
+        var failures = new List<string>();
+        foreach (Fluid fluid in Catalog.Where(f => f.SublimationPressureEquation is not null && f.VapourPressureEquation is not null && f.EnthalpyOfFusion is not null))
+        {
+            double tt = fluid.TriplePointTemperature!.Value, pt = fluid.TriplePointPressure!.Value;
+            double t = Math.Max(0.85 * tt, fluid.SublimationPressureEquation!.LowestTemperature);
+            var solver = CoexistenceSolver.For(fluid, CubicModelKind.PengRobinson);
+            var clapeyron = new Solids.SolidPhaseLines(fluid with { SublimationPressureEquation = null }, solver).Sublimation(t).Pressure;
+            double published = fluid.SublimationPressureEquation.Pressure(t);
+            double x = tt / t - 1;
+            double tolerance = 3 * (x - Math.Log(1 + x)) + 0.01 * Math.Abs(Math.Log(published / pt)) + 0.005;
+            output.WriteLine(Invariant($"{fluid.Name} at {t:F3} K: Clapeyron from the catalog {clapeyron:G6} Pa, published equation {published:G6} Pa, {Percent(clapeyron / published - 1)} % (allowed {100 * tolerance:F1} %)"));
+            if (!(Math.Abs(clapeyron / published - 1) <= tolerance))
+            {
+                failures.Add(Invariant($"{fluid.Name} at {t:F3} K: Clapeyron sublimation {clapeyron:G6} Pa from {fluid.EnthalpyOfFusion!.Source} vs {published:G6} Pa from {fluid.SublimationPressureEquation.Source}"));
+            }
+
+            count++;
+        }
+
+        Assert.True(failures.Count == 0, string.Join(Environment.NewLine, failures));
+        Assert.True(count >= 4, $"{count} fluids checked");
+    }
+
     /// <summary>(c) The published vapour-pressure equation at the triple-point temperature against
     /// the sourced triple-point pressure (both from the same reference equation of state).</summary>
     [Fact]
