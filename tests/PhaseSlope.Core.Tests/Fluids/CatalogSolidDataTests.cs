@@ -274,6 +274,33 @@ public sealed partial class CatalogSolidDataTests(ITestOutputHelper output)
         Assert.True(failures.Count == 0, string.Join(Environment.NewLine, failures));
     }
 
+    /// <summary>Entropies of fusion Δh_fus/T_t in the range real substances show (common practice,
+    /// a rule of thumb): at least about R (Richards's rule for monatomic and plastic crystals, the
+    /// smallest entropies of fusion, of simple and globular molecules whose solid just below the
+    /// melting point is already rotationally disordered), at most about 15R (long flexible chains
+    /// gain conformational entropy on melting). Catches a unit slip (J for kJ, per kg for per mol)
+    /// in any file.</summary>
+    [Fact]
+    public void EntropyOfFusion_LiesInTheRangeRealSubstancesShow()
+    {
+        var failures = new List<string>();
+        foreach (Fluid fluid in Catalog.Where(f => f.EnthalpyOfFusion is not null))
+        {
+            Assert.True(fluid.TriplePointTemperature is not null, $"{fluid.Name} has an enthalpy of fusion but no triple-point temperature");
+            double entropy = fluid.EnthalpyOfFusion!.Value / fluid.TriplePointTemperature!.Value / Constants.GasConstant;
+            output.WriteLine(Invariant($"{fluid.Name}: dS_fus/R = {entropy:F2}"));
+
+            // Measured: smallest oxygen 0.98R (its solid has two transitions below melting that take
+            // up most of the entropy) and hydrogen 1.01R; largest n-decane 14.2R. Bounds 0.8R-15R.
+            if (!(entropy >= 0.8 && entropy <= 15))
+            {
+                failures.Add(Invariant($"{fluid.Name}: dS_fus = {entropy:F2} R from {fluid.EnthalpyOfFusion.Source}"));
+            }
+        }
+
+        Assert.True(failures.Count == 0, string.Join(Environment.NewLine, failures));
+    }
+
     /// <summary>The triple-point pressure is only meaningful with the triple-point temperature, and
     /// the fusion data with both; a helium-like fluid without a triple point carries neither.</summary>
     [Fact]
