@@ -153,7 +153,8 @@ internal static class CurveCommand
         RequireSolidData(fluid, kind);
         var model = request.Model.For(fluid);
         var lines = new SolidPhaseLines(fluid, new CoexistenceSolver(model, CoexistenceSolver.LowestValidTemperature(fluid)));
-        var (low, high) = lines.DefaultRange(kind);
+        var (low, high) = ValidRange(lines, fluid, kind);
+        var (defaultLow, defaultHigh) = lines.DefaultRange(kind);
         string name = kind == PhaseLineKind.Sublimation ? "sublimation" : "melting";
         string range = $"{NumberText.Table(low)}-{NumberText.Table(high)} K";
         // A value outside the range only by rounding (a temperature given in degC) is accepted, as
@@ -180,7 +181,10 @@ internal static class CurveCommand
         }
         else
         {
-            double start = request.From ?? low, end = request.To ?? high;
+            // The default start is the default range's, or the whole range's when --to lies below it
+            // (water's sublimation table to 150 K starts at the equation's 50 K, not at 0.7 T_t).
+            double end = request.To ?? defaultHigh;
+            double start = request.From ?? (end <= defaultLow ? low : defaultLow);
             if (request.From is not null)
             {
                 Require(start, "--from", "from temperature");
@@ -205,6 +209,14 @@ internal static class CurveCommand
         var (check, reason) = FluidWriter.TriplePointCheckOf(fluid, lines);
         return new PhaseLineTable(fluid, model, kind, lines, check, reason, points);
     }
+
+    /// <summary>The temperatures a solid line is given at: a published sublimation equation's whole
+    /// stated range up to the triple point (the default range starts higher, at 0.7 T_t); otherwise
+    /// the default range, which is where the Clapeyron route or the published melting equation holds.</summary>
+    private static (double Low, double High) ValidRange(SolidPhaseLines lines, Fluid fluid, PhaseLineKind kind)
+        => kind == PhaseLineKind.Sublimation && fluid.SublimationPressureEquation is { } equation
+            ? (equation.LowestTemperature, Math.Min(lines.TriplePointTemperature, equation.HighestTemperature))
+            : lines.DefaultRange(kind);
 
     /// <summary>Why a solid line ends where it does, for the refusal of a temperature beyond it.</summary>
     private static string RangeReason(SolidPhaseLines lines, Fluid fluid, PhaseLineKind kind)

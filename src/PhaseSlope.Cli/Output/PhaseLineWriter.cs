@@ -83,6 +83,11 @@ internal static class PhaseLineWriter
         {
             notes.Add("the vapour volume is the model's vapour root (not the ideal gas); the line is the Clapeyron equation integrated from the sourced triple point, "
                 + "so it is only as good as dh_sub and the model's vapour volume");
+            if (table.Lines.VaporizationEnthalpy.Method.StartsWith("the model's", StringComparison.Ordinal))
+            {
+                notes.Add("dh_vap at the triple point comes from the model's own coexistence (the fluid file gives no vapour_pressure_equation usable there); "
+                    + "an error in it enters dh_sub in full, and the line's pressure far below the triple point by exp(error in dh_sub/R (1/T - 1/Tt))");
+            }
         }
 
         if (table.Check is { } check)
