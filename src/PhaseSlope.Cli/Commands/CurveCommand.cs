@@ -225,7 +225,8 @@ internal static class CurveCommand
         {
             return fluid.SublimationPressureEquation is not null
                 ? "the published sublimation equation's range, up to the triple point"
-                : $"from {SolidPhaseLines.SublimationDefaultStart} of the triple-point temperature, where the Clapeyron route from the triple point is offered, up to the triple point";
+                : string.Create(System.Globalization.CultureInfo.InvariantCulture,
+                    $"from {SolidPhaseLines.SublimationDefaultStart} of the triple-point temperature, where the Clapeyron route from the triple point is offered, up to the triple point");
         }
 
         return fluid.MeltingPressureEquation is not null
