@@ -19,7 +19,7 @@ internal static class CurveCommand
     public static Command Create(CliIo io)
     {
         var options = new CurveOptions();
-        var command = new Command("curve", "The saturation curve as a table of coexistence states");
+        var command = new Command("curve", "The saturation curve as a table of coexistence states, or the sublimation or melting line (--line)");
         options.AddTo(command);
         command.SetAction(parse => io.Guard(() =>
         {

@@ -160,6 +160,21 @@ public class CurveLineCommandTests
     }
 
     [Fact]
+    public void Out_SolidLine_WritesTheFileInTheFormatOfItsExtension()
+    {
+        using var folder = new TempFolder();
+        string path = folder.File("melting.json");
+
+        var result = Run("curve", "water", "--line", "melting", "--points", "3", "--out", path);
+
+        Assert.True(result.ExitCode == 0, result.ToString());
+        Assert.Equal("", result.Stdout);
+        Assert.Equal($"phaseslope: wrote 3 melting points to {path}\n", result.Stderr);
+        using var written = StrictJson.Parse(File.ReadAllText(path));
+        Assert.Equal(3, written.RootElement.GetProperty("points").GetArrayLength());
+    }
+
+    [Fact]
     public void Vaporization_DefaultLine_OutputUnchanged()
     {
         Assert.Equal(RunText("curve", "propane", "--points", "5"), RunText("curve", "propane", "--points", "5", "--line", "vaporization"));
