@@ -197,12 +197,10 @@ internal static class PhaseLineWriter
 
         text.Append(rows.Render());
         text.AppendLine();
-        foreach (string? reason in new[] { EnthalpyUnavailableReason(table), VolumeUnavailableReason(table) }.Distinct())
+        if (VolumeUnavailableReason(table) is { } reason)
         {
-            if (reason is not null)
-            {
-                text.AppendLine($"not given: {reason}");
-            }
+            // Without dv neither column can be formed (dh = T dv dP/dT along a published equation).
+            text.AppendLine($"dh and dv not given: {reason}");
         }
 
         foreach (string note in Notes(table))
