@@ -82,6 +82,19 @@ public class BadInputCatalogueTests
         { ["curve", "propane", "--pressures", "1,50 bar"], ExitCodes.OutOfRange, "--pressures: pressure 5000000 Pa is at or above the critical" },
         { ["curve", "propane", "--pressures", "1,2 psig"], ExitCodes.Usage, "--pressures: gauge pressures are not accepted ('psig') in '1 psig'" },
         { ["curve", "inline:tc=369.89K,pc=4.2512MPa,omega=0.152", "--format", "csv", "--units", "engineering"], ExitCodes.Fluid, "inline fluid: field 'molar_mass': fluid 'inline-fluid' gives" },
+        { ["curve", "water", "--line", "solid"], ExitCodes.Usage, "--line: unknown line 'solid' (use vaporization, sublimation or melting)" },
+        { ["curve", "water", "--line", "sublimation", "--pressures", "1,2 bar"], ExitCodes.Usage, "--pressures: applies to --line vaporization only, not to the sublimation line" },
+        { ["curve", "water", "--line", "melting", "--reference", "nbp"], ExitCodes.Usage, "--reference: applies to --line vaporization only, not to the melting line" },
+        { ["curve", "water", "--line", "melting", "--diagnostics"], ExitCodes.Usage, "--diagnostics: applies to --line vaporization only, not to the melting line" },
+        { ["curve", "water", "--line", "sublimation", "--uncertainty", "linear"], ExitCodes.Usage, "--uncertainty: applies to --line vaporization only, not to the sublimation line" },
+        { ["curve", "water", "--line", "melting", "--from", "200"], ExitCodes.OutOfRange, "--from: 200 K is outside the melting line of water, 251.165-273.16 K (the published melting equation's stated range)" },
+        { ["curve", "water", "--line", "sublimation", "--to", "300"], ExitCodes.OutOfRange, "--to: 300 K is outside the sublimation line of water, 50-273.16 K" },
+        { ["curve", "water", "--line", "sublimation", "--temperatures", "40,200"], ExitCodes.OutOfRange, "--temperatures: 40 K is outside the sublimation line of water, 50-273.16 K" },
+        { ["curve", "water", "--line", "melting", "--from", "270", "--to", "260"], ExitCodes.Usage, "--from (270 K) must be below --to (260 K)" },
+        { ["curve", "{dir}/water-nopt.fluid", "--line", "sublimation"], ExitCodes.Fluid, "field 'triple_point_pressure': fluid 'water' gives no triple_point_pressure, which the sublimation line starts from" },
+        { ["curve", "{dir}/water-nofusion.fluid", "--line", "melting"], ExitCodes.Fluid, "field 'enthalpy_of_fusion': fluid 'water' gives no enthalpy_of_fusion, which the Clapeyron route to the melting line needs" },
+        { ["curve", "{dir}/water-nodv.fluid", "--line", "melting"], ExitCodes.Fluid, "field 'fusion_volume_change': fluid 'water' gives no fusion_volume_change" },
+        { ["curve", "{dir}/water-nofusion.fluid", "--line", "sublimation", "--from", "300"], ExitCodes.OutOfRange, "--from: 300 K is outside the sublimation line of water" },
         { ["state", "propane", "-T", "300", "-D", "100"], ExitCodes.Usage, "Unrecognized command or argument '-D'." },
         { ["state", "propane", "-T", "300", "-P", "1e6", "--phase", "gas"], ExitCodes.Usage, "--phase: unknown phase 'gas' (use stable, liquid or vapour)" },
         { ["state", "propane", "-T", "400", "-P", "1e6", "--phase", "liquid"], ExitCodes.OutOfRange, "at 400 K, at or above the critical temperature 369.89 K, the" },
@@ -280,6 +293,11 @@ public class BadInputCatalogueTests
         File.WriteAllText(folder.File("lowomega.fluid"), ReplaceLine(ReplaceLine(ReplaceLine(propane, "acentric_factor", "acentric_factor -0.5 | invented for a test"),
             "name", "name lowomega"), "synonyms", ""));
         File.WriteAllText(folder.File("nomass.fluid"), ReplaceLine(ReplaceLine(ReplaceLine(propane, "molar_mass", ""), "name", "name nomass"), "synonyms", ""));
+        // Water's file with one solid-phase key (or the melting equation with it) taken out.
+        string water = CliHarness.CatalogFileText("water.fluid");
+        File.WriteAllText(folder.File("water-nopt.fluid"), ReplaceLine(water, "triple_point_pressure", ""));
+        File.WriteAllText(folder.File("water-nofusion.fluid"), ReplaceLine(ReplaceLine(water, "enthalpy_of_fusion", ""), "melting_pressure_equation", ""));
+        File.WriteAllText(folder.File("water-nodv.fluid"), ReplaceLine(ReplaceLine(ReplaceLine(water, "solid_density", ""), "triple_point_liquid_density", ""), "melting_pressure_equation", ""));
         File.WriteAllText(folder.File("vlenounits.csv"), "T,P [kPa],x1,y1\n351,101.325,0.5,0.6\n352,101.325,0.4,0.55\n");
         File.WriteAllText(folder.File("vlebad.csv"), "T [K],P [kPa],x1,y1\n351,101.325,1.5,0.6\n352,101.325,0.4,0.55\n");
         File.WriteAllText(folder.File("vleone.csv"), "T [K],P [kPa],x1,y1\n351,101.325,0.5,0.6\n");

@@ -18,12 +18,16 @@ public class CultureInvarianceTests
                 ? ["coexist", "r-134a", "--pressure", "1.2 bar", "--format", format, "--units", "engineering"]
                 : ["coexist", "r-134a", "--pressure", "1.2 bar", "--format", format]);
             rows.Add(["curve", "water", "--points", "12", "--format", format]);
+            rows.Add(["curve", "water", "--line", "melting", "--points", "4", "--format", format]);
+            rows.Add(["curve", "carbon dioxide", "--line", "sublimation", "--points", "4", "--format", format]);
             rows.Add(["state", "toluene", "--temperature", "25 degC", "--pressure", "3 bar", "--format", format]);
             rows.Add(["fit", data, "--fluid", fluid, "--format", format]);
         }
 
         rows.Add(["derive", "toluene", "--of", "U", "--by", "V", "--hold", "T", "--temperature", "25 degC", "--pressure", "3 bar", "--format", "json"]);
         rows.Add(["fluids", "show", "propane", "--format", "json"]);
+        rows.Add(["fluids", "show", "water", "--format", "json"]);
+        rows.Add(["fluids", "show", "water"]);
         rows.Add(["fluids", "list"]);
         rows.Add(["latent", data, "--fluid", fluid, "--format", "json"]);
         // Fractions and k_ij are read with a '.' decimal point whatever the culture.

@@ -4,11 +4,12 @@ using PhaseSlope.Cli.Units;
 using PhaseSlope.Core.Equilibrium;
 using PhaseSlope.Core.Fluids;
 using PhaseSlope.Core.Properties;
+using PhaseSlope.Core.Solids;
 
 namespace PhaseSlope.Cli.Commands;
 
-/// <summary><c>phaseslope curve FLUID [--from V] [--to V] [--points N | --step V] | --temperatures LIST | --pressures LIST [--out FILE]</c>:
-/// a saturation table.</summary>
+/// <summary><c>phaseslope curve FLUID [--line vaporization|sublimation|melting] [--from V] [--to V] [--points N | --step V] | --temperatures LIST | --pressures LIST [--out FILE]</c>:
+/// a saturation table, or a table of the sublimation or melting line.</summary>
 internal static class CurveCommand
 {
     /// <summary>Largest accepted --points.</summary>
@@ -18,11 +19,28 @@ internal static class CurveCommand
     public static Command Create(CliIo io)
     {
         var options = new CurveOptions();
-        var command = new Command("curve", "The saturation curve as a table of coexistence states");
+        var command = new Command("curve", "The saturation curve as a table of coexistence states, or the sublimation or melting line (--line)");
         options.AddTo(command);
         command.SetAction(parse => io.Guard(() =>
         {
             var request = options.Bind(parse);
+            if (request.Line != PhaseLineKind.Vaporization)
+            {
+                var line = SolidLine(request);
+                string solidText = PhaseLineWriter.Render(line, request.Output.Format, request.Output.Units);
+                if (request.OutPath is null)
+                {
+                    io.Out.Write(solidText);
+                }
+                else
+                {
+                    AtomicFile.WriteAllText(request.OutPath, solidText);
+                    io.Note($"wrote {line.Points.Count} {line.LineName} point{(line.Points.Count == 1 ? "" : "s")} to {request.OutPath}");
+                }
+
+                return;
+            }
+
             var (data, zero, outPath) = (request.Fluid, request.Reference, request.OutPath);
             var context = CoexistenceContext.Create(data, options.Diagnostics.Begin(request.Diagnostics, request.Model.For(data)), zero);
             var solver = context.Solver;
@@ -121,6 +139,136 @@ internal static class CurveCommand
         return request.Step is double step
             ? CoexistenceCurve.Through(solver, Stepped(start, end, step))
             : CoexistenceCurve.Trace(solver, start, end, request.Points);
+    }
+
+    /// <summary>The sublimation or melting line at the requested temperatures, each checked against
+    /// the line's range (<see cref="SolidPhaseLines.DefaultRange"/>: a published equation's stated
+    /// range, else from the triple point as far as the Clapeyron route is offered).</summary>
+    /// <exception cref="Core.Errors.FluidDataException">The fluid lacks what the line needs (exit 3,
+    /// naming the fluid-file key).</exception>
+    private static PhaseLineTable SolidLine(CurveRequest request)
+    {
+        var fluid = request.Fluid;
+        var kind = request.Line;
+        RequireSolidData(fluid, kind);
+        var model = request.Model.For(fluid);
+        var lines = new SolidPhaseLines(fluid, new CoexistenceSolver(model, CoexistenceSolver.LowestValidTemperature(fluid)));
+        var (low, high) = ValidRange(lines, fluid, kind);
+        var (defaultLow, defaultHigh) = lines.DefaultRange(kind);
+        string name = kind == PhaseLineKind.Sublimation ? "sublimation" : "melting";
+        string range = $"{NumberText.Table(low)}-{NumberText.Table(high)} K";
+        // A value outside the range only by rounding (a temperature given in degC) is accepted, as
+        // the line itself accepts it (1e-12 relative).
+        bool Outside(double t) => t < low * (1 - 1e-12) || t > high * (1 + 1e-12);
+        void Require(double t, string option, string field)
+        {
+            if (Outside(t))
+            {
+                throw new Core.Errors.InvalidInputException(field, t,
+                    $"{option}: {NumberText.Table(t)} K is outside the {name} line of {fluid.Name}, {range} ({RangeReason(lines, fluid, kind)})");
+            }
+        }
+
+        IReadOnlyList<double> temperatures;
+        if (request.Temperatures is { } list)
+        {
+            foreach (double t in list)
+            {
+                Require(t, "--temperatures", "temperatures");
+            }
+
+            temperatures = list;
+        }
+        else
+        {
+            // The default start is the default range's, or the whole range's when --to lies below it
+            // (water's sublimation table to 150 K starts at the equation's 50 K, not at 0.7 T_t).
+            double end = request.To ?? defaultHigh;
+            double start = request.From ?? (end <= defaultLow ? low : defaultLow);
+            if (request.From is not null)
+            {
+                Require(start, "--from", "from temperature");
+            }
+
+            if (request.To is not null)
+            {
+                Require(end, "--to", "to temperature");
+            }
+
+            if (!(start < end))
+            {
+                throw new UsageException($"--from ({NumberText.Table(start)} K) must be below --to ({NumberText.Table(end)} K)");
+            }
+
+            temperatures = request.Step is double step
+                ? Stepped(start, end, step)
+                : Enumerable.Range(0, request.Points).Select(i => i == request.Points - 1 ? end : start + (end - start) * i / (request.Points - 1)).ToArray();
+        }
+
+        var points = temperatures.Select(t => kind == PhaseLineKind.Sublimation ? lines.Sublimation(t) : lines.Melting(t)).ToArray();
+        var (check, reason) = FluidWriter.TriplePointCheckOf(fluid, lines);
+        return new PhaseLineTable(fluid, model, kind, lines, check, reason, points);
+    }
+
+    /// <summary>The temperatures a solid line is given at: a published sublimation equation's whole
+    /// stated range up to the triple point (the default range starts higher, at 0.7 T_t); otherwise
+    /// the default range, which is where the Clapeyron route or the published melting equation holds.</summary>
+    private static (double Low, double High) ValidRange(SolidPhaseLines lines, Fluid fluid, PhaseLineKind kind)
+        => kind == PhaseLineKind.Sublimation && fluid.SublimationPressureEquation is { } equation
+            ? (equation.LowestTemperature, Math.Min(lines.TriplePointTemperature, equation.HighestTemperature))
+            : lines.DefaultRange(kind);
+
+    /// <summary>Why a solid line ends where it does, for the refusal of a temperature beyond it.</summary>
+    private static string RangeReason(SolidPhaseLines lines, Fluid fluid, PhaseLineKind kind)
+    {
+        if (kind == PhaseLineKind.Sublimation)
+        {
+            return fluid.SublimationPressureEquation is not null
+                ? "the published sublimation equation's range, up to the triple point"
+                : string.Create(System.Globalization.CultureInfo.InvariantCulture,
+                    $"from {SolidPhaseLines.SublimationDefaultStart} of the triple-point temperature, where the Clapeyron route from the triple point is offered, up to the triple point");
+        }
+
+        return fluid.MeltingPressureEquation is not null
+            ? "the published melting equation's stated range"
+            : string.Create(System.Globalization.CultureInfo.InvariantCulture,
+                $"from the triple point to where the constant-dh, constant-dv Clapeyron line reaches {SolidPhaseLines.ClapeyronMeltingLimit / 1e6:G6} MPa");
+    }
+
+    /// <summary>The fluid-file data a solid line needs, each missing one refused naming its key:
+    /// the triple point always; the sublimation line without a published equation Δh_fus; the
+    /// melting line without one Δh_fus and Δv_fus.</summary>
+    /// <exception cref="Core.Errors.FluidDataException">A key is missing.</exception>
+    internal static void RequireSolidData(Fluid fluid, PhaseLineKind kind)
+    {
+        string line = kind == PhaseLineKind.Sublimation ? "sublimation" : "melting";
+        void Missing(string key, string why) => throw new Core.Errors.FluidDataException(fluid.Origin, 0, key, $"fluid '{fluid.Name}' gives no {key}, which {why}");
+        if (fluid.TriplePointTemperature is null)
+        {
+            Missing("triple_point_temperature", $"the {line} line starts from");
+        }
+
+        if (fluid.TriplePointPressure is null)
+        {
+            Missing("triple_point_pressure", $"the {line} line starts from");
+        }
+
+        bool published = kind == PhaseLineKind.Sublimation ? fluid.SublimationPressureEquation is not null : fluid.MeltingPressureEquation is not null;
+        if (published)
+        {
+            return;
+        }
+
+        string equation = kind == PhaseLineKind.Sublimation ? "sublimation_pressure_equation" : "melting_pressure_equation";
+        if (fluid.EnthalpyOfFusion is null)
+        {
+            Missing("enthalpy_of_fusion", $"the Clapeyron route to the {line} line needs (or give a {equation})");
+        }
+
+        if (kind == PhaseLineKind.Melting && fluid.FusionVolumeChange is null)
+        {
+            Missing("fusion_volume_change", $"the Clapeyron route to the melting line needs (or give solid_density with triple_point_liquid_density, or a {equation})");
+        }
     }
 
     /// <summary>start, start + step, … up to <paramref name="end"/>, which is always the last state:
@@ -223,9 +371,10 @@ internal static class CurveCommand
 /// <param name="Step">The --step temperature difference in K, or null for --points spacing.</param>
 /// <param name="Temperatures">The --temperatures list in K (increasing), or null.</param>
 /// <param name="Pressures">The --pressures list in Pa (increasing), or null.</param>
+/// <param name="Line">Which line (--line): the saturation curve or a solid line.</param>
 internal sealed record CurveRequest(Fluid Fluid, double? From, double? To, int Points, string? OutPath, ReferenceState Reference,
     ModelChoice Model, OutputChoice Output, bool Diagnostics, UncertaintyChoice? Uncertainty = null,
-    double? Step = null, IReadOnlyList<double>? Temperatures = null, IReadOnlyList<double>? Pressures = null);
+    double? Step = null, IReadOnlyList<double>? Temperatures = null, IReadOnlyList<double>? Pressures = null, PhaseLineKind Line = PhaseLineKind.Vaporization);
 
 /// <summary>The options of <c>curve</c>, bound to a <see cref="CurveRequest"/>.</summary>
 internal sealed class CurveOptions
@@ -233,16 +382,32 @@ internal sealed class CurveOptions
     /// <summary>FLUID.</summary>
     public Argument<string> Fluid { get; } = CommonOptions.FluidArgument();
 
+    /// <summary>--line.</summary>
+    public Option<string> Line { get; } = new("--line")
+    {
+        Description = "Which line: vaporization (liquid-vapour, triple point to critical point; default), sublimation (solid-vapour, below the triple point) "
+            + "or melting (solid-liquid); the solid lines need the fluid's triple-point pressure and a published equation or the enthalpy of fusion (melting: and the volume change)",
+        DefaultValueFactory = _ => "vaporization",
+    };
+
     /// <summary>--from.</summary>
-    public Option<string> From { get; } = new("--from") { Description = "First temperature, e.g. 250 K or -20 degC (bare number: K; default: the lowest valid temperature, 0.3 Tc or the triple point)" };
+    public Option<string> From { get; } = new("--from")
+    {
+        Description = "First temperature, e.g. 250 K or -20 degC (bare number: K; default: the lowest valid temperature, 0.3 Tc or the triple point; "
+            + "with --line sublimation or melting, the start of the line's range)",
+    };
 
     /// <summary>--to.</summary>
-    public Option<string> To { get; } = new("--to") { Description = "Last temperature (bare number: K; default: the critical temperature; the last state is then the critical point)" };
+    public Option<string> To { get; } = new("--to")
+    {
+        Description = "Last temperature (bare number: K; default: the critical temperature, the last state then the critical point; "
+            + "with --line sublimation or melting, the end of the line's range)",
+    };
 
     /// <summary>--points.</summary>
     public Option<int> Points { get; } = new("--points", "-n")
     {
-        Description = $"Number of states, 2 to {CurveCommand.MaxPoints}; spaced evenly in sqrt(Tc - T) so the near-critical region is resolved",
+        Description = $"Number of states, 2 to {CurveCommand.MaxPoints}; spaced evenly in sqrt(Tc - T) so the near-critical region is resolved (solid lines: evenly in T)",
         DefaultValueFactory = _ => CoexistenceCurve.DefaultPoints,
     };
 
@@ -286,6 +451,7 @@ internal sealed class CurveOptions
     public void AddTo(Command command)
     {
         command.Arguments.Add(Fluid);
+        command.Options.Add(Line);
         command.Options.Add(From);
         command.Options.Add(To);
         command.Options.Add(Points);
@@ -313,9 +479,28 @@ internal sealed class CurveOptions
             throw new UsageException($"--points: must be between 2 and {CurveCommand.MaxPoints}, got {n}");
         }
 
+        var line = ParseLine(parse.GetValue(Line)!);
         // One way of choosing the rows: a range (--from/--to with --points or --step), or a list.
         bool pointsGiven = CommonOptions.Given(parse, Points);
         string? stepText = parse.GetValue(Step), tList = parse.GetValue(Temperatures), pList = parse.GetValue(Pressures);
+        if (line != PhaseLineKind.Vaporization)
+        {
+            // What only the saturation curve has: a table by pressure, the zero of h and s of its
+            // phases, the solver's diagnostics and propagated input uncertainties.
+            string lineName = line == PhaseLineKind.Sublimation ? "sublimation" : "melting";
+            string? refused = pList is not null ? "--pressures"
+                : CommonOptions.Given(parse, Reference) ? "--reference"
+                : Diagnostics.Given(parse) ? "--diagnostics"
+                : parse.GetValue(Uncertainty.Method) is not null ? "--uncertainty"
+                : CommonOptions.Given(parse, Uncertainty.Samples) ? "--samples"
+                : CommonOptions.Given(parse, Uncertainty.Seed) ? "--seed"
+                : null;
+            if (refused is not null)
+            {
+                throw new UsageException($"{refused}: applies to --line vaporization only, not to the {lineName} line");
+            }
+        }
+
         if (stepText is not null && pointsGiven)
         {
             throw new UsageException("--step: conflicts with --points (give the number of states or the step, not both)");
@@ -350,8 +535,17 @@ internal sealed class CurveOptions
         var uncertainty = Uncertainty.Bind(parse);
         var fluid = FluidResolver.Resolve(parse.GetValue(Fluid)!);
         output.RequireMolarMassFor(fluid);
-        return new CurveRequest(fluid, tFrom, tTo, n, outPath, reference, model, output, Diagnostics.Given(parse), uncertainty, step, temperatures, pressures);
+        return new CurveRequest(fluid, tFrom, tTo, n, outPath, reference, model, output, Diagnostics.Given(parse), uncertainty, step, temperatures, pressures, line);
     }
+
+    /// <summary>The --line value.</summary>
+    private static PhaseLineKind ParseLine(string text) => text.Trim().ToLowerInvariant() switch
+    {
+        "vaporization" => PhaseLineKind.Vaporization,
+        "sublimation" => PhaseLineKind.Sublimation,
+        "melting" => PhaseLineKind.Melting,
+        _ => throw new UsageException($"--line: unknown line '{text}' (use vaporization, sublimation or melting)"),
+    };
 
     /// <summary>A list of at most <see cref="CurveCommand.MaxPoints"/> values, strictly increasing
     /// (the table is traced in order, each state started from the one before; a repeated or

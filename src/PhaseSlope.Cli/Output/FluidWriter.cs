@@ -6,6 +6,7 @@ using PhaseSlope.Core.Equilibrium;
 using PhaseSlope.Core.Fluids;
 using PhaseSlope.Core.Models;
 using PhaseSlope.Core.Properties;
+using PhaseSlope.Core.Solids;
 
 namespace PhaseSlope.Cli.Output;
 
@@ -24,6 +25,12 @@ internal static class FluidWriter
         new("critical_density_mol_m3", "critical density", DisplayQuantity.Density, f => f.CriticalDensity),
         new("normal_boiling_point_K", "normal boiling point", DisplayQuantity.Temperature, f => f.NormalBoilingPoint),
         new("triple_point_temperature_K", "triple point temperature", DisplayQuantity.Temperature, f => f.TriplePointTemperature),
+        new("triple_point_pressure_Pa", "triple point pressure", DisplayQuantity.Pressure, f => f.TriplePointPressure),
+        new("enthalpy_of_fusion_J_mol", "enthalpy of fusion", DisplayQuantity.MolarEnergy, f => f.EnthalpyOfFusion),
+        new("solid_density_mol_m3", "solid density", DisplayQuantity.Density, f => f.SolidDensity),
+        new("triple_point_liquid_density_mol_m3", "liquid density at the triple point", DisplayQuantity.Density, f => f.TriplePointLiquidDensity),
+        new("fusion_volume_change_m3_mol", "volume change on melting", DisplayQuantity.MolarVolume, f => f.FusionVolumeChange),
+        new("solid_heat_capacity_J_molK", "solid heat capacity", DisplayQuantity.MolarEntropy, f => f.SolidHeatCapacity),
     ];
 
     /// <summary>Renders one fluid (<paramref name="single"/>) or a list.</summary>
@@ -122,6 +129,10 @@ internal static class FluidWriter
         }
 
         json.WriteEndObject();
+        WriteSolidLineEquation(json, "melting_pressure_equation", fluid.MeltingPressureEquation);
+        WriteSolidLineEquation(json, "sublimation_pressure_equation", fluid.SublimationPressureEquation);
+        var (check, reason, model) = TriplePointCheckOf(fluid);
+        WriteTriplePointCheck(json, check, reason, model);
         WriteModelData(json, fluid);
         WriteOptional(json, "provenance", fluid.Provenance);
         WriteOptional(json, "remarks", fluid.Remarks);
@@ -233,6 +244,25 @@ internal static class FluidWriter
         {
             text.AppendLine($"ideal-gas heat capacity: {NumberText.Table(cp.MinimumTemperature)}-{NumberText.Table(cp.MaximumTemperature)} K; {cp.Source}");
         }
+        foreach (var (name, equation) in new[] { ("melting-pressure equation", fluid.MeltingPressureEquation), ("sublimation-pressure equation", fluid.SublimationPressureEquation) })
+        {
+            if (equation is not null)
+            {
+                text.AppendLine($"{name}: {EquationText(equation)}, Tr = {NumberText.RoundTrip(equation.ReducingTemperature)} K, Pr = {NumberText.RoundTrip(equation.ReducingPressure)} Pa, "
+                    + $"a^b = {string.Join(" ", equation.Coefficients.Select((a, i) => $"{NumberText.RoundTrip(a)}^{NumberText.RoundTrip(equation.Exponents[i])}"))}, "
+                    + $"{NumberText.RoundTrip(equation.LowestTemperature)}-{NumberText.RoundTrip(equation.HighestTemperature)} K; {equation.Source}");
+            }
+        }
+
+        if (fluid.TriplePointTemperature is not null && fluid.TriplePointPressure is not null)
+        {
+            var (check, reason, model) = TriplePointCheckOf(fluid);
+            text.AppendLine(check is null
+                ? $"triple-point check: not available ({reason})"
+                : $"triple-point check ({model}): vapour pressure at the triple point {NumberText.Table(UnitFormatter.Convert(DisplayQuantity.Pressure, check.ModelPressure, units))} "
+                    + $"{UnitFormatter.Label(DisplayQuantity.Pressure, units)}, {NumberText.Table(100 * check.RelativeDeviation)} % from the sourced triple-point pressure");
+        }
+
         if (fluid.VapourPressureEquation is { } vp)
         {
             text.AppendLine($"vapour-pressure equation: ln(P/Pc) = (Tc/T) sum N_i tau^t_i, Tc = {NumberText.Table(vp.Form.CriticalTemperature)} K, Pc = {NumberText.Table(vp.Form.CriticalPressure / 1e3)} kPa, "
@@ -267,6 +297,108 @@ internal static class FluidWriter
         }
 
         return text.ToString();
+    }
+
+    /// <summary>The algebraic form of a published solid line, as the fluid-file syntax names it.</summary>
+    private static string FormName(SolidLineEquation equation) => equation.Form == SolidLineForm.Powers ? "powers" : "excess";
+
+    /// <summary>The formula of a published solid line with its form's name, e.g.
+    /// "powers: P/Pr = 1 + sum a_i((T/Tr)^b_i - 1)".</summary>
+    private static string EquationText(SolidLineEquation equation)
+    {
+        // Description is "FORMULA, T1-T2 K"; the formula is everything before the range.
+        string description = equation.Description;
+        return $"{FormName(equation)}: {description[..description.LastIndexOf(", ", StringComparison.Ordinal)]}";
+    }
+
+    /// <summary>A published melting or sublimation equation as an object (form, formula, reducing
+    /// point, coefficients, exponents, range, source), or null.</summary>
+    private static void WriteSolidLineEquation(Utf8JsonWriter json, string key, SolidLineEquation? equation)
+    {
+        if (equation is null)
+        {
+            json.WriteNull(key);
+            return;
+        }
+
+        json.WriteStartObject(key);
+        json.WriteString("form", FormName(equation));
+        json.WriteString("equation", EquationText(equation)[(FormName(equation).Length + 2)..]);
+        json.WriteFinite("reducing_temperature_K", equation.ReducingTemperature);
+        json.WriteFinite("reducing_pressure_Pa", equation.ReducingPressure);
+        json.WriteStartArray("coefficients");
+        foreach (double a in equation.Coefficients)
+        {
+            json.WriteFiniteValue(a, "coefficients");
+        }
+
+        json.WriteEndArray();
+        json.WriteStartArray("exponents");
+        foreach (double b in equation.Exponents)
+        {
+            json.WriteFiniteValue(b, "exponents");
+        }
+
+        json.WriteEndArray();
+        json.WriteFinite("lowest_temperature_K", equation.LowestTemperature);
+        json.WriteFinite("highest_temperature_K", equation.HighestTemperature);
+        json.WriteString("source", equation.Source);
+        json.WriteEndObject();
+    }
+
+    /// <summary>The default model's (Peng–Robinson's) vapour pressure at the sourced triple-point
+    /// temperature against the sourced triple-point pressure; null with the reason when the fluid
+    /// lacks either or the model gives no coexistence there.</summary>
+    internal static (TriplePointCheck? Check, string? Reason, string Model) TriplePointCheckOf(Fluid fluid)
+    {
+        var model = CubicModel.For(CubicModelKind.PengRobinson, fluid);
+        if (fluid.TriplePointTemperature is null || fluid.TriplePointPressure is null)
+        {
+            return (null, $"fluid '{fluid.Name}' gives no {(fluid.TriplePointTemperature is null ? "triple_point_temperature" : "triple_point_pressure")}", ModelText.Describe(model));
+        }
+
+        var (check, reason) = TriplePointCheckOf(fluid, new SolidPhaseLines(fluid, new CoexistenceSolver(model, CoexistenceSolver.LowestValidTemperature(fluid))));
+        return (check, reason, ModelText.Describe(model));
+    }
+
+    /// <summary>The check of <paramref name="lines"/>, or null with the solver's reason.</summary>
+    internal static (TriplePointCheck? Check, string? Reason) TriplePointCheckOf(Fluid fluid, SolidPhaseLines lines)
+    {
+        try
+        {
+            return (lines.Check, null);
+        }
+        catch (Core.Errors.InvalidInputException ex)
+        {
+            return (null, $"the model gives no vapour pressure at the triple point of {fluid.Name}: {ex.Message}");
+        }
+        catch (Core.Errors.ConvergenceException ex)
+        {
+            return (null, $"the model's coexistence at the triple point of {fluid.Name} did not converge: {ex.Message}");
+        }
+    }
+
+    /// <summary>Writes <c>triple_point_check</c> (the model's vapour pressure at the sourced
+    /// triple-point temperature, the sourced pressure and their relative deviation) or null, and
+    /// <c>triple_point_check_unavailable_reason</c>.</summary>
+    internal static void WriteTriplePointCheck(Utf8JsonWriter json, TriplePointCheck? check, string? reason, string model)
+    {
+        if (check is null)
+        {
+            json.WriteNull("triple_point_check");
+        }
+        else
+        {
+            json.WriteStartObject("triple_point_check");
+            json.WriteString("model", model);
+            json.WriteFinite("temperature_K", check.Temperature);
+            json.WriteFinite("sourced_pressure_Pa", check.SourcedPressure);
+            json.WriteFinite("model_pressure_Pa", check.ModelPressure);
+            json.WriteFinite("relative_deviation", check.RelativeDeviation);
+            json.WriteEndObject();
+        }
+
+        json.WriteStringOrNull("triple_point_check_unavailable_reason", check is null ? reason : null);
     }
 
     /// <summary>The published vapour-pressure equation, fluid-specific alpha parameters and

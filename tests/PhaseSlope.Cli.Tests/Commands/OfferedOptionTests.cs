@@ -101,6 +101,16 @@ public sealed class OfferedOptionTests : IDisposable
         yield return Refused("curve", "--temperatures", ["curve", "propane", "--temperatures", "300,250"]);
         yield return Differs("curve", "--pressures", curve, ["curve", "propane", "--pressures", "1,2 bar"]);
         yield return Refused("curve", "--pressures", ["curve", "propane", "--temperatures", "250,300", "--pressures", "1,2 bar"]);
+        // --line: the solid lines of water (IAPWS 2011 ice Ih equations in its catalog file).
+        string[] waterCurve = ["curve", "water", "--points", "5"];
+        yield return Changes("curve", "--line", waterCurve, "--line", "sublimation");
+        yield return Differs("curve", "--line", [.. waterCurve, "--line", "sublimation"], [.. waterCurve, "--line", "melting"]);
+        yield return Refused("curve", "--line", [.. waterCurve, "--line", "sublimation", "--pressures", "1,2 bar"]);
+        yield return Refused("curve", "--line", [.. waterCurve, "--line", "melting", "--uncertainty", "linear"]);
+        yield return Refused("curve", "--line", [.. waterCurve, "--line", "solid"]);
+        yield return Changes("curve", "--from", [.. waterCurve, "--line", "melting"], "--from", "260");
+        yield return Changes("curve", "--units", [.. waterCurve, "--line", "melting"], "--units", "engineering");
+        yield return Changes("curve", "--step", ["curve", "water", "--line", "sublimation"], "--step", "20");
         yield return Changes("curve", "--reference", curve, "--reference", "nbp");
         yield return Changes("curve", "--diagnostics", curve, "--diagnostics");
         foreach (var row in UncertaintyRows("curve", curve))
