@@ -191,7 +191,7 @@ public sealed partial class CatalogSolidDataTests(ITestOutputHelper output)
             double tt = fluid.TriplePointTemperature!.Value, pt = fluid.TriplePointPressure!.Value;
             double t = Math.Max(0.85 * tt, fluid.SublimationPressureEquation!.LowestTemperature);
             var solver = CoexistenceSolver.For(fluid, CubicModelKind.PengRobinson);
-            var clapeyron = new Solids.SolidPhaseLines(fluid with { SublimationPressureEquation = null }, solver).Sublimation(t).Pressure;
+            var clapeyron = new PhaseSlope.Core.Solids.SolidPhaseLines(fluid with { SublimationPressureEquation = null }, solver).Sublimation(t).Pressure;
             double published = fluid.SublimationPressureEquation.Pressure(t);
             double x = tt / t - 1;
             double tolerance = 3 * (x - Math.Log(1 + x)) + 0.01 * Math.Abs(Math.Log(published / pt)) + 0.005;
