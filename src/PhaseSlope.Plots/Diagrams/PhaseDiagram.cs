@@ -317,9 +317,9 @@ public static class PhaseDiagram
         }
 
         string? missing = f.EnthalpyOfFusion is null ? "enthalpy_of_fusion"
-            : f.FusionVolumeChange is null ? "fusion_volume_change (or solid_density with triple_point_liquid_density)" : null;
+            : f.FusionVolumeChange is null ? "fusion_volume_change (or solid_density)" : null;
         return missing is null ? null
-            : $"no melting line: the fluid gives no melting_pressure_equation, and the Clapeyron route needs its {missing}";
+            : $"no melting line: no melting_pressure_equation, nor the {missing} Clapeyron needs";
     }
 
     /// <summary>Refuses a temperature or pressure range that does not contain the fluid's triple point.</summary>
