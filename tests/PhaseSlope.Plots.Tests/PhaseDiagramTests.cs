@@ -274,6 +274,44 @@ public class PhaseDiagramTests
     }
 
     [Fact]
+    public void Vaporization_starts_at_the_triple_point_or_at_the_models_lowest_valid_temperature_with_a_note()
+    {
+        // Propane's triple point, 85.525 K and 1.72e-4 Pa (Lemmon, McLinden and Wagner, J. Chem. Eng.
+        // Data 54, 3141 (2009)), and its enthalpy of fusion 3.53 kJ/mol (CRC Handbook), all from
+        // memory, set on the catalog fluid for this test: the Clapeyron route draws the sublimation
+        // line, and with no fusion volume there is no melting line.
+        var propane = TestFluids.Propane;
+        var catalog = propane.Fluid;
+        var fluid = propane with
+        {
+            Fluid = catalog with
+            {
+                TriplePointTemperature = catalog.CriticalTemperature with { Value = 85.525 },
+                TriplePointPressure = catalog.CriticalPressure with { Value = 1.72e-4 },
+                EnthalpyOfFusion = catalog.CriticalPressure with { Value = 3530 },
+                FusionVolumeChange = null,
+                SolidDensity = null,
+                TriplePointLiquidDensity = null,
+                MeltingPressureEquation = null,
+                SublimationPressureEquation = null,
+            },
+        };
+        var model = PhaseDiagram.Build(fluid, Few);
+        var vaporization = Line(model, PhaseDiagram.VaporizationTitle);
+        double lowest = fluid.Solver().MinimumTemperature;
+        // Where the model's lowest valid temperature (0.3 Tc for propane while it is above the
+        // triple point) is above T_t, the line starts there and a note says so; else at T_t.
+        Near(Math.Max(lowest, 85.525), vaporization.Points[0].X, 1e-12, "vaporization start");
+        Assert.Equal(lowest > 85.525, model.Subtitle.Contains("starts at its lowest valid temperature", StringComparison.Ordinal));
+        Assert.Contains(PhaseDiagram.ClapeyronMethod, Line(model, PhaseDiagram.SublimationTitle).Title, StringComparison.Ordinal);
+        Near(1.72e-7, Line(model, PhaseDiagram.SublimationTitle).Points[^1].Y, 1e-9, "sublimation end at Pt (kPa)");
+        Assert.Contains("note: no melting line", model.Subtitle, StringComparison.Ordinal);
+
+        var ex = Assert.Throws<InvalidInputException>(() => Diagram.Build(DiagramKind.Phase, [fluid], Few with { TemperatureRange = new ValueRange(60, Math.Max(lowest, 85.525)) }));
+        Assert.Equal("temperature range", ex.Field);
+    }
+
+    [Fact]
     public void Phase_diagram_refuses_options_it_does_not_have()
     {
         var water = TestFluids.Get("water");

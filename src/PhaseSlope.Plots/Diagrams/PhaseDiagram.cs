@@ -336,6 +336,15 @@ public static class PhaseDiagram
                 $"the phase diagram's temperature range {Chart.Number(tr.Low)} to {Chart.Number(tr.High)} K must contain the triple point {Chart.Number(tt)} K of {fluid.Name}");
         }
 
+        // The vaporization line starts at the triple point or at the model's lowest valid
+        // temperature, whichever is higher: the range must reach beyond it.
+        double start = Math.Max(tt, CoexistenceSolver.LowestValidTemperature(fluid.Fluid));
+        if (options.TemperatureRange is { } reach && !(reach.High > start))
+        {
+            throw new InvalidInputException("temperature range", reach.High,
+                $"the phase diagram's temperature range ends at {Chart.Number(reach.High)} K, not above {Chart.Number(start)} K where the model's vaporization line of {fluid.Name} starts");
+        }
+
         if (options.PressureRange is { } pr && !(pr.Low < pt && pr.High > pt))
         {
             throw new InvalidInputException("pressure range", pr.Low,
