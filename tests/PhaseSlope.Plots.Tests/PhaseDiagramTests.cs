@@ -127,7 +127,7 @@ public class PhaseDiagramTests
         var co2 = PhaseDiagram.Build(TestFluids.Get("carbon dioxide"), Few);
         double top = co2.Axes.Single(a => a.Position == AxisPosition.Left).Maximum;
         Near(top, Line(co2, PhaseDiagram.MeltingTitle).Points[^1].Y, 1e-9, "carbon dioxide melting line end");
-        Assert.Contains("note: the melting line goes on above the plot, to 799", co2.Subtitle, StringComparison.Ordinal);
+        Assert.Contains("note: the melting line goes on beyond the plot, to 799", co2.Subtitle, StringComparison.Ordinal);
 
         // Ice Ih's equation ends at 251.165 K (IAPWS R14-08(2011), its range), below 10 Pc.
         var water = PhaseDiagram.Build(TestFluids.Get("water"), Few);
@@ -227,6 +227,9 @@ public class PhaseDiagramTests
         // The vaporization line stops at the right end; Tc is off the chart, so it has no marker.
         Near(420, Line(model, PhaseDiagram.VaporizationTitle).Points[^1].X, 1e-12, "vaporization end");
         Assert.DoesNotContain(model.Series, s => s.Title == PhaseDiagram.CriticalPointTitle);
+        // The melting line is cut at 1 MPa; the note gives the end of ice Ih's equation (251.165 K).
+        Near(1000, Line(model, PhaseDiagram.MeltingTitle).Points[^1].Y, 1e-9, "melting line cut at the top");
+        Assert.Contains("note: the melting line goes on beyond the plot, to 208567 kPa at 251.1", model.Subtitle, StringComparison.Ordinal);
 
         var ex = Assert.Throws<InvalidInputException>(() => Diagram.Build(DiagramKind.Phase, [water], Few with { TemperatureRange = new ValueRange(280, 700) }));
         Assert.Equal("temperature range", ex.Field);

@@ -103,7 +103,8 @@ public static class PhaseDiagram
         {
             var (mLow, mHigh) = lines.DefaultRange(PhaseLineKind.Melting);
             bool rising = mHigh > tt * (1 + 1e-12);
-            double far = rising ? mHigh : mLow;
+            double lineEnd = rising ? mHigh : mLow;
+            double far = lineEnd;
             if (options.TemperatureRange is { } tr1)
             {
                 far = rising ? Math.Min(far, tr1.High) : Math.Max(far, tr1.Low);
@@ -113,20 +114,16 @@ public static class PhaseDiagram
             double pEnd = Math.Min(pFar, pTop);
             if (pEnd < pFar)
             {
-                far = Brent.FindRoot(t => lines.Melting(t).Pressure - pEnd, tt, far, 1e-12 * tt, 200);
-                var (endLow, endHigh) = lines.DefaultRange(PhaseLineKind.Melting);
-                double lineEnd = rising ? endHigh : endLow;
-                notes.Add($"the melting line goes on above the plot, to {Show(units.Pressure(lines.Melting(lineEnd).Pressure))} {units.PressureUnit} at {Show(units.Temperature(lineEnd))} {units.TemperatureUnit}"
-                    + (fluid.Fluid.MeltingPressureEquation is null ? " (the Clapeyron line's default end)" : " (the end of its published equation's range)"));
+                far = Brent.FindRoot(t => lines.Melting(t).Pressure - pEnd, Math.Min(tt, far), Math.Max(tt, far), 1e-12 * tt, 200);
             }
-            else if (fluid.Fluid.MeltingPressureEquation is not null)
-            {
-                notes.Add($"the melting line ends at {Show(units.Temperature(far))} {units.TemperatureUnit}, {Show(units.Pressure(pFar))} {units.PressureUnit}: the end of its published equation's range (other solid phases are not drawn)");
-            }
-            else
-            {
-                notes.Add($"the Clapeyron melting line ends at {Show(units.Pressure(pFar))} {units.PressureUnit}: with dh_fus and dv_fus held at the triple point it is an extrapolation beyond");
-            }
+
+            bool published = fluid.Fluid.MeltingPressureEquation is not null;
+            notes.Add(far != lineEnd
+                ? $"the melting line goes on beyond the plot, to {Show(units.Pressure(lines.Melting(lineEnd).Pressure))} {units.PressureUnit} at {Show(units.Temperature(lineEnd))} {units.TemperatureUnit}"
+                    + (published ? " (its published equation's range)" : " (the Clapeyron line's default end)")
+                : $"the melting line ends at {Show(units.Temperature(far))} {units.TemperatureUnit}, {Show(units.Pressure(pFar))} {units.PressureUnit}"
+                    + (published ? " (its published equation's range; other solid phases are not drawn)"
+                        : " (Clapeyron with dh_fus and dv_fus held at the triple point: an extrapolation beyond)"));
 
             melting.Add((tt, lines.Melting(tt).Pressure));
             for (int i = 1; i < n; i++)
