@@ -36,6 +36,10 @@ $ps plot r-134a --diagram p-h --units engineering --reference refrigeration --is
 # condensing at 40 degC, 5 K superheat, 3 K subcooling, compressor isentropic efficiency 0.75.
 $ps plot r-134a --diagram p-h --units engineering --reference refrigeration --t-range "-40,120 degC" --p-range "0.5,60 bar" --h-range "150,480 kJ/kg" \
     --cycle "evaporating=-10 degC,condensing=40 degC,superheat=5 K,subcooling=3 K,efficiency=0.75" --out $out/p-h-r134a-cycle.png
+# Whole phase diagrams: water (the model with the file's Mathias-Copeman alpha, so that its vapour
+# pressure meets the sourced triple point) and carbon dioxide, whose melting line leaves the top.
+$ps plot water --diagram phase --alpha mathias-copeman --out $out/phase-water.png
+$ps plot carbon-dioxide --diagram phase --out $out/phase-carbon-dioxide.png
 # One vector figure, to show the SVG output.
 $ps plot propane,n-butane --diagram t-rho --out $out/t-rho-propane-butane.svg
 

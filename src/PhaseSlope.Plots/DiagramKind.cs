@@ -44,6 +44,11 @@ public enum DiagramKind
 
     /// <summary>A binary mixture's vapour against liquid mole fraction at a temperature or a pressure.</summary>
     Composition,
+
+    /// <summary>The whole P–T phase diagram of one fluid on a logarithmic pressure axis: the
+    /// vaporization, sublimation and melting lines, the triple and critical points and the regions
+    /// (<see cref="Diagrams.PhaseDiagram"/>).</summary>
+    Phase,
 }
 
 /// <summary>The command-line identifiers of the diagram kinds.</summary>
@@ -64,6 +69,7 @@ public static class DiagramKinds
         (DiagramKind.PressureComposition, "p-xy"),
         (DiagramKind.TemperatureComposition, "t-xy"),
         (DiagramKind.Composition, "x-y"),
+        (DiagramKind.Phase, "phase"),
     ];
 
     /// <summary>Every identifier, in the order of <see cref="DiagramKind"/>.</summary>

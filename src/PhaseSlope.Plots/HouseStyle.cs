@@ -155,7 +155,7 @@ public static class HouseStyle
 
         foreach (var label in model.Annotations.OfType<OxyPlot.Annotations.TextAnnotation>())
         {
-            label.FontSize = BaseLabelFontSize * scale;
+            label.FontSize = (label.Tag is BaseSize b ? b.Value : BaseLabelFontSize) * scale;
         }
 
         double legendFont = BaseLegendFontSize * scale;
@@ -184,7 +184,8 @@ public static class HouseStyle
             return size;
         }
 
-        double needed = text.Length * 0.58 * size;
+        // A title of several lines needs the width of its longest.
+        double needed = text.Split('\n').Max(line => line.Length) * 0.58 * size;
         double room = width - 40;
         return needed <= room ? size : Math.Max(8, size * room / needed);
     }

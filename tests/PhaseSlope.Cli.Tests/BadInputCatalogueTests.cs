@@ -174,6 +174,15 @@ public class BadInputCatalogueTests
         { ["plot", "r-134a", "--diagram", "p-h", "--cycle", "evaporating=-10 degC,condensing=40 degC,superheat=-5 K"], ExitCodes.Usage, "--cycle superheat: the temperature difference is negative in" },
         { ["plot", "r-134a", "--diagram", "p-h", "--cycle", "evaporating=-10 degC,condensing=40 degC,colour=red"], ExitCodes.Usage, "--cycle: 'colour=red' is not key=value with a key of evaporat" },
         { ["plot", "r-134a", "--diagram", "p-h", "--cycle", "evaporating=-10 degC,condensing=40 degC,subcooling=55 K"], ExitCodes.OutOfRange, "--cycle: the throttled liquid (h = -25081.72 J/mol) is not a t" },
+        { ["plot", "{dir}/notriple.fluid", "--diagram", "phase"], ExitCodes.Fluid, "field 'triple_point_pressure': fluid 'notriple' gives no trip" },
+        { ["plot", "inline:tc=400K,pc=4MPa,omega=0.2", "--diagram", "phase"], ExitCodes.Fluid, "field 'triple_point_temperature': fluid 'inline-fluid' gives" },
+        { ["plot", "{dir}/nosublimation.fluid", "--diagram", "phase"], ExitCodes.Fluid, "field 'enthalpy_of_fusion': fluid 'nosublimation' gives neith" },
+        { ["plot", "water", "--diagram", "phase", "--log"], ExitCodes.Usage, "the phase diagram has no log option (p-t and slope have; p-v," },
+        { ["plot", "water", "--diagram", "phase", "--reduced"], ExitCodes.Usage, "the phase diagram has no reduced form (p-t, lnp-invt, t-rho, " },
+        { ["plot", "water,carbon-dioxide", "--diagram", "phase"], ExitCodes.Usage, "the phase diagram shows one fluid, got 2" },
+        { ["plot", "water", "--diagram", "phase", "--t-range", "280,700 K"], ExitCodes.Usage, "--t-range: the phase diagram's temperature range 280 to 700 K" },
+        { ["plot", "carbon-dioxide", "--diagram", "phase", "--p-range", "10,100 bar"], ExitCodes.Usage, "--p-range: the phase diagram's pressure range 1e+06 to 1e+07 " },
+        { ["plot", "water", "--diagram", "phase", "--isotherms", "300 K"], ExitCodes.Usage, "--isotherms: the phase diagram has no isotherms (p-h has; t-s" },
         { ["audit", "--form", "antoine", "--coefficients", "1e300,1e300,1", "--log-base", "10", "--range", "250,330"], ExitCodes.OutOfRange, "the correlation's antoine coefficients 1E+300, 1E+300, 1 ove" },
         { ["coexist", "propane", "-T", "300", "--eos", "srk", "--alpha", "twu"], ExitCodes.OutOfRange, "no Twu parameters for propane with Soave-Redlich-Kwong (1972" },
         { ["coexist", "propane"], ExitCodes.Usage, "coexist: give exactly one of --temperature and --pressure" },
@@ -292,6 +301,11 @@ public class BadInputCatalogueTests
         File.WriteAllText(folder.File("hugemass.fluid"), ReplaceLine(propane, "molar_mass", "molar_mass 1e308 g/mol | invented for a test"));
         File.WriteAllText(folder.File("lowomega.fluid"), ReplaceLine(ReplaceLine(ReplaceLine(propane, "acentric_factor", "acentric_factor -0.5 | invented for a test"),
             "name", "name lowomega"), "synonyms", ""));
+        // Water without its triple-point pressure, and without any way to its sublimation line.
+        string water = CliHarness.CatalogFileText("water.fluid");
+        File.WriteAllText(folder.File("notriple.fluid"), ReplaceLine(ReplaceLine(ReplaceLine(water, "triple_point_pressure", ""), "name", "name notriple"), "synonyms", ""));
+        File.WriteAllText(folder.File("nosublimation.fluid"), ReplaceLine(ReplaceLine(ReplaceLine(ReplaceLine(water, "sublimation_pressure_equation", ""), "enthalpy_of_fusion", ""),
+            "name", "name nosublimation"), "synonyms", ""));
         File.WriteAllText(folder.File("nomass.fluid"), ReplaceLine(ReplaceLine(ReplaceLine(propane, "molar_mass", ""), "name", "name nomass"), "synonyms", ""));
         // Water's file with one solid-phase key (or the melting equation with it) taken out.
         string water = CliHarness.CatalogFileText("water.fluid");

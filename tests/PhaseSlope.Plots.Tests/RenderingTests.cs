@@ -32,7 +32,9 @@ public class RenderingTests
             DiagramKind.Deviations => TestFluids.ModelVapourPressures(TestFluids.Get("propane", Core.Models.CubicModelKind.SoaveRedlichKwong), 12),
             _ => null,
         };
-        return Diagram.Build(kind, [TestFluids.Propane], new DiagramOptions { Points = 30, Data = data });
+        // The phase diagram needs a fluid with a triple-point pressure and solid data: water.
+        var fluid = kind == DiagramKind.Phase ? TestFluids.Get("water") : TestFluids.Propane;
+        return Diagram.Build(kind, [fluid], new DiagramOptions { Points = 30, Data = data });
     }
 
     private static byte[] Render(PlotModel model, FigureFormat format, int width, int height)

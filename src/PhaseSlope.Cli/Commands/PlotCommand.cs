@@ -141,11 +141,11 @@ internal sealed class PlotOptions
     /// <summary>--t-range (p-h, t-s).</summary>
     public Option<string> TemperatureRange { get; } = new("--t-range")
     {
-        Description = "Temperatures the chart spans, 'LOW,HIGH UNIT' (e.g. \"-40,120 degC\"): the dome starts at LOW; p-h draws isotherms up to HIGH, t-s's temperature axis ends there",
+        Description = "Temperatures the chart spans, 'LOW,HIGH UNIT' (e.g. \"-40,120 degC\"): the dome starts at LOW; p-h draws isotherms up to HIGH, t-s's temperature axis ends there; phase: the temperature axis (containing the triple point)",
     };
 
     /// <summary>--p-range (p-h).</summary>
-    public Option<string> PressureRange { get; } = new("--p-range") { Description = "Pressure axis of p-h, 'LOW,HIGH UNIT' (e.g. \"0.5,50 bar\")" };
+    public Option<string> PressureRange { get; } = new("--p-range") { Description = "Pressure axis of p-h or phase (containing the triple point), 'LOW,HIGH UNIT' (e.g. \"0.5,50 bar\")" };
 
     /// <summary>--h-range (p-h).</summary>
     public Option<string> EnthalpyRange { get; } = new("--h-range") { Description = "Enthalpy axis of p-h on the chosen --reference, 'LOW,HIGH UNIT' (e.g. \"100,480 kJ/kg\"; bare numbers J/mol)" };

@@ -30,6 +30,7 @@ public static class Diagram
             DiagramKind.TemperatureEntropy => TemperatureEntropyDiagram.Build(fluids[0], options),
             DiagramKind.Residuals => ResidualsDiagram.Build(fluids[0], options),
             DiagramKind.Deviations => DeviationsDiagram.Build(fluids, options),
+            DiagramKind.Phase => PhaseDiagram.Build(fluids[0], options),
             _ when kind.IsBinary() => throw new ArgumentException($"{kind.Id()} is a binary mixture's diagram: build it with BinaryDiagramChart", nameof(kind)),
             _ => PressureEnthalpyDiagram.Build(fluids[0], options),
         };
@@ -64,7 +65,7 @@ public static class Diagram
 
         if (options.Logarithmic && !kind.AllowsLogScale())
         {
-            throw new InvalidInputException("log", 1, $"the {id} diagram has no log option (p-t and slope have; p-v and p-h use log axes already)");
+            throw new InvalidInputException("log", 1, $"the {id} diagram has no log option (p-t and slope have; p-v, p-h and phase use log axes already)");
         }
 
         if (options.Data is not null && !kind.AllowsData())
@@ -99,7 +100,7 @@ public static class Diagram
     private static void CheckPropertyChart(DiagramKind kind, PlotFluid fluid, DiagramOptions options)
     {
         string id = kind.Id();
-        bool ph = kind == DiagramKind.PressureEnthalpy, ts = kind == DiagramKind.TemperatureEntropy;
+        bool ph = kind == DiagramKind.PressureEnthalpy, ts = kind == DiagramKind.TemperatureEntropy, phase = kind == DiagramKind.Phase;
         void Only(bool given, bool allowed, string field, string where)
         {
             if (given && !allowed)
@@ -112,8 +113,8 @@ public static class Diagram
         Only(options.Isotherms is not null, ph, "isotherms", "p-h has; t-s draws isobars");
         Only(options.Isobars is not null, ts, "isobars", "t-s has; p-h draws isotherms");
         Only(options.Isochores is not null, ph || ts, "isochores", "p-h and t-s have");
-        Only(options.TemperatureRange is not null, ph || ts, "temperature range", "p-h and t-s have");
-        Only(options.PressureRange is not null, ph, "pressure range", "p-h has");
+        Only(options.TemperatureRange is not null, ph || ts || phase, "temperature range", "p-h, t-s and phase have");
+        Only(options.PressureRange is not null, ph || phase, "pressure range", "p-h and phase have");
         Only(options.EnthalpyRange is not null, ph, "enthalpy range", "p-h has");
         Only(options.EntropyRange is not null, ts, "entropy range", "t-s has");
         Only(options.Cycle is not null, ph, "cycle", "p-h has");
@@ -133,7 +134,14 @@ public static class Diagram
             }
         }
 
-        if (options.TemperatureRange is { } tr)
+        if (phase)
+        {
+            // Needs the fluid's triple point (a fluid-data error) before anything is computed; the
+            // ranges must contain it, wherever the model's own limits are.
+            PhaseDiagram.Require(fluid);
+            PhaseDiagram.CheckRanges(fluid, options);
+        }
+        else if (options.TemperatureRange is { } tr)
         {
             if (tr.Low < lowest)
             {

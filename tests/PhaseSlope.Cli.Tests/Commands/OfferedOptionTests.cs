@@ -275,6 +275,16 @@ public sealed class OfferedOptionTests : IDisposable
         string[] dome = ["plot", "propane", "--diagram", "t-rho", "--out", "{dir}/out.svg"];
         string[] plotBare = [.. plot, "--data", "{bare}", "--temperature-unit", "K", "--pressure-unit", "kPa"];
         yield return Differs("plot", "--diagram", plot, Replace(plot, "p-t", "slope"));
+        // The whole phase diagram of water (its triple point and solid lines are in the catalog):
+        // --t-range and --p-range set its window, --units and --alpha change its numbers, --log is refused.
+        string[] phase = ["plot", "water", "--diagram", "phase", "--out", "{dir}/out.svg"];
+        yield return Differs("plot", "--diagram", Replace(phase, "phase", "p-t"), phase);
+        yield return Changes("plot", "--t-range", phase, "--t-range", "240,420 K");
+        yield return Changes("plot", "--p-range", phase, "--p-range", "0.1,1000 kPa");
+        yield return Changes("plot", "--units", phase, "--units", "engineering");
+        yield return Changes("plot", "--alpha", phase, "--alpha", "mathias-copeman");
+        yield return Refused("plot", "--log", [.. phase, "--log"]);
+        yield return Refused("plot", "--t-range", [.. phase, "--t-range", "280,700 K"]);
         // The binary diagrams: benzene + cyclohexane, 5 compositions.
         string[] txy = ["plot", "benzene=0.5,cyclohexane=0.5", "--diagram", "t-xy", "--pressure", "1atm", "--points", "5", "--out", "{dir}/out.svg"];
         yield return Differs("plot", "--diagram", txy, Replace(txy, "t-xy", "x-y"));

@@ -26,6 +26,33 @@ public class PlotCommandTests
         Assert.Equal(["dome.png"], folder.Entries());
     }
 
+    [Theory]
+    [InlineData("water", "triple point: 273.16 K, 0.61166 kPa")]
+    [InlineData("carbon-dioxide", "triple point: 216.59 K, 517.95 kPa")]
+    public void Phase_diagram_is_written_as_png_and_svg_with_its_regions_and_triple_point(string fluid, string triple)
+    {
+        // Triple points: IAPWS-95 (Wagner and Pruß 2002) for water, Span and Wagner (1996) for
+        // carbon dioxide, both as the catalog gives them (from memory), shown to five figures.
+        using var folder = new TempFolder();
+        string png = folder.File("phase.png"), svg = folder.File("phase.svg");
+        var result = CliHarness.Run("plot", fluid, "--diagram", "phase", "--out", png);
+        Assert.True(result.ExitCode == 0, result.ToString());
+        Assert.Equal("", result.Stdout + result.Stderr);
+        Assert.Equal((1200, 800), PngSize(png));
+        CliHarness.RunText("plot", fluid, "--diagram", "phase", "--out", svg);
+        XNamespace ns = "http://www.w3.org/2000/svg";
+        var texts = XDocument.Load(svg).Descendants(ns + "text").Select(t => t.Value.Trim()).ToList();
+        Assert.Contains("temperature T (K)", texts);
+        Assert.Contains("pressure P (kPa)", texts);
+        Assert.Contains(triple, texts);
+        foreach (string region in new[] { "solid", "liquid", "vapour", "supercritical", "fluid" })
+        {
+            Assert.Contains(region, texts);
+        }
+
+        Assert.Equal(["phase.png", "phase.svg"], folder.Entries());
+    }
+
     [Fact]
     public void Default_png_is_1200_by_800()
     {
