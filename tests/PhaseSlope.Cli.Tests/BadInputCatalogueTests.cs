@@ -308,7 +308,6 @@ public class BadInputCatalogueTests
             "name", "name nosublimation"), "synonyms", ""));
         File.WriteAllText(folder.File("nomass.fluid"), ReplaceLine(ReplaceLine(ReplaceLine(propane, "molar_mass", ""), "name", "name nomass"), "synonyms", ""));
         // Water's file with one solid-phase key (or the melting equation with it) taken out.
-        string water = CliHarness.CatalogFileText("water.fluid");
         File.WriteAllText(folder.File("water-nopt.fluid"), ReplaceLine(water, "triple_point_pressure", ""));
         File.WriteAllText(folder.File("water-nofusion.fluid"), ReplaceLine(ReplaceLine(water, "enthalpy_of_fusion", ""), "melting_pressure_equation", ""));
         File.WriteAllText(folder.File("water-nodv.fluid"), ReplaceLine(ReplaceLine(ReplaceLine(water, "solid_density", ""), "triple_point_liquid_density", ""), "melting_pressure_equation", ""));

@@ -43,14 +43,22 @@ internal static class PhaseLineWriter
     /// <summary>Why the transition's enthalpy change is missing from the rows, or null when it is given.</summary>
     internal static string? EnthalpyUnavailableReason(PhaseLineTable table)
         => table.Points.Any(p => p.EnthalpyChange is null)
-            ? $"fluid '{table.Fluid.Name}' gives no fusion_volume_change (or solid_density with triple_point_liquid_density), from which dh = T dv dP/dT along the published melting equation is formed"
+            ? table.Fluid.FusionVolumeChange is null
+                ? $"fluid '{table.Fluid.Name}' gives no fusion_volume_change (or solid_density with triple_point_liquid_density), from which dh = T dv dP/dT along the published melting equation is formed"
+                : BandReason
             : null;
 
     /// <summary>Why the transition's volume change is missing from the rows, or null when it is given.</summary>
     internal static string? VolumeUnavailableReason(PhaseLineTable table)
         => table.Points.Any(p => p.VolumeChange is null)
-            ? $"fluid '{table.Fluid.Name}' gives no fusion_volume_change (or solid_density with triple_point_liquid_density)"
+            ? table.Fluid.FusionVolumeChange is null
+                ? $"fluid '{table.Fluid.Name}' gives no fusion_volume_change (or solid_density with triple_point_liquid_density)"
+                : BandReason
             : null;
+
+    /// <summary>Why a published melting line gives no Δh and Δv far above the triple point.</summary>
+    private static string BandReason => string.Create(CultureInfo.InvariantCulture,
+        $"dh and dv are given only within {SolidPhaseLines.MeltingVolumeBand / 1e6:G3} MPa of the triple-point pressure, where the triple-point dv_fus still holds (it changes by about 10 % per 10 MPa)");
 
     /// <summary>What a reader must know to use the numbers: how far the approximations behind the
     /// enthalpy and volume columns hold.</summary>
@@ -64,7 +72,8 @@ internal static class PhaseLineWriter
             {
                 notes.Add(fluid.FusionVolumeChange is not null
                     ? "pressure and slope from the published melting equation; dv is held at its triple-point value and dh = T dv dP/dT is formed from it, "
-                        + "a triple-point approximation that is rough far from the triple point (beyond tens of MPa)"
+                        + "a triple-point approximation that is rough far from the triple point, so both are given only within "
+                        + string.Create(CultureInfo.InvariantCulture, $"{SolidPhaseLines.MeltingVolumeBand / 1e6:G3} MPa of it")
                     : "pressure and slope from the published melting equation; dh and dv are not given (no volume change on melting in the fluid file)");
             }
             else

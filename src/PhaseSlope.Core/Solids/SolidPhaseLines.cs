@@ -29,6 +29,12 @@ public sealed class SolidPhaseLines
     /// constant-Δv Clapeyron line reaches this pressure, Pa (a triple-point extrapolation beyond it).</summary>
     public const double ClapeyronMeltingLimit = 100e6;
 
+    /// <summary>How far above the triple-point pressure, Pa, a published melting line reports Δh and
+    /// Δv: the triple-point Δv_fus it holds constant changes with pressure by about
+    /// (κ_liquid·v_liquid − κ_solid·v_solid)·ΔP, some 10 % of itself per 10 MPa for compressibilities
+    /// near 1e-9 1/Pa and a Δv of a tenth of the volume; beyond this band they are not given.</summary>
+    public const double MeltingVolumeBand = 10e6;
+
     /// <summary>The sublimation line's default start, as a fraction of the triple-point temperature.</summary>
     public const double SublimationDefaultStart = 0.7;
 
@@ -168,6 +174,11 @@ public sealed class SolidPhaseLines
         {
             RequireCovered(equation, temperature, "melting");
             var (p, slope) = equation.Evaluate(temperature);
+            if (Math.Abs(p - TriplePointPressure) > MeltingVolumeBand)
+            {
+                fusionVolume = null; // the triple-point Δv no longer holds (MeltingVolumeBand)
+            }
+
             return new PhaseLinePoint(temperature, p, slope, fusionVolume is double v ? temperature * v * slope : null, fusionVolume);
         }
 

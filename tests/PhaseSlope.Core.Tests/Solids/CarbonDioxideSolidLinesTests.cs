@@ -28,6 +28,24 @@ public class CarbonDioxideSolidLinesTests
     }
 
     [Fact]
+    public void PublishedMeltingLine_GivesDeltaHAndDeltaV_OnlyNearTheTriplePoint()
+    {
+        // Along the Span–Wagner melting equation the triple-point Δv_fus is held; it stops holding
+        // some tens of MPa up (SolidPhaseLines.MeltingVolumeBand = 10 MPa): 0.5 K above Tt the line is
+        // at about 2.9 MPa (slope 4.7 MPa/K) and Δh, Δv are given, with Δh = T·Δv·dP/dT exactly
+        // (1e-14: one product); at 250 K it is near 180 MPa and they are not.
+        var lines = Lines(CarbonDioxide);
+        double tt = CarbonDioxide.TriplePointTemperature!.Value;
+        var near = lines.Melting(tt + 0.5);
+        Assert.True(near.Pressure - lines.TriplePointPressure < SolidPhaseLines.MeltingVolumeBand);
+        AssertClose.Relative(near.Temperature * near.VolumeChange!.Value * near.Slope, near.EnthalpyChange!.Value, 1e-14, "dh = T dv dP/dT");
+        var far = lines.Melting(250);
+        Assert.True(far.Pressure > 1e8, $"{far.Pressure} Pa");
+        Assert.Null(far.EnthalpyChange);
+        Assert.Null(far.VolumeChange);
+    }
+
+    [Fact]
     public void TriplePoint_Sourced_AgreesWithHandbook()
     {
         var lines = Lines(CarbonDioxide);
