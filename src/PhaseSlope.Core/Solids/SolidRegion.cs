@@ -1,4 +1,3 @@
-using System.Globalization;
 using PhaseSlope.Core.Equilibrium;
 using PhaseSlope.Core.Fluids;
 using PhaseSlope.Core.Properties;
@@ -151,5 +150,5 @@ public sealed class SolidRegion
         return onSide ? _lines.Melting(temperature) : null;
     }
 
-    private static string Number(double value) => value.ToString("G7", CultureInfo.InvariantCulture);
+    private static string Number(double value) => Preconditions.Format(value);
 }
