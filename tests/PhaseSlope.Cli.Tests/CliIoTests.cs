@@ -23,7 +23,7 @@ public class CliIoTests
         { ["coexist", "propane", "--pressure", "4.2512 MPa"], ExitCodes.OutOfRange, "at or above the critical pressure" },
         { ["coexist", "propane", "--temperature", "50"], ExitCodes.OutOfRange, "below the triple point 85.525 K of propane" },
         { ["coexist", "water", "--temperature", "-10 degC"], ExitCodes.OutOfRange, "below the triple point 273.16 K of water" },
-        { ["coexist", "propane", "--pressure", "1e-9"], ExitCodes.OutOfRange, "falls below the triple point 85.525 K of propane" },
+        { ["coexist", "propane", "--pressure", "3e-4"], ExitCodes.OutOfRange, "falls below the triple point 85.525 K of propane" },
         { ["curve", "propane", "--from", "50"], ExitCodes.OutOfRange, "--from: 50 K is below the triple point 85.525 K of propane" },
         { ["curve", "propane", "--to", "500"], ExitCodes.OutOfRange, "--to: 500 K is above the critical temperature" },
         { ["curve", "propane", "--from", "400"], ExitCodes.OutOfRange, "--from: 400 K is at or above the critical temperature" },

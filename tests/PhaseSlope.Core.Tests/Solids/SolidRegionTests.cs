@@ -91,13 +91,20 @@ public sealed class SolidRegionTests
     [Fact]
     public void BelowTheTriplePointWithoutSublimationData_TheModelsLiquidIsRefusedItsVapourIsNot()
     {
-        // Propane gives a triple-point temperature (85.525 K, Lemmon et al. 2009, from memory) but,
-        // in this catalog, no triple-point pressure or sublimation line: below 85.525 K a liquid of
-        // the model is refused, a vapour cannot be placed and is given.
-        var ex = Refused("propane", 80, 1e5);
+        // Propane with its triple-point temperature (85.525 K, Lemmon et al. 2009, from memory) and
+        // no triple-point pressure or solid data (removed here, whatever the catalog gives): below
+        // 85.525 K a liquid of the model is refused, a vapour cannot be placed and is given.
+        var propane = FluidCatalog.Embedded.Find("propane");
+        var fluid = propane with
+        {
+            TriplePointPressure = null, EnthalpyOfFusion = null, FusionVolumeChange = null, SolidDensity = null,
+            MeltingPressureEquation = null, SublimationPressureEquation = null,
+        };
+        var engine = new PropertyModel(fluid, CubicModel.For(CubicModelKind.PengRobinson, fluid));
+        var ex = Assert.Throws<InvalidInputException>(() => engine.Flash(StateProperty.Temperature, 80, StateProperty.Pressure, 1e5));
         Assert.Contains("below its triple point 85.525 K, where the condensed phase is the solid", ex.Message, StringComparison.Ordinal);
 
-        var vapour = Engine("propane").Flash(StateProperty.Temperature, 80, StateProperty.Pressure, 1e-9);
+        var vapour = engine.Flash(StateProperty.Temperature, 80, StateProperty.Pressure, 1e-9);
         Assert.Equal(FluidRegion.SuperheatedVapour, vapour.Region);
     }
 
