@@ -17,7 +17,9 @@ internal static class ExitCodes
     public const int Fluid = 3;
 
     /// <summary>A state outside the model's range: T at or above Tc, P at or above Pc, or below
-    /// the lowest valid temperature.</summary>
+    /// the lowest valid temperature; or no liquid where the fluid's own data say there is none
+    /// (coexistence below the triple point or the sourced triple-point pressure, a state in the
+    /// solid region).</summary>
     public const int OutOfRange = 4;
 
     /// <summary>A solver did not converge.</summary>

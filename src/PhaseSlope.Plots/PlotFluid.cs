@@ -26,7 +26,7 @@ public sealed record PlotFluid(Fluid Fluid, CubicModel Model)
         }, Alpha);
 
     /// <summary>A coexistence solver of the model from the fluid's lowest valid temperature.</summary>
-    public CoexistenceSolver Solver() => new(Model, CoexistenceSolver.LowestValidTemperature(Fluid));
+    public CoexistenceSolver Solver() => new(Model, Fluid);
 
     /// <summary>The display name of <paramref name="fluid"/> (see <see cref="Name"/>).</summary>
     internal static string DisplayName(Fluid fluid)

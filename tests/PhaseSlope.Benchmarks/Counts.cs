@@ -65,6 +65,8 @@ public static class Counts
             double tc = engine.Solver.CriticalTemperature, pc = engine.Solver.CriticalPressure;
             var counts = new List<long>[4];
             (long Count, double T, double P) worst = (0, 0, 0);
+            var solid = new Core.Solids.SolidRegion(fluid, engine.Solver);
+            int skipped = 0;
             for (int k = 0; k < 4; k++)
             {
                 counts[k] = [];
@@ -90,13 +92,23 @@ public static class Counts
                     }
 
                     var state = engine.AtPressure(t, pressure);
-                    counts[0].Add(Count(Core.Properties.StateProperty.Enthalpy, state.Enthalpy!.Value, pressure));
-                    if (counts[0][^1] > worst.Count)
+                    if (solid.Refusal(t, pressure, state.Phase, state.Metastable) is not null)
                     {
-                        worst = (counts[0][^1], t / tc, pressure / pc);
+                        // In the solid by the fluid's own data (carbon dioxide at its triple-point
+                        // temperature above its triple-point pressure): the flash refuses it.
+                        skipped++;
+                    }
+                    else
+                    {
+                        counts[0].Add(Count(Core.Properties.StateProperty.Enthalpy, state.Enthalpy!.Value, pressure));
+                        if (counts[0][^1] > worst.Count)
+                        {
+                            worst = (counts[0][^1], t / tc, pressure / pc);
+                        }
+
+                        counts[1].Add(Count(Core.Properties.StateProperty.Entropy, state.Entropy!.Value, pressure));
                     }
 
-                    counts[1].Add(Count(Core.Properties.StateProperty.Entropy, state.Entropy!.Value, pressure));
                     double ts = engine.Solver.MinimumTemperature + (0.98 * tc - engine.Solver.MinimumTemperature) * (i + 0.5) / 10;
                     var mixture = engine.Flash(Core.Properties.StateProperty.Temperature, ts, Core.Properties.StateProperty.Quality, 0.1 + 0.08 * j);
                     counts[2].Add(Count(Core.Properties.StateProperty.Enthalpy, mixture.Enthalpy!.Value, mixture.Pressure));
@@ -105,7 +117,8 @@ public static class Counts
             }
 
             output.WriteLine(string.Create(inv,
-                $"| {name} | {counts[0].Average():F1} ({counts[0].Max()}) | {counts[1].Average():F1} ({counts[1].Max()}) | {counts[2].Average():F1} ({counts[2].Max()}) | {counts[3].Average():F1} ({counts[3].Max()}) | {worst.T:F3} Tc, {worst.P:F2} Pc |"));
+                $"| {name} | {counts[0].Average():F1} ({counts[0].Max()}) | {counts[1].Average():F1} ({counts[1].Max()}) | {counts[2].Average():F1} ({counts[2].Max()}) | {counts[3].Average():F1} ({counts[3].Max()}) | {worst.T:F3} Tc, {worst.P:F2} Pc |")
+                + (skipped > 0 ? string.Create(inv, $" ({skipped} single-phase states in the solid skipped)") : ""));
         }
     }
 

@@ -20,8 +20,11 @@ public class BadInputCatalogueTests
         { ["coexist", "propane", "-P", "-1 bar"], ExitCodes.Usage, "--pressure: pressure is not above zero in '-1 bar' (an absol" },
         { ["coexist", "propane", "-P", "50 bar"], ExitCodes.OutOfRange, "pressure 5000000 Pa is at or above the critical pressure 425" },
         { ["coexist", "propane", "-T", "369.89"], ExitCodes.OutOfRange, "temperature 369.89 K is at or above the critical temperature" },
-        { ["coexist", "propane", "-T", "50"], ExitCodes.OutOfRange, "temperature 50 K is below the lowest valid temperature 110.9" },
-        { ["coexist", "propane", "-P", "1e-30 Pa"], ExitCodes.OutOfRange, "pressure 1E-30 Pa is below the saturation pressure 0.6279265" },
+        { ["coexist", "propane", "-T", "50"], ExitCodes.OutOfRange, "temperature 50 K is below the triple point 85.525 K of propane: no liquid exists there" },
+        // 3e-4 Pa: below Peng-Robinson's own 3.64e-4 Pa at propane's triple point, above the sourced
+        // triple-point pressure (about 1.7e-4 Pa, Lemmon et al. 2009, from memory) where the catalog gives it.
+        { ["coexist", "propane", "-P", "3e-4 Pa"], ExitCodes.OutOfRange, "the model's saturation temperature at 0.0003 Pa falls below the triple point 85.525 K of propane: the model's vapour pressure at the triple point is 0.0003642" },
+        { ["coexist", "helium", "-P", "1e-30 Pa"], ExitCodes.OutOfRange, "pressure 1E-30 Pa is below the saturation pressure 462.0135 Pa at the lowest valid temperature 1.55859 K" },
         { ["coexist", "propane", "-T", "300", "--eos", "xyz"], ExitCodes.Usage, "--eos: unknown model 'xyz' (use pr, pr78, srk, rk, vdw)" },
         { ["coexist", "propane", "-T", "300", "--alpha", "bogus"], ExitCodes.Usage, "--alpha: unknown alpha function 'bogus' (use default, twu or" },
         { ["coexist", "n-butane", "-T", "300", "--alpha", "mathias-copeman"], ExitCodes.OutOfRange, "no Mathias-Copeman parameters for n-butane with Peng-Robinson" },
@@ -38,7 +41,7 @@ public class BadInputCatalogueTests
         { ["curve", "propane", "--points", "1"], ExitCodes.Usage, "--points: must be between 2 and 100000, got 1" },
         { ["curve", "propane", "--points", "200000"], ExitCodes.Usage, "--points: must be between 2 and 100000, got 200000" },
         { ["curve", "propane", "--from", "400"], ExitCodes.OutOfRange, "--from: 400 K is at or above the critical temperature 369.89" },
-        { ["curve", "propane", "--to", "50"], ExitCodes.OutOfRange, "--to: 50 K is below the lowest valid temperature 110.967 K o" },
+        { ["curve", "propane", "--to", "50"], ExitCodes.OutOfRange, "--to: 50 K is below the triple point 85.525 K of propane: no liquid exists below it" },
         { ["curve", "propane", "--from", "300", "--to", "250"], ExitCodes.Usage, "--from (300 K) must be below --to (250 K)" },
         { ["state", "propane", "-T", "300"], ExitCodes.Usage, "give exactly two of --temperature, --pressure, --density (or" },
         { ["state", "propane", "-T", "300", "-P", "1e6", "--density", "100"], ExitCodes.Usage, "give exactly two of --temperature, --pressure, --density (or" },
@@ -67,15 +70,33 @@ public class BadInputCatalogueTests
         { ["curve", "propane", "--from", "250", "--to", "300", "--step", "0"], ExitCodes.Usage, "--step: the step is not above zero in '0' (give a positive t" },
         { ["curve", "propane", "--from", "250", "--to", "300", "--step", "-5 K"], ExitCodes.Usage, "--step: the step is not above zero in '-5 K' (give a positi" },
         { ["curve", "propane", "--step", "5", "--points", "10"], ExitCodes.Usage, "--step: conflicts with --points (give the number of states" },
-        { ["curve", "propane", "--step", "1e-4 K"], ExitCodes.Usage, "--step: 0.0001 K from 110.967 K to 369.89 K gives more than" },
-        { ["curve", "propane", "--step", "1e-300 K"], ExitCodes.Usage, "--step: 1E-300 K from 110.967 K to 369.89 K gives more than" },
+        { ["curve", "propane", "--step", "1e-4 K"], ExitCodes.Usage, "--step: 0.0001 K from 85.525 K to 369.89 K gives more than" },
+        { ["curve", "propane", "--step", "1e-300 K"], ExitCodes.Usage, "--step: 1E-300 K from 85.525 K to 369.89 K gives more than" },
         { ["curve", "propane", "--step", "5 furlong"], ExitCodes.Usage, "--step: unknown temperature difference unit 'furlong' in '5" },
         { ["curve", "propane", "--temperatures", "250,300", "--from", "200"], ExitCodes.Usage, "--temperatures: conflicts with --from (the list gives every" },
         { ["curve", "propane", "--temperatures", "300,250"], ExitCodes.Usage, "--temperatures: the values must increase, but value 2 (250 K" },
         { ["curve", "propane", "--temperatures", "250,250"], ExitCodes.Usage, "--temperatures: the values must increase, but value 2 (250 K" },
         { ["curve", "propane", "--temperatures", "250,,300"], ExitCodes.Usage, "--temperatures: empty entry in the temperature list in '250" },
         { ["curve", "propane", "--temperatures", "-40,100 degC"], ExitCodes.OutOfRange, "--temperatures: 373.15 K is above the critical temperature 3" },
-        { ["curve", "propane", "--temperatures", "50,300"], ExitCodes.OutOfRange, "--temperatures: 50 K is below the lowest valid temperature 1" },
+        { ["curve", "propane", "--temperatures", "50,300"], ExitCodes.OutOfRange, "--temperatures: 50 K is below the triple point 85.525 K of propane" },
+
+        // No liquid where the fluid's own data say there is none (water: IAPWS-95 triple point
+        // 273.16 K, 611.657 Pa, and the IAPWS (2011) ice Ih lines; carbon dioxide: Span & Wagner
+        // 1996; all from memory, in the catalog files).
+        { ["coexist", "water", "--pressure", "500 Pa"], ExitCodes.OutOfRange, "no liquid exists below the triple-point pressure 611.657 Pa of water (Wagner & Pruß" },
+        { ["coexist", "water", "--temperature", "260 K"], ExitCodes.OutOfRange, "temperature 260 K is below the triple point 273.16 K of water: no liquid exists there, the condensed phase is the solid" },
+        { ["curve", "water", "--pressures", "500,1000 Pa"], ExitCodes.OutOfRange, "--pressures: no liquid exists below the triple-point pressure 611.657 Pa of water" },
+        { ["curve", "water", "--from", "260 K"], ExitCodes.OutOfRange, "--from: 260 K is below the triple point 273.16 K of water: no liquid exists below it" },
+        { ["state", "water", "-P", "500 Pa", "--quality", "0.5"], ExitCodes.OutOfRange, "no liquid exists below the triple-point pressure 611.657 Pa of water" },
+        { ["state", "water", "-T", "260 K", "--quality", "0"], ExitCodes.OutOfRange, "temperature 260 K is below the triple point 273.16 K of water" },
+        { ["state", "water", "-T", "260 K", "-P", "1 atm"], ExitCodes.OutOfRange, "water at 260 K and 101325 Pa is solid by its own data: below its triple point 273.16 K and above its sublimation pressure 195.8" },
+        { ["state", "water", "-T", "260 K", "-P", "1 atm", "--phase", "liquid"], ExitCodes.OutOfRange, "water at 260 K and 101325 Pa is solid by its own data" },
+        { ["state", "water", "-T", "265 K", "-P", "50 MPa"], ExitCodes.OutOfRange, "and below its melting pressure 9.233" },
+        { ["state", "water", "-T", "273.2 K", "-P", "550 Pa"], ExitCodes.OutOfRange, "no liquid exists below the triple-point pressure 611.657 Pa of water" },
+        { ["state", "carbon-dioxide", "-T", "200 K", "-P", "1 MPa"], ExitCodes.OutOfRange, "carbon dioxide at 200 K and 1000000 Pa is solid by its own data: below its triple point 216.592 K and above its sublimation pressure 1550" },
+        { ["state", "carbon-dioxide", "-T", "250 K", "-P", "300 MPa"], ExitCodes.OutOfRange, "carbon dioxide at 250 K and 3E+08 Pa is solid by its own data: above its melting pressure 1.82" },
+        { ["state", "{dir}/tonly.fluid", "-T", "80 K", "-P", "1 bar"], ExitCodes.OutOfRange, "tonly at 80 K and 100000 Pa is below its triple point 85.525 K, where the condensed phase is the solid" },
+        { ["cycle", "water", "evaporating=-10 degC,condensing=40 degC"], ExitCodes.OutOfRange, "the evaporating temperature 263.15 K is below the triple point 273.16 K of water: no liquid exists there" },
         { ["curve", "propane", "--pressures", "1,2 bar", "--temperatures", "250"], ExitCodes.Usage, "--pressures: conflicts with --temperatures (a table is by te" },
         { ["curve", "propane", "--pressures", "1,2 bar", "--step", "5"], ExitCodes.Usage, "--pressures: conflicts with --step (the list gives every row" },
         { ["curve", "propane", "--pressures", "2,1 bar"], ExitCodes.Usage, "--pressures: the values must increase, but value 2 (100000 P" },
@@ -306,6 +327,15 @@ public class BadInputCatalogueTests
         File.WriteAllText(folder.File("notriple.fluid"), ReplaceLine(ReplaceLine(ReplaceLine(water, "triple_point_pressure", ""), "name", "name notriple"), "synonyms", ""));
         File.WriteAllText(folder.File("nosublimation.fluid"), ReplaceLine(ReplaceLine(ReplaceLine(ReplaceLine(water, "sublimation_pressure_equation", ""), "enthalpy_of_fusion", ""),
             "name", "name nosublimation"), "synonyms", ""));
+        // Propane with its triple-point temperature only (no triple-point pressure or solid lines).
+        string tonly = ReplaceLine(ReplaceLine(propane, "name", "name tonly"), "synonyms", "");
+        foreach (string key in new[] { "triple_point_pressure", "enthalpy_of_fusion", "solid_density", "triple_point_liquid_density", "fusion_volume_change",
+                     "solid_heat_capacity", "melting_pressure_equation", "sublimation_pressure_equation" })
+        {
+            tonly = ReplaceLine(tonly, key, "");
+        }
+
+        File.WriteAllText(folder.File("tonly.fluid"), tonly);
         File.WriteAllText(folder.File("nomass.fluid"), ReplaceLine(ReplaceLine(ReplaceLine(propane, "molar_mass", ""), "name", "name nomass"), "synonyms", ""));
         // Water's file with one solid-phase key (or the melting equation with it) taken out.
         File.WriteAllText(folder.File("water-nopt.fluid"), ReplaceLine(water, "triple_point_pressure", ""));

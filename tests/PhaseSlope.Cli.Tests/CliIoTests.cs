@@ -21,14 +21,14 @@ public class CliIoTests
         { ["coexist", "propane", "--temperature", "369.89"], ExitCodes.OutOfRange, "at or above the critical temperature" },
         { ["coexist", "propane", "--pressure", "5 MPa"], ExitCodes.OutOfRange, "critical pressure" },
         { ["coexist", "propane", "--pressure", "4.2512 MPa"], ExitCodes.OutOfRange, "at or above the critical pressure" },
-        { ["coexist", "propane", "--temperature", "50"], ExitCodes.OutOfRange, "below the lowest valid temperature" },
-        { ["coexist", "water", "--temperature", "-10 degC"], ExitCodes.OutOfRange, "below the lowest valid temperature" },
-        { ["coexist", "propane", "--pressure", "1e-9"], ExitCodes.OutOfRange, "below the saturation pressure" },
-        { ["curve", "propane", "--from", "50"], ExitCodes.OutOfRange, "--from: 50 K is below the lowest valid temperature" },
+        { ["coexist", "propane", "--temperature", "50"], ExitCodes.OutOfRange, "below the triple point 85.525 K of propane" },
+        { ["coexist", "water", "--temperature", "-10 degC"], ExitCodes.OutOfRange, "below the triple point 273.16 K of water" },
+        { ["coexist", "propane", "--pressure", "3e-4"], ExitCodes.OutOfRange, "falls below the triple point 85.525 K of propane" },
+        { ["curve", "propane", "--from", "50"], ExitCodes.OutOfRange, "--from: 50 K is below the triple point 85.525 K of propane" },
         { ["curve", "propane", "--to", "500"], ExitCodes.OutOfRange, "--to: 500 K is above the critical temperature" },
         { ["curve", "propane", "--from", "400"], ExitCodes.OutOfRange, "--from: 400 K is at or above the critical temperature" },
         { ["curve", "propane", "--from", "369.89"], ExitCodes.OutOfRange, "--from: 369.89 K is at or above the critical temperature" },
-        { ["curve", "propane", "--to", "50"], ExitCodes.OutOfRange, "--to: 50 K is below the lowest valid temperature" },
+        { ["curve", "propane", "--to", "50"], ExitCodes.OutOfRange, "--to: 50 K is below the triple point 85.525 K of propane" },
 
         // Not converged (5): an invented model whose attraction vanishes at low temperature has
         // no liquid-vapour loop there (a picokelvin below Tc, once the example here, now solves

@@ -365,7 +365,7 @@ internal sealed class AuditOptions
         _ = Out.Path(parse);
         var fluid = parse.GetValue(Fluid) is string f ? FluidResolver.Resolve(f) : null;
         var data = parse.GetValue(Data) is string path ? CorrelationOptions.ReadDataFile(path, null, null) : null;
-        var solver = fluid is null ? null : new CoexistenceSolver(Core.Models.CubicModel.For(kind, fluid), CoexistenceSolver.LowestValidTemperature(fluid));
+        var solver = fluid is null ? null : new CoexistenceSolver(Core.Models.CubicModel.For(kind, fluid), fluid);
         return new AuditRun(new AuditRequest
         {
             Correlation = correlation,

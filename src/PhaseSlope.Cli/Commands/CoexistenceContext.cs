@@ -38,7 +38,7 @@ internal sealed class CoexistenceContext
                 _ = new PropertyModel(fluid, model, reference);
             }
 
-            return new CoexistenceContext(new CoexistenceSolver(model, CoexistenceSolver.LowestValidTemperature(fluid)), null, reference);
+            return new CoexistenceContext(new CoexistenceSolver(model, fluid), null, reference);
         }
 
         var engine = new PropertyModel(fluid, model, reference);

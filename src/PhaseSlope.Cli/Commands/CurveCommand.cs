@@ -74,6 +74,12 @@ internal static class CurveCommand
         return command;
     }
 
+    /// <summary>The lower end of the table for a refusal: the fluid's triple point (naming the solid)
+    /// where the solver starts there, else its lowest valid temperature.</summary>
+    private static string LowerEnd(CoexistenceSolver solver, Fluid data, string limit) => solver.TriplePoint is not null
+        ? $"the triple point {limit} K of {data.Name}: no liquid exists below it, the solid sublimes (see curve --line sublimation)"
+        : $"the lowest valid temperature {limit} K of {data.Name}";
+
     /// <summary>The states at the temperatures of the table, increasing: the explicit list, the
     /// stepped range or the --points spacing, each checked against the fluid's limits.</summary>
     private static IReadOnlyList<CoexistencePoint> ByTemperature(CurveRequest request, CoexistenceSolver solver, Fluid data)
@@ -87,7 +93,7 @@ internal static class CurveCommand
                 {
                     var (given, limit) = Apart(t, solver.MinimumTemperature);
                     throw new Core.Errors.InvalidInputException("temperatures", t,
-                        $"--temperatures: {given} K is below the lowest valid temperature {limit} K of {data.Name}");
+                        $"--temperatures: {given} K is below {LowerEnd(solver, data, limit)}");
                 }
 
                 if (t > tc)
@@ -109,7 +115,7 @@ internal static class CurveCommand
         {
             var (given, limit) = Apart(start, solver.MinimumTemperature);
             throw new Core.Errors.InvalidInputException("from temperature", start,
-                $"--from: {given} K is below the lowest valid temperature {limit} K of {data.Name}");
+                $"--from: {given} K is below {LowerEnd(solver, data, limit)}");
         }
 
         if (start >= tc)
@@ -128,7 +134,7 @@ internal static class CurveCommand
         {
             var (given, limit) = Apart(end, solver.MinimumTemperature);
             throw new Core.Errors.InvalidInputException("to temperature", end,
-                $"--to: {given} K is below the lowest valid temperature {limit} K of {data.Name}");
+                $"--to: {given} K is below {LowerEnd(solver, data, limit)}");
         }
 
         if (!(start < end))

@@ -237,7 +237,7 @@ internal sealed class LatentOptions
         var data = Correlation.ReadData(parse);
         Correlation.RequireDataBelowCriticalPoint(parse, fluid, data);
         var solver = fluid is not null && model == VolumeChangeModel.EquationOfState
-            ? new CoexistenceSolver(modelChoice.For(fluid), CoexistenceSolver.LowestValidTemperature(fluid))
+            ? new CoexistenceSolver(modelChoice.For(fluid), fluid)
             : null;
         var (tc, pc) = Correlation.CriticalPoint(parse, fluid);
         return new LatentRequest(forms, auto, data, model, solver, tc, pc, temperatures, format, fluid, modelChoice, uncertainty);

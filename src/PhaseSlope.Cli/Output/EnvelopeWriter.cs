@@ -67,6 +67,16 @@ internal static class EnvelopeWriter
             yield return note;
         }
 
+        if (envelope.Points.Count > 0)
+        {
+            // The trace's coldest point names every component it passes below the triple point of.
+            double lowest = envelope.Points.Min(p => p.Temperature);
+            foreach (string caution in Core.Solids.SolidCaution.BelowTriplePoints(input.Mixture.Components, lowest))
+            {
+                yield return $"the envelope's coldest point: {caution}";
+            }
+        }
+
         yield return "points are the feed at its bubble (liquid) or dew (vapour) point with the incipient phase; the critical point is where the two branches meet";
     }
 

@@ -231,7 +231,7 @@ internal static class FluidWriter
         text.Append(table.Render());
         text.AppendLine();
         double tMin = CoexistenceSolver.LowestValidTemperature(fluid);
-        text.AppendLine($"lowest valid temperature: {NumberText.Table(UnitFormatter.Convert(DisplayQuantity.Temperature, tMin, units))} {UnitFormatter.Label(DisplayQuantity.Temperature, units)} (0.3 Tc or the triple point, whichever is higher)");
+        text.AppendLine($"lowest valid temperature: {NumberText.Table(UnitFormatter.Convert(DisplayQuantity.Temperature, tMin, units))} {UnitFormatter.Label(DisplayQuantity.Temperature, units)} (the triple point where the fluid gives one, not below 0.1 Tc; 0.3 Tc where it gives none)");
         if (VapourLineOf(fluid) is { } line)
         {
             string turn = line.MaximumEntropyTemperature is double tMax

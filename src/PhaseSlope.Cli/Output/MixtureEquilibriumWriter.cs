@@ -5,6 +5,7 @@ using PhaseSlope.Cli.Commands;
 using PhaseSlope.Cli.Units;
 using PhaseSlope.Core.Mixtures;
 using PhaseSlope.Core.Models;
+using PhaseSlope.Core.Solids;
 
 namespace PhaseSlope.Cli.Output;
 
@@ -93,7 +94,7 @@ internal static class MixtureEquilibriumWriter
             Phase(json, "liquid", point.Liquid);
             Phase(json, "vapour", point.Vapour);
             Report(json, point.Report);
-            Footer(json, input, point.Liquid.Enthalpy is null ? "h and s need cp°" : null);
+            Footer(json, input, point.Liquid.Enthalpy is null ? "h and s need cp°" : null, point.Temperature);
             json.WriteEndObject();
         });
 
@@ -119,7 +120,7 @@ internal static class MixtureEquilibriumWriter
             json.WriteFinite("gibbs_energy_change_per_RT", flash.GibbsEnergyChange);
             json.WriteEndObject();
             Report(json, flash.Report);
-            Footer(json, input, flash.Enthalpy is null ? "h and s need cp°" : null);
+            Footer(json, input, flash.Enthalpy is null ? "h and s need cp°" : null, flash.Temperature);
             json.WriteEndObject();
         });
 
@@ -181,13 +182,18 @@ internal static class MixtureEquilibriumWriter
         json.WriteEndObject();
     }
 
-    private static void Footer(Utf8JsonWriter json, MixtureInput input, string? caloricMissing)
+    private static void Footer(Utf8JsonWriter json, MixtureInput input, string? caloricMissing, double temperature)
     {
         MixtureWriter.WriteInteractions(json, input.Mixture, input.Interactions);
         json.WriteStartArray("notes");
         foreach (string note in MixtureWriter.InteractionNotes(input.Interactions))
         {
             json.WriteStringValue(note);
+        }
+
+        foreach (string caution in SolidCaution.BelowTriplePoints(input.Mixture.Components, temperature))
+        {
+            json.WriteStringValue(caution);
         }
 
         json.WriteStringValue(caloricMissing is null ? ConventionNote : "enthalpy and entropy are null: a component has no ideal-gas heat capacity cp°");
@@ -208,7 +214,7 @@ internal static class MixtureEquilibriumWriter
         text.Append(PhaseTable(input, point.Liquid, point.Vapour, units));
         text.Append(CultureInfo.InvariantCulture,
             $"\nsolver: {point.Report.SubstitutionSteps} substitution and {point.Report.NewtonSteps} Newton steps, {point.Report.ModelEvaluations} model evaluations\n");
-        AppendNotes(text, input, point.Liquid.Enthalpy is null, units);
+        AppendNotes(text, input, point.Liquid.Enthalpy is null, units, point.Temperature);
         return text.ToString();
     }
 
@@ -233,7 +239,7 @@ internal static class MixtureEquilibriumWriter
             $"\nstability: tangent-plane distance {NumberText.Table(flash.Stability.TangentPlaneDistance)} ({(flash.Stability.IsStable ? "feed stable" : "feed splits")})\n");
         text.Append(CultureInfo.InvariantCulture,
             $"solver: {flash.Report.SubstitutionSteps} substitution ({flash.Report.AcceleratedSteps} accelerated), {flash.Report.NewtonSteps} Newton, {flash.Report.OuterSteps} temperature steps, {flash.Report.ModelEvaluations} model evaluations\n");
-        AppendNotes(text, input, flash.Enthalpy is null, units);
+        AppendNotes(text, input, flash.Enthalpy is null, units, flash.Temperature);
         return text.ToString();
     }
 
@@ -272,11 +278,16 @@ internal static class MixtureEquilibriumWriter
         return table.Render();
     }
 
-    private static void AppendNotes(StringBuilder text, MixtureInput input, bool caloricMissing, UnitSystem units)
+    private static void AppendNotes(StringBuilder text, MixtureInput input, bool caloricMissing, UnitSystem units, double temperature)
     {
         foreach (string note in MixtureWriter.InteractionNotes(input.Interactions))
         {
             text.Append(CultureInfo.InvariantCulture, $"note: {note}\n");
+        }
+
+        foreach (string caution in SolidCaution.BelowTriplePoints(input.Mixture.Components, temperature))
+        {
+            text.Append(CultureInfo.InvariantCulture, $"caution: {caution}\n");
         }
 
         text.Append(CultureInfo.InvariantCulture, $"note: {(caloricMissing ? "h and s are n/a: a component has no ideal-gas heat capacity cp°" : units == UnitSystem.Si ? ConventionNote : EngineeringConventionNote)}\n");

@@ -92,7 +92,9 @@ public sealed record VapourCompressionCycle
             if (value < tMin)
             {
                 var (t, m) = Preconditions.Apart(value, tMin);
-                throw new InvalidInputException(what, value, $"the {what} {t} K is below the lowest valid temperature {m} K of {properties.Fluid.Name}");
+                throw new InvalidInputException(what, value, solver.TriplePoint is null
+                    ? $"the {what} {t} K is below the lowest valid temperature {m} K of {properties.Fluid.Name}"
+                    : $"the {what} {t} K is below the triple point {m} K of {properties.Fluid.Name}: no liquid exists there, the condensed phase is the solid");
             }
         }
 

@@ -8,7 +8,9 @@ public sealed partial class CoexistenceSolver
     /// <summary>The coexistence state at pressure <paramref name="pressure"/> (Pa): the saturation
     /// temperature and both phases.</summary>
     /// <exception cref="InvalidInputException">P is not finite and positive, is at or above Pc,
-    /// or is below the saturation pressure at <see cref="MinimumTemperature"/>.</exception>
+    /// is below the fluid's sourced triple-point pressure (<see cref="TriplePoint"/>), or is below
+    /// the saturation pressure at <see cref="MinimumTemperature"/> (at a triple point, the model's
+    /// own vapour pressure there above the sourced one).</exception>
     /// <exception cref="ConvergenceException">No route met the tolerance.</exception>
     public CoexistencePoint AtPressure(double pressure) => AtPressure(pressure, null);
 
@@ -31,6 +33,15 @@ public sealed partial class CoexistenceSolver
         {
             throw new InvalidInputException("pressure", pressure,
                 $"pressure {Preconditions.Format(pressure)} Pa is at or above the critical pressure {Preconditions.Format(pc)} Pa: no liquid-vapour coexistence");
+        }
+
+        // Below the sourced triple-point pressure no liquid exists, whatever the model says; the
+        // 1e-12 is rounding of a pressure converted from another unit.
+        if (TriplePoint is { Pressure: double triple } limit && pressure < triple * (1 - BoundaryRoundingTolerance))
+        {
+            var (given, _) = Preconditions.Apart(pressure, triple);
+            throw new InvalidInputException("pressure", pressure,
+                $"no liquid exists below {limit.PressureText}: at {given} Pa the solid sublimes (see curve --line sublimation)");
         }
 
         var work = new Work();
@@ -93,6 +104,17 @@ public sealed partial class CoexistenceSolver
     private InvalidInputException BelowBottom(double pressure, double bottom)
     {
         var (given, limit) = Preconditions.Apart(pressure, bottom);
+        if (TriplePoint is { } triple)
+        {
+            // At or above the sourced triple-point pressure, but the model's vapour pressure at the
+            // triple point lies higher: the model's own inconsistency, named with both numbers.
+            string sourced = triple.Pressure is double pt
+                ? $", above the sourced triple-point pressure {Preconditions.Format(pt)} Pa ({triple.PressureSource}) by {Preconditions.Format(100 * (bottom / pt - 1))} %"
+                : "";
+            return new InvalidInputException("pressure", pressure,
+                $"the model's saturation temperature at {given} Pa falls below the triple point {Preconditions.Format(MinimumTemperature)} K of {triple.FluidName}: the model's vapour pressure at the triple point is {limit} Pa{sourced}; below it this model has no liquid-vapour coexistence above the triple point");
+        }
+
         return new InvalidInputException("pressure", pressure,
             $"pressure {given} Pa is below the saturation pressure {limit} Pa at the lowest valid temperature {Preconditions.Format(MinimumTemperature)} K");
     }

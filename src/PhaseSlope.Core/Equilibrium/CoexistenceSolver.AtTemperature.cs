@@ -128,8 +128,9 @@ public sealed partial class CoexistenceSolver
         if (temperature < MinimumTemperature * (1 - BoundaryRoundingTolerance))
         {
             var (given, limit) = Preconditions.Apart(temperature, MinimumTemperature);
-            throw new InvalidInputException("temperature", temperature,
-                $"temperature {given} K is below the lowest valid temperature {limit} K");
+            throw new InvalidInputException("temperature", temperature, TriplePoint is { } triple
+                ? $"temperature {given} K is below the triple point {limit} K of {triple.FluidName}: no liquid exists there, the condensed phase is the solid, which sublimes (see curve --line sublimation)"
+                : $"temperature {given} K is below the lowest valid temperature {limit} K");
         }
     }
 

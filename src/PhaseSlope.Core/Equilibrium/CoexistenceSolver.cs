@@ -8,8 +8,10 @@ namespace PhaseSlope.Core.Equilibrium;
 /// <summary>Liquid–vapour coexistence of one pure-fluid model: equal temperature, pressure and
 /// Gibbs energy (fugacity) between a liquid and a vapour root.</summary>
 /// <remarks>
-/// <para>Valid from <see cref="MinimumTemperature"/> (0.3·Tc, or the triple point when known and
-/// higher) up to, not including, Tc. Every route is a Newton iteration on the logarithms of the
+/// <para>Valid from <see cref="MinimumTemperature"/> (the fluid's triple point where it is known,
+/// not below 0.1·Tc; 0.3·Tc where it is not; see <see cref="LowestValidTemperature"/>) up to, not
+/// including, Tc; a solver built for a fluid (<see cref="CoexistenceSolver(IResidualModel, Fluid, CoexistenceOptions?)"/>)
+/// also refuses pressures below the fluid's sourced triple-point pressure. Every route is a Newton iteration on the logarithms of the
 /// two densities (and, at given pressure, the temperature), two model evaluations per step,
 /// started as close to the answer as is known:</para>
 /// <list type="bullet">
@@ -86,20 +88,61 @@ public sealed partial class CoexistenceSolver
         Options = options ?? CoexistenceOptions.Default;
     }
 
+    /// <summary>Creates a solver for a model of <paramref name="fluid"/>, valid from
+    /// <see cref="LowestValidTemperature(Fluid)"/>, which knows the fluid's triple point
+    /// (<see cref="TriplePoint"/>): a temperature below it is refused as solid, and so is a
+    /// pressure below the sourced triple-point pressure.</summary>
+    /// <param name="model">The model (one component) of the fluid.</param>
+    /// <param name="fluid">The fluid, for its triple point.</param>
+    /// <param name="options">Tolerances; <see cref="CoexistenceOptions.Default"/> when null.</param>
+    public CoexistenceSolver(IResidualModel model, Fluid fluid, CoexistenceOptions? options = null)
+        : this(model, LowestValidTemperature(fluid), options)
+    {
+        var triple = TriplePointLimit.Of(fluid);
+        // Only a triple point that is the lower end itself bounds the pressure: below the
+        // documented floor (LowestReducedTemperature) the solver stops above it.
+        TriplePoint = triple is not null && triple.Temperature >= MinimumTemperature * (1 - BoundaryRoundingTolerance) ? triple : null;
+    }
+
     /// <summary>A solver for a catalog fluid and a model, valid from
     /// <see cref="LowestValidTemperature(Fluid)"/>.</summary>
     public static CoexistenceSolver For(Fluid fluid, CubicModelKind kind, CoexistenceOptions? options = null)
-        => new(CubicModel.For(kind, fluid), LowestValidTemperature(fluid), options);
+        => new(CubicModel.For(kind, fluid), fluid, options);
 
-    /// <summary>The lowest temperature the toolkit solves for a fluid: 0.3·Tc, or the triple
-    /// point when it is known and higher (below it the liquid is not the stable condensed phase).</summary>
+    /// <summary>The lowest reduced temperature T/Tc solved where the fluid gives no triple point:
+    /// a conventional lower end of the cubic models' vapour-pressure range (their alpha functions
+    /// are fitted from about 0.3·Tc up; the acentric factor itself is defined at 0.7·Tc).</summary>
+    public const double UnknownTriplePointReducedTemperature = 0.3;
+
+    /// <summary>The floor under a known triple point, as T/Tc: the solver is not taken below it
+    /// even where a fluid's triple point lies lower.</summary>
+    /// <remarks>Measured (Peng–Robinson and Soave–Redlich–Kwong, default alpha, at given T and
+    /// back at the pressure found): propane, 1-butene, n-decane, methanol, ethanol, isohexane,
+    /// water and hydrogen all solve down to 0.08·Tc, where Psat is 1e-33 to 1e-68 Pa; at 0.06·Tc
+    /// the fluids with ω ≥ 0.5 (n-decane, methanol, ethanol) no longer converge. 0.1·Tc keeps a
+    /// margin below which no catalog fluid has its triple point (the lowest is 1-butene at
+    /// 0.209·Tc) and above the measured failures.</remarks>
+    public const double LowestReducedTemperature = 0.1;
+
+    /// <summary>The lowest temperature the toolkit solves for a fluid: its triple point where the
+    /// fluid gives one (below it the liquid is not the stable condensed phase), held at or above
+    /// <see cref="LowestReducedTemperature"/>·Tc; <see cref="UnknownTriplePointReducedTemperature"/>·Tc
+    /// where it gives none.</summary>
+    /// <remarks>Every catalog fluid with a triple point solves there with Peng–Robinson and
+    /// Soave–Redlich–Kwong (default, Twu and the catalog's Mathias–Copeman alpha): checked by
+    /// <c>TriplePointRangeTests</c>.</remarks>
     public static double LowestValidTemperature(Fluid fluid)
     {
         ArgumentNullException.ThrowIfNull(fluid);
-        double floor = 0.3 * fluid.CriticalTemperature.Value;
-        double? triple = fluid.TriplePointTemperature?.Value;
-        return triple is double t && t > floor ? t : floor;
+        double tc = fluid.CriticalTemperature.Value;
+        return fluid.TriplePointTemperature?.Value is double t
+            ? Math.Max(t, LowestReducedTemperature * tc)
+            : UnknownTriplePointReducedTemperature * tc;
     }
+
+    /// <summary>The fluid's triple point when this solver was built for a fluid that gives one and
+    /// its lowest temperature is that triple point; otherwise null.</summary>
+    public TriplePointLimit? TriplePoint { get; }
 
     /// <summary>The model.</summary>
     public IResidualModel Model { get; }

@@ -42,7 +42,7 @@ public sealed record FluidCheck(Fluid Fluid, ModelIdentity Model, double? Predic
     {
         ArgumentNullException.ThrowIfNull(fluid);
         ArgumentNullException.ThrowIfNull(model);
-        var solver = new CoexistenceSolver(model, CoexistenceSolver.LowestValidTemperature(fluid));
+        var solver = new CoexistenceSolver(model, fluid);
         double tc = solver.CriticalTemperature;
         string? failure = null;
         foreach (double t in new[] { solver.MinimumTemperature, Math.Max(0.7 * tc, solver.MinimumTemperature), tc * (1 - 1e-8) })

@@ -6,8 +6,9 @@ namespace PhaseSlope.Core.Models;
 /// and decreasing in T (attraction weakens as the fluid heats), checked where the tool uses it.</summary>
 /// <remarks>A rising α makes (∂P/∂T)_ρ of a dense liquid too large and can turn the Clapeyron
 /// slope and the latent heat negative (a generalised Twu α with ω = −0.5 did). The check
-/// evaluates α and dα/dT at T/Tc = 0.30, 0.31, …, 1.00: 0.3 is the tool's default lowest valid
-/// reduced temperature, and every alpha function used here is a smooth function of √Tr or Tr^q
+/// evaluates α and dα/dT at T/Tc = 0.30, 0.31, …, 1.00 (0.3 is the tool's lowest valid reduced
+/// temperature where a fluid gives no triple point), or from a lower start in steps of about 0.01
+/// when the fluid's triple point lies lower (see <see cref="Equilibrium.CoexistenceSolver.LowestValidTemperature"/>); every alpha function used here is a smooth function of √Tr or Tr^q
 /// with at most one turning point, which a 0.01 step in Tr cannot step over unnoticed except
 /// within 0.01 of it.</remarks>
 public static class AlphaGuard
@@ -15,16 +16,20 @@ public static class AlphaGuard
     /// <summary>Lowest reduced temperature checked.</summary>
     public const double LowestReducedTemperature = 0.3;
 
-    private const int Steps = 70;
 
     /// <summary>The first reduced temperature on the grid where α is not finite and positive or
     /// dα/dT is not negative, with the reason; null when there is none.</summary>
-    public static (double ReducedTemperature, string Reason)? FirstViolation(IAlphaFunction alpha, double criticalTemperature)
+    /// <param name="alpha">The alpha function.</param>
+    /// <param name="criticalTemperature">Tc, K.</param>
+    /// <param name="lowestReducedTemperature">Where the grid starts, T/Tc (at most <see cref="LowestReducedTemperature"/>).</param>
+    public static (double ReducedTemperature, string Reason)? FirstViolation(IAlphaFunction alpha, double criticalTemperature, double lowestReducedTemperature = LowestReducedTemperature)
     {
         ArgumentNullException.ThrowIfNull(alpha);
-        for (int i = 0; i <= Steps; i++)
+        double start = Math.Min(lowestReducedTemperature, LowestReducedTemperature);
+        int steps = (int)Math.Round((1 - start) * 100);
+        for (int i = 0; i <= steps; i++)
         {
-            double tr = LowestReducedTemperature + (1 - LowestReducedTemperature) * i / Steps;
+            double tr = start + (1 - start) * i / steps;
             var value = alpha.Evaluate(tr * criticalTemperature);
             if (!double.IsFinite(value.Value) || !double.IsFinite(value.FirstDerivative))
             {
@@ -49,13 +54,16 @@ public static class AlphaGuard
     /// <param name="alpha">The alpha function.</param>
     /// <param name="criticalTemperature">Tc, K.</param>
     /// <param name="what">What the function was built from, for the message (e.g. "Twu parameters L = …").</param>
-    /// <exception cref="InvalidInputException">α not finite and positive, or not decreasing, somewhere on 0.3 ≤ T/Tc ≤ 1.</exception>
-    public static void RequirePositiveDecreasing(IAlphaFunction alpha, double criticalTemperature, string what)
+    /// <param name="lowestReducedTemperature">Where the check starts, T/Tc (at most <see cref="LowestReducedTemperature"/>):
+    /// the fluid's lowest valid temperature over Tc when that is lower.</param>
+    /// <exception cref="InvalidInputException">α not finite and positive, or not decreasing, somewhere on the checked range up to T/Tc = 1.</exception>
+    public static void RequirePositiveDecreasing(IAlphaFunction alpha, double criticalTemperature, string what, double lowestReducedTemperature = LowestReducedTemperature)
     {
-        if (FirstViolation(alpha, criticalTemperature) is (double tr, string reason))
+        if (FirstViolation(alpha, criticalTemperature, lowestReducedTemperature) is (double tr, string reason))
         {
+            double start = Math.Min(lowestReducedTemperature, LowestReducedTemperature);
             throw new InvalidInputException("alpha parameters", tr,
-                $"{what}: the alpha function {reason} at T/Tc = {tr.ToString("0.00", System.Globalization.CultureInfo.InvariantCulture)}; it must stay positive and decrease with T for {LowestReducedTemperature.ToString(System.Globalization.CultureInfo.InvariantCulture)} <= T/Tc <= 1");
+                $"{what}: the alpha function {reason} at T/Tc = {tr.ToString("0.00", System.Globalization.CultureInfo.InvariantCulture)}; it must stay positive and decrease with T for {start.ToString("0.###", System.Globalization.CultureInfo.InvariantCulture)} <= T/Tc <= 1");
         }
     }
 }

@@ -98,8 +98,9 @@ public sealed class CubicModel : IResidualModel
     /// <see cref="CubicModelKind.PengRobinson1978"/>, which differs only in its default κ(ω).</param>
     /// <param name="volumeShift">Volume translation c in m³/mol (see <see cref="Models.VolumeShift"/>).</param>
     /// <exception cref="InvalidInputException">The alpha form does not apply to the model, or
-    /// the fluid has no parameters for it; the fluid's own parameters give an α that is not
-    /// positive and decreasing on 0.3 ≤ T/Tc ≤ 1 (<see cref="AlphaGuard"/>); ω outside
+    /// the fluid has no parameters for it; the fluid's own parameters (or the generalised Twu
+    /// function) give an α that is not positive and decreasing from min(0.3, the fluid's lowest
+    /// valid temperature over Tc) to T/Tc = 1 (<see cref="AlphaGuard"/>); ω outside
     /// <see cref="GeneralisedTwuAlpha.ValidAcentricFactorRange"/> for the generalised Twu function.</exception>
     public static CubicModel For(CubicModelKind kind, Fluid fluid, AlphaForm alpha = AlphaForm.Default, double volumeShift = 0)
     {
@@ -151,10 +152,16 @@ public sealed class CubicModel : IResidualModel
                 + "and give the file's path as the fluid (docs/fluid-files.md)"),
             _ => throw new ArgumentOutOfRangeException(nameof(alpha), alpha, "unknown alpha form"),
         };
+        // Checked down to the fluid's lowest valid temperature (its triple point) where that lies below 0.3 Tc.
+        double lowestReduced = Equilibrium.CoexistenceSolver.LowestValidTemperature(fluid) / tc;
         if (set is not null)
         {
             AlphaGuard.RequirePositiveDecreasing(function, tc,
-                $"{AlphaName(alpha)} parameters {string.Join(", ", set.Values.Select(Preconditions.Format))} of {fluid.Name} with {kind.Title()}");
+                $"{AlphaName(alpha)} parameters {string.Join(", ", set.Values.Select(Preconditions.Format))} of {fluid.Name} with {kind.Title()}", lowestReduced);
+        }
+        else if (lowestReduced < AlphaGuard.LowestReducedTemperature)
+        {
+            AlphaGuard.RequirePositiveDecreasing(function, tc, $"the generalised Twu (1995) alpha function with omega = {Preconditions.Format(omega)} of {fluid.Name}", lowestReduced);
         }
 
         return new CubicModel(kind, form, function, tc, pc, volumeShift);

@@ -156,15 +156,29 @@ public sealed partial class PropertyModel
     }
 
     /// <summary>The saturation temperature at P, or null at or above Pc and below the saturation
-    /// pressure at the lowest valid temperature.</summary>
+    /// pressure at the lowest valid temperature or the fluid's sourced triple-point pressure.</summary>
     private double? SaturationTemperatureAt(double pressure)
-        => pressure < Solver.CriticalPressure && pressure >= BottomPressure ? Solver.AtPressure(pressure).Temperature : null;
+        => Coexists(pressure) ? Solver.AtPressure(pressure).Temperature : null;
+
+    /// <summary>Whether the model has liquid–vapour coexistence at P within the fluid's data: below
+    /// Pc, at or above the saturation pressure at the lowest valid temperature and at or above the
+    /// sourced triple-point pressure (the 1e-12 is the solver's own rounding allowance).</summary>
+    private bool Coexists(double pressure)
+        => pressure < Solver.CriticalPressure && pressure >= BottomPressure
+           && !(Solver.TriplePoint?.Pressure is double pt && pressure < pt * (1 - 1e-12));
 
     /// <summary>The saturation pressure at the lowest valid temperature (solved once).</summary>
     private double BottomPressure => _bottomPressure ??= Solver.AtTemperature(Solver.MinimumTemperature).Pressure;
 
+    /// <exception cref="InvalidInputException">The fluid's own data place the state in the solid
+    /// region, or rule out the liquid the model gives (<see cref="Solids.SolidRegion"/>).</exception>
     private FluidState Single(ThermodynamicState state, double? saturationTemperature)
     {
+        if (_solid.Refusal(state.Temperature, state.Pressure, state.Phase, state.Metastable) is string refusal)
+        {
+            throw new InvalidInputException("state", state.Temperature, refusal);
+        }
+
         double tc = Solver.CriticalTemperature;
         var region = state.Critical ? FluidRegion.CriticalPoint
             : state.Temperature >= tc ? (state.Pressure >= Solver.CriticalPressure ? FluidRegion.SupercriticalFluid : FluidRegion.Gas)
@@ -186,8 +200,16 @@ public sealed partial class PropertyModel
     }
 
     /// <summary>The mixture of quality <paramref name="quality"/> at a coexistence point.</summary>
+    /// <exception cref="InvalidInputException">The point lies below the lowest valid temperature
+    /// (the fluid's triple point), where no liquid exists.</exception>
     private FluidState TwoPhase(CoexistencePoint point, double quality)
     {
+        if (point.Temperature < Solver.MinimumTemperature * (1 - 1e-12))
+        {
+            // The solver's own refusal, with the triple point and the solid named (it throws before solving).
+            Solver.AtTemperature(point.Temperature);
+        }
+
         var saturation = _heatCapacity is null ? null : Coexistence(point);
         var liquid = saturation?.Liquid.State ?? Build(point.Liquid, PhaseLabel.Liquid, false);
         var vapour = saturation?.Vapour.State ?? Build(point.Vapour, PhaseLabel.Vapour, false);
@@ -379,7 +401,7 @@ public sealed partial class PropertyModel
         }
 
         double tLow = FlashMinimumTemperature, tHigh = FlashMaximumTemperature;
-        if (pressure < pc && pressure >= BottomPressure)
+        if (Coexists(pressure))
         {
             var point = Solver.AtPressure(pressure);
             var liquid = Build(point.Liquid, PhaseLabel.Liquid, false);

@@ -27,6 +27,9 @@ public sealed partial class PropertyModel
     private readonly double _enthalpyOffset;
     private readonly double _entropyOffset;
 
+    /// <summary>Where the fluid's own data place the solid (every described state is checked against it).</summary>
+    private readonly Solids.SolidRegion _solid;
+
     /// <summary>The antiderivatives of cp° and cp°/T at T0 = 298.15 K, subtracted from every state.</summary>
     private readonly (double Enthalpy, double Entropy) _idealGasAnchor;
 
@@ -44,7 +47,8 @@ public sealed partial class PropertyModel
         Model = model;
         Reference = reference ?? ReferenceState.IdealGas;
         _heatCapacity = fluid.IdealGasHeatCapacity;
-        Solver = new CoexistenceSolver(model, CoexistenceSolver.LowestValidTemperature(fluid), options);
+        Solver = new CoexistenceSolver(model, fluid, options);
+        _solid = new Solids.SolidRegion(fluid, Solver);
         if (_heatCapacity is null)
         {
             if (!ReferenceEquals(Reference, ReferenceState.IdealGas) && Reference.Id != ReferenceState.IdealGas.Id)

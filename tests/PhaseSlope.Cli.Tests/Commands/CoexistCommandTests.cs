@@ -254,8 +254,10 @@ public class CoexistCommandTests
         // Psat changes by d ln P/dT · ΔT ≈ 0.08/K × 6e-14 K: far below 1e-12.
         Assert.True(Math.Abs(p / pLimit - 1) < 1e-12, $"{p} vs {pLimit}");
 
-        // The printed saturation pressure at the limit solves back to the limit.
-        var back = RunJson("coexist", "water", "--pressure", pLimit.ToString("R", System.Globalization.CultureInfo.InvariantCulture), "--format", "json");
-        Assert.True(Math.Abs(back.GetProperty("temperature_K").GetDouble() / 273.16 - 1) < 1e-12, back.ToString());
+        // The printed saturation pressure at the limit (Peng-Robinson's 486 Pa) is below the sourced
+        // triple-point pressure 611.657 Pa (IAPWS-95, from memory): at given pressure it is refused,
+        // since no liquid exists below the triple-point pressure whatever the model says.
+        var back = CliHarness.Run("coexist", "water", "--pressure", pLimit.ToString("R", System.Globalization.CultureInfo.InvariantCulture), "--format", "json");
+        CliHarness.AssertFailure(back, ExitCodes.OutOfRange, "no liquid exists below the triple-point pressure 611.657 Pa of water");
     }
 }

@@ -112,7 +112,7 @@ public sealed class InputGuardTests : IDisposable
         // Water's lowest valid temperature is its triple point, 273.16 K; 273.15999 K is below it
         // by 1e-5 K, which 7 digits cannot show ("273.16 K is below ... 273.16 K").
         var result = Run("curve", "water", "--from", "273.15999 K");
-        AssertFailure(result, 4, "273.15999 K is below the lowest valid temperature 273.16 K");
+        AssertFailure(result, 4, "273.15999 K is below the triple point 273.16 K of water");
     }
 
     [Fact]

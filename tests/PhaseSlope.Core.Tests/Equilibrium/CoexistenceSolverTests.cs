@@ -296,7 +296,13 @@ public class CoexistenceSolverTests
         var ex = Assert.Throws<InvalidInputException>(() => solver.AtTemperature(t));
 
         Assert.Equal("temperature", ex.Field);
-        Assert.Contains("lowest valid temperature", ex.Message, StringComparison.Ordinal);
+        // Water's lowest valid temperature is its triple point (273.16 K, IAPWS-95, from memory):
+        // the message names it and the solid.
+        Assert.Contains("below the triple point 273.16 K of water", ex.Message, StringComparison.Ordinal);
+        Assert.Contains("solid", ex.Message, StringComparison.Ordinal);
+        // A solver built from a model alone knows no triple point and names its lowest temperature.
+        var bare = new CoexistenceSolver(solver.Model, solver.MinimumTemperature);
+        Assert.Contains("lowest valid temperature", Assert.Throws<InvalidInputException>(() => bare.AtTemperature(t)).Message, StringComparison.Ordinal);
         // Exactly at the limit is valid.
         Assert.True(solver.TryAtTemperature(solver.MinimumTemperature, out var point));
         Assert.NotNull(point);
@@ -333,7 +339,8 @@ public class CoexistenceSolverTests
     [Fact]
     public void AtPressure_BelowSaturationPressureAtLowestTemperature_ThrowsNamingPressure()
     {
-        var solver = Solver("water");
+        // A solver built from the model alone (no fluid, so no triple-point pressure to refuse first).
+        var solver = new CoexistenceSolver(Solver("water").Model, Solver("water").MinimumTemperature);
         double bottom = solver.AtTemperature(solver.MinimumTemperature).Pressure;
 
         var ex = Assert.Throws<InvalidInputException>(() => solver.AtPressure(0.5 * bottom));
@@ -366,11 +373,13 @@ public class CoexistenceSolverTests
     }
 
     [Theory]
-    // The lowest valid temperature is the triple point when known and above 0.3·Tc.
+    // The lowest valid temperature is the triple point when known (not below 0.1·Tc), else 0.3·Tc.
     // Triple points: Wagner & Pruß (2002) for water, 273.16 K; Lemmon et al. (2009) for
-    // propane, 85.525 K < 0.3·369.89 K (catalog values, from memory).
+    // propane, 85.525 K, below 0.3·369.89 K, which was the floor before (catalog values, from memory).
+    // Helium-4 has no triple point (catalog file), so 0.3·Tc with McCarty & Arp's Tc 5.1953 K.
     [InlineData("water", 273.16)]
-    [InlineData("propane", 0.3 * 369.89)]
+    [InlineData("propane", 85.525)]
+    [InlineData("helium", 0.3 * 5.1953)]
     public void LowestValidTemperature_IsTriplePointOrThreeTenthsOfTc(string fluid, double expected)
     {
         AssertClose.Relative(expected, CoexistenceSolver.LowestValidTemperature(FluidCatalog.Embedded.Find(fluid)), 1e-15, fluid);

@@ -23,7 +23,7 @@ public class MessageAndEstimateGuardTests
         // Water's lowest valid temperature is its triple point, 273.16 K (catalog, IAPWS-95).
         var solver = CoexistenceSolver.For(FluidCatalog.Embedded.Find("water"), CubicModelKind.PengRobinson);
         var ex = Assert.Throws<InvalidInputException>(() => solver.AtTemperature(273.15999));
-        Assert.Contains("273.15999 K is below the lowest valid temperature 273.16 K", ex.Message, StringComparison.Ordinal);
+        Assert.Contains("273.15999 K is below the triple point 273.16 K", ex.Message, StringComparison.Ordinal);
     }
 
     [Theory]

@@ -2,6 +2,7 @@ using PhaseSlope.Core.Errors;
 using PhaseSlope.Core.Fluids;
 using PhaseSlope.Core.Models;
 using PhaseSlope.Core.Properties;
+using PhaseSlope.Core.Solids;
 using PhaseSlope.Core.Tests.TestSupport;
 using Xunit.Abstractions;
 
@@ -63,7 +64,19 @@ public sealed class FlashTests(ITestOutputHelper output)
 
                 var back = engine.Flash(a, va, b, vb);
                 AssertClose.Absolute(x, back.Quality ?? double.NaN, 1e-9, $"quality from ({a}, {b}) at x = {x}");
-                AssertClose.Relative(t, back.Temperature, 1e-10, $"T from ({a}, {b}) at x = {x}");
+                // T back to 1e-10 relative (the flash's promise), except where (h, s) fixes T poorly: at
+                // constant s on the dome dh = v·dPsat, so an h met to the flash's 1e-12 of max(|h|, RT)
+                // leaves T uncertain by that over v·dPsat/dT, which near the saturated liquid (small v)
+                // reaches 2e-10 of T (propane at 227.7 K, its mid-range since the range starts at the
+                // triple point); twice that bound is allowed there.
+                double tolerance = 1e-10;
+                if (a == StateProperty.Enthalpy)
+                {
+                    double scale = Math.Max(Math.Abs(state.Enthalpy!.Value), Constants.GasConstant * t);
+                    tolerance = Math.Max(tolerance, 2 * PropertyModel.FlashTolerance * scale / (t * state.MolarVolume * point.Point.Slope));
+                }
+
+                AssertClose.Relative(t, back.Temperature, tolerance, $"T from ({a}, {b}) at x = {x}");
             }
         }
     }
@@ -203,7 +216,8 @@ public sealed class CatalogFlashTests(ITestOutputHelper output)
         var engine = PropertyModel.For(FluidCatalog.Embedded.Find(name), CubicModelKind.PengRobinson);
         double tc = engine.Solver.CriticalTemperature, pc = engine.Solver.CriticalPressure;
         double tLow = engine.Solver.MinimumTemperature, tHigh = engine.FlashMaximumTemperature;
-        int count = 0;
+        var solid = new SolidRegion(engine.Fluid, engine.Solver);
+        int count = 0, skipped = 0;
         foreach (double f in new[] { 0.0, 0.2, 0.5, 0.8, 0.999, 1.001, 1.2 })
         {
             double t = f <= 1 ? tLow + f * (tc - tLow) : Math.Min(f * tc, tHigh);
@@ -216,6 +230,15 @@ public sealed class CatalogFlashTests(ITestOutputHelper output)
                 }
 
                 var s = engine.AtPressure(t, p);
+                if (solid.Refusal(t, p, s.Phase, s.Metastable) is not null)
+                {
+                    // The fluid's own data place this state in the solid (carbon dioxide or ethane at
+                    // the triple-point temperature above the triple-point pressure): the flash refuses it,
+                    // tested in SolidRegionTests.
+                    skipped++;
+                    continue;
+                }
+
                 Check(engine, t, p, null, s.Enthalpy!.Value, s.Entropy!.Value, $"{name} at {t:G6} K, {p:G6} Pa");
                 count++;
             }
@@ -234,7 +257,11 @@ public sealed class CatalogFlashTests(ITestOutputHelper output)
             }
         }
 
-        output.WriteLine($"{name}: {count} states, each flashed from (P, h) and (P, s)");
+        output.WriteLine($"{name}: {count} states, each flashed from (P, h) and (P, s); {skipped} in the solid region skipped");
+        // At most the six pressures at the triple-point temperature, all above Pt where Pt is below
+        // 0.001 Pc (ethane, 1.14 Pa): at T_t any pressure above P_t is solid for a fluid whose melting
+        // line rises (the cubic's liquid there is not what exists).
+        Assert.True(skipped <= 6, $"{skipped} states skipped");
     }
 
     private static void Check(PropertyModel engine, double t, double p, double? x, double h, double s, string what)

@@ -209,6 +209,6 @@ public class ReferenceStateTests
         var ex = Assert.Throws<InvalidInputException>(() => new PropertyModel(co2, CubicModel.For(CubicModelKind.PengRobinson, co2), ReferenceState.NormalBoilingPoint));
 
         Assert.Contains("reference state 'nbp'", ex.Message, StringComparison.Ordinal);
-        Assert.Contains("below the saturation pressure", ex.Message, StringComparison.Ordinal);
+        Assert.Contains("no liquid exists below the triple-point pressure 517950 Pa of carbon dioxide", ex.Message, StringComparison.Ordinal);
     }
 }

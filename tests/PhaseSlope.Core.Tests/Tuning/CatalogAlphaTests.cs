@@ -14,11 +14,14 @@ namespace PhaseSlope.Core.Tests.Tuning;
 public sealed class CatalogAlphaTests(ITestOutputHelper output)
 {
     /// <summary>The recipe written in the catalog files' source text: 50 temperatures evenly spaced
-    /// from the lowest valid temperature (triple point or 0.3 Tc) to 0.98 of the equation's Tc.</summary>
+    /// from the lowest valid temperature to 0.98 of the equation's Tc. The constants were derived when
+    /// the lowest valid temperature was the triple point or 0.3 Tc, whichever is higher; it is now the
+    /// triple point down to 0.1 Tc (<see cref="CoexistenceSolver.LowestValidTemperature"/>), which moves
+    /// it for propane and ethane, so the recipe keeps the range the files' constants were derived on.</summary>
     public static VapourPressurePoint[] EquationData(Fluid fluid)
     {
         var equation = fluid.VapourPressureEquation!;
-        double low = CoexistenceSolver.LowestValidTemperature(fluid);
+        double low = Math.Max(fluid.TriplePointTemperature?.Value ?? 0, CoexistenceSolver.UnknownTriplePointReducedTemperature * fluid.CriticalTemperature.Value);
         double high = 0.98 * Math.Min(equation.Form.CriticalTemperature, fluid.CriticalTemperature.Value);
         return [.. Enumerable.Range(0, 50).Select(i => low + (high - low) * i / 49).Select(t => new VapourPressurePoint(t, equation.Pressure(t)))];
     }
