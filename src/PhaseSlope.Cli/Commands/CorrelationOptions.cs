@@ -166,22 +166,30 @@ internal sealed class CorrelationOptions
                     : $"--form {candidate}: needs Tc and Pc: give --fluid, or --tc and --pc");
             }
 
-            forms.Add(candidate switch
-            {
-                "clausius-clapeyron" => new ClausiusClapeyronForm(),
-                "antoine" => new AntoineForm(),
-                "kirchhoff" => new KirchhoffForm(),
-                "riedel" => new RiedelForm(),
-                "wagner-3-6" => WagnerForm.ThreeSix(tc!.Value, pc!.Value),
-                "wagner-2.5-5" => WagnerForm.TwoHalfFive(tc!.Value, pc!.Value),
-                "wagner-6" => WagnerForm.SixTerm(tc!.Value, pc!.Value),
-                "lee-kesler" => CorrespondingStatesForm.LeeKesler(tc!.Value, pc!.Value, omega!.Value),
-                _ => CorrespondingStatesForm.AmbroseWalton(tc!.Value, pc!.Value, omega!.Value),
-            });
+            forms.Add(Create(candidate, tc, pc, omega));
         }
 
         return forms;
     }
+
+    /// <summary>The candidates of <c>--form auto</c> for a fluid (its Tc and Pc admit the Wagner
+    /// forms; the predictive forms have nothing to fit), as <see cref="Forms"/> chooses them.</summary>
+    public static IReadOnlyList<VapourPressureForm> AutoForms(Fluid fluid)
+        => [.. FormIds.Where(id => id is not ("lee-kesler" or "ambrose-walton"))
+            .Select(id => Create(id, fluid.CriticalTemperature.Value, fluid.CriticalPressure.Value, fluid.AcentricFactor.Value))];
+
+    private static VapourPressureForm Create(string id, double? tc, double? pc, double? omega) => id switch
+    {
+        "clausius-clapeyron" => new ClausiusClapeyronForm(),
+        "antoine" => new AntoineForm(),
+        "kirchhoff" => new KirchhoffForm(),
+        "riedel" => new RiedelForm(),
+        "wagner-3-6" => WagnerForm.ThreeSix(tc!.Value, pc!.Value),
+        "wagner-2.5-5" => WagnerForm.TwoHalfFive(tc!.Value, pc!.Value),
+        "wagner-6" => WagnerForm.SixTerm(tc!.Value, pc!.Value),
+        "lee-kesler" => CorrespondingStatesForm.LeeKesler(tc!.Value, pc!.Value, omega!.Value),
+        _ => CorrespondingStatesForm.AmbroseWalton(tc!.Value, pc!.Value, omega!.Value),
+    };
 
     /// <summary>Fits the named form, or every candidate for auto (best first).</summary>
     public static IReadOnlyList<VapourPressureFit> Fit(IReadOnlyList<VapourPressureForm> forms, bool auto, IReadOnlyList<VapourPressurePoint> data)
