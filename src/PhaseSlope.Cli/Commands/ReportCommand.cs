@@ -42,7 +42,7 @@ internal static class ReportCommand
 /// <see cref="ReportOptions.DefaultRows"/> rows.</param>
 /// <param name="Data">The measured vapour pressures, or null.</param>
 /// <param name="DataPath">The data file as given, or null.</param>
-/// <param name="Command">The command line, shown in the report.</param>
+/// <param name="Command">The command line without --out, shown in the report.</param>
 internal sealed record ReportRequest(string Path, Fluid? Fluid, MixtureInput? Mixture, ModelChoice Model, UnitSystem Units, double? Step,
     IReadOnlyList<VapourPressurePoint>? Data, string? DataPath, string Command);
 
@@ -96,6 +96,32 @@ internal sealed class ReportOptions
         command.Options.Add(Common.Units);
     }
 
+    /// <summary>The command line as typed, without --out and its file (where the page is written
+    /// is not part of what it shows).</summary>
+    private static string CommandLine(ParseResult parse)
+    {
+        var words = new List<string>();
+        var tokens = parse.Tokens;
+        for (int i = 0; i < tokens.Count; i++)
+        {
+            if (tokens[i].Value is "--out" or "-o")
+            {
+                i++;
+                continue;
+            }
+
+            if (tokens[i].Value.StartsWith("--out=", StringComparison.Ordinal) || tokens[i].Value.StartsWith("-o=", StringComparison.Ordinal))
+            {
+                continue;
+            }
+
+            string value = tokens[i].Value;
+            words.Add(value.Contains(' ', StringComparison.Ordinal) ? $"\"{value}\"" : value);
+        }
+
+        return "phaseslope " + string.Join(' ', words);
+    }
+
     /// <summary>Whether the argument names a mixture: a mixture file, or NAME=FRACTION,... (an
     /// inline fluid also has '=' but starts with its own prefix).</summary>
     public static bool IsMixture(string argument)
@@ -133,7 +159,7 @@ internal sealed class ReportOptions
 
         string? stepText = parse.GetValue(Step);
         double? step = stepText is null ? null : QuantityParser.ParseTemperatureDifference(stepText, "--step");
-        string command = "phaseslope " + string.Join(' ', parse.Tokens.Select(t => t.Value.Contains(' ', StringComparison.Ordinal) ? $"\"{t.Value}\"" : t.Value));
+        string command = CommandLine(parse);
         if (mixture)
         {
             if (dataPath is not null)
