@@ -253,7 +253,7 @@ public class BadInputCatalogueTests
         { ["report", "propane", "--eos", "xyz"], ExitCodes.Usage, "--eos: unknown model 'xyz'" },
         { ["report", "propane", "--units", "metric"], ExitCodes.Usage, "--units: unknown unit system 'metric'" },
         { ["report", "propane", "--temperature-unit", "K"], ExitCodes.Usage, "--temperature-unit: is the unit of a --data column; give --data too" },
-        { ["report", "propane", "--data", "{dir}/falling.csv"], ExitCodes.DataFile, "falling.csv" },
+        { ["report", "propane", "--data", "{dir}/falling.csv"], ExitCodes.OutOfRange, "the vapour pressure falls with temperature, from 1802700 Pa" },
         { ["report", "propane", "--data", "{dir}/no-such.csv"], ExitCodes.DataFile, "no-such.csv: data file not found" },
         { ["report", "methane=0.5,ethane=0.5", "--data", "{dir}/ok.csv"], ExitCodes.Usage, "--data: measured vapour pressures belong to a pure fluid" },
         { ["report", "methane=0.5,ethane=0.5", "--step", "10"], ExitCodes.Usage, "--step: the saturation table is a pure fluid's" },

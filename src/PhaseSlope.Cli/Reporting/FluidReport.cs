@@ -72,7 +72,15 @@ internal static class FluidReport
         {
             section.Caution("This fluid is invented for the examples; its numbers describe no real substance.");
         }
+        else
+        {
+            section.Caution(HazardCaution);
+        }
     }
+
+    /// <summary>Beside a real fluid's identity: the tool knows no hazard class of its own.</summary>
+    internal const string HazardCaution = "The fluid files carry no flammability or toxicity class: take them from the supplier's safety data sheet, "
+        + "and follow local codes and licensed engineering practice for equipment, charge limits and relief.";
 
     private static bool IsInvented(Fluid fluid)
         => (fluid.Remarks ?? "").Contains("invented", StringComparison.OrdinalIgnoreCase) || (fluid.Family ?? "").Contains("fictional", StringComparison.OrdinalIgnoreCase);

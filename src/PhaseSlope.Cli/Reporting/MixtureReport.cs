@@ -38,6 +38,7 @@ internal static class MixtureReport
             components.Table(table, $"Constants of {fluid.Name} with their standard uncertainties and sources ({fluid.Origin})");
         }
 
+        components.Caution(FluidReport.HazardCaution);
         if (input.Mixture.Components.Any(c => FluidWriter.ConstantsTable(c, request.Units).Rows.Any(r => r[^1].Contains(HtmlReport.FromMemory, StringComparison.OrdinalIgnoreCase))))
         {
             components.Note("Values whose source says 'from memory' were recalled rather than read from the publication named; check them against it before relying on them.");
