@@ -24,7 +24,7 @@ internal static class ReportCommand
         {
             var request = options.Bind(parse);
             // Built in memory first: a failure never touches the output file.
-            string html = request.Mixture is { } mixture ? MixtureReport.Build(mixture, request) : FluidReport.Build(request);
+            string html = request.Mixture is { } mixture ? MixtureReport.Build(mixture, request) : FluidReport.Build(request, io);
             AtomicFile.WriteAllText(request.Path, html);
             io.Note($"wrote the report to {request.Path}");
         }));

@@ -24,8 +24,8 @@ internal static class FluidReport
     /// <summary>Figure size in pixels (the SVG scales to the page).</summary>
     private const int FigureWidth = 900, FigureHeight = 600;
 
-    /// <summary>Builds the page.</summary>
-    public static string Build(ReportRequest request)
+    /// <summary>Builds the page (<paramref name="io"/> for progress messages only).</summary>
+    public static string Build(ReportRequest request, CliIo io)
     {
         var fluid = request.Fluid ?? throw new ArgumentException("a pure-fluid report needs a fluid", nameof(request));
         var model = request.Model.For(fluid);
@@ -38,7 +38,7 @@ internal static class FluidReport
 
         Constants(report, fluid, request.Units);
         ModelSection(report, fluid, model, context, request);
-        var rows = Saturation(report, fluid, context, plotFluid, request);
+        var rows = Saturation(report, fluid, context, plotFluid, request, io);
         LatentAndSlope(report, rows, plotFluid, request);
         VapourLineSection(report, context, request.Units);
         Figures(report, fluid, plotFluid, request);
@@ -179,7 +179,10 @@ internal static class FluidReport
         section.Caution(TuneWriter.Caution);
     }
 
-    private static IReadOnlyList<CoexistenceRow> Saturation(HtmlReport report, Fluid fluid, CoexistenceContext context, PlotFluid plotFluid, ReportRequest request)
+    private static IEnumerable<string> Lines(System.Text.StringBuilder text)
+        => text.ToString().Split('\n', StringSplitOptions.TrimEntries | StringSplitOptions.RemoveEmptyEntries);
+
+    private static IReadOnlyList<CoexistenceRow> Saturation(HtmlReport report, Fluid fluid, CoexistenceContext context, PlotFluid plotFluid, ReportRequest request, CliIo io)
     {
         var solver = context.Solver;
         double tc = solver.CriticalTemperature;
@@ -197,12 +200,25 @@ internal static class FluidReport
         double first = Math.Ceiling(low / step * (1 - 1e-12)) * step;
         double start = Math.Max(scale.ToSi(first), solver.MinimumTemperature);
         var temperatures = CurveCommand.Stepped(start, tc, step);
-        var rows = CoexistenceCurve.Through(solver, temperatures).Select(context.Row).ToArray();
+        var points = CoexistenceCurve.Through(solver, temperatures);
+        // Standard uncertainties from Tc, Pc and omega (and a tuned alpha's covariance), as
+        // 'curve --uncertainty linear' propagates them.
+        var choice = new UncertaintyChoice(PropagationMethod.Linear, UncertaintyOptions.DefaultSamples, UncertaintyOptions.DefaultSeed);
+        var parameters = UncertaintyRun.Parameters(request.Model, fluid);
+        var values = UncertaintyRun.AtTemperatures(io, choice, parameters, points);
+        var summary = UncertaintyRun.Summary(choice, parameters);
+        var rows = points.Select((p, i) => context.Row(p) with { Uncertainty = values[i] }).ToArray();
 
         var section = report.Section("saturation", "Saturation table");
         section.Paragraph($"{rows.Length} states from {NumberText.Table(scale.FromSi(temperatures[0]))} {unit} in steps of {NumberText.Table(step)} K; the last one the critical point of the model. "
             + CoexistenceWriter.ReferenceLine(rows, context.Reference));
-        section.Table(CoexistenceWriter.CurveTableOf(rows, fluid, request.Units), $"Saturation table of {plotFluid.Name}, {ModelText.Describe(solver.Model)} (as 'curve' prints it)");
+        var inputs = new System.Text.StringBuilder();
+        UncertaintyText.DescribeInputs(inputs, summary);
+        section.Facts(Lines(inputs));
+        section.Table(CoexistenceWriter.CurveTableOf(rows, fluid, request.Units, summary), $"Saturation table of {plotFluid.Name}, {ModelText.Describe(solver.Model)} (as 'curve --uncertainty linear' prints it)");
+        var reasons = new System.Text.StringBuilder();
+        UncertaintyText.DescribeReasons(reasons, rows.Select(r => r.Uncertainty));
+        section.Facts(Lines(reasons));
         section.Caution(CoexistenceWriter.Caution);
         return rows;
     }

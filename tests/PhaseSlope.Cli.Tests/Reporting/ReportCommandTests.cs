@@ -76,9 +76,10 @@ public sealed class ReportCommandTests : IDisposable
         // The same states through 'curve' (the temperatures as the table shows them, 6 digits, are
         // not the exact ones, so curve is run at the report's own first and step and compared cell by cell).
         string first = rows[0][0];
-        string curve = RunText("curve", "propane", "--units", "engineering", "--from", $"{first} degC", "--step", "10");
+        string curve = RunText("curve", "propane", "--units", "engineering", "--from", $"{first} degC", "--step", "10", "--uncertainty", "linear");
         var curveRows = curve.Split('\n').SkipWhile(l => !l.StartsWith("---", StringComparison.Ordinal)).Skip(1)
             .TakeWhile(l => l.Trim().Length > 0).Select(l => l.Split(' ', StringSplitOptions.RemoveEmptyEntries)).ToList();
+        Assert.Equal(14, curveRows[0].Length); // ten values and four standard uncertainties
         Assert.Equal(curveRows.Count, rows.Count);
         for (int i = 0; i < rows.Count; i++)
         {
@@ -120,6 +121,28 @@ public sealed class ReportCommandTests : IDisposable
         Assert.Equal(audit.Stdout.TrimEnd(), ReportHtml.PreformattedText(ReportHtml.Section(html, "audit")));
         // residuals, latent with the data band, and the data on p-T.
         Assert.Equal(3, CountOf(ReportHtml.Section(html, "fit") + ReportHtml.Section(html, "latent-data") + data, "<svg "));
+    }
+
+    [Fact]
+    public void TunedFluid_ShowsItsTuningStatisticsAndParameterErrors()
+    {
+        string tuned = _folder.File("tuned.fluid");
+        var tune = Run("tune", FitData.ExampleCsv, "--fluid", FitData.ExampleFluid, "--alpha", "mathias-copeman", "--out", tuned);
+        Assert.True(tune.ExitCode == 0, tune.ToString());
+        string model = ReportHtml.Section(Report(tuned), "model");
+        var fluid = FluidResolver.Resolve(tuned);
+        Assert.Contains(WebUtility.HtmlEncode($"provenance: {fluid.Provenance}"), model, StringComparison.Ordinal);
+        Assert.Contains("AAD of P", model, StringComparison.Ordinal);
+        // The standard errors are the square roots of the covariance's diagonal the file carries.
+        var set = fluid.AlphaParameters.Single(a => a.Covariance is not null);
+        var rows = ReportHtml.FirstTableRows(model[model.IndexOf("<h3>Tuning</h3>", StringComparison.Ordinal)..]);
+        Assert.Equal(3, rows.Count);
+        for (int i = 0; i < 3; i++)
+        {
+            Assert.Equal(PhaseSlope.Cli.Output.NumberText.Uncertainty(Math.Sqrt(set.Covariance![i, i])), rows[i][2]);
+        }
+
+        Assert.Contains("a model tuned to vapour pressures is checked only where the data are", model, StringComparison.Ordinal);
     }
 
     [Fact]
