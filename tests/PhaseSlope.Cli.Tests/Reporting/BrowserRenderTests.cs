@@ -136,6 +136,25 @@ public sealed class BrowserRenderTests : IClassFixture<BrowserRenderTests.Report
         Assert.Contains("<svg", dom, StringComparison.Ordinal);
     }
 
+    [Theory]
+    [InlineData("propane", false)]
+    [InlineData("propane", true)]
+    public void Print_GivesAPdfOfSeveralPages(string report, bool dark)
+    {
+        string pdf = _reports.Folder.File($"{report}-{(dark ? "dark" : "light")}.pdf");
+        var (code, log) = HeadlessChromium.PrintToPdf(_reports.Path(report), pdf, dark);
+        Assert.True(code == 0, $"chromium exit {code}: {log}");
+        Assert.Empty(HeadlessChromium.PageErrors(log));
+        string text = System.Text.Encoding.Latin1.GetString(File.ReadAllBytes(pdf));
+        Assert.StartsWith("%PDF-", text, StringComparison.Ordinal);
+        // Page objects: the propane page (constants, model, a 20-row table, five figures of
+        // 900 x 600 scaled to the text width) fills several A4/Letter pages; a print style sheet
+        // that hid the content would leave one. Measured: 7 pages, light and dark.
+        int pages = System.Text.RegularExpressions.Regex.Matches(text, @"/Type\s*/Page\b").Count;
+        _output.WriteLine($"{report} {(dark ? "dark" : "light")} print: {pages} pages");
+        Assert.True(pages >= 4, $"{pages} pages");
+    }
+
     [Fact]
     public void PageErrors_FindsAConsoleMessage()
     {

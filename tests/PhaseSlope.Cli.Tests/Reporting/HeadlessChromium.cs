@@ -67,6 +67,22 @@ internal static class HeadlessChromium
         return (code, output + error);
     }
 
+    /// <summary>Prints <paramref name="html"/> to <paramref name="pdf"/> (the print style sheet applies),
+    /// in the dark colour scheme when <paramref name="dark"/>.</summary>
+    public static (int ExitCode, string Log) PrintToPdf(string html, string pdf, bool dark)
+    {
+        using var profile = new TempFolder();
+        List<string> arguments = [.. Common(profile.Path), "--enable-logging=stderr", "--v=0", "--no-pdf-header-footer", $"--print-to-pdf={pdf}"];
+        if (dark)
+        {
+            arguments.Add("--force-dark-mode");
+        }
+
+        arguments.Add(new Uri(html).AbsoluteUri);
+        var (code, output, error) = Run(Path, arguments, RenderTimeout);
+        return (code, output + error);
+    }
+
     /// <summary>The DOM of <paramref name="html"/> as the browser built it (--dump-dom).</summary>
     public static (int ExitCode, string Dom, string Log) DumpDom(string html)
     {

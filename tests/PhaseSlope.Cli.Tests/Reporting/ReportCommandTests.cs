@@ -190,6 +190,10 @@ public sealed class ReportCommandTests : IDisposable
         => Assert.Empty(ReportHtml.ExternalReferences($"<!DOCTYPE html><html><body>{markup}</body></html>"));
 
     [Fact]
+    public void MissingOut_IsAUsageError()
+        => AssertFailure(Run("report", "propane"), ExitCodes.Usage, "--out");
+
+    [Fact]
     public void FailedReport_LeavesAnExistingFileAsItWas()
     {
         string path = _folder.File("kept.html");
