@@ -72,7 +72,11 @@ internal sealed class CorrelationOptions
     /// <summary>Reads and converts a data file of measured vapour pressures (also used by <c>plot --data</c>).</summary>
     /// <exception cref="DataFileException">The file is missing, unreadable or invalid.</exception>
     public static IReadOnlyList<VapourPressurePoint> ReadDataFile(string path, string? temperatureUnit, string? pressureUnit, int minimumRows = VapourPressureCsv.MinimumRows)
-        => [.. ReadDataRecords(path, temperatureUnit, pressureUnit, minimumRows).Select(r => new VapourPressurePoint(r.Temperature, r.Pressure, r.StandardUncertainty, r.Weight))];
+        => Points(ReadDataRecords(path, temperatureUnit, pressureUnit, minimumRows));
+
+    /// <summary>The measured points of a data file's rows.</summary>
+    public static IReadOnlyList<VapourPressurePoint> Points(IEnumerable<VapourPressureRecord> records)
+        => [.. records.Select(r => new VapourPressurePoint(r.Temperature, r.Pressure, r.StandardUncertainty, r.Weight))];
 
     /// <summary>Reads a data file's rows as written (with any liquid densities, which only
     /// <c>tune</c> uses).</summary>

@@ -1,4 +1,5 @@
 using System.CommandLine;
+using PhaseSlope.Cli.Input;
 using PhaseSlope.Cli.Output;
 using PhaseSlope.Cli.Reporting;
 using PhaseSlope.Cli.Units;
@@ -43,8 +44,9 @@ internal static class ReportCommand
 /// <param name="Data">The measured vapour pressures, or null.</param>
 /// <param name="DataPath">The data file as given, or null.</param>
 /// <param name="Command">The command line without --out, shown in the report.</param>
+/// <param name="DataDescription">The data file's leading '#' lines (its own description), or empty.</param>
 internal sealed record ReportRequest(string Path, Fluid? Fluid, MixtureInput? Mixture, ModelChoice Model, UnitSystem Units, double? Step,
-    IReadOnlyList<VapourPressurePoint>? Data, string? DataPath, string Command);
+    IReadOnlyList<VapourPressurePoint>? Data, string? DataPath, string Command, IReadOnlyList<string> DataDescription);
 
 /// <summary>The options of <c>report</c>, bound to a <see cref="ReportRequest"/>.</summary>
 internal sealed class ReportOptions
@@ -52,6 +54,9 @@ internal sealed class ReportOptions
     /// <summary>Rows of the saturation table when no --step is given (the step is the 1-2-5 value
     /// at or above a fifteenth of the range).</summary>
     public const int DefaultRows = 20;
+
+    /// <summary>Most leading comment lines of a data file shown as its description.</summary>
+    public const int MaximumDescriptionLines = 40;
 
     /// <summary>--eos, --alpha, --volume-shift, --units.</summary>
     public CommonOptions Common { get; } = new();
@@ -180,19 +185,29 @@ internal sealed class ReportOptions
             var resolved = MixtureResolver.Resolve(subject, massFractions: false, kij: []);
             var input = new MixtureInput(resolved.Mixture, resolved.Name, resolved.Origin, model, resolved.Remarks);
             new OutputChoice(OutputFormat.Table, units).RequireMolarMassFor(input.Mixture);
-            return new ReportRequest(path, null, input, model, units, null, null, null, command);
+            return new ReportRequest(path, null, input, model, units, null, null, null, command, []);
         }
 
         var fluid = FluidResolver.Resolve(subject);
         _ = model.For(fluid); // a model the fluid cannot take (constants missing for --alpha) is refused before any work
         new OutputChoice(OutputFormat.Table, units).RequireMolarMassFor(fluid);
         IReadOnlyList<VapourPressurePoint>? data = null;
+        IReadOnlyList<string> description = [];
         if (dataPath is not null)
         {
-            data = CorrelationOptions.ReadDataFile(dataPath, temperatureUnit, pressureUnit);
+            // One opening of the file (it may be a pipe): its text, within the data-file limit, is
+            // parsed as fit parses it, and its leading '#' lines are the data's own description.
+            string text = BoundedInput.ReadDataFile(dataPath, reader => reader.ReadToEnd());
+            var options = new VapourPressureCsvOptions(temperatureUnit, pressureUnit, VapourPressureCsv.MinimumRows);
+            using (var reader = new StringReader(text))
+            {
+                data = CorrelationOptions.Points(VapourPressureCsv.Read(reader, dataPath, options));
+            }
+
+            description = [.. text.Split('\n').Select(l => l.TrimEnd('\r')).TakeWhile(l => l.TrimStart().StartsWith('#')).Take(MaximumDescriptionLines)];
             VapourPressureFitter.RequireBelowCriticalPoint(data, fluid.CriticalTemperature.Value, fluid.CriticalPressure.Value);
         }
 
-        return new ReportRequest(path, fluid, null, model, units, step, data, dataPath, command);
+        return new ReportRequest(path, fluid, null, model, units, step, data, dataPath, command, description);
     }
 }

@@ -280,8 +280,8 @@ internal static class FluidReport
         var section = report.Section("data", "Measured vapour pressures");
         string path = request.DataPath!;
         section.Paragraph($"{data.Count} points from {Path.GetFileName(path)}, {NumberText.Table(data.Min(p => p.Temperature))} K to {NumberText.Table(data.Max(p => p.Temperature))} K.");
-        var comments = File.ReadLines(path).Take(40).TakeWhile(l => l.TrimStart().StartsWith('#')).ToArray();
-        if (comments.Length > 0)
+        var comments = request.DataDescription;
+        if (comments.Count > 0)
         {
             section.Subheading("The data file's own description");
             section.Preformatted(string.Join('\n', comments));

@@ -159,6 +159,36 @@ public sealed class ReportCommandTests : IDisposable
         Assert.Contains("<mark class=\"memory\">from memory</mark>", ReportHtml.Section(html, "components"), StringComparison.Ordinal);
     }
 
+    /// <summary>The invented natural gas of docs/mixture-files.md (its composition is invented; its
+    /// two k_ij name their publication, recalled).</summary>
+    internal const string NaturalGasA = """
+        # Natural gas A: an invented composition for this example.
+        format      phaseslope-mixture 1
+        name        natural gas A (invented)
+        basis       mole
+        component   methane = 0.85
+        component   ethane = 0.05
+        component   carbon dioxide = 0.07
+        component   nitrogen = 0.03
+        kij         methane, carbon dioxide = 0.0919 | Knapp, Döring, Oellrich, Plöcker & Prausnitz, DECHEMA Chemistry Data Series Vol. VI (1982), Peng-Robinson; from memory
+        kij         ethane, nitrogen = 0.0515         | Knapp et al., DECHEMA Chemistry Data Series Vol. VI (1982), Peng-Robinson; from memory
+        remarks     composition invented for the documentation
+
+        """;
+
+    [Fact]
+    public void MixtureFile_ShowsItsInteractionSourcesMarkedAndItsInventedLabel()
+    {
+        string file = _folder.File("natural-gas-a.mixture");
+        File.WriteAllText(file, NaturalGasA);
+        string html = Report(file);
+        string mixture = ReportHtml.Section(html, "mixture");
+        Assert.Contains("methane, carbon dioxide   0.0919  given         Knapp, D&#246;ring, Oellrich, Pl&#246;cker &amp; Prausnitz, DECHEMA Chemistry Data Series Vol. VI (1982), Peng-Robinson; <mark class=\"memory\">from memory</mark>",
+            mixture, StringComparison.Ordinal);
+        Assert.Contains("This composition is invented", mixture, StringComparison.Ordinal);
+        Assert.Equal(RunText("envelope", file).TrimEnd(), ReportHtml.PreformattedText(ReportHtml.Section(html, "envelope")));
+    }
+
     [Fact]
     public void Text_IsEscaped_AMarkupLikeRemarkStaysText()
     {
