@@ -196,7 +196,13 @@ public sealed class ReportCommandTests : IDisposable
         string text = File.ReadAllText(FitData.ExampleFluid).Replace("remarks                   Invented", "remarks                   <script>x</script> & <img src=http://example.invalid/a.png> Invented", StringComparison.Ordinal);
         Assert.Contains("<script>", text, StringComparison.Ordinal);
         File.WriteAllText(fluid, text);
-        string html = Report(fluid);
+        // A data file name with markup characters: it appears in the text and in the figures'
+        // legends (the SVG writer escapes it there).
+        string data = _folder.File("x<b>&y.csv");
+        File.Copy(FitData.ExampleCsv, data);
+        string html = Report(fluid, "--data", data);
+        Assert.DoesNotContain("<b>", html, StringComparison.Ordinal);
+        Assert.Contains("x&lt;b&gt;&amp;y.csv", ReportHtml.Section(html, "data"), StringComparison.Ordinal);
         Assert.DoesNotContain("<script", html, StringComparison.OrdinalIgnoreCase);
         Assert.Contains("&lt;script&gt;x&lt;/script&gt; &amp; &lt;img src=http://example.invalid/a.png&gt;", html, StringComparison.Ordinal);
         Assert.Empty(ReportHtml.ExternalReferences(html));
