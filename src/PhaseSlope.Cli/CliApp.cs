@@ -52,6 +52,7 @@ internal static class CliApp
         root.Subcommands.Add(SaturationCommand.Create(io, Core.Mixtures.MixtureSaturationKind.Bubble));
         root.Subcommands.Add(SaturationCommand.Create(io, Core.Mixtures.MixtureSaturationKind.Dew));
         root.Subcommands.Add(FlashCommand.Create(io));
+        root.Subcommands.Add(ReportCommand.Create(io));
         return root;
     }
 }

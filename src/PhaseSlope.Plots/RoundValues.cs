@@ -7,7 +7,7 @@ namespace PhaseSlope.Plots;
 /// multiples inside the range. On a logarithmic quantity the values are 1, 2 and 5 times the
 /// powers of ten inside the range (thinned to 1 and 3, then to 1 per decade, when there would be too
 /// many).</remarks>
-internal static class RoundValues
+public static class RoundValues
 {
     private static readonly double[] Mantissas = [1, 2, 5];
 

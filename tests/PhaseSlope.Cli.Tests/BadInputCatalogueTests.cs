@@ -289,6 +289,19 @@ public class BadInputCatalogueTests
         { ["flash", "methane=0.2,propane=0.8", "-T", "250", "-P", "1MPa", "--format", "json", "--units", "engineering"], ExitCodes.Usage, "--units: applies to tables and CSV only; json output is alwa" },
         { ["bubble", "methane=0.5,{dir}/nomass.fluid=0.5", "-T", "250", "--units", "engineering"], ExitCodes.Fluid, "field 'molar_mass': fluid 'nomass' gives no molar mass, whic" },
         { ["flash", "methane=0.5,{dir}/nomass.fluid=0.5", "-T", "250", "-P", "1MPa", "--format", "csv", "--units", "engineering"], ExitCodes.Fluid, "field 'molar_mass': fluid 'nomass' gives no molar mass, whic" },
+        // report (its --out is the HTML file; each case refuses before anything is written).
+        { ["report", "no-such-fluid"], ExitCodes.Fluid, "no-such-fluid" },
+        { ["report", "propane", "--step", "0"], ExitCodes.Usage, "--step:" },
+        { ["report", "propane", "--step", "500 K"], ExitCodes.Usage, "--step: 500 K is not below the range" },
+        { ["report", "propane", "--eos", "xyz"], ExitCodes.Usage, "--eos: unknown model 'xyz'" },
+        { ["report", "propane", "--units", "metric"], ExitCodes.Usage, "--units: unknown unit system 'metric'" },
+        { ["report", "propane", "--temperature-unit", "K"], ExitCodes.Usage, "--temperature-unit: is the unit of a --data column; give --data too" },
+        { ["report", "propane", "--data", "{dir}/falling.csv"], ExitCodes.OutOfRange, "the vapour pressure falls with temperature, from 1802700 Pa" },
+        { ["report", "propane", "--data", "{dir}/no-such.csv"], ExitCodes.DataFile, "no-such.csv: data file not found" },
+        { ["report", "methane=0.5,ethane=0.5", "--data", "{dir}/ok.csv"], ExitCodes.Usage, "--data: measured vapour pressures belong to a pure fluid" },
+        { ["report", "methane=0.5,ethane=0.5", "--step", "10"], ExitCodes.Usage, "--step: the saturation table is a pure fluid's" },
+        { ["report", "{dir}/nomass.fluid", "--units", "engineering"], ExitCodes.Fluid, "field 'molar_mass': fluid 'nomass' gives no molar mass" },
+        { ["report", "{dir}/sum.mixture"], ExitCodes.Fluid, "sum.mixture:3: field 'component': the mole fractions" },
     };
 
     [Theory]
@@ -297,7 +310,7 @@ public class BadInputCatalogueTests
     {
         using var folder = new TempFolder();
         WriteFixtures(folder);
-        string output = folder.File(args[0] == "plot" ? "out.png" : "out.txt");
+        string output = folder.File(args[0] switch { "plot" => "out.png", "report" => "out.html", _ => "out.txt" });
         const string sentinel = "sentinel: a failed run must leave this file as it was\n";
         File.WriteAllText(output, sentinel);
         string[] before = folder.Entries();

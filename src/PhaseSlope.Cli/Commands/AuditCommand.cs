@@ -107,7 +107,8 @@ internal static class AuditCommand
 
     private static string Severity(AuditSeverity s) => s switch { AuditSeverity.Pass => "pass", AuditSeverity.Warn => "warn", _ => "fail" };
 
-    private static string Table(AuditReport report)
+    /// <summary>The audit report as the table output prints it (the HTML report shows the same text).</summary>
+    internal static string Table(AuditReport report)
     {
         var text = new StringBuilder();
         text.AppendLine(report.Convention is null

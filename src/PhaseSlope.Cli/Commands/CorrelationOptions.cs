@@ -72,7 +72,11 @@ internal sealed class CorrelationOptions
     /// <summary>Reads and converts a data file of measured vapour pressures (also used by <c>plot --data</c>).</summary>
     /// <exception cref="DataFileException">The file is missing, unreadable or invalid.</exception>
     public static IReadOnlyList<VapourPressurePoint> ReadDataFile(string path, string? temperatureUnit, string? pressureUnit, int minimumRows = VapourPressureCsv.MinimumRows)
-        => [.. ReadDataRecords(path, temperatureUnit, pressureUnit, minimumRows).Select(r => new VapourPressurePoint(r.Temperature, r.Pressure, r.StandardUncertainty, r.Weight))];
+        => Points(ReadDataRecords(path, temperatureUnit, pressureUnit, minimumRows));
+
+    /// <summary>The measured points of a data file's rows.</summary>
+    public static IReadOnlyList<VapourPressurePoint> Points(IEnumerable<VapourPressureRecord> records)
+        => [.. records.Select(r => new VapourPressurePoint(r.Temperature, r.Pressure, r.StandardUncertainty, r.Weight))];
 
     /// <summary>Reads a data file's rows as written (with any liquid densities, which only
     /// <c>tune</c> uses).</summary>
@@ -166,22 +170,30 @@ internal sealed class CorrelationOptions
                     : $"--form {candidate}: needs Tc and Pc: give --fluid, or --tc and --pc");
             }
 
-            forms.Add(candidate switch
-            {
-                "clausius-clapeyron" => new ClausiusClapeyronForm(),
-                "antoine" => new AntoineForm(),
-                "kirchhoff" => new KirchhoffForm(),
-                "riedel" => new RiedelForm(),
-                "wagner-3-6" => WagnerForm.ThreeSix(tc!.Value, pc!.Value),
-                "wagner-2.5-5" => WagnerForm.TwoHalfFive(tc!.Value, pc!.Value),
-                "wagner-6" => WagnerForm.SixTerm(tc!.Value, pc!.Value),
-                "lee-kesler" => CorrespondingStatesForm.LeeKesler(tc!.Value, pc!.Value, omega!.Value),
-                _ => CorrespondingStatesForm.AmbroseWalton(tc!.Value, pc!.Value, omega!.Value),
-            });
+            forms.Add(Create(candidate, tc, pc, omega));
         }
 
         return forms;
     }
+
+    /// <summary>The candidates of <c>--form auto</c> for a fluid (its Tc and Pc admit the Wagner
+    /// forms; the predictive forms have nothing to fit), as <see cref="Forms"/> chooses them.</summary>
+    public static IReadOnlyList<VapourPressureForm> AutoForms(Fluid fluid)
+        => [.. FormIds.Where(id => id is not ("lee-kesler" or "ambrose-walton"))
+            .Select(id => Create(id, fluid.CriticalTemperature.Value, fluid.CriticalPressure.Value, fluid.AcentricFactor.Value))];
+
+    private static VapourPressureForm Create(string id, double? tc, double? pc, double? omega) => id switch
+    {
+        "clausius-clapeyron" => new ClausiusClapeyronForm(),
+        "antoine" => new AntoineForm(),
+        "kirchhoff" => new KirchhoffForm(),
+        "riedel" => new RiedelForm(),
+        "wagner-3-6" => WagnerForm.ThreeSix(tc!.Value, pc!.Value),
+        "wagner-2.5-5" => WagnerForm.TwoHalfFive(tc!.Value, pc!.Value),
+        "wagner-6" => WagnerForm.SixTerm(tc!.Value, pc!.Value),
+        "lee-kesler" => CorrespondingStatesForm.LeeKesler(tc!.Value, pc!.Value, omega!.Value),
+        _ => CorrespondingStatesForm.AmbroseWalton(tc!.Value, pc!.Value, omega!.Value),
+    };
 
     /// <summary>Fits the named form, or every candidate for auto (best first).</summary>
     public static IReadOnlyList<VapourPressureFit> Fit(IReadOnlyList<VapourPressureForm> forms, bool auto, IReadOnlyList<VapourPressurePoint> data)

@@ -45,7 +45,7 @@ internal static class LatentCommand
 
     /// <summary>The band: the estimator rebuilt for a moved Tc or Pc refits the same form with
     /// them and, for the eos volume model, solves the fluid's model with them.</summary>
-    private static (LatentHeatBand Band, IReadOnlyList<UncertainInput> Inputs) Band(LatentRequest request, LatentHeatEstimator nominal)
+    internal static (LatentHeatBand Band, IReadOnlyList<UncertainInput> Inputs) Band(LatentRequest request, LatentHeatEstimator nominal)
     {
         if (request.CriticalTemperature is not double tc || request.CriticalPressure is not double pc)
         {

@@ -144,26 +144,7 @@ internal static class CoexistenceWriter
     private static string CurveTable(IReadOnlyList<CoexistenceRow> rows, Fluid fluid, IResidualModel model, ReferenceState? reference, UnitSystem units, UncertaintySummary? uncertainty,
         bool byPressure)
     {
-        var columns = CoexistenceColumns.For(rows).Where(c => c.InCurveTable).ToArray();
-        // A curve is traced at given temperatures (or pressures): u(T) (or u(P)) is zero on every row and not shown.
-        var given = byPressure ? DisplayQuantity.Pressure : DisplayQuantity.Temperature;
-        var uColumns = uncertainty is null ? [] : UncertaintyText.Quantities.Where(q => q.Display != given).ToArray();
-        var headers = columns.Select(c => CoexistenceColumns.Header(c, units)).Concat(uColumns.Select(q => UncertaintyText.Header(q, units))).ToArray();
-        var table = new TextTable(headers, headers.Select(_ => true).ToArray());
-        double m = fluid.MolarMass?.Value ?? double.NaN; // SI tables do not use it; engineering units were refused without it
-        var values = rows.Select(row => columns.Select(c => CoexistenceColumns.Display(c, row, units, m)).ToArray()).ToArray();
-        // Energies and entropies may be a zero to rounding (at the reference state, or h_V - h_L at
-        // the critical point): each is printed against the largest of its kind in the table (h_L
-        // against h_V and the latent heat, of which it is a difference), see NumberText.Table.
-        var scales = columns.Select(c => HasArbitraryZero(c.Quantity)
-            ? NumberText.Scale(columns.Select((other, j) => (other, j)).Where(o => o.other.Quantity == c.Quantity).SelectMany(o => values.Select(v => v[o.j])))
-            : 0).ToArray();
-        for (int i = 0; i < rows.Count; i++)
-        {
-            table.Add(values[i].Select((v, j) => NumberText.Table(v, scales[j]))
-                .Concat(uColumns.Select(q => UncertaintyText.Cell(q, rows[i].Uncertainty, units, m))).ToArray());
-        }
-
+        var table = CurveTableOf(rows, fluid, units, uncertainty, byPressure);
         var text = new StringBuilder();
         string kind = byPressure ? "Saturation table by pressure" : "Saturation curve";
         text.AppendLine($"{kind} of {fluid.Name}, {ModelText.Describe(model)}; {rows.Count} state{(rows.Count == 1 ? "" : "s")}{(rows[^1].Point.IsCritical ? ", the last one the critical point" : "")}");
@@ -185,7 +166,35 @@ internal static class CoexistenceWriter
         return text.ToString();
     }
 
-    private static string ReferenceLine(IReadOnlyList<CoexistenceRow> rows, ReferenceState? reference)
+    /// <summary>The cells of the <c>curve</c> table: the curve columns in <paramref name="units"/>,
+    /// rounded as the table prints them (the HTML report shows the same table).</summary>
+    internal static TextTable CurveTableOf(IReadOnlyList<CoexistenceRow> rows, Fluid fluid, UnitSystem units, UncertaintySummary? uncertainty = null, bool byPressure = false)
+    {
+        var columns = CoexistenceColumns.For(rows).Where(c => c.InCurveTable).ToArray();
+        // A curve is traced at given temperatures (or pressures): u(T) (or u(P)) is zero on every row and not shown.
+        var given = byPressure ? DisplayQuantity.Pressure : DisplayQuantity.Temperature;
+        var uColumns = uncertainty is null ? [] : UncertaintyText.Quantities.Where(q => q.Display != given).ToArray();
+        var headers = columns.Select(c => CoexistenceColumns.Header(c, units)).Concat(uColumns.Select(q => UncertaintyText.Header(q, units))).ToArray();
+        var table = new TextTable(headers, headers.Select(_ => true).ToArray());
+        double m = fluid.MolarMass?.Value ?? double.NaN; // SI tables do not use it; engineering units were refused without it
+        var values = rows.Select(row => columns.Select(c => CoexistenceColumns.Display(c, row, units, m)).ToArray()).ToArray();
+        // Energies and entropies may be a zero to rounding (at the reference state, or h_V - h_L at
+        // the critical point): each is printed against the largest of its kind in the table (h_L
+        // against h_V and the latent heat, of which it is a difference), see NumberText.Table.
+        var scales = columns.Select(c => HasArbitraryZero(c.Quantity)
+            ? NumberText.Scale(columns.Select((other, j) => (other, j)).Where(o => o.other.Quantity == c.Quantity).SelectMany(o => values.Select(v => v[o.j])))
+            : 0).ToArray();
+        for (int i = 0; i < rows.Count; i++)
+        {
+            table.Add(values[i].Select((v, j) => NumberText.Table(v, scales[j]))
+                .Concat(uColumns.Select(q => UncertaintyText.Cell(q, rows[i].Uncertainty, units, m))).ToArray());
+        }
+
+        return table;
+    }
+
+    /// <summary>The line naming the zero of h and s, or why they are not shown.</summary>
+    internal static string ReferenceLine(IReadOnlyList<CoexistenceRow> rows, ReferenceState? reference)
         => rows.All(r => r.Full is not null) && reference is not null
             ? $"h and s reference: {reference.Description}"
             : "h and s not shown: the fluid has no ideal-gas heat capacity cp°";

@@ -195,24 +195,49 @@ internal static class FluidWriter
     private static string ShowTable(Fluid fluid, UnitSystem units)
     {
         var text = new StringBuilder();
-        text.AppendLine($"{fluid.Name}{(fluid.Formula is null ? "" : $" ({fluid.Formula})")}");
+        foreach (string line in IdentityLines(fluid))
+        {
+            text.AppendLine(line);
+        }
+
+        text.AppendLine();
+        text.Append(ConstantsTable(fluid, units).Render());
+        text.AppendLine();
+        foreach (string line in ModelDataLines(fluid, units))
+        {
+            text.AppendLine(line);
+        }
+
+        return text.ToString();
+    }
+
+    /// <summary>The fluid's name, synonyms, CAS number, family and origin, one line each (as
+    /// <c>fluids show</c> prints them above its table).</summary>
+    internal static IReadOnlyList<string> IdentityLines(Fluid fluid)
+    {
+        var lines = new List<string> { $"{fluid.Name}{(fluid.Formula is null ? "" : $" ({fluid.Formula})")}" };
         if (fluid.Synonyms.Count > 0)
         {
-            text.AppendLine($"also known as: {string.Join(", ", fluid.Synonyms)}");
+            lines.Add($"also known as: {string.Join(", ", fluid.Synonyms)}");
         }
 
         if (fluid.CasNumber is not null)
         {
-            text.AppendLine($"CAS number: {fluid.CasNumber}");
+            lines.Add($"CAS number: {fluid.CasNumber}");
         }
 
         if (fluid.Family is not null)
         {
-            text.AppendLine($"family: {fluid.Family}");
+            lines.Add($"family: {fluid.Family}");
         }
 
-        text.AppendLine($"origin: {fluid.Origin}");
-        text.AppendLine();
+        lines.Add($"origin: {fluid.Origin}");
+        return lines;
+    }
+
+    /// <summary>The sourced constants: value, standard uncertainty, unit and source of each.</summary>
+    internal static TextTable ConstantsTable(Fluid fluid, UnitSystem units)
+    {
         var table = new TextTable(["constant", "value", "std. uncertainty", "unit", "source"], [false, true, true, false, false]);
         foreach (var field in Fields)
         {
@@ -228,27 +253,32 @@ internal static class FluidWriter
             }
         }
 
-        text.Append(table.Render());
-        text.AppendLine();
+        return table;
+    }
+
+    /// <summary>The lines <c>fluids show</c> prints under its table: the valid range, the
+    /// vapour-line class, cp°, the published vapour-pressure equation, alpha parameters, volume
+    /// translations, provenance and remarks, each with its source.</summary>
+    internal static IReadOnlyList<string> ModelDataLines(Fluid fluid, UnitSystem units)
+    {
+        var lines = new List<string>();
         double tMin = CoexistenceSolver.LowestValidTemperature(fluid);
-        text.AppendLine($"lowest valid temperature: {NumberText.Table(UnitFormatter.Convert(DisplayQuantity.Temperature, tMin, units))} {UnitFormatter.Label(DisplayQuantity.Temperature, units)} (the triple point where the fluid gives one, not below 0.1 Tc; 0.3 Tc where it gives none)");
+        lines.Add($"lowest valid temperature: {NumberText.Table(UnitFormatter.Convert(DisplayQuantity.Temperature, tMin, units))} {UnitFormatter.Label(DisplayQuantity.Temperature, units)} (the triple point where the fluid gives one, not below 0.1 Tc; 0.3 Tc where it gives none)");
         if (VapourLineOf(fluid) is { } line)
         {
-            string turn = line.MaximumEntropyTemperature is double tMax
-                ? $"; vapour entropy is highest at {NumberText.Table(UnitFormatter.Convert(DisplayQuantity.Temperature, tMax, units))} {UnitFormatter.Label(DisplayQuantity.Temperature, units)}"
-                : "";
-            text.AppendLine($"saturated-vapour line ({CubicModelKind.PengRobinson.Title()}): {line.Class.ToString().ToLowerInvariant()}, (Tc/R) ds/dT = {NumberText.Table(line.ReducedSlope)} at T/Tc = {NumberText.Table(VapourLine.ReadingReducedTemperature)}{turn}");
+            lines.Add(VapourLineText(line, units, CubicModelKind.PengRobinson.Title()));
         }
 
         if (fluid.IdealGasHeatCapacity is { } cp)
         {
-            text.AppendLine($"ideal-gas heat capacity: {NumberText.Table(cp.MinimumTemperature)}-{NumberText.Table(cp.MaximumTemperature)} K; {cp.Source}");
+            lines.Add($"ideal-gas heat capacity: {NumberText.Table(cp.MinimumTemperature)}-{NumberText.Table(cp.MaximumTemperature)} K; {cp.Source}");
         }
+
         foreach (var (name, equation) in new[] { ("melting-pressure equation", fluid.MeltingPressureEquation), ("sublimation-pressure equation", fluid.SublimationPressureEquation) })
         {
             if (equation is not null)
             {
-                text.AppendLine($"{name}: {EquationText(equation)}, Tr = {NumberText.RoundTrip(equation.ReducingTemperature)} K, Pr = {NumberText.RoundTrip(equation.ReducingPressure)} Pa, "
+                lines.Add($"{name}: {EquationText(equation)}, Tr = {NumberText.RoundTrip(equation.ReducingTemperature)} K, Pr = {NumberText.RoundTrip(equation.ReducingPressure)} Pa, "
                     + $"a^b = {string.Join(" ", equation.Coefficients.Select((a, i) => $"{NumberText.RoundTrip(a)}^{NumberText.RoundTrip(equation.Exponents[i])}"))}, "
                     + $"{NumberText.RoundTrip(equation.LowestTemperature)}-{NumberText.RoundTrip(equation.HighestTemperature)} K; {equation.Source}");
             }
@@ -257,7 +287,7 @@ internal static class FluidWriter
         if (fluid.TriplePointTemperature is not null && fluid.TriplePointPressure is not null)
         {
             var (check, reason, model) = TriplePointCheckOf(fluid);
-            text.AppendLine(check is null
+            lines.Add(check is null
                 ? $"triple-point check: not available ({reason})"
                 : $"triple-point check ({model}): vapour pressure at the triple point {NumberText.Table(UnitFormatter.Convert(DisplayQuantity.Pressure, check.ModelPressure, units))} "
                     + $"{UnitFormatter.Label(DisplayQuantity.Pressure, units)}, {NumberText.Table(100 * check.RelativeDeviation)} % from the sourced triple-point pressure");
@@ -265,38 +295,48 @@ internal static class FluidWriter
 
         if (fluid.VapourPressureEquation is { } vp)
         {
-            text.AppendLine($"vapour-pressure equation: ln(P/Pc) = (Tc/T) sum N_i tau^t_i, Tc = {NumberText.Table(vp.Form.CriticalTemperature)} K, Pc = {NumberText.Table(vp.Form.CriticalPressure / 1e3)} kPa, "
+            lines.Add($"vapour-pressure equation: ln(P/Pc) = (Tc/T) sum N_i tau^t_i, Tc = {NumberText.Table(vp.Form.CriticalTemperature)} K, Pc = {NumberText.Table(vp.Form.CriticalPressure / 1e3)} kPa, "
                 + $"N^t = {string.Join(" ", vp.Coefficients.Select((n, i) => $"{NumberText.RoundTrip(n)}^{NumberText.RoundTrip(vp.Form.Exponents[i])}"))}; {vp.Source}");
         }
 
         foreach (var set in fluid.AlphaParameters)
         {
             var names = CubicModel.AlphaParameterNames(set.Form);
-            text.AppendLine($"{CubicModel.AlphaName(set.Form)} alpha ({set.Model.Title()}): {string.Join(", ", set.Values.Select((v, i) => $"{names[i]} = {NumberText.RoundTrip(v)}"))}"
+            lines.Add($"{CubicModel.AlphaName(set.Form)} alpha ({set.Model.Title()}): {string.Join(", ", set.Values.Select((v, i) => $"{names[i]} = {NumberText.RoundTrip(v)}"))}"
                 + $"{(set.Covariance is null ? "" : ", with covariance")}; {set.Source}");
         }
 
         if (fluid.PreferredAlpha != AlphaForm.Default)
         {
-            text.AppendLine($"alpha used by default: {CubicModel.AlphaName(fluid.PreferredAlpha)}");
+            lines.Add($"alpha used by default: {CubicModel.AlphaName(fluid.PreferredAlpha)}");
         }
 
         foreach (var shift in fluid.VolumeShifts)
         {
-            text.AppendLine($"volume translation ({shift.Model.Title()}): c = {NumberText.Table(shift.Shift.Value * 1e6)} cm3/mol; {shift.Shift.Source}");
+            lines.Add($"volume translation ({shift.Model.Title()}): c = {NumberText.Table(shift.Shift.Value * 1e6)} cm3/mol; {shift.Shift.Source}");
         }
 
         if (fluid.Provenance is not null)
         {
-            text.AppendLine($"provenance: {fluid.Provenance}");
+            lines.Add($"provenance: {fluid.Provenance}");
         }
 
         if (fluid.Remarks is not null)
         {
-            text.AppendLine($"remarks: {fluid.Remarks}");
+            lines.Add($"remarks: {fluid.Remarks}");
         }
 
-        return text.ToString();
+        return lines;
+    }
+
+    /// <summary>The vapour-line class line of <c>fluids show</c> (which uses Peng–Robinson) for the
+    /// model titled <paramref name="modelTitle"/>.</summary>
+    internal static string VapourLineText(VapourLine line, UnitSystem units, string modelTitle)
+    {
+        string turn = line.MaximumEntropyTemperature is double tMax
+            ? $"; vapour entropy is highest at {NumberText.Table(UnitFormatter.Convert(DisplayQuantity.Temperature, tMax, units))} {UnitFormatter.Label(DisplayQuantity.Temperature, units)}"
+            : "";
+        return $"saturated-vapour line ({modelTitle}): {line.Class.ToString().ToLowerInvariant()}, (Tc/R) ds/dT = {NumberText.Table(line.ReducedSlope)} at T/Tc = {NumberText.Table(VapourLine.ReadingReducedTemperature)}{turn}";
     }
 
     /// <summary>The algebraic form of a published solid line, as the fluid-file syntax names it.</summary>

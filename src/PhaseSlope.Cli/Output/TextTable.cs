@@ -16,6 +16,15 @@ internal sealed class TextTable
         _numeric = [.. numeric];
     }
 
+    /// <summary>The column headers.</summary>
+    public IReadOnlyList<string> Headers => _headers;
+
+    /// <summary>Whether column i holds numbers (right-aligned).</summary>
+    public IReadOnlyList<bool> Numeric => _numeric;
+
+    /// <summary>The rows added so far, one cell per header (the report renders them as HTML).</summary>
+    public IReadOnlyList<IReadOnlyList<string>> Rows => _rows;
+
     /// <summary>Appends a row; it must have one cell per header.</summary>
     public void Add(params string[] cells)
     {

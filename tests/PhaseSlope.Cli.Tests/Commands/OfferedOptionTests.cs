@@ -496,6 +496,31 @@ public sealed class OfferedOptionTests : IDisposable
         yield return Changes("flash", "--units", flash, "--units", "engineering");
         yield return Changes("flash", "--units", [.. flash, "--format", "csv"], "--units", "engineering");
         yield return Refused("flash", "--units", [.. flash, "--format", "json", "--units", "engineering"]);
+
+        // report: each option changes the HTML page (the page lists the choices it was made with,
+        // and each also changes its numbers: ReportCommandTests checks --eos, --step and --units
+        // against the tables themselves).
+        string[] report = ["report", "propane", "--out", "{dir}/out.html"];
+        string[] reportData = ["report", FluidFile, "--data", Csv, "--out", "{dir}/out.html"];
+        string[] reportBare = ["report", "propane", "--data", "{bare}", "--temperature-unit", "K", "--pressure-unit", "kPa", "--out", "{dir}/out.html"];
+        string[] reportBlend = ["report", "methane=0.8,ethane=0.2", "--out", "{dir}/out.html"];
+        yield return Differs("report", "--out", report, Replace(report, "{dir}/out.html", "{dir}/out.htm"));
+        yield return Refused("report", "--out", Replace(report, "{dir}/out.html", "{dir}/out.txt"));
+        yield return Changes("report", "--data", [.. reportData[..2], .. reportData[4..]], "--data", Csv);
+        yield return Refused("report", "--data", [.. reportBlend, "--data", Csv]);
+        yield return Differs("report", "--temperature-unit", reportBare, Replace(reportBare, "K", "degR"));
+        yield return Refused("report", "--temperature-unit", [.. report, "--temperature-unit", "K"]);
+        yield return Differs("report", "--pressure-unit", reportBare, Replace(reportBare, "kPa", "Pa"));
+        yield return Refused("report", "--pressure-unit", [.. report, "--pressure-unit", "kPa"]);
+        yield return Changes("report", "--step", report, "--step", "10");
+        yield return Refused("report", "--step", [.. reportBlend, "--step", "10"]);
+        yield return Changes("report", "--eos", report, "--eos", "srk");
+        yield return Changes("report", "--eos", reportBlend, "--eos", "srk");
+        yield return Changes("report", "--alpha", report, "--alpha", "twu");
+        yield return Changes("report", "--volume-shift", report, "--volume-shift", "peneloux");
+        yield return Refused("report", "--volume-shift", [.. reportBlend, "--volume-shift", "1 cm3/mol"]);
+        yield return Changes("report", "--units", report, "--units", "engineering");
+        yield return Changes("report", "--units", reportBlend, "--units", "engineering");
     }
 
     /// <summary>--eos, --alpha, --volume-shift, --format and (where offered) --units.</summary>

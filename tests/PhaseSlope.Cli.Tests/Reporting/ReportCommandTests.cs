@@ -1,0 +1,254 @@
+using System.Globalization;
+using System.Net;
+using PhaseSlope.Cli.Commands;
+using PhaseSlope.Cli.Tests.Commands;
+using static PhaseSlope.Cli.Tests.CliHarness;
+
+namespace PhaseSlope.Cli.Tests.Reporting;
+
+/// <summary><c>report</c>: one self-contained page whose numbers are the other commands' own
+/// (the same tables and texts, not a second computation), with every source shown, the
+/// 'from memory' markings kept, cautions beside what they concern, and nothing fetched from
+/// outside the file.</summary>
+public sealed class ReportCommandTests : IDisposable
+{
+    private readonly TempFolder _folder = new();
+
+    private string Report(params string[] args)
+    {
+        string path = _folder.File($"report-{Guid.NewGuid():N}.html");
+        var result = Run(["report", .. args, "--out", path]);
+        Assert.True(result.ExitCode == 0, result.ToString());
+        Assert.Equal("", result.Stdout);
+        Assert.Equal($"phaseslope: wrote the report to {path}\n", result.Stderr);
+        return File.ReadAllText(path);
+    }
+
+    [Fact]
+    public void Propane_HasEverySectionItsFiguresAndNoExternalResource()
+    {
+        string html = Report("propane");
+        foreach (string id in new[] { "constants", "model", "saturation", "latent", "vapour-line", "figures" })
+        {
+            _ = ReportHtml.Section(html, id);
+        }
+
+        // latent and slope figures, then p-T, T-rho and p-h (propane has cp°).
+        Assert.Equal(5, CountOf(html, "<svg "));
+        Assert.Empty(ReportHtml.ExternalReferences(html));
+        Assert.DoesNotContain("<script", html, StringComparison.OrdinalIgnoreCase);
+        Assert.Contains("@media (prefers-color-scheme: dark)", html, StringComparison.Ordinal);
+        Assert.Contains("@media print", html, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Propane_EveryConstantSource_IsShownWithItsFromMemoryMarking()
+    {
+        string html = ReportHtml.Section(Report("propane"), "constants");
+        var fluid = FluidResolver.Resolve("propane");
+        var sources = new[] { fluid.MolarMass, fluid.CriticalTemperature, fluid.CriticalPressure, fluid.AcentricFactor, fluid.CriticalDensity, fluid.NormalBoilingPoint, fluid.TriplePointTemperature }
+            .OfType<Core.Fluids.SourcedValue>().Select(v => v.Source).ToArray();
+        Assert.Equal(7, sources.Length);
+        int recalled = 0;
+        foreach (string source in sources)
+        {
+            string shown = WebUtility.HtmlEncode(source).Replace("from memory", "<mark class=\"memory\">from memory</mark>", StringComparison.Ordinal);
+            Assert.Contains(shown, html, StringComparison.Ordinal);
+            recalled += source.Contains("from memory", StringComparison.Ordinal) ? 1 : 0;
+        }
+
+        // The catalog's propane file marks all seven values as recalled (fluids/propane.fluid).
+        Assert.Equal(7, recalled);
+    }
+
+    [Fact]
+    public void SaturationTable_IsCurvesTableAtTheSameTemperatures_SteppedInTheChosenUnit()
+    {
+        string html = Report("propane", "--units", "engineering", "--step", "10");
+        var rows = ReportHtml.FirstTableRows(ReportHtml.Section(html, "saturation"));
+        // Every row but the last (the critical point) is a multiple of the 10 K step in degC.
+        foreach (var row in rows.Take(rows.Count - 1))
+        {
+            double t = double.Parse(row[0], CultureInfo.InvariantCulture);
+            Assert.True(Math.Abs(t / 10 - Math.Round(t / 10)) < 1e-9, $"{row[0]} degC is not on the 10 K step");
+        }
+
+        // The same states through 'curve' (the temperatures as the table shows them, 6 digits, are
+        // not the exact ones, so curve is run at the report's own first and step and compared cell by cell).
+        string first = rows[0][0];
+        string curve = RunText("curve", "propane", "--units", "engineering", "--from", $"{first} degC", "--step", "10", "--uncertainty", "linear");
+        var curveRows = curve.Split('\n').SkipWhile(l => !l.StartsWith("---", StringComparison.Ordinal)).Skip(1)
+            .TakeWhile(l => l.Trim().Length > 0).Select(l => l.Split(' ', StringSplitOptions.RemoveEmptyEntries)).ToList();
+        Assert.Equal(14, curveRows[0].Length); // ten values and four standard uncertainties
+        Assert.Equal(curveRows.Count, rows.Count);
+        for (int i = 0; i < rows.Count; i++)
+        {
+            Assert.Equal(curveRows[i], rows[i]);
+        }
+
+        Assert.Contains("Model estimates. Before use for pressure equipment", ReportHtml.Section(html, "saturation"), StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Eos_ChangesTheSaturationTable()
+    {
+        var pr = ReportHtml.FirstTableRows(ReportHtml.Section(Report("propane"), "saturation"));
+        var srk = ReportHtml.FirstTableRows(ReportHtml.Section(Report("propane", "--eos", "srk"), "saturation"));
+        Assert.NotEqual(pr[1][1], srk[1][1]);
+    }
+
+    [Fact]
+    public void WithData_ShowsFitLatentAndAuditAsTheirCommandsPrintThem()
+    {
+        string csv = FitData.ExampleCsv, fluid = FitData.ExampleFluid;
+        string html = Report(fluid, "--data", csv);
+        Assert.Empty(ReportHtml.ExternalReferences(html));
+        // The data file's own label travels with it: the demo data are invented (docs/examples).
+        string data = ReportHtml.Section(html, "data");
+        Assert.Contains("INVENTED DATA", data, StringComparison.Ordinal);
+        Assert.Contains("labelled invented", data, StringComparison.Ordinal);
+        Assert.Contains("This fluid is invented", ReportHtml.Section(html, "constants"), StringComparison.Ordinal);
+
+        string fit = RunText("fit", csv, "--fluid", fluid, "--log-base", "e", "--correlation-pressure-unit", "Pa", "--correlation-temperature-unit", "K");
+        Assert.Equal(fit.TrimEnd(), ReportHtml.PreformattedText(ReportHtml.Section(html, "fit")));
+        string latent = RunText("latent", csv, "--fluid", fluid);
+        Assert.Equal(latent.TrimEnd(), ReportHtml.PreformattedText(ReportHtml.Section(html, "latent-data")));
+        // The audit reads the fit's coefficients back: the command line fit prints for it.
+        string arguments = fit.Split('\n').Single(l => l.Contains("--coefficients", StringComparison.Ordinal));
+        string[] auditArgs = [.. arguments[arguments.IndexOf("--form", StringComparison.Ordinal)..].Trim().Split(' '), "--data", csv, "--fluid", fluid];
+        var audit = Run(["audit", .. auditArgs]);
+        Assert.True(audit.ExitCode is 0 or ExitCodes.AuditFailed, audit.ToString());
+        Assert.Equal(audit.Stdout.TrimEnd(), ReportHtml.PreformattedText(ReportHtml.Section(html, "audit")));
+        // residuals, latent with the data band, and the data on p-T.
+        Assert.Equal(3, CountOf(ReportHtml.Section(html, "fit") + ReportHtml.Section(html, "latent-data") + data, "<svg "));
+    }
+
+    [Fact]
+    public void TunedFluid_ShowsItsTuningStatisticsAndParameterErrors()
+    {
+        string tuned = _folder.File("tuned.fluid");
+        var tune = Run("tune", FitData.ExampleCsv, "--fluid", FitData.ExampleFluid, "--alpha", "mathias-copeman", "--out", tuned);
+        Assert.True(tune.ExitCode == 0, tune.ToString());
+        string model = ReportHtml.Section(Report(tuned), "model");
+        var fluid = FluidResolver.Resolve(tuned);
+        Assert.Contains(WebUtility.HtmlEncode($"provenance: {fluid.Provenance}"), model, StringComparison.Ordinal);
+        Assert.Contains("AAD of P", model, StringComparison.Ordinal);
+        // The standard errors are the square roots of the covariance's diagonal the file carries.
+        var set = fluid.AlphaParameters.Single(a => a.Covariance is not null);
+        var rows = ReportHtml.FirstTableRows(model[model.IndexOf("<h3>Tuning</h3>", StringComparison.Ordinal)..]);
+        Assert.Equal(3, rows.Count);
+        for (int i = 0; i < 3; i++)
+        {
+            Assert.Equal(PhaseSlope.Cli.Output.NumberText.Uncertainty(Math.Sqrt(set.Covariance![i, i])), rows[i][2]);
+        }
+
+        Assert.Contains("a model tuned to vapour pressures is checked only where the data are", model, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Mixture_ShowsTheEnvelopeAsEnvelopePrintsIt()
+    {
+        const string blend = "methane=0.8,ethane=0.15,propane=0.05";
+        string html = Report(blend);
+        Assert.Empty(ReportHtml.ExternalReferences(html));
+        string envelope = ReportHtml.Section(html, "envelope");
+        Assert.Equal(1, CountOf(envelope, "<svg "));
+        Assert.Equal(RunText("envelope", blend).TrimEnd(), ReportHtml.PreformattedText(envelope));
+        Assert.Equal(RunText("mixture", blend).TrimEnd(), ReportHtml.PreformattedText(ReportHtml.Section(html, "mixture")));
+        // Each component's constants with their sources (methane's catalog file marks them recalled).
+        Assert.Contains("<mark class=\"memory\">from memory</mark>", ReportHtml.Section(html, "components"), StringComparison.Ordinal);
+    }
+
+    /// <summary>The invented natural gas of docs/mixture-files.md (its composition is invented; its
+    /// two k_ij name their publication, recalled).</summary>
+    internal const string NaturalGasA = """
+        # Natural gas A: an invented composition for this example.
+        format      phaseslope-mixture 1
+        name        natural gas A (invented)
+        basis       mole
+        component   methane = 0.85
+        component   ethane = 0.05
+        component   carbon dioxide = 0.07
+        component   nitrogen = 0.03
+        kij         methane, carbon dioxide = 0.0919 | Knapp, Döring, Oellrich, Plöcker & Prausnitz, DECHEMA Chemistry Data Series Vol. VI (1982), Peng-Robinson; from memory
+        kij         ethane, nitrogen = 0.0515         | Knapp et al., DECHEMA Chemistry Data Series Vol. VI (1982), Peng-Robinson; from memory
+        remarks     composition invented for the documentation
+
+        """;
+
+    [Fact]
+    public void MixtureFile_ShowsItsInteractionSourcesMarkedAndItsInventedLabel()
+    {
+        string file = _folder.File("natural-gas-a.mixture");
+        File.WriteAllText(file, NaturalGasA);
+        string html = Report(file);
+        string mixture = ReportHtml.Section(html, "mixture");
+        Assert.Contains("methane, carbon dioxide   0.0919  given         Knapp, D&#246;ring, Oellrich, Pl&#246;cker &amp; Prausnitz, DECHEMA Chemistry Data Series Vol. VI (1982), Peng-Robinson; <mark class=\"memory\">from memory</mark>",
+            mixture, StringComparison.Ordinal);
+        Assert.Contains("This composition is invented", mixture, StringComparison.Ordinal);
+        Assert.Equal(RunText("envelope", file).TrimEnd(), ReportHtml.PreformattedText(ReportHtml.Section(html, "envelope")));
+    }
+
+    [Fact]
+    public void Text_IsEscaped_AMarkupLikeRemarkStaysText()
+    {
+        string fluid = _folder.File("markup.fluid");
+        string text = File.ReadAllText(FitData.ExampleFluid).Replace("remarks                   Invented", "remarks                   <script>x</script> & <img src=http://example.invalid/a.png> Invented", StringComparison.Ordinal);
+        Assert.Contains("<script>", text, StringComparison.Ordinal);
+        File.WriteAllText(fluid, text);
+        // A data file name with markup characters: it appears in the text and in the figures'
+        // legends (the SVG writer escapes it there).
+        string data = _folder.File("x<b>&y.csv");
+        File.Copy(FitData.ExampleCsv, data);
+        string html = Report(fluid, "--data", data);
+        Assert.DoesNotContain("<b>", html, StringComparison.Ordinal);
+        Assert.Contains("x&lt;b&gt;&amp;y.csv", ReportHtml.Section(html, "data"), StringComparison.Ordinal);
+        Assert.DoesNotContain("<script", html, StringComparison.OrdinalIgnoreCase);
+        Assert.Contains("&lt;script&gt;x&lt;/script&gt; &amp; &lt;img src=http://example.invalid/a.png&gt;", html, StringComparison.Ordinal);
+        Assert.Empty(ReportHtml.ExternalReferences(html));
+    }
+
+    [Theory]
+    [InlineData("<img src=\"http://example.invalid/a.png\">")]
+    [InlineData("<p style=\"background: url(https://example.invalid/b.png)\">x</p>")]
+    [InlineData("<a href=\"https://example.invalid/\">x</a>")]
+    [InlineData("<style>@import 'x.css';</style>")]
+    [InlineData("<svg><image xlink:href=\"c.png\"/></svg>")]
+    [InlineData("<script>1</script>")]
+    public void ExternalReferenceCheck_FindsEachKind(string markup)
+        => Assert.NotEmpty(ReportHtml.ExternalReferences($"<!DOCTYPE html><html><body>{markup}</body></html>"));
+
+    [Theory]
+    [InlineData("<a href=\"#constants\">x</a>")]
+    [InlineData("<g clip-path=\"url(#s1f1-cl_3)\"></g>")]
+    [InlineData("<p>src=http://example.invalid written as text</p>")]
+    public void ExternalReferenceCheck_AllowsAnchorsAndText(string markup)
+        => Assert.Empty(ReportHtml.ExternalReferences($"<!DOCTYPE html><html><body>{markup}</body></html>"));
+
+    [Fact]
+    public void MissingOut_IsAUsageError()
+        => AssertFailure(Run("report", "propane"), ExitCodes.Usage, "--out");
+
+    [Fact]
+    public void FailedReport_LeavesAnExistingFileAsItWas()
+    {
+        string path = _folder.File("kept.html");
+        File.WriteAllText(path, "kept");
+        var result = Run("report", "no-such-fluid", "--out", path);
+        AssertFailure(result, ExitCodes.Fluid);
+        Assert.Equal("kept", File.ReadAllText(path));
+    }
+
+    private static int CountOf(string text, string part)
+    {
+        int count = 0;
+        for (int i = text.IndexOf(part, StringComparison.Ordinal); i >= 0; i = text.IndexOf(part, i + part.Length, StringComparison.Ordinal))
+        {
+            count++;
+        }
+
+        return count;
+    }
+
+    public void Dispose() => _folder.Dispose();
+}
