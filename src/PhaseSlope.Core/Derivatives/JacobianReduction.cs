@@ -52,6 +52,15 @@ public static class JacobianReduction
         return MeasurableExpression.Of(Jacobian(x, z), Jacobian(y, z));
     }
 
+    /// <summary>M·w², the molar mass times the square of the speed of sound, in the measurable
+    /// quantities (J/mol): w² = (∂P/∂ρ_mass)_S = −(v²/M)·(∂P/∂v)_S, with (∂P/∂v)_S reduced by
+    /// <see cref="Reduce"/>; the result is v·c_p/(κ_T·c_p − T·v·α²) = v/κ_S.</summary>
+    public static MeasurableExpression MolarMassTimesSoundSpeedSquared()
+    {
+        var slope = Reduce(StateVariable.P, StateVariable.V, StateVariable.S);
+        return MeasurableExpression.Of(-(V * V) * slope.Numerator, slope.Denominator);
+    }
+
     /// <summary>∂(A, B)/∂(T, P) = A_T·B_P − A_P·B_T.</summary>
     private static Polynomial Jacobian((Polynomial DT, Polynomial DP) a, (Polynomial DT, Polynomial DP) b)
         => a.DT * b.DP - a.DP * b.DT;
