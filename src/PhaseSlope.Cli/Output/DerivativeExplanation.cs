@@ -16,6 +16,10 @@ internal sealed record DerivativeTerm(string Symbol, string Description, double?
 /// <param name="Origin">How the expression was obtained, for the reader.</param>
 internal sealed record DerivativeExplanation(string Text, IReadOnlyList<DerivativeTerm> Terms, double? Value, string Origin)
 {
+    /// <summary>The measurable quantities the state does not give (c_p and s without the fluid's
+    /// c_p°), each with the reason, whether or not this expression uses them.</summary>
+    public IReadOnlyList<DerivativeTerm> Unavailable { get; init; } = [];
+
     /// <summary>The origin of a first derivative's expression.</summary>
     public const string Reduced = "derived by the Jacobian reduction in (T, P) and brought to canonical form (docs/derivatives.md)";
 
@@ -25,7 +29,8 @@ internal sealed record DerivativeExplanation(string Text, IReadOnlyList<Derivati
         var values = MeasuredValues.FromState(state);
         var terms = expression.Quantities.Select(q => Term(q, values.Value(q), null, values.Value(q) is null ? Unavailable(state, q) : null)).ToList();
         double? value = terms.All(t => t.Value is not null) ? values.Evaluate(expression).Value : null;
-        return new(expression.Text, terms, value, Reduced);
+        var unavailable = MeasurableQuantities.All.Where(q => values.Value(q) is null).Select(q => Term(q, null, null, Unavailable(state, q))).ToList();
+        return new(expression.Text, terms, value, Reduced) { Unavailable = unavailable };
     }
 
     /// <summary>(∂c_p/∂P)_T = −T·v·(α² + (∂α/∂T)_P) with the model's values.</summary>

@@ -25,6 +25,17 @@ internal static class DerivativeWriter
         }
 
         WriteTerms(json, explanation.Terms, withUncertainty: false);
+        json.WriteStartArray("unavailable_quantities");
+        foreach (var term in explanation.Unavailable)
+        {
+            json.WriteStartObject();
+            json.WriteString("symbol", term.Symbol);
+            json.WriteString("description", term.Description);
+            json.WriteString("reason", term.UnavailableReason);
+            json.WriteEndObject();
+        }
+
+        json.WriteEndArray();
     }
 
     private static void WriteTerms(Utf8JsonWriter json, IReadOnlyList<DerivativeTerm> terms, bool withUncertainty)
@@ -82,10 +93,11 @@ internal static class DerivativeWriter
         {
             var missing = explanation.Terms.Where(t => t.Value is null).ToList();
             text.AppendLine($"through the expression: unavailable: {string.Join(", ", missing.Select(t => t.Symbol))} {(missing.Count == 1 ? "is" : "are")} not given by this state");
-            foreach (var term in missing)
-            {
-                text.AppendLine($"note: {term.Symbol} {term.UnavailableReason}");
-            }
+        }
+
+        foreach (var term in explanation.Unavailable)
+        {
+            text.AppendLine($"note: {term.Symbol} is unavailable at this state: {term.UnavailableReason}; a derivative whose expression uses it is refused");
         }
 
         return text.ToString();

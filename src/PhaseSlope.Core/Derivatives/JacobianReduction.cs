@@ -61,6 +61,42 @@ public static class JacobianReduction
         return MeasurableExpression.Of(-(V * V) * slope.Numerator, slope.Denominator);
     }
 
+    private static readonly Lazy<IReadOnlyList<Polynomial>> Factors = new(BuildFactors);
+
+    /// <summary>The polynomial factors a reduced ratio can share between its numerator and its
+    /// denominator: every Jacobian ∂(A, B)/∂(T, P) of two state variables, made primitive (monomial
+    /// and integer content removed). N = ∂(X, Z)/∂(T, P) and D = ∂(Y, Z)/∂(T, P) are built from the
+    /// same partials, so what they share is one of these (for example (∂V/∂S)_U, where both carry
+    /// ∂(V, S)/∂(T, P)·…); <see cref="MeasurableExpression"/> divides both sides by any that
+    /// divides both exactly. Computed from the partials below, not listed by hand.</summary>
+    internal static IReadOnlyList<Polynomial> CandidateFactors => Factors.Value;
+
+    private static IReadOnlyList<Polynomial> BuildFactors()
+    {
+        var variables = Enum.GetValues<StateVariable>();
+        var factors = new List<Polynomial>();
+        for (int i = 0; i < variables.Length; i++)
+        {
+            for (int j = i + 1; j < variables.Length; j++)
+            {
+                var jacobian = Jacobian(Partials(variables[i]), Partials(variables[j]));
+                if (jacobian.IsZero)
+                {
+                    continue;
+                }
+
+                jacobian = jacobian.Over(jacobian.MonomialContent());
+                jacobian = jacobian.Over(jacobian.IntegerContent());
+                if (!jacobian.IsMonomial)
+                {
+                    factors.Add(jacobian);
+                }
+            }
+        }
+
+        return factors;
+    }
+
     /// <summary>∂(A, B)/∂(T, P) = A_T·B_P − A_P·B_T.</summary>
     private static Polynomial Jacobian((Polynomial DT, Polynomial DP) a, (Polynomial DT, Polynomial DP) b)
         => a.DT * b.DP - a.DP * b.DT;

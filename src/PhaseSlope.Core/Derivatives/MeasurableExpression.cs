@@ -6,7 +6,8 @@ namespace PhaseSlope.Core.Derivatives;
 
 /// <summary>A ratio of polynomials in the measurable quantities (T, P, v, s, α, κ_T, c_p) in a
 /// canonical form: no negative exponents, no common monomial or integer factor, no common
-/// polynomial factor that exact division finds, and a positive leading coefficient in the
+/// polynomial factor that exact division finds (the whole of either side, or any Jacobian of two
+/// state variables), and a positive leading coefficient in the
 /// denominator. Two expressions are algebraically equal when their canonical texts are.</summary>
 /// <remarks>The text (<see cref="Text"/>) is the notation of docs/derivatives.md: symbols T, P, v,
 /// s, alpha, kappa_T, cp; * for products, ^ for integer powers, / and parentheses. With a monomial
@@ -55,6 +56,23 @@ public sealed class MeasurableExpression
         var common = Monomial.Min(numerator.MonomialContent(), denominator.MonomialContent());
         numerator = numerator.Over(common);
         denominator = denominator.Over(common);
+
+        // Common polynomial factors: any Jacobian of two state variables that divides both sides
+        // (see JacobianReduction.CandidateFactors), removed until none does.
+        for (bool found = true; found;)
+        {
+            found = false;
+            foreach (var factor in JacobianReduction.CandidateFactors)
+            {
+                if (!factor.IsMonomial && Polynomial.TryDivide(numerator, factor) is { } n && Polynomial.TryDivide(denominator, factor) is { } d)
+                {
+                    numerator = n;
+                    denominator = d;
+                    found = true;
+                    break;
+                }
+            }
+        }
 
         // A common polynomial factor that one side divides exactly.
         if (Polynomial.TryDivide(numerator, denominator) is { } quotient)
