@@ -27,9 +27,9 @@ internal sealed record DerivativeExplanation(string Text, IReadOnlyList<Derivati
     public static DerivativeExplanation FromState(ThermodynamicState state, MeasurableExpression expression)
     {
         var values = MeasuredValues.FromState(state);
-        var terms = expression.Quantities.Select(q => Term(q, values.Value(q), null, values.Value(q) is null ? Unavailable(state, q) : null)).ToList();
+        var terms = expression.Quantities.Select(q => Term(q, values.Value(q), null, values.Value(q) is null ? ReasonUnavailable(state, q) : null)).ToList();
         double? value = terms.All(t => t.Value is not null) ? values.Evaluate(expression).Value : null;
-        var unavailable = MeasurableQuantities.All.Where(q => values.Value(q) is null).Select(q => Term(q, null, null, Unavailable(state, q))).ToList();
+        var unavailable = MeasurableQuantities.All.Where(q => values.Value(q) is null).Select(q => Term(q, null, null, ReasonUnavailable(state, q))).ToList();
         return new(expression.Text, terms, value, Reduced) { Unavailable = unavailable };
     }
 
@@ -65,7 +65,7 @@ internal sealed record DerivativeExplanation(string Text, IReadOnlyList<Derivati
     public static DerivativeTerm Term(MeasurableQuantity quantity, double? value, double? uncertainty, string? reason)
         => new(MeasurableQuantities.Symbol(quantity), MeasuredValues.Describe(quantity), value, uncertainty, MeasurableQuantities.Unit(quantity), reason);
 
-    private static string Unavailable(ThermodynamicState state, MeasurableQuantity quantity) => quantity switch
+    private static string ReasonUnavailable(ThermodynamicState state, MeasurableQuantity quantity) => quantity switch
     {
         MeasurableQuantity.Entropy or MeasurableQuantity.HeatCapacity when state.IdealGasUnavailableReason is string reason => reason,
         MeasurableQuantity.Expansivity or MeasurableQuantity.Compressibility => state.UndefinedReason ?? "undefined at this state (mechanically unstable)",
