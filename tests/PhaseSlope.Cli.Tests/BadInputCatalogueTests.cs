@@ -247,6 +247,7 @@ public class BadInputCatalogueTests
         { ["bubble", "methane=0.5,{dir}/nomass.fluid=0.5", "-T", "250", "--units", "engineering"], ExitCodes.Fluid, "field 'molar_mass': fluid 'nomass' gives no molar mass, whic" },
         { ["flash", "methane=0.5,{dir}/nomass.fluid=0.5", "-T", "250", "-P", "1MPa", "--format", "csv", "--units", "engineering"], ExitCodes.Fluid, "field 'molar_mass': fluid 'nomass' gives no molar mass, whic" },
         // derive --from-measured, --explain and the second derivatives (docs/derivatives.md).
+        { ["derive", "propane", "--of", "U", "--by", "V", "--hold", "T", "-T", "300 ± 1", "-P", "1e5"], ExitCodes.Usage, "--temperature: a ± uncertainty is taken with --from-measured only" },
         { ["derive", "--from-measured", "beta=1e-3", "--of", "U", "--by", "V", "--hold", "T"], ExitCodes.Usage, "--from-measured: unknown key 'beta' (use alpha, kappa_t, cp" },
         { ["derive", "--from-measured", "alpha=1e-3,alpha=2e-3", "--of", "U", "--by", "V", "--hold", "T"], ExitCodes.Usage, "--from-measured: alpha is given twice" },
         { ["derive", "--from-measured", "alpha 1e-3", "--of", "U", "--by", "V", "--hold", "T"], ExitCodes.Usage, "--from-measured: 'alpha 1e-3' is not key=value" },

@@ -232,6 +232,14 @@ internal sealed class DeriveOptions
                 }
             }
 
+            foreach (var option in new[] { State.Temperature, State.Pressure, State.Entropy })
+            {
+                if (parse.GetValue(option) is string text && (text.Contains('±', StringComparison.Ordinal) || text.Contains("+/-", StringComparison.Ordinal)))
+                {
+                    throw new UsageException($"{option.Name}: a ± uncertainty is taken with --from-measured only (a model's state is computed at the value itself)");
+                }
+            }
+
             return new DeriveRequest(State.BindPoint(parse), null, target, explain, format);
         }
 

@@ -29,6 +29,12 @@ internal sealed record DerivativeExplanation(string Text, IReadOnlyList<Derivati
         var values = MeasuredValues.FromState(state);
         var terms = expression.Quantities.Select(q => Term(q, values.Value(q), null, values.Value(q) is null ? ReasonUnavailable(state, q) : null)).ToList();
         double? value = terms.All(t => t.Value is not null) ? values.Evaluate(expression).Value : null;
+        if (value is double through && !double.IsFinite(through))
+        {
+            // A vanishing denominator at this state (the Jacobian route refuses it first).
+            value = null;
+        }
+
         var unavailable = MeasurableQuantities.All.Where(q => values.Value(q) is null).Select(q => Term(q, null, null, ReasonUnavailable(state, q))).ToList();
         return new(expression.Text, terms, value, Reduced) { Unavailable = unavailable };
     }

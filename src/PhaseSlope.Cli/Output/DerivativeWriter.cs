@@ -20,8 +20,10 @@ internal static class DerivativeWriter
         json.WriteNumberOrNull("value_from_expression", explanation.Value);
         if (explanation.Value is null)
         {
-            json.WriteString("value_from_expression_unavailable_reason",
-                "needs " + string.Join(", ", explanation.Terms.Where(t => t.Value is null).Select(t => t.Symbol)) + ", unavailable at this state (see terms)");
+            var missing = explanation.Terms.Where(t => t.Value is null).Select(t => t.Symbol).ToList();
+            json.WriteString("value_from_expression_unavailable_reason", missing.Count > 0
+                ? "needs " + string.Join(", ", missing) + ", unavailable at this state (see terms)"
+                : "undefined at this state (the expression's denominator vanishes)");
         }
 
         WriteTerms(json, explanation.Terms, withUncertainty: false);
@@ -85,14 +87,16 @@ internal static class DerivativeWriter
         text.AppendLine();
         if (explanation.Value is double through)
         {
-            text.AppendLine($"through the expression:      {NumberText.Table(through)} {unit}");
-            text.AppendLine($"from the model's Helmholtz derivatives: {NumberText.Table(value)} {unit}"
+            text.AppendLine($"value through the expression:            {NumberText.Table(through)} {unit}");
+            text.AppendLine($"value from the Helmholtz derivatives:    {NumberText.Table(value)} {unit}"
                 + (value != 0 ? $" (relative difference {NumberText.Uncertainty(Math.Abs(through - value) / Math.Abs(value))})" : ""));
         }
         else
         {
             var missing = explanation.Terms.Where(t => t.Value is null).ToList();
-            text.AppendLine($"through the expression: unavailable: {string.Join(", ", missing.Select(t => t.Symbol))} {(missing.Count == 1 ? "is" : "are")} not given by this state");
+            text.AppendLine(missing.Count > 0
+                ? $"value through the expression: unavailable: {string.Join(", ", missing.Select(t => t.Symbol))} {(missing.Count == 1 ? "is" : "are")} not given by this state"
+                : "value through the expression: undefined at this state (its denominator vanishes)");
         }
 
         foreach (var term in explanation.Unavailable)

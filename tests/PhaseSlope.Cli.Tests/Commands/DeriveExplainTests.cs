@@ -62,8 +62,8 @@ public class DeriveExplainTests
         string text = RunText("derive", "toluene", "--of", "U", "--by", "V", "--hold", "T", "-T", "25 degC", "-P", "1 atm", "--explain");
         Assert.Contains("(∂U/∂V)_T = T·α/κT − P", text, StringComparison.Ordinal);
         Assert.Contains("plain text: T*alpha/kappa_T - P", text, StringComparison.Ordinal);
-        Assert.Contains("through the expression:", text, StringComparison.Ordinal);
-        Assert.Contains("from the model's Helmholtz derivatives:", text, StringComparison.Ordinal);
+        Assert.Contains("value through the expression:", text, StringComparison.Ordinal);
+        Assert.Contains("value from the Helmholtz derivatives:", text, StringComparison.Ordinal);
         Assert.Contains("kappa_T", text, StringComparison.Ordinal);
     }
 
@@ -200,5 +200,17 @@ public class DeriveExplainTests
         var perMole = RunJson(["derive", "--from-measured", "alpha=1.07e-3,kappa_t=9.2e-4 1/MPa,cp=156.638 J/(mol*K)", .. tail]);
         AssertRelative(perMole.GetProperty("value").GetDouble(), perKg.GetProperty("value").GetDouble(), 1e-14, "mu_JT");
         Assert.Equal(["P", "kappa_T"], perMole.GetProperty("unused_inputs").EnumerateArray().Select(e => e.GetString()).ToList());
+    }
+
+    [Fact]
+    public void Measured_Csv_OneRowWithEachTermAndItsUncertainty()
+    {
+        string csv = RunText("derive", "--from-measured", "alpha=2.572e-4 ± 1e-6,kappa_t=4.525e-10", "--of", "S", "--by", "V", "--hold", "T", "--format", "csv");
+        var lines = csv.Split('\n', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries);
+        Assert.Equal("of,by,hold,expression,value,standard_uncertainty,unit,alpha,alpha_standard_uncertainty,alpha_unit,kappa_T,kappa_T_standard_uncertainty,kappa_T_unit", lines[0]);
+        var cells = lines[1].Split(',');
+        // (∂S/∂V)_T = α/κ_T (a Maxwell relation), u = u_α/κ_T.
+        AssertRelative(2.572e-4 / 4.525e-10, double.Parse(cells[4], CultureInfo.InvariantCulture), 1e-15, "alpha/kappa_T");
+        AssertRelative(1e-6 / 4.525e-10, double.Parse(cells[5], CultureInfo.InvariantCulture), 1e-14, "u");
     }
 }
