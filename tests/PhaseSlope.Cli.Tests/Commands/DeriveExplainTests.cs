@@ -103,6 +103,13 @@ public class DeriveExplainTests
         AssertSameDouble(expected, json.GetProperty("value").GetDouble(), of);
         Assert.Equal(of, json.GetProperty("of").GetString());
         Assert.Equal(of == "cp" ? "m3/(mol K)" : "Pa/K", json.GetProperty("unit").GetString());
+
+        // --explain: the hand-written identity, its terms, and its value equal to the exact one to
+        // rounding (the same derivatives recombined: 1e-12).
+        var explained = RunJson("derive", "propane", "--of", of, "--by", by, "--hold", "T", "-T", "250", "-P", "2e6", "--explain", "--format", "json");
+        Assert.Equal(of == "cp" ? "-T*v*(alpha^2 + dalpha_dT)" : "T*d2P_dT2", explained.GetProperty("expression").GetString());
+        AssertRelative(expected, explained.GetProperty("value_from_expression").GetDouble(), 1e-12, "value_from_expression");
+        Assert.Contains("Maxwell", explained.GetProperty("expression_origin").GetString(), StringComparison.Ordinal);
     }
 
     [Fact]
