@@ -10,7 +10,8 @@ internal static class ExitCodes
     public const int InternalError = 1;
 
     /// <summary>Bad command line: unknown command or option, malformed number, unknown unit,
-    /// missing or conflicting options, non-positive absolute value.</summary>
+    /// missing or conflicting options, non-positive absolute value; for <c>derive --from-measured</c>
+    /// a bad key, value, unit or uncertainty, or a quantity the derivative needs that was not given.</summary>
     public const int Usage = 2;
 
     /// <summary>Unknown fluid name, or a fluid file that cannot be read or fails validation.</summary>

@@ -54,33 +54,41 @@ internal static class StateWriter
         json.WriteEndObject();
     }
 
-    /// <summary>Renders a derivative value.</summary>
-    public static string Derivative(PropertyModel engine, ThermodynamicState state, StateVariable of, StateVariable by, StateVariable hold, double value, OutputFormat format)
+    /// <summary>Renders a derivative value of a model's state, with its explanation in measurable
+    /// quantities when asked (--explain).</summary>
+    public static string Derivative(PropertyModel engine, ThermodynamicState state, Commands.DeriveTarget target, double value, DerivativeExplanation? explanation, OutputFormat format)
     {
-        string unit = PartialDerivatives.Unit(of, by);
-        string symbol = $"(d{of}/d{by})_{hold}";
+        string unit = target.Unit;
+        string by = target.By.ToString();
+        string hold = target.Hold.ToString();
         return format switch
         {
             OutputFormat.Json => JsonText.Write(json =>
             {
                 json.WriteStartObject();
                 WriteHeader(json, engine, state);
-                json.WriteString("of", of.ToString());
-                json.WriteString("by", by.ToString());
-                json.WriteString("hold", hold.ToString());
+                json.WriteString("of", target.OfName);
+                json.WriteString("by", by);
+                json.WriteString("hold", hold);
                 json.WriteFinite("value", value);
                 json.WriteString("unit", unit);
                 json.WriteFinite("temperature_K", state.Temperature);
                 json.WriteFinite("pressure_Pa", state.Pressure);
                 json.WriteFinite("density_mol_m3", state.Density);
+                if (explanation is not null)
+                {
+                    DerivativeWriter.WriteExplanation(json, explanation);
+                }
+
                 json.WriteEndObject();
             }),
             OutputFormat.Csv => CsvText.Write(
-                ["of", "by", "hold", "value", "unit", "temperature_K", "pressure_Pa", "density_mol_m3"],
-                [[of.ToString(), by.ToString(), hold.ToString(), NumberText.RoundTrip(value), unit,
-                  NumberText.RoundTrip(state.Temperature), NumberText.RoundTrip(state.Pressure), NumberText.RoundTrip(state.Density)]]),
-            _ => $"{Title(engine, state)}{Environment.NewLine}{symbol} = {NumberText.Table(value)} {unit}{Environment.NewLine}"
-                 + $"(molar basis; SI units; reference: {engine.Reference.Id}){Environment.NewLine}",
+                ["of", "by", "hold", "value", "unit", "temperature_K", "pressure_Pa", "density_mol_m3", .. DerivativeWriter.CsvHeader(explanation)],
+                [[target.OfName, by, hold, NumberText.RoundTrip(value), unit,
+                  NumberText.RoundTrip(state.Temperature), NumberText.RoundTrip(state.Pressure), NumberText.RoundTrip(state.Density), .. DerivativeWriter.CsvCells(explanation)]]),
+            _ => $"{Title(engine, state)}{Environment.NewLine}{target.Symbol} = {NumberText.Table(value)} {unit}{Environment.NewLine}"
+                 + $"(molar basis; SI units; reference: {engine.Reference.Id}){Environment.NewLine}"
+                 + (explanation is null ? "" : DerivativeWriter.Table(target, explanation, value, unit)),
         };
     }
 

@@ -21,7 +21,7 @@ namespace PhaseSlope.Core.Models;
 /// The model is valid for T &gt; 0 and 0 &lt; ρ &lt; 1/b′; both attractive factors 1 + e_iρ
 /// stay positive there because b′ + e_i = (1 + δ_i)·b &gt; 0 for every form used here.
 /// </remarks>
-public sealed class CubicModel : IResidualModel
+public sealed class CubicModel : IResidualModel, IMixedThirdDerivatives
 {
     private const double R = Constants.GasConstant;
     private readonly double _delta1;
@@ -390,6 +390,25 @@ public sealed class CubicModel : IResidualModel
             + theta * b * (dRhoRho * d - 2 * dRho * dRho) / (d * d * d);
         double aTRho = R * bRep / oneMinusEta - thetaT * b / d;
         return new HelmholtzDerivatives(temperature, density, value, dT, dTT, aRho, aRhoRho, aRhoRhoRho, aTRho);
+    }
+
+    /// <inheritdoc />
+    /// <remarks>From ∂²A_r/∂T∂ρ = R·b′/(1 − b′ρ) − θ′·b/D with D = (1 + δ′1·bρ)(1 + δ′2·bρ) and
+    /// θ = a·α(T)/b (see <see cref="Helmholtz"/>): ∂³A_r/∂T²∂ρ = −θ″·b/D and
+    /// ∂³A_r/∂T∂ρ² = R·b′²/(1 − b′ρ)² + θ′·b·(dD/dρ)/D², in closed form from a(T)'s first two
+    /// T-derivatives.</remarks>
+    public (double DTTRho, double DTRhoRho) MixedThirdDerivatives(double temperature, double density)
+    {
+        AlphaValue alpha = Alpha.Evaluate(temperature);
+        double b = CovolumeB;
+        double bRep = TranslatedCovolume;
+        double thetaT = AttractionA * alpha.FirstDerivative / b;
+        double thetaTT = AttractionA * alpha.SecondDerivative / b;
+        double eta = b * density;
+        double d = (1 + _delta1 * eta) * (1 + _delta2 * eta);
+        double dRho = b * (_delta1 + _delta2 + 2 * _delta1 * _delta2 * eta);
+        double oneMinusEta = 1 - bRep * density;
+        return (-thetaTT * b / d, R * bRep * bRep / (oneMinusEta * oneMinusEta) + thetaT * b * dRho / (d * d));
     }
 
     /// <summary>Pressure P(T, ρ) in Pa.</summary>

@@ -112,6 +112,8 @@ public static class UnitTable
         U("1/K", Dimension.InverseTemperature, 1m, SiBrochure),
         U("1/Pa", Dimension.InversePressure, 1m, SiBrochure),
         U("1/bar", Dimension.InversePressure, 1m, 1e5m, $"{Sp811} B.8 (exact)"),
+        U("1/kPa", Dimension.InversePressure, 1m, 1e3m, SiPrefix),
+        U("1/MPa", Dimension.InversePressure, 1m, 1e6m, SiPrefix),
         U("K/Pa", Dimension.TemperaturePerPressure, 1m, SiBrochure),
         U("K/bar", Dimension.TemperaturePerPressure, 1m, 1e5m, $"{Sp811} B.8 (exact)"),
     ];

@@ -154,6 +154,19 @@ public sealed class OfferedOptionTests : IDisposable
         yield return Differs("derive", "--by", derive, ["derive", "propane", "--of", "U", "--by", "P", "--hold", "T", "-T", "300", "-P", "1MPa"]);
         yield return Differs("derive", "--hold", derive, ["derive", "propane", "--of", "U", "--by", "V", "--hold", "S", "-T", "300", "-P", "1MPa"]);
         yield return Refused("derive", "--hold", ["derive", "propane", "--of", "U", "--by", "V", "--hold", "V", "-T", "300", "-P", "1MPa"]);
+        yield return Changes("derive", "--explain", derive, "--explain");
+        // --from-measured: the user's values instead of a model (no FLUID); their T, P, v, s, M.
+        string[] measured = ["derive", "--from-measured", "alpha=1e-3,kappa_t=1e-9,cp=100", "--of", "T", "--by", "P", "--hold", "H", "-T", "300", "-P", "1MPa", "--molar-volume", "1e-4"];
+        yield return Differs("derive", "--from-measured", measured, Replace(measured, "alpha=1e-3,kappa_t=1e-9,cp=100", "alpha=2e-3,kappa_t=1e-9,cp=100"));
+        yield return Refused("derive", "--from-measured", [.. derive, "--from-measured", "alpha=1e-3"]);
+        yield return Differs("derive", "--molar-volume", measured, Replace(measured, "1e-4", "2e-4"));
+        yield return Refused("derive", "--molar-volume", [.. derive, "--molar-volume", "1e-4"]);
+        string[] sound = ["derive", "--from-measured", "alpha=1e-3,kappa_t=1e-9,cp=100", "--of", "w", "-T", "300", "--molar-volume", "1e-4", "--molar-mass", "50 g/mol"];
+        yield return Differs("derive", "--molar-mass", sound, Replace(sound, "50 g/mol", "60 g/mol"));
+        yield return Refused("derive", "--molar-mass", [.. derive, "--molar-mass", "44 g/mol"]);
+        string[] gibbsMeasured = ["derive", "--from-measured", "alpha=1e-3", "--of", "G", "--by", "T", "--hold", "P", "--entropy", "100"];
+        yield return Differs("derive", "--entropy", gibbsMeasured, Replace(gibbsMeasured, "100", "200"));
+        yield return Refused("derive", "--entropy", Replace(Replace(gibbsMeasured, "--entropy", "--density"), "100", "5"));
         string[] gibbs = ["derive", "propane", "--of", "G", "--by", "T", "--hold", "P", "-T", "300", "-P", "1MPa"];
         yield return Changes("derive", "--reference", gibbs, "--reference", "nbp");
         foreach (var row in StateRows("derive", derive).Where(r => r.Option != "--reference"))
@@ -701,6 +714,8 @@ public sealed class OfferedOptionTests : IDisposable
     [InlineData("curve", "propane", "--points", "4", "--format", "json")]
     [InlineData("state", "propane", "-T", "300", "-P", "1MPa", "--format", "json")]
     [InlineData("derive", "propane", "--of", "V", "--by", "P", "--hold", "T", "-T", "300", "-P", "1MPa", "--format", "json")]
+    [InlineData("derive", "propane", "--of", "T", "--by", "P", "--hold", "H", "-T", "300", "-P", "1MPa", "--explain", "--format", "json")]
+    [InlineData("derive", "--from-measured", "alpha=1e-3 ± 1e-5,kappa_t=1e-9,cp=100", "--of", "w", "-T", "300", "--molar-volume", "1e-4", "--molar-mass", "50 g/mol", "--format", "json")]
     [InlineData("fit", "{csv}", "--format", "json")]
     [InlineData("latent", "{csv}", "--fluid", "{fluid}", "--format", "json")]
     [InlineData("audit", "--form", "antoine", "--coefficients", LangeWater, "--range", "1,100", "--fluid", "water", "--format", "json")]
