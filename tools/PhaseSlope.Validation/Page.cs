@@ -1,0 +1,114 @@
+using System.Globalization;
+using System.Text;
+
+namespace PhaseSlope.Validation;
+
+/// <summary>The Markdown page being written: headings, paragraphs and tables, with '\n' line ends
+/// whatever the platform, so the file is byte-identical everywhere.</summary>
+internal sealed class Page
+{
+    private readonly StringBuilder _text = new();
+
+    public void Heading(int level, string title) => Block(new string('#', level) + " " + title);
+
+    public void Paragraph(string text) => Block(text);
+
+    /// <summary>A list item per entry.</summary>
+    public void Bullets(IEnumerable<string> items) => Block(string.Join("\n", items.Select(i => "- " + i)));
+
+    /// <summary>A table; <paramref name="right"/> marks the columns aligned right (numbers).</summary>
+    public void Table(string[] header, IEnumerable<string[]> rows, params int[] right)
+    {
+        var lines = new List<string>
+        {
+            "| " + string.Join(" | ", header) + " |",
+            "| " + string.Join(" | ", header.Select((_, i) => right.Contains(i) ? "---:" : "---")) + " |",
+        };
+        foreach (var row in rows)
+        {
+            if (row.Length != header.Length)
+            {
+                throw new InvalidOperationException($"table row has {row.Length} cells, header {header.Length}: {string.Join(" | ", row)}");
+            }
+
+            lines.Add("| " + string.Join(" | ", row) + " |");
+        }
+
+        Block(string.Join("\n", lines));
+    }
+
+    private void Block(string text)
+    {
+        if (_text.Length > 0)
+        {
+            _text.Append('\n');
+        }
+
+        _text.Append(text.TrimEnd()).Append('\n');
+    }
+
+    public override string ToString() => _text.ToString();
+}
+
+/// <summary>Number formatting for the page: invariant culture, and only as many digits as the
+/// computation behind them is converged to, so the page is the same on every machine.</summary>
+internal static class Fmt
+{
+    private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
+
+    /// <summary>Fixed decimals.</summary>
+    public static string F(double x, int decimals) => Clean(x.ToString("F" + decimals, Inv));
+
+    /// <summary>A signed percentage with fixed decimals ("+0.37 %"; a rounded zero is "0.00 %").</summary>
+    public static string Pct(double fraction, int decimals)
+    {
+        string s = Clean((100 * fraction).ToString("F" + decimals, Inv));
+        return (s.StartsWith('-') || IsZero(s) ? s : "+" + s).Replace("-", "−") + " %";
+    }
+
+    /// <summary>An unsigned percentage with fixed decimals.</summary>
+    public static string PctAbs(double fraction, int decimals) => Clean((100 * fraction).ToString("F" + decimals, Inv)) + " %";
+
+    /// <summary>A signed number with fixed decimals.</summary>
+    public static string Signed(double x, int decimals)
+    {
+        string s = Clean(x.ToString("F" + decimals, Inv));
+        return (s.StartsWith('-') || IsZero(s) ? s : "+" + s).Replace("-", "−");
+    }
+
+    /// <summary>A quantity near the rounding floor (a residual, a relative error), shown as the
+    /// power of ten above it ("below 1e-13"): its digits change with the machine, its decade
+    /// hardly ever; a value that is exactly zero is "0".</summary>
+    public static string Below(double x) => x == 0 ? "0" : "below " + Ceiling(x);
+
+    /// <summary>The next of 1·10^k, 3·10^k above |x| ("3e-13"): a bound whose steps are wide
+    /// enough that the last digits of a rounding-level quantity do not move it.</summary>
+    public static string Ceiling(double x)
+    {
+        x = Math.Abs(x);
+        int k = (int)Math.Floor(Math.Log10(x));
+        double unit = Math.Pow(10, k);
+        return x < 3 * unit ? "3e" + k.ToString(Inv) : "1e" + (k + 1).ToString(Inv);
+    }
+
+    /// <summary>An upper bound as a power of ten ("1e-12"), the number itself.</summary>
+    public static string Decade(double x)
+    {
+        int exponent = (int)Math.Floor(Math.Log10(Math.Abs(x)) + 1e-9) + 1;
+        return "1e" + exponent.ToString(Inv);
+    }
+
+    /// <summary>Two significant digits in exponent form ("3.1e-9").</summary>
+    public static string E2(double x)
+    {
+        string s = x.ToString("0.0e+0", Inv).Replace("e+", "e");
+        return s;
+    }
+
+    /// <summary>An integer with thin grouping ("7 130").</summary>
+    public static string N(int n) => n.ToString("#,0", Inv).Replace(",", " ");
+
+    private static bool IsZero(string s) => s.TrimStart('-').All(c => c == '0' || c == '.');
+
+    private static string Clean(string s) => IsZero(s) ? s.TrimStart('-') : s;
+}
