@@ -57,7 +57,7 @@ internal static class Fmt
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 
     /// <summary>Fixed decimals.</summary>
-    public static string F(double x, int decimals) => Clean(x.ToString("F" + decimals, Inv));
+    public static string F(double x, int decimals) => Clean(x.ToString("F" + decimals, Inv)).Replace("-", "−");
 
     /// <summary>A signed percentage with fixed decimals ("+0.37 %"; a rounded zero is "0.00 %").</summary>
     public static string Pct(double fraction, int decimals)
