@@ -45,4 +45,9 @@ internal static class References
     /// <summary>Propane's saturated-liquid density at its normal boiling point, kg/m³ (Lemmon et al.
     /// 2009; from memory), as in <c>VolumeShiftTests</c>.</summary>
     public const double PropaneLiquidDensityAtTb = 580.9;
+
+    /// <summary>Internal pressure (∂u/∂v)_T of liquid toluene at 25 °C, about 3.5e8 Pa, from handbook
+    /// expansivity and compressibility (CRC Handbook; from memory). No test holds it: the page
+    /// shows it as a known limit of the model, not as a check.</summary>
+    public const double TolueneInternalPressure = 3.5e8;
 }

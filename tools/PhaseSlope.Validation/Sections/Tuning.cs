@@ -17,12 +17,12 @@ internal static class Tuning
         page.Heading(2, "Tuning the model to vapour pressures (`tune`)");
         page.Paragraph("Checked by `Tuning/AlphaTunerTests`, `Tuning/CatalogAlphaTests`, `Tuning/VolumeShiftTunerTests` and `Commands/TuneCommandTests`.");
         Water(page);
+        Recovery(page);
         OnePoint(page);
         Catalog(page);
         page.Paragraph("""
-            Also checked by the test suite, not recomputed here: model-generated data recover their own
-            Mathias–Copeman parameters and the exact parameter gradient ∂ln Psat/∂θ agrees with central
-            differences (`AlphaTunerTests`); volume translation tuned to liquid densities
+            Also checked by the test suite, not recomputed here: the exact parameter gradient ∂ln Psat/∂θ agrees
+            with central differences (`AlphaTunerTests`); volume translation tuned to liquid densities
             (`VolumeShiftTunerTests`); ∂θ/∂(Tc, Pc) from the normal equations against re-tuning
             (`AlphaTunerTests.ParametersMoveWithTcAndPc_AsARetuningShows`).
             """);
@@ -56,6 +56,24 @@ internal static class Tuning
             range is not reached:
             """);
         page.Table(["tuned α", "own α AAD", "tuned AAD", "largest deviation", "held to"], rows, 1, 2, 3);
+    }
+
+    /// <summary>AlphaTunerTests.ModelGeneratedData_RecoverTheirOwnParameters: Peng–Robinson propane with
+    /// Mathias–Copeman (0.6, −0.2, 0.5), 12 temperatures 130–350 K, tuned back.</summary>
+    private static void Recovery(Page page)
+    {
+        var propane = FluidCatalog.Embedded.Find("propane");
+        double[] truth = [0.6, -0.2, 0.5];
+        var known = propane with { AlphaParameters = [new AlphaParameterSet(AlphaForm.MathiasCopeman, CubicModelKind.PengRobinson, truth, "test")] };
+        var solver = new PhaseSlope.Core.Equilibrium.CoexistenceSolver(CubicModel.For(CubicModelKind.PengRobinson, known, AlphaForm.MathiasCopeman), 120);
+        var data = Enumerable.Range(0, 12).Select(i => 130.0 + i * 20).Select(t => new VapourPressurePoint(t, solver.AtTemperature(t).Pressure)).ToArray();
+        var result = AlphaTuner.Tune(new TuningRequest { BaseFluid = propane, Form = AlphaForm.MathiasCopeman, VapourPressures = data, Date = Day });
+        double worst = Enumerable.Range(0, 3).Max(j => Math.Abs(result.Parameters[j].Value - truth[j]));
+        page.Paragraph($"""
+            **Model-generated data recover their parameters**: Peng–Robinson propane with Mathias–Copeman (0.6, −0.2, 0.5),
+            12 temperatures from 130 to 350 K, tuned from the model's own α: the constants come back to {Fmt.Below(worst)}
+            (held to 1e-6; Levenberg–Marquardt stops with the pressures reproduced to a few 1e-9).
+            """);
     }
 
     private static void OnePoint(Page page)
