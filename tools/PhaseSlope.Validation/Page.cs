@@ -31,7 +31,8 @@ internal sealed class Page
                 throw new InvalidOperationException($"table row has {row.Length} cells, header {header.Length}: {string.Join(" | ", row)}");
             }
 
-            lines.Add("| " + string.Join(" | ", row) + " |");
+            // A '|' inside a cell would end it: escape every one not escaped already.
+            lines.Add("| " + string.Join(" | ", row.Select(cell => System.Text.RegularExpressions.Regex.Replace(cell, @"(?<!\\)\|", @"\|"))) + " |");
         }
 
         Block(string.Join("\n", lines));

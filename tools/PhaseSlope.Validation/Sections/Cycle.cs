@@ -11,7 +11,7 @@ internal static class Cycle
     {
         page.Heading(2, "A worked vapour-compression cycle (`plot --diagram p-h --cycle`)");
         page.Paragraph($"""
-            {References.CycleBook}: R-134a between {References.CycleLowPressure / 1e6} and {References.CycleHighPressure / 1e6} MPa,
+            {References.CycleBook}. R-134a between {References.CycleLowPressure / 1e6} and {References.CycleHighPressure / 1e6} MPa,
             saturated vapour at the compressor inlet, saturated liquid at the condenser outlet, isentropic
             compression. Peng–Robinson (its own alpha) with the catalog cp°, the cycle computed by
             `Core/Cycles/VapourCompressionCycle` on the −40 °C convention of the book's tables, the saturation
