@@ -106,6 +106,17 @@ internal static class Fmt
         return s;
     }
 
+    /// <summary>A model's name as the page writes it.</summary>
+    public static string Model(PhaseSlope.Core.Models.CubicModelKind kind) => kind switch
+    {
+        PhaseSlope.Core.Models.CubicModelKind.PengRobinson => "Peng–Robinson",
+        PhaseSlope.Core.Models.CubicModelKind.PengRobinson1978 => "Peng–Robinson 1978",
+        PhaseSlope.Core.Models.CubicModelKind.SoaveRedlichKwong => "Soave–Redlich–Kwong",
+        PhaseSlope.Core.Models.CubicModelKind.RedlichKwong => "Redlich–Kwong",
+        PhaseSlope.Core.Models.CubicModelKind.VanDerWaals => "van der Waals",
+        _ => kind.ToString(),
+    };
+
     /// <summary>An integer with thin grouping ("7 130").</summary>
     public static string N(int n) => n.ToString("#,0", Inv).Replace(",", " ");
 

@@ -33,7 +33,8 @@ internal static class IdealGas
         page.Table(["fluid", "correlation", "cp° [J/(mol·K)]", "reference", "difference", "tolerance"], rows, 2, 3, 4, 5);
     }
 
-    /// <summary>The correlation's authors, the start of its source text.</summary>
+    /// <summary>The correlation's authors and year, from the start of its source text: the comma-separated
+    /// author segments (a segment with "&amp;" or "et al." still names authors) and the first "(yyyy)".</summary>
     private static string Correlation(string source)
     {
         if (source.StartsWith("estimated by the Joback", StringComparison.Ordinal))
@@ -41,8 +42,22 @@ internal static class IdealGas
             return "Joback estimate";
         }
 
-        int comma = source.IndexOf(',', StringComparison.Ordinal);
-        string head = comma > 0 ? source[..comma] : source;
-        return head.Length > 60 ? head[..60] + "…" : head;
+        if (char.IsLower(source[0]))
+        {
+            // A description of the method rather than a publication: its first clause.
+            int end = source.IndexOfAny([':', ',', '(']);
+            return (end > 0 ? source[..end] : source).Trim();
+        }
+
+        var segments = source.Split(", ");
+        string authors = segments[0];
+        for (int i = 1; i < segments.Length && (segments[i].Contains(" & ", StringComparison.Ordinal) || segments[i].Contains("et al.", StringComparison.Ordinal)); i++)
+        {
+            authors += ", " + segments[i];
+        }
+
+        var year = System.Text.RegularExpressions.Regex.Match(source, @"\((1[89]|20)\d\d\)");
+        string text = year.Success && !authors.Contains(year.Value, StringComparison.Ordinal) ? authors + " " + year.Value : authors;
+        return text.Length > 60 ? text[..60] + "…" : text;
     }
 }

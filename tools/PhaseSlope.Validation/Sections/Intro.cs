@@ -16,9 +16,9 @@ internal static class Intro
             use (read from the test code itself where the tests hold them as tables). Most are recalled from
             the named sources ("from memory"): they are the commonly tabulated values, but were not re-read
             from the printed source. Quantities at the rounding floor (residuals, round trips) are shown as
-            the power of ten they lie below, so the page does not change with the machine's last digits;
-            sweeps that take long in the test suite are summarised here on a smaller sample, stated with the
-            section.
+            the next 1·10^k or 3·10^k above them ("below 3e-13"), so the page does not change with the
+            machine's last digits; seeded sweeps use the tests' seeds and sizes. Where a check is done only
+            by the test suite, the section names the test instead of a number.
             """);
     }
 }

@@ -185,7 +185,7 @@ internal static class Numerics
         {
             string name = (string)c[0];
             var kind = (CubicModelKind)c[1];
-            names.Add($"{name} ({kind})");
+            names.Add($"{name} ({Fmt.Model(kind)})");
             var solver = CoexistenceSolver.For(FluidCatalog.Embedded.Find(name), kind);
             foreach (double tr in reduced)
             {
