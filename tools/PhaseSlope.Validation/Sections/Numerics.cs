@@ -21,11 +21,12 @@ internal static class Numerics
         Helmholtz(rows);
         CatalogSweep(rows);
         Slopes(rows);
+        NearCritical(rows);
         RandomSweep(rows);
         page.Table(["check", "reference", "result", "held to", "where"], rows);
         page.Paragraph("""
             Also checked by the test suite, not recomputed on this page: ln φ against ∫(Z − 1)/P dP along the isotherm
-            (`Properties/PhaseStateTests`); the near-critical amplitude (ρL − ρV)/√(1 − T/Tc), the critical series
+            (`Properties/PhaseStateTests`); the critical series
             against the Newton solution across its boundary and saturation within 1e-12 of Pc
             (`Equilibrium/NearCriticalTests`); a non-cubic model through the same interface
             (`Models/NonCubicModelTests`). Each test states its tolerance and why.
@@ -199,6 +200,34 @@ internal static class Numerics
 
         rows.Add([$"Clapeyron slope Δh/(TΔv) vs a 5-point central difference (h = 1e-4·T) of the solver's own Psat(T), T/Tc = 0.5 … 0.99; {string.Join(", ", names)}", "Clapeyron (1834)",
             "relative difference " + Fmt.Below(worst), "1e-7", "`Equilibrium/CoexistenceSolverTests`"]);
+    }
+
+    /// <summary>NearCriticalTests.AtTemperature_WithinOneInAMillionOfTc_FollowsTheClassicalSquareRoot: the
+    /// mean-field amplitude (ρL − ρV)/√ε at ε = 1 − T/Tc = 1e-6 and 1e-8 against ε = 1e-10, on its Fluids table.</summary>
+    private static void NearCritical(List<string[]> rows)
+    {
+        double worst = 0;
+        var names = new List<string>();
+        foreach (object[] c in NearCriticalTests.Fluids)
+        {
+            string name = (string)c[0];
+            var kind = (CubicModelKind)c[1];
+            names.Add($"{name} ({Fmt.Model(kind)})");
+            var solver = CoexistenceSolver.For(FluidCatalog.Embedded.Find(name), kind);
+            double tc = solver.CriticalTemperature;
+            double Ratio(double eps)
+            {
+                double t = tc * (1 - eps);
+                var p = solver.AtTemperature(t);
+                return (p.Liquid.Density - p.Vapour.Density) / Math.Sqrt(1 - t / tc);
+            }
+
+            double reference = Ratio(1e-10);
+            worst = Math.Max(worst, Math.Max(Math.Abs(Ratio(1e-8) / reference - 1), Math.Abs(Ratio(1e-6) / reference - 1)));
+        }
+
+        rows.Add([$"near-critical: (ρL − ρV)/√(1 − T/Tc) at 1e-6 and 1e-8 below Tc against 1e-10 below; {string.Join(", ", names)}", "mean-field square root (constant amplitude)",
+            $"relative difference {Fmt.Below(worst)} (the O(1 − T/Tc) term plus the rounding of T itself)", "3e-6", "`Equilibrium/NearCriticalTests`"]);
     }
 
     /// <summary>The seeded sweep of RandomFluidSweepTests, same seed, recipe and size (about
