@@ -45,7 +45,8 @@ internal sealed class Page
             _text.Append('\n');
         }
 
-        _text.Append(text.TrimEnd()).Append('\n');
+        // Raw string literals carry the source file's line ends: the page always has '\n'.
+        _text.Append(text.Replace("\r\n", "\n").TrimEnd()).Append('\n');
     }
 
     public override string ToString() => _text.ToString();
@@ -58,11 +59,29 @@ internal static class Fmt
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 
     /// <summary>Fixed decimals.</summary>
-    public static string F(double x, int decimals) => Clean(x.ToString("F" + decimals, Inv)).Replace("-", "−");
+    public static string F(double x, int decimals)
+    {
+        WarnNearBoundary(x, decimals);
+        return Clean(x.ToString("F" + decimals, Inv)).Replace("-", "−");
+    }
+
+    /// <summary>A value within 1e-4 of a unit in its last printed digit from a rounding boundary could
+    /// print differently on another machine: say so on stderr (the page is still written), so the
+    /// section can print one digit less.</summary>
+    private static void WarnNearBoundary(double x, int decimals)
+    {
+        double scaled = Math.Abs(x) * Math.Pow(10, decimals);
+        double fraction = scaled - Math.Floor(scaled);
+        if (Math.Abs(fraction - 0.5) < 1e-4 && scaled < 1e12)
+        {
+            Console.Error.WriteLine($"warning: {x.ToString("R", Inv)} printed with {decimals} decimals lies next to a rounding boundary");
+        }
+    }
 
     /// <summary>A signed percentage with fixed decimals ("+0.37 %"; a rounded zero is "0.00 %").</summary>
     public static string Pct(double fraction, int decimals)
     {
+        WarnNearBoundary(100 * fraction, decimals);
         string s = Clean((100 * fraction).ToString("F" + decimals, Inv));
         return (s.StartsWith('-') || IsZero(s) ? s : "+" + s).Replace("-", "−") + " %";
     }
@@ -73,6 +92,7 @@ internal static class Fmt
     /// <summary>A signed number with fixed decimals.</summary>
     public static string Signed(double x, int decimals)
     {
+        WarnNearBoundary(x, decimals);
         string s = Clean(x.ToString("F" + decimals, Inv));
         return (s.StartsWith('-') || IsZero(s) ? s : "+" + s).Replace("-", "−");
     }

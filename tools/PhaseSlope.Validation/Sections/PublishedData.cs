@@ -94,7 +94,7 @@ internal static class PublishedData
             rows.Add([
                 name,
                 fluid.NormalBoilingPoint!.Value.ToString(System.Globalization.CultureInfo.InvariantCulture), tb.ToString(System.Globalization.CultureInfo.InvariantCulture),
-                Fmt.Signed(fluid.NormalBoilingPoint!.Value - tb, 2),
+                Fmt.Signed(fluid.NormalBoilingPoint!.Value - tb, 3),
                 Fmt.F(point.EnthalpyOfVaporization / 1e3, 2), Fmt.F(latent / 1e3, 2), Fmt.Pct(point.EnthalpyOfVaporization / latent - 1, 1), "±" + Fmt.PctAbs(tolerance, 0),
             ]);
         }
