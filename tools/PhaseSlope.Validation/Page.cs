@@ -100,15 +100,25 @@ internal static class Fmt
     /// <summary>A quantity near the rounding floor (a residual, a relative error), shown as the
     /// power of ten above it ("below 1e-13"): its digits change with the machine, its decade
     /// hardly ever; a value that is exactly zero is "0".</summary>
-    public static string Below(double x) => x == 0 ? "0" : "below " + Ceiling(x);
+    /// <remarks>A value that the generator finds within 2 % of a step is reported on stderr; give such a
+    /// row a <paramref name="floor"/> (about 1.5 times the step below it) so that its bound does not
+    /// move with the last bits of a platform's math library.</remarks>
+    public static string Below(double x, double floor = 0)
+        => x == 0 && floor == 0 ? "0" : "below " + Ceiling(Math.Max(Math.Abs(x), floor), warn: Math.Abs(x) >= floor);
 
     /// <summary>The next of 1·10^k, 3·10^k above |x| ("3e-13"): a bound whose steps are wide
     /// enough that the last digits of a rounding-level quantity do not move it.</summary>
-    public static string Ceiling(double x)
+    public static string Ceiling(double x, bool warn = true)
     {
         x = Math.Abs(x);
         int k = (int)Math.Floor(Math.Log10(x));
         double unit = Math.Pow(10, k);
+        double r = x / unit;
+        if (warn && (r < 1.02 || Math.Abs(r - 3) < 0.06 || r > 9.8))
+        {
+            Console.Error.WriteLine($"warning: {x.ToString("R", Inv)} lies within 2 % of a 1e{k}/3e{k} step of its bound");
+        }
+
         return x < 3 * unit ? "3e" + k.ToString(Inv) : "1e" + (k + 1).ToString(Inv);
     }
 

@@ -29,7 +29,7 @@ internal static class Envelopes
 
             var nearest = CriticalPointCriteria.Locate(model, composition).MinBy(c => Math.Abs(c.Temperature - critical.Temperature))!;
             rows.Add([label, $"{Fmt.F(critical.Temperature, 2)} K, {Fmt.F(critical.Pressure / 1e6, 3)} MPa",
-                Fmt.Below(critical.Temperature / nearest.Temperature - 1), Fmt.Below(critical.Pressure / nearest.Pressure - 1), "1e-5"]);
+                Fmt.Below(critical.Temperature / nearest.Temperature - 1, 1.5e-7), Fmt.Below(critical.Pressure / nearest.Pressure - 1, 1.5e-7), "1e-5"]);
         }
 
         page.Table(["feed (mole fractions)", "critical point (envelope)", "T vs Heidemann–Khalil", "P vs Heidemann–Khalil", "held to"], rows, 1);
