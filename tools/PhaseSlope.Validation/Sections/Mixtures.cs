@@ -61,7 +61,7 @@ internal static class Mixtures
         var benzene = MixtureEquilibrium.For([FluidCatalog.Embedded.Find("benzene"), FluidCatalog.Embedded.Find("cyclohexane")], CubicModelKind.PengRobinson, [0, 0.02, 0.02, 0]);
         var azeotrope = BinaryDiagram.AtPressure(benzene, Atmosphere).Azeotrope;
         rows.Add(["benzene–cyclohexane azeotrope at 1 atm, k_ij = 0.02 (a typical value, from memory)", $"{References.BenzeneCyclohexaneAzeotropeCelsius} °C at x_benzene ≈ {References.BenzeneCyclohexaneAzeotropeX} (CRC Handbook, from memory)",
-            azeotrope is null ? "no azeotrope" : $"{Fmt.F(azeotrope.Temperature - Kelvin, 2)} °C at x = {Fmt.F(azeotrope.MoleFraction, 3)} ({azeotrope.Kind})",
+            azeotrope is null ? "no azeotrope" : $"{Fmt.F(azeotrope.Temperature - Kelvin, 2)} °C at x = {Fmt.F(azeotrope.MoleFraction, 3)} ({(azeotrope.Kind == AzeotropeKind.MaximumPressure ? "maximum-pressure, minimum-boiling" : "minimum-pressure, maximum-boiling")})",
             azeotrope is null ? "–" : $"{Fmt.Signed(azeotrope.Temperature - Kelvin - References.BenzeneCyclohexaneAzeotropeCelsius, 2)} K, {Fmt.Signed(azeotrope.MoleFraction - References.BenzeneCyclohexaneAzeotropeX, 3)}",
             "±0.5 K, ±0.1", "`Mixtures/BinaryDiagramTests`"]);
 
