@@ -243,37 +243,9 @@ internal static class Numerics
 
     private static void RandomSweep(List<string[]> rows)
     {
-        CubicModelKind[] kinds = [CubicModelKind.PengRobinson, CubicModelKind.PengRobinson1978, CubicModelKind.SoaveRedlichKwong, CubicModelKind.RedlichKwong, CubicModelKind.VanDerWaals];
-        var random = new Random(20261202);
-        double worstResidual = 0, worstRoundTrip = 0, lowestPressure = double.MaxValue;
-        int failures = 0;
-        for (int i = 0; i < RandomCases; i++)
-        {
-            double tc = 5 * Math.Pow(200, random.NextDouble());
-            double pc = 1e5 * Math.Pow(1000, random.NextDouble());
-            double omega = -0.4 + 2.0 * random.NextDouble();
-            var kind = kinds[random.Next(kinds.Length)];
-            bool twu = kind == CubicModelKind.PengRobinson && random.Next(3) == 0;
-            var model = twu
-                ? new CubicModel(kind, CubicForm.PengRobinson, new GeneralisedTwuAlpha(omega, tc), tc, pc)
-                : CubicModel.For(kind, tc, pc, omega);
-            var solver = new CoexistenceSolver(model, 0.3 * tc);
-            double t = random.NextDouble() < 0.8
-                ? 0.3 * tc + (0.999 * tc - 0.3 * tc) * random.NextDouble()
-                : tc * (1 - Math.Pow(10, -3 - 6 * random.NextDouble()));
-            try
-            {
-                var point = solver.AtTemperature(t);
-                worstResidual = Math.Max(worstResidual, point.Report.FugacityResidual);
-                lowestPressure = Math.Min(lowestPressure, point.Pressure);
-                var back = solver.AtPressure(point.Pressure);
-                worstRoundTrip = Math.Max(worstRoundTrip, Math.Abs(back.Temperature / t - 1));
-            }
-            catch (PhaseSlopeException)
-            {
-                failures++;
-            }
-        }
+        var sweep = PhaseSlope.Core.Tests.Equilibrium.RandomFluidSweepTests.Sweep(RandomCases);
+        int failures = sweep.Failures.Count;
+        double worstResidual = sweep.WorstResidual, worstRoundTrip = sweep.WorstRoundTrip, lowestPressure = sweep.LowestPressure;
 
         rows.Add([$"seeded sweep of random fluids (Tc 5–1000 K, Pc 0.1–100 MPa, ω −0.4…1.6, every model, generalised Twu for a third of the Peng–Robinson cases; T from 0.3 Tc to 1 − 1e-9 of Tc): {Fmt.N(RandomCases)} fluids, the test's seed and recipe", "equal fugacities; T back",
             $"{failures} failures; worst \\|ln φL − ln φV\\| {Fmt.Below(worstResidual)}, worst Tsat(Psat(T)) {Fmt.Below(worstRoundTrip)} relative (Psat down to about 1e{Math.Round(Math.Log10(lowestPressure)).ToString(System.Globalization.CultureInfo.InvariantCulture)} Pa)",
