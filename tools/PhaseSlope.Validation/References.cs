@@ -50,4 +50,53 @@ internal static class References
     /// expansivity and compressibility (CRC Handbook; from memory). No test holds it: the page
     /// shows it as a known limit of the model, not as a check.</summary>
     public const double TolueneInternalPressure = 3.5e8;
+
+    /// <summary>IAPWS (2011) equations for ice Ih (Wagner, Riethmann, Feistel &amp; Harvey, J. Phys. Chem.
+    /// Ref. Data 40, 043103 (2011); IAPWS R14-08(2011); from memory), as in <c>Solids/WaterSolidLinesTests</c>
+    /// (its private constants): triple point, sublimation ln(P/P_t) = θ⁻¹ Σ a_i θ^b_i and melting
+    /// P/P_t = 1 + Σ a_i (1 − θ^b_i), θ = T/T_t.</summary>
+    public const string Iapws2011 = "IAPWS (2011) ice Ih equations, Wagner et al., J. Phys. Chem. Ref. Data 40, 043103 (2011); from memory";
+    public const double IapwsTt = 273.16, IapwsPt = 611.657;
+    public static readonly double[] IapwsSublimationA = [-0.212144006e2, 0.273203819e2, -0.610598130e1];
+    public static readonly double[] IapwsSublimationB = [0.333333333e-2, 0.120666667e1, 0.170333333e1];
+    public static readonly double[] IapwsMeltingA = [0.119539337e7, 0.808183159e5, 0.333826860e4];
+    public static readonly double[] IapwsMeltingB = [0.300000e1, 0.257500e2, 0.103750e3];
+
+    /// <summary>The temperatures of <c>WaterSolidLinesTests.Sublimation_ClapeyronRoute_WithinThreePercentOfIapws</c> (its InlineData).</summary>
+    public static readonly double[] WaterSublimationTemperatures = [200.0, 215.0, 230.0, 245.0, 260.0, 270.0, 273.16];
+
+    public static double IapwsSublimation(double t)
+    {
+        double theta = t / IapwsTt, sum = 0;
+        for (int i = 0; i < 3; i++)
+        {
+            sum += IapwsSublimationA[i] * Math.Pow(theta, IapwsSublimationB[i]);
+        }
+
+        return IapwsPt * Math.Exp(sum / theta);
+    }
+
+    /// <summary>dP/dT of the IAPWS melting equation at T_t: −(P_t/T_t) Σ a_i b_i.</summary>
+    public static double IapwsMeltingSlopeAtTriplePoint() => -IapwsPt / IapwsTt * IapwsMeltingA.Select((a, i) => a * IapwsMeltingB[i]).Sum();
+
+    /// <summary>Carbon dioxide's triple point and normal sublimation temperature (CRC Handbook, triple
+    /// points table and sublimation at 1 atm; from memory), as in <c>Solids/CarbonDioxideSolidLinesTests</c>.</summary>
+    public const double Co2HandbookTt = 216.59, Co2HandbookPt = 0.518e6, Co2HandbookSublimation = 194.7;
+
+    /// <summary>Nitrogen's Simon–Glatzel melting line P/P_t = 1 + A[(T/T_t)^B − 1] (Span, Lemmon, Jacobsen,
+    /// Wagner &amp; Yokozeki, J. Phys. Chem. Ref. Data 29, 1361 (2000); from memory), as in
+    /// <c>Solids/SimonGlatzelTests</c> (which writes it into a fluid file of its own).</summary>
+    public const double N2Tt = 63.151, N2Pt = 12.5198e3, N2A = 12798.61, N2B = 1.78963;
+
+    /// <summary>Propane's triple point, 85.525 K and about 1.7e-4 Pa (Lemmon, McLinden &amp; Wagner,
+    /// J. Chem. Eng. Data 54, 3141 (2009); from memory), as in
+    /// <c>Equilibrium/TriplePointRangeTests.Propane_AtItsTriplePoint_IsSolvedNearTheReferencePressure</c>
+    /// with its bounds on |ln(P/P_ref)|.</summary>
+    public const double PropaneTt = 85.525, PropanePt = 1.7e-4, PropaneTunedLnBound = 0.10, PropaneDefaultLnBound = 0.92;
+
+    /// <summary>Liquid water and toluene at 25 °C, 1 atm: α [1/K], κ_T [1/Pa] (CRC Handbook; from memory),
+    /// and water's internal pressure 41 cal/cm³ (Dack, Chem. Soc. Rev. 4 (1975) 211; from memory), as in
+    /// <c>Commands/DeriveExplainTests</c> (PhaseSlope.Cli.Tests), with its model-to-measured bands.</summary>
+    public const double WaterAlpha = 2.572e-4, WaterKappa = 4.525e-10, WaterDackInternalPressure = 41 * 4.184e6;
+    public const double TolueneAlpha = 1.07e-3, TolueneKappa = 92e-11;
 }

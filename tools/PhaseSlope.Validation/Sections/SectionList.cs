@@ -13,6 +13,7 @@ internal static class SectionList
         VapourLines.Write,
         Cycle.Write,
         Flashes.Write,
+        SolidLines.Write,
         LatentHeatFromData.Write,
         Audit.Write,
         Tuning.Write,
