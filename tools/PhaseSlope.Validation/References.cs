@@ -1,3 +1,5 @@
+using PhaseSlope.Core.Properties;
+
 namespace PhaseSlope.Validation;
 
 /// <summary>Reference values that the tests hold inline (in attributes or assertions, where
@@ -99,4 +101,42 @@ internal static class References
     /// <c>Commands/DeriveExplainTests</c> (PhaseSlope.Cli.Tests), with its model-to-measured bands.</summary>
     public const double WaterAlpha = 2.572e-4, WaterKappa = 4.525e-10, WaterDackInternalPressure = 41 * 4.184e6;
     public const double TolueneAlpha = 1.07e-3, TolueneKappa = 92e-11;
+
+    /// <summary>Callen, Thermodynamics and an Introduction to Thermostatistics, 2nd ed. (1985), ch. 7; from memory.</summary>
+    public const string Callen = "Callen, Thermodynamics and an Introduction to Thermostatistics, 2nd ed. (1985), ch. 7; from memory";
+
+    /// <summary>The textbook forms of <c>JacobianReductionTests.ClassicIdentities_MatchTheirTextbookForms</c>
+    /// (its InlineData: Maxwell relations, the thermodynamic equation of state, natural-variable
+    /// derivatives, c_v and the Joule–Thomson coefficient), in the tool's notation.</summary>
+    public static readonly (PhaseSlope.Core.Properties.StateVariable Of, PhaseSlope.Core.Properties.StateVariable By, PhaseSlope.Core.Properties.StateVariable Hold, string Textbook)[] ClassicIdentities =
+    [
+        (StateVariable.S, StateVariable.V, StateVariable.T, "alpha/kappa_T"),
+        (StateVariable.S, StateVariable.P, StateVariable.T, "-v*alpha"),
+        (StateVariable.T, StateVariable.V, StateVariable.S, "-(T*alpha)/(kappa_T*cp - T*v*alpha^2)"),
+        (StateVariable.T, StateVariable.P, StateVariable.S, "T*v*alpha/cp"),
+        (StateVariable.U, StateVariable.V, StateVariable.T, "T*alpha/kappa_T - P"),
+        (StateVariable.H, StateVariable.P, StateVariable.T, "v*(1 - T*alpha)"),
+        (StateVariable.H, StateVariable.S, StateVariable.P, "T"),
+        (StateVariable.H, StateVariable.P, StateVariable.S, "v"),
+        (StateVariable.G, StateVariable.T, StateVariable.P, "-s"),
+        (StateVariable.A, StateVariable.V, StateVariable.T, "-P"),
+        (StateVariable.H, StateVariable.T, StateVariable.P, "cp"),
+        (StateVariable.U, StateVariable.T, StateVariable.V, "cp - T*v*alpha^2/kappa_T"),
+        (StateVariable.T, StateVariable.P, StateVariable.H, "v*(T*alpha - 1)/cp"),
+    ];
+
+    /// <summary>The 13 states (T [K], P [MPa]) that failed before the restricted-step Newton, the InlineData of
+    /// <c>MixtureCriticalRegionTests.Flash_StatesThatFailedBefore_Converge</c> (measured on this code's
+    /// earlier version; no outside source).</summary>
+    public static readonly (double T, double MPa)[] CriticalRegionFailedBefore =
+    [
+        (207, 6.05), (216, 7.10), (218, 7.35), (220, 7.60), (222, 7.85), (224, 8.10), (229, 8.70),
+        (232, 9.05), (239, 9.70), (240, 9.75), (242, 9.90), (242, 9.95), (243, 9.95),
+    ];
+
+    /// <summary>Carbon dioxide–ethane maximum-pressure azeotrope of about two-thirds carbon dioxide (Fredenslund
+    /// &amp; Mollerup, J. Chem. Soc. Faraday Trans. 1 70, 1653 (1974); from memory), at the temperatures of
+    /// <c>BinaryDiagramTests.CarbonDioxideEthane_MaximumPressureAzeotrope_WithThePublishedKij</c>.</summary>
+    public const string Co2EthaneAzeotropeSource = "Fredenslund & Mollerup, J. Chem. Soc. Faraday Trans. 1 70, 1653 (1974); from memory";
+    public static readonly double[] Co2EthaneAzeotropeTemperatures = [230.0, 250.0, 270.0];
 }
