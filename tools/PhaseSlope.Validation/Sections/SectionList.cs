@@ -1,6 +1,6 @@
 namespace PhaseSlope.Validation.Sections;
 
-/// <summary>The sections of the page in their order. A new section (solid lines, say) is one
+/// <summary>The sections of the page in their order. A new section is one
 /// static class with a <c>Write(Page)</c> method and one line here.</summary>
 internal static class SectionList
 {
