@@ -107,7 +107,8 @@ internal static class Mixtures
             model; ln φ_i and its T, P and amount derivatives against central
             differences, with symmetry and Gibbs–Duhem (`Models/CubicMixtureModelTests`); flash material balance,
             equal fugacities and the tangent-plane test (`Mixtures/MixtureFlashTests`); robustness on T–P grids
-            of a 10-component gas (`Mixtures/MixtureRobustnessTests`, `Mixtures/MixtureCriticalRegionTests`); the
+            of a 10-component gas (`Mixtures/MixtureRobustnessTests`; the critical-region grid of
+            `Mixtures/MixtureCriticalRegionTests` is recomputed in the next section); the
             generalized Clapeyron slope at an azeotrope and in the pure limit (`Mixtures/BinaryDiagramTests`,
             `Mixtures/MixtureClapeyronTests`); and more.
             """);

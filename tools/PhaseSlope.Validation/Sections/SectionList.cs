@@ -1,6 +1,6 @@
 namespace PhaseSlope.Validation.Sections;
 
-/// <summary>The sections of the page in their order. A new section (solid lines, say) is one
+/// <summary>The sections of the page in their order. A new section is one
 /// static class with a <c>Write(Page)</c> method and one line here.</summary>
 internal static class SectionList
 {
@@ -13,11 +13,14 @@ internal static class SectionList
         VapourLines.Write,
         Cycle.Write,
         Flashes.Write,
+        SolidLines.Write,
+        Derivatives.Write,
         LatentHeatFromData.Write,
         Audit.Write,
         Tuning.Write,
         GroupContribution.Write,
         Mixtures.Write,
+        MixtureCriticalRegion.Write,
         Envelopes.Write,
         KnownLimits.Write,
         Pointers.Write,
