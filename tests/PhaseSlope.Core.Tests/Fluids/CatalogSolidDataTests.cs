@@ -386,7 +386,7 @@ public sealed partial class CatalogSolidDataTests(ITestOutputHelper output)
     /// <summary>Half a unit of a value's last printed digit, relative to the value (an upper bound:
     /// 0.5·10^(1−n) for n significant digits). The digits are the value's own (G6, trailing zeros
     /// dropped), which for the catalog's values of at most six digits are those printed in the
-    /// file whatever the unit (12.523 kPa is 12523 Pa, 0.51795 MPa is 517950 Pa).</summary>
+    /// file whatever the unit (12.5198 kPa is 12519.8 Pa, 0.51795 MPa is 517950 Pa).</summary>
     private static double HalfUnitOfLastDigit(SourcedValue value)
     {
         string mantissa = value.Value.ToString("G6", CultureInfo.InvariantCulture).Split('E')[0];
