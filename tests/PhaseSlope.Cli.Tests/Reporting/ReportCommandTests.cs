@@ -149,6 +149,30 @@ public sealed class ReportCommandTests : IDisposable
     }
 
     [Fact]
+    public void SolidSection_InEngineeringUnits_IsCurvesTextTable()
+    {
+        // The chosen --units reach the solid tables: the rows are those 'curve --line melting
+        // --units engineering' prints (degC, bar, kJ/kg, m3/kg), header lines and all.
+        string part = SolidPart(ReportHtml.Section(Report("carbon dioxide", "--units", "engineering"), "solid"), "Melting line");
+        var rows = ReportHtml.FirstTableRows(part);
+        string curve = RunText("curve", "carbon dioxide", "--line", "melting", "--units", "engineering");
+        var curveRows = curve.Split('\n').SkipWhile(l => !l.StartsWith("---", StringComparison.Ordinal)).Skip(1)
+            .TakeWhile(l => l.Trim().Length > 0).Select(l => l.Split("  ", StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries)).ToList();
+        Assert.Equal(curveRows.Count, rows.Count);
+        for (int i = 0; i < rows.Count; i++)
+        {
+            Assert.Equal(curveRows[i], rows[i]);
+        }
+
+        foreach (string line in curve.Split('\n').TakeWhile(l => l.Length > 0))
+        {
+            Assert.Contains(WebUtility.HtmlEncode(line).Replace("from memory", "<mark class=\"memory\">from memory</mark>", StringComparison.Ordinal), part, StringComparison.Ordinal);
+        }
+
+        Assert.Contains("T [degC]", part, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void SolidSection_WaterMelting_SaysDhDvAreGivenOnlyNearTheTriplePoint()
     {
         // Water's published melting line (IAPWS R14-08) reaches far above 10 MPa, where the report
