@@ -153,11 +153,14 @@ internal static class CurveCommand
     /// <exception cref="Core.Errors.FluidDataException">The fluid lacks what the line needs (exit 3,
     /// naming the fluid-file key).</exception>
     private static PhaseLineTable SolidLine(CurveRequest request)
+        => SolidLine(request.Fluid, request.Model.For(request.Fluid), request.Line, request.From, request.To, request.Points, request.Step, request.Temperatures);
+
+    /// <summary>The sublimation or melting line as <c>curve --line</c> computes it, from its options
+    /// (null for each one not given); <c>report</c> calls it with the defaults.</summary>
+    /// <exception cref="Core.Errors.FluidDataException">The fluid lacks what the line needs.</exception>
+    internal static PhaseLineTable SolidLine(Fluid fluid, Core.Models.CubicModel model, PhaseLineKind kind, double? from, double? to, int pointCount, double? stepSize, IReadOnlyList<double>? temperatureList)
     {
-        var fluid = request.Fluid;
-        var kind = request.Line;
         RequireSolidData(fluid, kind);
-        var model = request.Model.For(fluid);
         var lines = new SolidPhaseLines(fluid, new CoexistenceSolver(model, CoexistenceSolver.LowestValidTemperature(fluid)));
         var (low, high) = ValidRange(lines, fluid, kind);
         var (defaultLow, defaultHigh) = lines.DefaultRange(kind);
@@ -176,7 +179,7 @@ internal static class CurveCommand
         }
 
         IReadOnlyList<double> temperatures;
-        if (request.Temperatures is { } list)
+        if (temperatureList is { } list)
         {
             foreach (double t in list)
             {
@@ -189,14 +192,14 @@ internal static class CurveCommand
         {
             // The default start is the default range's, or the whole range's when --to lies below it
             // (water's sublimation table to 150 K starts at the equation's 50 K, not at 0.7 T_t).
-            double end = request.To ?? defaultHigh;
-            double start = request.From ?? (end <= defaultLow ? low : defaultLow);
-            if (request.From is not null)
+            double end = to ?? defaultHigh;
+            double start = from ?? (end <= defaultLow ? low : defaultLow);
+            if (from is not null)
             {
                 Require(start, "--from", "from temperature");
             }
 
-            if (request.To is not null)
+            if (to is not null)
             {
                 Require(end, "--to", "to temperature");
             }
@@ -206,9 +209,9 @@ internal static class CurveCommand
                 throw new UsageException($"--from ({NumberText.Table(start)} K) must be below --to ({NumberText.Table(end)} K)");
             }
 
-            temperatures = request.Step is double step
+            temperatures = stepSize is double step
                 ? Stepped(start, end, step)
-                : Enumerable.Range(0, request.Points).Select(i => i == request.Points - 1 ? end : start + (end - start) * i / (request.Points - 1)).ToArray();
+                : Enumerable.Range(0, pointCount).Select(i => i == pointCount - 1 ? end : start + (end - start) * i / (pointCount - 1)).ToArray();
         }
 
         var points = temperatures.Select(t => kind == PhaseLineKind.Sublimation ? lines.Sublimation(t) : lines.Melting(t)).ToArray();

@@ -236,10 +236,23 @@ internal static class FluidWriter
     }
 
     /// <summary>The sourced constants: value, standard uncertainty, unit and source of each.</summary>
-    internal static TextTable ConstantsTable(Fluid fluid, UnitSystem units)
+    internal static TextTable ConstantsTable(Fluid fluid, UnitSystem units) => ConstantsTable(fluid, units, Fields);
+
+    /// <summary>The keys of the solid-phase constants (the triple point and the fusion data).</summary>
+    private static readonly HashSet<string> SolidKeys =
+    [
+        "triple_point_temperature_K", "triple_point_pressure_Pa", "enthalpy_of_fusion_J_mol", "solid_density_mol_m3",
+        "triple_point_liquid_density_mol_m3", "fusion_volume_change_m3_mol", "solid_heat_capacity_J_molK",
+    ];
+
+    /// <summary>The rows of <see cref="ConstantsTable(Fluid, UnitSystem)"/> for the triple point and
+    /// the fusion data only (the report's solid-phase section).</summary>
+    internal static TextTable SolidConstantsTable(Fluid fluid, UnitSystem units) => ConstantsTable(fluid, units, Fields.Where(f => SolidKeys.Contains(f.Key)));
+
+    private static TextTable ConstantsTable(Fluid fluid, UnitSystem units, IEnumerable<Field> fields)
     {
         var table = new TextTable(["constant", "value", "std. uncertainty", "unit", "source"], [false, true, true, false, false]);
-        foreach (var field in Fields)
+        foreach (var field in fields)
         {
             if (field.Get(fluid) is SourcedValue value)
             {
@@ -274,15 +287,7 @@ internal static class FluidWriter
             lines.Add($"ideal-gas heat capacity: {NumberText.Table(cp.MinimumTemperature)}-{NumberText.Table(cp.MaximumTemperature)} K; {cp.Source}");
         }
 
-        foreach (var (name, equation) in new[] { ("melting-pressure equation", fluid.MeltingPressureEquation), ("sublimation-pressure equation", fluid.SublimationPressureEquation) })
-        {
-            if (equation is not null)
-            {
-                lines.Add($"{name}: {EquationText(equation)}, Tr = {NumberText.RoundTrip(equation.ReducingTemperature)} K, Pr = {NumberText.RoundTrip(equation.ReducingPressure)} Pa, "
-                    + $"a^b = {string.Join(" ", equation.Coefficients.Select((a, i) => $"{NumberText.RoundTrip(a)}^{NumberText.RoundTrip(equation.Exponents[i])}"))}, "
-                    + $"{NumberText.RoundTrip(equation.LowestTemperature)}-{NumberText.RoundTrip(equation.HighestTemperature)} K; {equation.Source}");
-            }
-        }
+        lines.AddRange(SolidEquationLines(fluid));
 
         if (fluid.TriplePointTemperature is not null && fluid.TriplePointPressure is not null)
         {
@@ -327,6 +332,21 @@ internal static class FluidWriter
         }
 
         return lines;
+    }
+
+    /// <summary>The published melting and sublimation equations of <c>fluids show</c>, one line each
+    /// with its coefficients, range and source (none where the file gives none).</summary>
+    internal static IEnumerable<string> SolidEquationLines(Fluid fluid)
+    {
+        foreach (var (name, equation) in new[] { ("melting-pressure equation", fluid.MeltingPressureEquation), ("sublimation-pressure equation", fluid.SublimationPressureEquation) })
+        {
+            if (equation is not null)
+            {
+                yield return $"{name}: {EquationText(equation)}, Tr = {NumberText.RoundTrip(equation.ReducingTemperature)} K, Pr = {NumberText.RoundTrip(equation.ReducingPressure)} Pa, "
+                    + $"a^b = {string.Join(" ", equation.Coefficients.Select((a, i) => $"{NumberText.RoundTrip(a)}^{NumberText.RoundTrip(equation.Exponents[i])}"))}, "
+                    + $"{NumberText.RoundTrip(equation.LowestTemperature)}-{NumberText.RoundTrip(equation.HighestTemperature)} K; {equation.Source}";
+            }
+        }
     }
 
     /// <summary>The vapour-line class line of <c>fluids show</c> (which uses Peng–Robinson) for the

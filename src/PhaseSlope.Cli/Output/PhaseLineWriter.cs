@@ -173,24 +173,48 @@ internal static class PhaseLineWriter
 
     private static string Table(PhaseLineTable table, UnitSystem units)
     {
-        var fluid = table.Fluid;
-        double m = fluid.MolarMass?.Value ?? double.NaN; // SI tables do not use it; engineering units were refused without it
-        string Show(DisplayQuantity q, double si) => NumberText.Table(UnitFormatter.Convert(q, si, units, m));
-        string Label(DisplayQuantity q) => UnitFormatter.Label(q, units);
-        string ShowOrNot(DisplayQuantity q, double? si) => si is double v ? Show(q, v) : "not given";
-
         var text = new StringBuilder();
-        string name = table.Line == PhaseLineKind.Sublimation ? "Sublimation line" : "Melting line";
-        text.AppendLine($"{name} of {fluid.Name}; {table.Points.Count} point{(table.Points.Count == 1 ? "" : "s")}");
-        text.AppendLine($"method: {table.Method}");
-        text.AppendLine($"triple point: {Show(DisplayQuantity.Temperature, table.Lines.TriplePointTemperature)} {Label(DisplayQuantity.Temperature)} ({fluid.TriplePointTemperature!.Source}), "
-            + $"{Show(DisplayQuantity.Pressure, table.Lines.TriplePointPressure)} {Label(DisplayQuantity.Pressure)} ({fluid.TriplePointPressure!.Source})");
-        text.AppendLine(table.Check is { } check
-            ? $"model check ({ModelText.Describe(table.Model)}): vapour pressure at the triple point {Show(DisplayQuantity.Pressure, check.ModelPressure)} {Label(DisplayQuantity.Pressure)}, "
-                + $"{NumberText.Table(100 * check.RelativeDeviation)} % from the sourced value"
-            : $"model check ({ModelText.Describe(table.Model)}): not available ({table.CheckUnavailableReason})");
-        text.AppendLine();
+        foreach (string line in HeaderLines(table, units))
+        {
+            text.AppendLine(line);
+        }
 
+        text.AppendLine();
+        text.Append(Rows(table, units).Render());
+        text.AppendLine();
+        foreach (string line in FooterLines(table))
+        {
+            text.AppendLine(line);
+        }
+
+        text.AppendLine(CoexistenceWriter.Caution);
+        return text.ToString();
+    }
+
+    /// <summary>The lines above the table: the line's name and size, its method, the sourced triple
+    /// point and the model's check against it.</summary>
+    internal static IReadOnlyList<string> HeaderLines(PhaseLineTable table, UnitSystem units)
+    {
+        var fluid = table.Fluid;
+        string name = table.Line == PhaseLineKind.Sublimation ? "Sublimation line" : "Melting line";
+        return
+        [
+            $"{name} of {fluid.Name}; {table.Points.Count} point{(table.Points.Count == 1 ? "" : "s")}",
+            $"method: {table.Method}",
+            $"triple point: {Show(DisplayQuantity.Temperature, table.Lines.TriplePointTemperature, table, units)} {UnitFormatter.Label(DisplayQuantity.Temperature, units)} ({fluid.TriplePointTemperature!.Source}), "
+                + $"{Show(DisplayQuantity.Pressure, table.Lines.TriplePointPressure, table, units)} {UnitFormatter.Label(DisplayQuantity.Pressure, units)} ({fluid.TriplePointPressure!.Source})",
+            table.Check is { } check
+                ? $"model check ({ModelText.Describe(table.Model)}): vapour pressure at the triple point {Show(DisplayQuantity.Pressure, check.ModelPressure, table, units)} {UnitFormatter.Label(DisplayQuantity.Pressure, units)}, "
+                    + $"{NumberText.Table(100 * check.RelativeDeviation)} % from the sourced value"
+                : $"model check ({ModelText.Describe(table.Model)}): not available ({table.CheckUnavailableReason})",
+        ];
+    }
+
+    /// <summary>The table of the line's points in the unit system (a missing Δh or Δv "not given").</summary>
+    internal static TextTable Rows(PhaseLineTable table, UnitSystem units)
+    {
+        string Label(DisplayQuantity q) => UnitFormatter.Label(q, units);
+        string ShowOrNot(DisplayQuantity q, double? si) => si is double v ? Show(q, v, table, units) : "not given";
         string change = table.Line == PhaseLineKind.Sublimation ? "sub" : "fus";
         string[] headers =
         [
@@ -200,24 +224,29 @@ internal static class PhaseLineWriter
         var rows = new TextTable(headers, [true, true, true, true, true]);
         foreach (var point in table.Points)
         {
-            rows.Add(Show(DisplayQuantity.Temperature, point.Temperature), Show(DisplayQuantity.Pressure, point.Pressure), Show(DisplayQuantity.Slope, point.Slope),
+            rows.Add(Show(DisplayQuantity.Temperature, point.Temperature, table, units), Show(DisplayQuantity.Pressure, point.Pressure, table, units), Show(DisplayQuantity.Slope, point.Slope, table, units),
                 ShowOrNot(DisplayQuantity.MolarEnergy, point.EnthalpyChange), ShowOrNot(DisplayQuantity.MolarVolume, point.VolumeChange));
         }
 
-        text.Append(rows.Render());
-        text.AppendLine();
+        return rows;
+    }
+
+    /// <summary>The lines under the table: why Δh and Δv are missing where they are, then the notes.</summary>
+    internal static IReadOnlyList<string> FooterLines(PhaseLineTable table)
+    {
+        var lines = new List<string>();
         if (VolumeUnavailableReason(table) is { } reason)
         {
             // Without dv neither column can be formed (dh = T dv dP/dT along a published equation).
-            text.AppendLine($"dh and dv not given: {reason}");
+            lines.Add($"dh and dv not given: {reason}");
         }
 
-        foreach (string note in Notes(table))
-        {
-            text.AppendLine($"note: {note}");
-        }
-
-        text.AppendLine(CoexistenceWriter.Caution);
-        return text.ToString();
+        lines.AddRange(Notes(table).Select(note => $"note: {note}"));
+        return lines;
     }
+
+    /// <summary>A value in the unit system (SI tables do not use the molar mass; engineering units
+    /// were refused without it).</summary>
+    private static string Show(DisplayQuantity quantity, double si, PhaseLineTable table, UnitSystem units)
+        => NumberText.Table(UnitFormatter.Convert(quantity, si, units, table.Fluid.MolarMass?.Value ?? double.NaN));
 }

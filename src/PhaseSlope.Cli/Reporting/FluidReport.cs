@@ -10,6 +10,7 @@ using PhaseSlope.Core.Errors;
 using PhaseSlope.Core.Fluids;
 using PhaseSlope.Core.Models;
 using PhaseSlope.Core.Properties;
+using PhaseSlope.Core.Solids;
 using PhaseSlope.Core.Uncertainty;
 using PhaseSlope.Plots;
 using PhaseSlope.Plots.Diagrams;
@@ -41,6 +42,7 @@ internal static class FluidReport
         var rows = Saturation(report, fluid, context, plotFluid, request, io);
         LatentAndSlope(report, rows, plotFluid, request);
         VapourLineSection(report, context, request.Units);
+        SolidPhases(report, fluid, model, plotFluid, request.Units);
         Figures(report, fluid, plotFluid, request);
         if (request.Data is { } data)
         {
@@ -257,6 +259,94 @@ internal static class FluidReport
             VapourLineClass.Dry => "Dry: the saturated-vapour entropy rises with temperature, so an isentropic expansion from saturated vapour ends superheated.",
             _ => $"Isentropic: the saturated-vapour entropy is nearly constant (|(Tc/R) ds/dT| below {NumberText.Table(VapourLine.IsentropicBand)} at T/Tc = {NumberText.Table(VapourLine.ReadingReducedTemperature)}).",
         });
+    }
+
+    /// <summary>A model vapour pressure at the triple point further than this from the sourced
+    /// triple-point pressure gets a caution: the same 1 % that <c>fluids check</c> accepts at the
+    /// normal boiling point (<see cref="FluidCheck.BoilingPointTolerance"/>), beyond which the
+    /// model's low end is worse than a cubic equation does in the range its ω was set in.</summary>
+    internal const double TriplePointCautionShare = FluidCheck.BoilingPointTolerance;
+
+    /// <summary>The solid phases as <c>fluids show</c>, <c>curve --line sublimation|melting</c>
+    /// and <c>plot --diagram phase</c> give them: the triple point and fusion data with their
+    /// sources, the published solid-line equations, the model's vapour pressure at the triple
+    /// point against the sourced one, both solid lines over their default ranges and the phase
+    /// diagram. What the fluid file lacks is named (by its key) instead of a table.</summary>
+    private static void SolidPhases(HtmlReport report, Fluid fluid, CubicModel model, PlotFluid plotFluid, UnitSystem units)
+    {
+        var section = report.Section("solid", "Solid phases: triple point, sublimation and melting");
+        string[] missing = [.. new[] { ("triple_point_temperature", fluid.TriplePointTemperature), ("triple_point_pressure", fluid.TriplePointPressure) }
+            .Where(k => k.Item2 is null).Select(k => k.Item1)];
+        if (missing.Length > 0)
+        {
+            section.Note($"Not given: the fluid file of {fluid.Name} has no {string.Join(" and no ", missing)}, from which the sublimation and melting lines start "
+                + "(curve --line sublimation|melting and plot --diagram phase refuse it for the same reason), so there is no triple-point check, no solid line and no phase diagram here.");
+            return;
+        }
+
+        var constants = FluidWriter.SolidConstantsTable(fluid, units);
+        section.Table(constants, "Triple point and fusion data with their standard uncertainties and sources (as 'fluids show' prints them)");
+        if (constants.Rows.Any(r => r[^1].Contains(HtmlReport.FromMemory, StringComparison.OrdinalIgnoreCase)))
+        {
+            section.Note("Values whose source says 'from memory' were recalled rather than read from the publication named; check them against it before relying on them.");
+        }
+
+        var equations = FluidWriter.SolidEquationLines(fluid).ToArray();
+        if (equations.Length > 0)
+        {
+            section.Facts(equations);
+        }
+
+        var lines = new SolidPhaseLines(fluid, new CoexistenceSolver(model, CoexistenceSolver.LowestValidTemperature(fluid)));
+        section.Subheading("Triple-point check of the model");
+        var (check, reason) = FluidWriter.TriplePointCheckOf(fluid, lines);
+        string pressureUnit = UnitFormatter.Label(DisplayQuantity.Pressure, units);
+        string Pressure(double pa) => NumberText.Table(UnitFormatter.Convert(DisplayQuantity.Pressure, pa, units));
+        if (check is null)
+        {
+            section.Note($"Not available: {reason}.");
+        }
+        else
+        {
+            string deviation = NumberText.Table(100 * check.RelativeDeviation);
+            section.Paragraph($"{ModelText.Describe(model)}: vapour pressure at the triple-point temperature {NumberText.Table(UnitFormatter.Convert(DisplayQuantity.Temperature, check.Temperature, units))} "
+                + $"{UnitFormatter.Label(DisplayQuantity.Temperature, units)} is {Pressure(check.ModelPressure)} {pressureUnit}; the sourced triple-point pressure is {Pressure(check.SourcedPressure)} {pressureUnit} "
+                + $"({fluid.TriplePointPressure!.Source}): {deviation} %.");
+            if (Math.Abs(check.RelativeDeviation) > TriplePointCautionShare)
+            {
+                section.Caution($"The model's vapour pressure at the low end of its liquid range is off by about {deviation} % here (more than the {NumberText.Table(100 * TriplePointCautionShare)} % "
+                    + "'fluids check' accepts at the normal boiling point): the first rows of the saturation table and the low end of the figures carry that error. "
+                    + "Near the triple point use the fluid's published vapour-pressure equation or measured data instead.");
+            }
+        }
+
+        bool sublimationGiven = false;
+        foreach (var kind in new[] { PhaseLineKind.Sublimation, PhaseLineKind.Melting })
+        {
+            string name = kind == PhaseLineKind.Sublimation ? "sublimation" : "melting";
+            section.Subheading(kind == PhaseLineKind.Sublimation ? "Sublimation line" : "Melting line");
+            PhaseLineTable table;
+            try
+            {
+                table = CurveCommand.SolidLine(fluid, model, kind, null, null, CoexistenceCurve.DefaultPoints, null, null);
+            }
+            catch (FluidDataException ex)
+            {
+                section.Note(kind == PhaseLineKind.Melting && sublimationGiven
+                    ? $"Sublimation only, no melting line: {ex.Message}."
+                    : $"No {name} line: {ex.Message}.");
+                continue;
+            }
+
+            sublimationGiven |= kind == PhaseLineKind.Sublimation;
+            section.Facts(PhaseLineWriter.HeaderLines(table, units));
+            section.Table(PhaseLineWriter.Rows(table, units), $"The {name} line of {fluid.Name} over its default range (as 'curve {fluid.Name} --line {name}' prints it)");
+            section.Facts(PhaseLineWriter.FooterLines(table));
+        }
+
+        section.Caution(CoexistenceWriter.Caution);
+        var options = new DiagramOptions { Units = PlotUnitsOf(units) };
+        AddFigure(section, () => Diagram.Build(DiagramKind.Phase, [plotFluid], options), "Phase diagram p-T: the solid lines the fluid file allows, the vaporization line, the triple and critical points (as 'plot --diagram phase' draws it)");
     }
 
     private static void Figures(HtmlReport report, Fluid fluid, PlotFluid plotFluid, ReportRequest request)

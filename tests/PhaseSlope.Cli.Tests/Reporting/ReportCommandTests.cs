@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Net;
+using System.Text.Json;
 using PhaseSlope.Cli.Commands;
 using PhaseSlope.Cli.Tests.Commands;
 using static PhaseSlope.Cli.Tests.CliHarness;
@@ -28,13 +29,14 @@ public sealed class ReportCommandTests : IDisposable
     public void Propane_HasEverySectionItsFiguresAndNoExternalResource()
     {
         string html = Report("propane");
-        foreach (string id in new[] { "constants", "model", "saturation", "latent", "vapour-line", "figures" })
+        foreach (string id in new[] { "constants", "model", "saturation", "latent", "vapour-line", "solid", "figures" })
         {
             _ = ReportHtml.Section(html, id);
         }
 
-        // latent and slope figures, then p-T, T-rho and p-h (propane has cp°).
-        Assert.Equal(5, CountOf(html, "<svg "));
+        // latent and slope figures, the phase diagram of the solid section, then p-T, T-rho and p-h (propane has cp°).
+        Assert.Equal(6, CountOf(html, "<svg "));
+        Assert.Equal(1, CountOf(ReportHtml.Section(html, "solid"), "<svg "));
         Assert.Empty(ReportHtml.ExternalReferences(html));
         Assert.DoesNotContain("<script", html, StringComparison.OrdinalIgnoreCase);
         Assert.Contains("@media (prefers-color-scheme: dark)", html, StringComparison.Ordinal);
@@ -87,6 +89,148 @@ public sealed class ReportCommandTests : IDisposable
         }
 
         Assert.Contains("Model estimates. Before use for pressure equipment", ReportHtml.Section(html, "saturation"), StringComparison.Ordinal);
+    }
+
+    /// <summary>The part of the solid section under a subheading, up to the next one.</summary>
+    private static string SolidPart(string solid, string subheading)
+    {
+        int start = solid.IndexOf($"<h3>{subheading}</h3>", StringComparison.Ordinal);
+        Assert.True(start >= 0, $"no '{subheading}' in the solid section");
+        int end = solid.IndexOf("<h3>", start + 4, StringComparison.Ordinal);
+        return end < 0 ? solid[start..] : solid[start..end];
+    }
+
+    /// <summary>A JSON number (SI) as the report's SI table shows it, or "not given" for null.</summary>
+    private static string Cell(JsonElement value, PhaseSlope.Cli.Units.DisplayQuantity quantity)
+        => value.ValueKind == JsonValueKind.Null
+            ? "not given"
+            : PhaseSlope.Cli.Output.NumberText.Table(PhaseSlope.Cli.Units.UnitFormatter.Convert(quantity, value.GetDouble(), PhaseSlope.Cli.Units.UnitSystem.Si));
+
+    [Theory]
+    [InlineData("water", "sublimation", "Sublimation line")]
+    [InlineData("water", "melting", "Melting line")]
+    [InlineData("carbon dioxide", "sublimation", "Sublimation line")]
+    [InlineData("carbon dioxide", "melting", "Melting line")]
+    public void SolidSection_LineTable_IsCurvesLineOverItsDefaultRange(string fluid, string line, string subheading)
+    {
+        string part = SolidPart(ReportHtml.Section(Report(fluid), "solid"), subheading);
+        var rows = ReportHtml.FirstTableRows(part);
+        // The same line through 'curve --line' with its defaults, read as JSON (SI) and shown in the
+        // report's SI units: every cell must be the same number, not a second computation.
+        var json = RunJson("curve", fluid, "--line", line, "--format", "json");
+        var points = json.GetProperty("points").EnumerateArray().ToArray();
+        Assert.Equal(points.Length, rows.Count);
+        for (int i = 0; i < rows.Count; i++)
+        {
+            var p = points[i];
+            string[] expected =
+            [
+                Cell(p.GetProperty("temperature_K"), PhaseSlope.Cli.Units.DisplayQuantity.Temperature),
+                Cell(p.GetProperty("pressure_Pa"), PhaseSlope.Cli.Units.DisplayQuantity.Pressure),
+                Cell(p.GetProperty("slope_Pa_K"), PhaseSlope.Cli.Units.DisplayQuantity.Slope),
+                Cell(p.GetProperty("enthalpy_change_J_mol"), PhaseSlope.Cli.Units.DisplayQuantity.MolarEnergy),
+                Cell(p.GetProperty("volume_change_m3_mol"), PhaseSlope.Cli.Units.DisplayQuantity.MolarVolume),
+            ];
+            Assert.Equal(expected, rows[i]);
+        }
+
+        // The method line and the notes travel with the table (HTML-escaped, 'from memory' marked).
+        string Shown(string text) => WebUtility.HtmlEncode(text).Replace("from memory", "<mark class=\"memory\">from memory</mark>", StringComparison.Ordinal);
+        Assert.Contains(Shown($"method: {json.GetProperty("method").GetString()}"), part, StringComparison.Ordinal);
+        foreach (var note in json.GetProperty("notes").EnumerateArray())
+        {
+            Assert.Contains(Shown($"note: {note.GetString()}"), part, StringComparison.Ordinal);
+        }
+
+        if (json.GetProperty("volume_change_unavailable_reason").GetString() is { } reason)
+        {
+            Assert.Contains(Shown($"dh and dv not given: {reason}"), part, StringComparison.Ordinal);
+        }
+    }
+
+    [Fact]
+    public void SolidSection_InEngineeringUnits_IsCurvesTextTable()
+    {
+        // The chosen --units reach the solid tables: the rows are those 'curve --line melting
+        // --units engineering' prints (degC, bar, kJ/kg, m3/kg), header lines and all.
+        string part = SolidPart(ReportHtml.Section(Report("carbon dioxide", "--units", "engineering"), "solid"), "Melting line");
+        var rows = ReportHtml.FirstTableRows(part);
+        string curve = RunText("curve", "carbon dioxide", "--line", "melting", "--units", "engineering");
+        var curveRows = curve.Split('\n').SkipWhile(l => !l.StartsWith("---", StringComparison.Ordinal)).Skip(1)
+            .TakeWhile(l => l.Trim().Length > 0).Select(l => l.Split("  ", StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries)).ToList();
+        Assert.Equal(curveRows.Count, rows.Count);
+        for (int i = 0; i < rows.Count; i++)
+        {
+            Assert.Equal(curveRows[i], rows[i]);
+        }
+
+        foreach (string line in curve.Split('\n').TakeWhile(l => l.Length > 0))
+        {
+            Assert.Contains(WebUtility.HtmlEncode(line).Replace("from memory", "<mark class=\"memory\">from memory</mark>", StringComparison.Ordinal), part, StringComparison.Ordinal);
+        }
+
+        Assert.Contains("T [degC]", part, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void SolidSection_WaterMelting_SaysDhDvAreGivenOnlyNearTheTriplePoint()
+    {
+        // Water's published melting line (IAPWS R14-08) reaches far above 10 MPa, where the report
+        // (as curve does) leaves dh and dv out and says why.
+        string part = SolidPart(ReportHtml.Section(Report("water"), "solid"), "Melting line");
+        Assert.Contains("dh and dv are given only within 10 MPa of the triple-point pressure", part, StringComparison.Ordinal);
+        Assert.Contains("not given", part, StringComparison.Ordinal);
+    }
+
+    [Theory]
+    [InlineData("water")]
+    [InlineData("carbon dioxide")]
+    public void SolidSection_TriplePointWithSourcesAndTheModelsCheck_CautionOnlyWhereTheDeviationIsLarge(string name)
+    {
+        string solid = ReportHtml.Section(Report(name), "solid");
+        var fluid = FluidResolver.Resolve(name);
+        foreach (var value in new[] { fluid.TriplePointTemperature!, fluid.TriplePointPressure!, fluid.EnthalpyOfFusion! })
+        {
+            Assert.Contains(WebUtility.HtmlEncode(value.Source).Replace("from memory", "<mark class=\"memory\">from memory</mark>", StringComparison.Ordinal), solid, StringComparison.Ordinal);
+        }
+
+        // The check as 'fluids show' computes it (Peng-Robinson, the report's default model).
+        var check = RunJson("fluids", "show", name, "--format", "json").GetProperty("triple_point_check");
+        double deviation = check.GetProperty("relative_deviation").GetDouble();
+        Assert.Contains($"{PhaseSlope.Cli.Output.NumberText.Table(100 * deviation)} %.", solid, StringComparison.Ordinal);
+        // With the catalog data, 'fluids show' puts water's Peng-Robinson vapour pressure at 273.16 K
+        // about 20 % low and carbon dioxide's at 216.592 K within 1 %: one on each side of the bound.
+        bool cautioned = solid.Contains("The model&#39;s vapour pressure at the low end of its liquid range is off by about", StringComparison.Ordinal)
+            || solid.Contains("The model's vapour pressure at the low end of its liquid range is off by about", StringComparison.Ordinal);
+        Assert.Equal(Math.Abs(deviation) > FluidReportBound, cautioned);
+    }
+
+    /// <summary>The report's caution bound, the 1 % fluids check accepts at the normal boiling point.</summary>
+    private const double FluidReportBound = PhaseSlope.Cli.Reporting.FluidReport.TriplePointCautionShare;
+
+    [Fact]
+    public void SolidSection_PropaneHasNoMeltingData_SublimationOnlyWithTheReason()
+    {
+        string solid = ReportHtml.Section(Report("propane"), "solid");
+        _ = SolidPart(solid, "Sublimation line");
+        string melting = SolidPart(solid, "Melting line");
+        Assert.Contains("Sublimation only, no melting line", melting, StringComparison.Ordinal);
+        Assert.Contains("fusion_volume_change", melting, StringComparison.Ordinal);
+        Assert.DoesNotContain("<table", melting, StringComparison.Ordinal);
+    }
+
+    [Theory]
+    [InlineData("r-32", "triple_point_pressure")]
+    [InlineData("inline:tc=369.89K,pc=4.2512MPa,omega=0.152", "triple_point_temperature and no triple_point_pressure")]
+    public void SolidSection_FluidWithoutTriplePointData_SaysWhichKeysAreMissing(string fluid, string missing)
+    {
+        string html = Report(fluid);
+        string solid = ReportHtml.Section(html, "solid");
+        Assert.Contains($"has no {missing}, from which the sublimation and melting lines start", solid, StringComparison.Ordinal);
+        Assert.DoesNotContain("<svg", solid, StringComparison.Ordinal);
+        Assert.DoesNotContain("<table", solid, StringComparison.Ordinal);
+        // The sections after it are still there.
+        _ = ReportHtml.Section(html, "figures");
     }
 
     [Fact]
