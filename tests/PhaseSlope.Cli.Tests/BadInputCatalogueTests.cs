@@ -37,7 +37,7 @@ public class BadInputCatalogueTests
         { ["coexist", "/dev/zero", "-T", "300"], ExitCodes.Fluid, "cannot read fluid file: a line is longer than the limit of 6" },
         { ["coexist", "{dir}/no-such.fluid", "-T", "300"], ExitCodes.Fluid, "fluid file not found" },
         { ["coexist", "{dir}/hugemass.fluid", "-T", "300"], ExitCodes.Fluid, "field 'molar_mass': implausible value 1E+308 g/mol; expected" },
-        { ["report", "{dir}/badhazard.fluid"], ExitCodes.Fluid, "badhazard.fluid:8: field 'hazard_class': 'A4' is not a hazard class; write one ASHRAE Standard 34 safety group" },
+        { ["report", "{dir}/badhazard.fluid"], ExitCodes.Fluid, "badhazard.fluid:22: field 'hazard_class': 'A4' is not a hazard class; write one ASHRAE Standard 34 safety group" },
         { ["coexist", "{dir}/lowomega.fluid", "-T", "300", "--alpha", "twu"], ExitCodes.OutOfRange, "acentric factor -0.5 of lowomega is outside -0.1344178 to an" },
         { ["curve", "propane", "--points", "1"], ExitCodes.Usage, "--points: must be between 2 and 100000, got 1" },
         { ["curve", "propane", "--points", "200000"], ExitCodes.Usage, "--points: must be between 2 and 100000, got 200000" },
