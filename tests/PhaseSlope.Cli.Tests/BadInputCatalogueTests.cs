@@ -37,6 +37,7 @@ public class BadInputCatalogueTests
         { ["coexist", "/dev/zero", "-T", "300"], ExitCodes.Fluid, "cannot read fluid file: a line is longer than the limit of 6" },
         { ["coexist", "{dir}/no-such.fluid", "-T", "300"], ExitCodes.Fluid, "fluid file not found" },
         { ["coexist", "{dir}/hugemass.fluid", "-T", "300"], ExitCodes.Fluid, "field 'molar_mass': implausible value 1E+308 g/mol; expected" },
+        { ["report", "{dir}/badhazard.fluid"], ExitCodes.Fluid, "badhazard.fluid:22: field 'hazard_class': 'A4' is not a hazard class; write one ASHRAE Standard 34 safety group" },
         { ["coexist", "{dir}/lowomega.fluid", "-T", "300", "--alpha", "twu"], ExitCodes.OutOfRange, "acentric factor -0.5 of lowomega is outside -0.1344178 to an" },
         { ["curve", "propane", "--points", "1"], ExitCodes.Usage, "--points: must be between 2 and 100000, got 1" },
         { ["curve", "propane", "--points", "200000"], ExitCodes.Usage, "--points: must be between 2 and 100000, got 200000" },
@@ -360,6 +361,7 @@ public class BadInputCatalogueTests
         File.WriteAllText(folder.File("nounits.csv"), "T,P\n250,218.4\n");
         string propane = CliHarness.CatalogFileText("propane.fluid");
         File.WriteAllText(folder.File("hugemass.fluid"), ReplaceLine(propane, "molar_mass", "molar_mass 1e308 g/mol | invented for a test"));
+        File.WriteAllText(folder.File("badhazard.fluid"), ReplaceLine(propane, "hazard_class", "hazard_class A4 | invented for a test"));
         File.WriteAllText(folder.File("lowomega.fluid"), ReplaceLine(ReplaceLine(ReplaceLine(propane, "acentric_factor", "acentric_factor -0.5 | invented for a test"),
             "name", "name lowomega"), "synonyms", ""));
         // Water without its triple-point pressure, and without any way to its sublimation line.

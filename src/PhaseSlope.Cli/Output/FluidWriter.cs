@@ -77,6 +77,7 @@ internal static class FluidWriter
         WriteOptional(json, "formula", fluid.Formula);
         WriteOptional(json, "cas", fluid.CasNumber);
         WriteOptional(json, "family", fluid.Family);
+        WriteHazard(json, fluid.Hazard);
         foreach (var field in Fields)
         {
             if (field.Get(fluid) is SourcedValue value)
@@ -145,6 +146,47 @@ internal static class FluidWriter
     private static VapourLine? VapourLineOf(Fluid fluid)
         => fluid.IdealGasHeatCapacity is null ? null : VapourLine.Classify(PropertyModel.For(fluid, CubicModelKind.PengRobinson));
 
+    /// <summary>"hazard_class": {"code", "description", "source"}, or null when the file gives none.</summary>
+    private static void WriteHazard(Utf8JsonWriter json, HazardClass? hazard)
+    {
+        if (hazard is null)
+        {
+            json.WriteNull("hazard_class");
+            return;
+        }
+
+        json.WriteStartObject("hazard_class");
+        json.WriteString("code", hazard.Code);
+        json.WriteString("description", hazard.Description);
+        json.WriteString("source", hazard.Source);
+        json.WriteEndObject();
+    }
+
+    /// <summary>Beside a real fluid's identity when its file gives no <c>hazard_class</c>: the
+    /// tool knows no hazard class of its own for it.</summary>
+    internal const string GenericHazardCaution = "The fluid file carries no flammability or toxicity class: take it from the supplier's safety data sheet, "
+        + "and follow local codes and licensed engineering practice for equipment, charge limits and relief.";
+
+    /// <summary>The hazard caution for a fluid: its sourced class in words where the file gives
+    /// one, else <see cref="GenericHazardCaution"/>.</summary>
+    internal static string HazardCaution(Fluid fluid)
+    {
+        if (fluid.Hazard is not { } hazard)
+        {
+            return GenericHazardCaution;
+        }
+
+        string subject = char.ToUpperInvariant(fluid.Name[0]) + fluid.Name[1..];
+        string statement = hazard.SafetyGroup is null
+            ? $"{subject} is {hazard.Description} (source: {hazard.Source})"
+            : $"{subject} is classified {hazard.Description} in the ASHRAE Standard 34 safety groups (source: {hazard.Source})";
+        return $"{statement}. Equipment, charge limits, ventilation and relief for it follow local codes and licensed engineering practice; the supplier's safety data sheet governs.";
+    }
+
+    /// <summary>One line per fluid for a mixture: each component's class, or that its file gives none.</summary>
+    internal static IReadOnlyList<string> HazardLines(IEnumerable<Fluid> fluids)
+        => fluids.Select(f => f.Hazard is { } h ? $"{f.Name}: {h.Description} (source: {h.Source})" : $"{f.Name}: no hazard class in its fluid file; see the supplier's safety data sheet").ToList();
+
     private static void WriteOptional(Utf8JsonWriter json, string key, string? value)
     {
         if (value is null)
@@ -208,6 +250,8 @@ internal static class FluidWriter
             text.AppendLine(line);
         }
 
+        text.AppendLine();
+        text.AppendLine($"caution: {HazardCaution(fluid)}");
         return text.ToString();
     }
 
@@ -229,6 +273,11 @@ internal static class FluidWriter
         if (fluid.Family is not null)
         {
             lines.Add($"family: {fluid.Family}");
+        }
+
+        if (fluid.Hazard is { } hazard)
+        {
+            lines.Add($"hazard class: {hazard.Description}; {hazard.Source}");
         }
 
         lines.Add($"origin: {fluid.Origin}");

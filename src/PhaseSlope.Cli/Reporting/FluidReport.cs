@@ -76,13 +76,9 @@ internal static class FluidReport
         }
         else
         {
-            section.Caution(HazardCaution);
+            section.Caution(FluidWriter.HazardCaution(fluid));
         }
     }
-
-    /// <summary>Beside a real fluid's identity: the tool knows no hazard class of its own.</summary>
-    internal const string HazardCaution = "The fluid files carry no flammability or toxicity class: take them from the supplier's safety data sheet, "
-        + "and follow local codes and licensed engineering practice for equipment, charge limits and relief.";
 
     private static bool IsInvented(Fluid fluid)
         => (fluid.Remarks ?? "").Contains("invented", StringComparison.OrdinalIgnoreCase) || (fluid.Family ?? "").Contains("fictional", StringComparison.OrdinalIgnoreCase);

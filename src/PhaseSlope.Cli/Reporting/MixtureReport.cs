@@ -38,7 +38,11 @@ internal static class MixtureReport
             components.Table(table, $"Constants of {fluid.Name} with their standard uncertainties and sources ({fluid.Origin})");
         }
 
-        components.Caution(FluidReport.HazardCaution);
+        components.Subheading("Hazard classes of the components");
+        components.Facts(FluidWriter.HazardLines(input.Mixture.Components));
+        components.Caution(input.Mixture.Components.All(c => c.Hazard is not null)
+            ? "A mixture can be flammable or toxic where a component is; equipment, charge limits, ventilation and relief follow local codes and licensed engineering practice, and the supplier's safety data sheet of the mixture governs."
+            : FluidWriter.GenericHazardCaution);
         if (input.Mixture.Components.Any(c => FluidWriter.ConstantsTable(c, request.Units).Rows.Any(r => r[^1].Contains(HtmlReport.FromMemory, StringComparison.OrdinalIgnoreCase))))
         {
             components.Note("Values whose source says 'from memory' were recalled rather than read from the publication named; check them against it before relying on them.");

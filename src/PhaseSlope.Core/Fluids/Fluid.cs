@@ -102,6 +102,10 @@ public sealed record Fluid
     /// <summary>Free-text remarks from the fluid file, or null.</summary>
     public string? Remarks { get; init; }
 
+    /// <summary>The sourced hazard classification (<c>hazard_class</c>), or null when the file
+    /// gives none.</summary>
+    public HazardClass? Hazard { get; init; }
+
     /// <summary>Where the record was read from: a catalog resource name, a file path, or
     /// <see cref="InlineFluid.Origin"/> for a fluid given on the command line.</summary>
     public string Origin { get; init; } = "";

@@ -113,6 +113,7 @@ internal sealed partial class FluidFileParser
     private const string KeyMeltingPressureEquation = "melting_pressure_equation";
     private const string KeySublimationPressureEquation = "sublimation_pressure_equation";
     private const string KeyRemarks = "remarks";
+    private const string KeyHazardClass = "hazard_class";
     private const string KeyIdealGasCp = "ideal_gas_cp";
     private const string KeyAlphaTwuPr = "alpha_twu_pr";
     private const string KeyAlphaTwuSrk = "alpha_twu_srk";
@@ -136,7 +137,7 @@ internal sealed partial class FluidFileParser
 
     internal static readonly string[] AllKeys =
     [
-        KeyFormat, KeyName, KeySynonyms, KeyFormula, KeyCas, KeyFamily,
+        KeyFormat, KeyName, KeySynonyms, KeyFormula, KeyCas, KeyFamily, KeyHazardClass,
         KeyMolarMass, KeyCriticalTemperature, KeyCriticalPressure, KeyAcentricFactor,
         KeyCriticalDensity, KeyCriticalMolarVolume, KeyNormalBoilingPoint,
         KeyTriplePointTemperature, KeyTriplePointPressure, KeyEnthalpyOfFusion, KeySolidDensity, KeyTriplePointLiquidDensity,
@@ -187,6 +188,7 @@ internal sealed partial class FluidFileParser
     private PublishedVapourPressure? _vapourPressureEquation;
     private SolidLineEquation? _meltingEquation;
     private SolidLineEquation? _sublimationEquation;
+    private HazardClass? _hazard;
 
     internal FluidFileParser(string origin) => _origin = origin;
 
@@ -416,6 +418,9 @@ internal sealed partial class FluidFileParser
             case KeySublimationPressureEquation:
                 _sublimationEquation = ReadSolidLineEquation(line, key, SolidLineKind.Sublimation, rest);
                 break;
+            case KeyHazardClass:
+                _hazard = ReadHazardClass(line, rest);
+                break;
             case KeyAlphaDefault:
                 _preferredAlpha = ReadAlphaDefault(line, key, rest);
                 break;
@@ -429,6 +434,15 @@ internal sealed partial class FluidFileParser
                 _text[key] = rest;
                 break;
         }
+    }
+
+    /// <summary>Reads <c>A3 | source</c> or <c>flammable toxic | source</c> (see <see cref="HazardClass"/>).</summary>
+    private HazardClass ReadHazardClass(int line, string rest)
+    {
+        string source = ReadSource(line, KeyHazardClass, rest, out string body);
+        return HazardClass.TryParse(body, source) ?? throw Fail(line, KeyHazardClass,
+            $"'{body.Trim()}' is not a hazard class; write one ASHRAE Standard 34 safety group ({string.Join(", ", HazardClass.SafetyGroups)}) "
+            + $"or one or more distinct words of: {string.Join(", ", HazardClass.TraitWords)}, then '| source'");
     }
 
     private void ReadFormat(int line, string rest)
@@ -762,6 +776,7 @@ internal sealed partial class FluidFileParser
             VolumeShifts = VolumeShifts(),
             Provenance = _text.GetValueOrDefault(KeyProvenance),
             Remarks = _text.GetValueOrDefault(KeyRemarks),
+            Hazard = _hazard,
             Origin = _origin,
         };
     }

@@ -31,6 +31,11 @@ public static class FluidFileWriter
         Optional(text, "formula", fluid.Formula);
         Optional(text, "cas", fluid.CasNumber);
         Optional(text, "family", fluid.Family);
+        if (fluid.Hazard is { } hazard)
+        {
+            Line(text, "hazard_class", $"{hazard.Code} | {hazard.Source}");
+        }
+
         text.Append('\n');
         if (fluid.MolarMass is { } molarMass)
         {
