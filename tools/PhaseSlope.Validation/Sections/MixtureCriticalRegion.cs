@@ -57,24 +57,11 @@ internal static class MixtureCriticalRegion
         }
 
         tally.Splits++;
-        var x = flash.Liquid!.MoleFractions.ToArray();
-        var y = flash.Vapour!.MoleFractions.ToArray();
         double beta = flash.VapourFraction;
-        var lnPhiL = new double[n];
-        var lnPhiV = new double[n];
-        var lnPhiZ = new double[n];
-        engine.Model.LnFugacityCoefficientsAtPressure(t, p, x, MixtureRoot.Stable, lnPhiL);
-        engine.Model.LnFugacityCoefficientsAtPressure(t, p, y, MixtureRoot.Stable, lnPhiV);
-        engine.Model.LnFugacityCoefficientsAtPressure(t, p, z, MixtureRoot.Stable, lnPhiZ);
-        double gibbsChange = 0;
-        for (int i = 0; i < n; i++)
-        {
-            tally.Balance = Math.Max(tally.Balance, Math.Abs(z[i] - ((1 - beta) * x[i] + beta * y[i])));
-            tally.Fugacity = Math.Max(tally.Fugacity, Math.Abs(Math.Log(x[i]) + lnPhiL[i] - Math.Log(y[i]) - lnPhiV[i]));
-            gibbsChange += (1 - beta) * x[i] * (Math.Log(x[i]) + lnPhiL[i]) + beta * y[i] * (Math.Log(y[i]) + lnPhiV[i])
-                           - z[i] * (Math.Log(z[i]) + lnPhiZ[i]);
-        }
-
+        var measured = MixtureCriticalRegionTests.MeasureSplit(engine, flash, z);
+        tally.Balance = Math.Max(tally.Balance, measured.Balance);
+        tally.Fugacity = Math.Max(tally.Fugacity, measured.Fugacity);
+        double gibbsChange = measured.GibbsChange;
         tally.GibbsNotLower += gibbsChange < 0 && flash.GibbsEnergyChange < 0 && beta > 0 && beta < 1 ? 0 : 1;
     }
 
