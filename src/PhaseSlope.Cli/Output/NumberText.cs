@@ -74,9 +74,10 @@ internal static class NumberText
         double rounded = double.Parse(v.ToString("G" + UncertaintyDigits.ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);
         // Fixed notation from 1e-4 up to 1e6 keeps a significant trailing zero (3.0, 0.050).
         int exponent = (int)Math.Floor(Math.Log10(Math.Abs(rounded)));
+        // Outside it, exponent form with the same two digits kept (5.0E+06, not 5E+06).
         return exponent >= -4 && exponent < 6
             ? rounded.ToString("F" + Math.Max(0, UncertaintyDigits - 1 - exponent).ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture)
-            : Significant(rounded, UncertaintyDigits);
+            : rounded.ToString("0." + new string('0', UncertaintyDigits - 1) + "E+00", CultureInfo.InvariantCulture);
     }
 
     /// <summary><see cref="RoundTrip"/>, or an empty CSV cell where the value is undefined.</summary>

@@ -39,6 +39,8 @@ public class NumberFormatTests
     [InlineData(0.0, "0")]
     [InlineData(2.96, "3.0")]                   // the second digit is significant, zero or not
     [InlineData(0.0497, "0.050")]
+    [InlineData(4.98e6, "5.0E+06")]             // in exponent form too
+    [InlineData(2.0e-5, "2.0E-05")]
     public void Uncertainty_TwoSignificantDigits(double value, string expected)
         => Assert.Equal(expected, NumberText.Uncertainty(value));
 
