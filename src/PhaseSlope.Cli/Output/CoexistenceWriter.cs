@@ -162,8 +162,35 @@ internal static class CoexistenceWriter
             UncertaintyText.DescribeReasons(text, rows.Select(r => r.Uncertainty));
         }
 
+        if (TriplePointNote(rows[0], fluid) is { } note)
+        {
+            text.AppendLine(note);
+        }
+
         text.AppendLine(Caution);
         return text.ToString();
+    }
+
+    /// <summary>Share of the sourced triple-point pressure beyond which a table that starts at the
+    /// triple point says how far the model's vapour pressure is from it (the 1 % that
+    /// <c>fluids check</c> accepts at the normal boiling point).</summary>
+    internal const double TriplePointNoteShare = 0.01;
+
+    /// <summary>A note when the table starts at the fluid's triple point and the model's vapour
+    /// pressure there is more than <see cref="TriplePointNoteShare"/> from the sourced one; else null.</summary>
+    internal static string? TriplePointNote(CoexistenceRow first, Fluid fluid)
+    {
+        if (fluid.TriplePointTemperature?.Value is not double tt || fluid.TriplePointPressure is not { } pt
+            || Math.Abs(first.Point.Temperature / tt - 1) > 1e-9)
+        {
+            return null;
+        }
+
+        double deviation = first.Point.Pressure / pt.Value - 1;
+        return Math.Abs(deviation) <= TriplePointNoteShare
+            ? null
+            : string.Create(CultureInfo.InvariantCulture,
+                $"note: at the triple point the model's vapour pressure is {NumberText.Table(100 * deviation)} % from the sourced {NumberText.Table(pt.Value)} Pa ({pt.Source}); the low end of this table carries that error (a fitted --alpha, where the fluid file has one, reduces it)");
     }
 
     /// <summary>The cells of the <c>curve</c> table: the curve columns in <paramref name="units"/>,
