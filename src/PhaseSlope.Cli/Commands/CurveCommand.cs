@@ -161,7 +161,7 @@ internal static class CurveCommand
     internal static PhaseLineTable SolidLine(Fluid fluid, Core.Models.CubicModel model, PhaseLineKind kind, double? from, double? to, int pointCount, double? stepSize, IReadOnlyList<double>? temperatureList)
     {
         RequireSolidData(fluid, kind);
-        var lines = new SolidPhaseLines(fluid, new CoexistenceSolver(model, CoexistenceSolver.LowestValidTemperature(fluid)));
+        var lines = new SolidPhaseLines(fluid, new CoexistenceSolver(model, fluid));
         var (low, high) = ValidRange(lines, fluid, kind);
         var (defaultLow, defaultHigh) = lines.DefaultRange(kind);
         string name = kind == PhaseLineKind.Sublimation ? "sublimation" : "melting";

@@ -466,7 +466,7 @@ internal static class FluidWriter
             return (null, $"fluid '{fluid.Name}' gives no {(fluid.TriplePointTemperature is null ? "triple_point_temperature" : "triple_point_pressure")}", ModelText.Describe(model));
         }
 
-        var (check, reason) = TriplePointCheckOf(fluid, new SolidPhaseLines(fluid, new CoexistenceSolver(model, CoexistenceSolver.LowestValidTemperature(fluid))));
+        var (check, reason) = TriplePointCheckOf(fluid, new SolidPhaseLines(fluid, new CoexistenceSolver(model, fluid)));
         return (check, reason, ModelText.Describe(model));
     }
 

@@ -293,7 +293,7 @@ internal static class FluidReport
             section.Facts(equations);
         }
 
-        var lines = new SolidPhaseLines(fluid, new CoexistenceSolver(model, CoexistenceSolver.LowestValidTemperature(fluid)));
+        var lines = new SolidPhaseLines(fluid, new CoexistenceSolver(model, fluid));
         section.Subheading("Triple-point check of the model");
         var (check, reason) = FluidWriter.TriplePointCheckOf(fluid, lines);
         string pressureUnit = UnitFormatter.Label(DisplayQuantity.Pressure, units);

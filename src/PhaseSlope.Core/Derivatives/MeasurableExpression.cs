@@ -64,7 +64,7 @@ public sealed class MeasurableExpression
             found = false;
             foreach (var factor in JacobianReduction.CandidateFactors)
             {
-                if (!factor.IsMonomial && Polynomial.TryDivide(numerator, factor) is { } n && Polynomial.TryDivide(denominator, factor) is { } d)
+                if (Polynomial.TryDivide(numerator, factor) is { } n && Polynomial.TryDivide(denominator, factor) is { } d)
                 {
                     numerator = n;
                     denominator = d;
