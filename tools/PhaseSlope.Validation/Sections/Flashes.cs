@@ -32,9 +32,6 @@ internal static class Flashes
         {
             var engine = PropertyModel.For(FluidCatalog.Embedded.Find(name), CubicModelKind.PengRobinson);
             fluids++;
-            double tc = engine.Solver.CriticalTemperature, pc = engine.Solver.CriticalPressure;
-            double tLow = engine.Solver.MinimumTemperature, tHigh = engine.FlashMaximumTemperature;
-            var solid = new PhaseSlope.Core.Solids.SolidRegion(engine.Fluid, engine.Solver);
             void Check(double t, double p, double? x, double h, double s)
             {
                 var fromH = engine.Flash(StateProperty.Pressure, p, StateProperty.Enthalpy, h);
@@ -62,36 +59,15 @@ internal static class Flashes
                 states++;
             }
 
-            foreach (double f in new[] { 0.0, 0.2, 0.5, 0.8, 0.999, 1.001, 1.2 })
+            foreach (var state in CatalogFlashTests.Grid(engine))
             {
-                double t = f <= 1 ? tLow + f * (tc - tLow) : Math.Min(f * tc, tHigh);
-                foreach (double pr in new[] { 0.001, 0.1, 0.5, 0.999, 1.001, 2 })
+                if (state.Solid)
                 {
-                    double p = pr * pc;
-                    if (t >= tHigh || p < 1)
-                    {
-                        continue;
-                    }
-
-                    var s = engine.AtPressure(t, p);
-                    if (solid.Refusal(t, p, s.Phase, s.Metastable) is not null)
-                    {
-                        skipped++; // solid by the fluid's own data (as CatalogFlashTests skips it)
-                        continue;
-                    }
-
-                    Check(t, p, null, s.Enthalpy!.Value, s.Entropy!.Value);
+                    skipped++; // solid by the fluid's own data (as CatalogFlashTests skips it)
+                    continue;
                 }
-            }
 
-            foreach (double f in new[] { 0.1, 0.5, 0.9, 0.99, 0.999 })
-            {
-                double t = tLow + f * (tc - tLow);
-                var point = engine.Coexistence(engine.Solver.AtTemperature(t));
-                foreach (double x in new[] { 0.05, 0.5, 0.95 })
-                {
-                    Check(t, point.Point.Pressure, x, point.Liquid.State.Enthalpy!.Value + x * point.EnthalpyOfVaporization, point.Liquid.State.Entropy!.Value + x * point.EntropyOfVaporization);
-                }
+                Check(state.Temperature, state.Pressure, state.Quality, state.Enthalpy, state.Entropy);
             }
         }
 
